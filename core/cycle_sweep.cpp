@@ -1,0 +1,169 @@
+#include "cycle_sweep.h"
+
+#include "analysis_error.h"
+#include "drive_units.h"
+#include "mobility_check.h"
+#include "step_solver.h"
+
+#include <cmath>
+#include <sstream>
+
+namespace clevis {
+namespace {
+
+constexpr int kMaxBisections = 8;
+// A converged pose this far from the extrapolated one (as a fraction of the
+// mechanism's size) suggests Newton jumped to another assembly branch.
+constexpr double kJumpFraction = 0.05;
+
+bool finiteStep(const StepResult& s)
+{
+    if (!s.qd.allFinite() || !s.qdd.allFinite() || !s.lambda.allFinite()) return false;
+    return true;
+}
+
+class Sweeper {
+public:
+    Sweeper(const CompiledMechanism& m, const SweepOptions& o) : m_(m), options_(o), solver_(m) {}
+    CycleResult run();
+
+private:
+    void assembleDrawnPose(Eigen::VectorXd& q);
+    bool advance(const StepResult& from, double t, StepResult& to, int depth);
+    void warnNearSingular();
+    void warnUnreachable(double tFail);
+    std::string drivePositions(const StepResult& s) const;
+
+    const CompiledMechanism& m_;
+    const SweepOptions& options_;
+    StepSolver solver_;
+    CycleResult result_;
+    bool branchWarned_ = false;
+};
+
+std::string Sweeper::drivePositions(const StepResult& s) const
+{
+    std::string text;
+    for (std::size_t d = 0; d < m_.drivers.size(); ++d)
+        text += (d ? ", " : "") + formatDrivePosition(m_.drivers[d], s.drivePosition[d]);
+    return text;
+}
+
+void Sweeper::assembleDrawnPose(Eigen::VectorXd& q)
+{
+    const Eigen::VectorXd drawn = q;
+    if (solver_.assemble(0.0, q)) return;
+    int row = 0;
+    solver_.residual(drawn, 0.0, &row);
+    const auto& constraints = solver_.system().constraints();
+    std::size_t k = constraints.size() - 1;
+    while (k > 0 && solver_.system().firstRow(k) > row) --k;
+    const Constraint& c = *constraints[k];
+    const std::string name =
+        c.owner() == ConstraintOwner::Joint ? m_.joints[c.ownerIndex()].name : m_.drivers[c.ownerIndex()].name;
+    throw AnalysisError("The mechanism does not assemble at the start of the cycle: the links cannot all be joined "
+                        "near the drawn pose (largest gap at \"" + name +
+                            "\"). Check the link lengths and where the drivers start.",
+                        {name});
+}
+
+// Newton from the previous step's pose extrapolated to t; on failure or a
+// suspicious jump, reach t in two halves.
+bool Sweeper::advance(const StepResult& from, double t, StepResult& to, int depth)
+{
+    const double h = t - from.t;
+    const Eigen::VectorXd guess = from.q + h * from.qd + 0.5 * h * h * from.qdd;
+    Eigen::VectorXd q = guess;
+    const bool converged = solver_.assemble(t, q);
+    const double jump = converged ? (q - guess).cwiseProduct(solver_.system().columnScale().cwiseInverse()).cwiseAbs().maxCoeff() : 0.0;
+    const bool suspicious = jump > kJumpFraction * m_.lengthScale;
+    if (converged && (!suspicious || depth >= kMaxBisections)) {
+        to = solver_.analyse(t, q);
+        if (suspicious && !branchWarned_) {
+            branchWarned_ = true;
+            result_.warnings.push_back({"branch_jump",
+                                        "The pose changed abruptly near " + drivePositions(to) +
+                                            ": the mechanism may have snapped to another assembly branch. Use more steps.",
+                                        int(result_.steps.size())});
+        }
+        return finiteStep(to);
+    }
+    if (depth >= kMaxBisections) return false;
+    StepResult middle;
+    if (!advance(from, from.t + 0.5 * h, middle, depth + 1)) return false;
+    return advance(middle, t, to, depth + 1);
+}
+
+void Sweeper::warnNearSingular()
+{
+    const auto& steps = result_.steps;
+    for (std::size_t i = 0; i < steps.size(); ++i) {
+        if (!steps[i].nearSingular) continue;
+        std::size_t last = i;
+        while (last + 1 < steps.size() && steps[last + 1].nearSingular) ++last;
+        std::ostringstream s;
+        s << "Near a singular position (dead centre or toggle) from " << drivePositions(steps[i]) << " to "
+          << drivePositions(steps[last]) << " (steps " << i << "–" << last
+          << "): the linkage locks up or loses control there and the reactions are unreliable.";
+        result_.warnings.push_back({"near_singular", s.str(), int(i)});
+        i = last;
+    }
+}
+
+void Sweeper::warnUnreachable(double tFail)
+{
+    const StepResult& last = result_.steps.back();
+    std::ostringstream s;
+    s << "The cycle cannot be completed: the mechanism can be assembled only from " << drivePositions(result_.steps.front())
+      << " to " << drivePositions(last) << " (t = " << last.t << " s of " << m_.duration
+      << " s); beyond, near t = " << tFail << " s, the links cannot be joined. Results stop there.";
+    result_.warnings.push_back({"out_of_reach", s.str(), int(result_.steps.size())});
+}
+
+CycleResult Sweeper::run()
+{
+    const int steps = options_.steps > 0 ? options_.steps : m_.steps;
+    result_.plannedSteps = steps;
+    result_.duration = m_.duration;
+    result_.transmissionPins = solver_.transmissionPins();
+    Eigen::VectorXd q = solver_.drawnPose();
+    const MobilityReport mobility = checkMobility(m_, q);
+    if (!mobility.ok()) {
+        std::vector<std::string> items = mobility.freeBodies;
+        for (const auto& g : mobility.redundantGroups) items.insert(items.end(), g.begin(), g.end());
+        items.insert(items.end(), mobility.conflictingDrivers.begin(), mobility.conflictingDrivers.end());
+        throw AnalysisError(mobility.describe(), items);
+    }
+    assembleDrawnPose(q);
+    result_.steps.reserve(steps + 1);
+    result_.steps.push_back(solver_.analyse(0.0, q));
+    if (!finiteStep(result_.steps.back()))
+        throw AnalysisError("The mechanism is locked at the start of the cycle: its constraint equations are singular there.", {});
+    result_.complete = true;
+    for (int k = 1; k <= steps; ++k) {
+        const double t = m_.duration * double(k) / double(steps);
+        StepResult next;
+        if (!advance(result_.steps.back(), t, next, 0)) {
+            result_.complete = false;
+            warnUnreachable(t);
+            break;
+        }
+        result_.steps.push_back(std::move(next));
+        if (options_.progress && !options_.progress(k, steps)) {
+            result_.complete = false;
+            result_.warnings.push_back({"stopped", "Stopped before the end of the cycle.", k});
+            break;
+        }
+    }
+    warnNearSingular();
+    return std::move(result_);
+}
+
+}  // namespace
+
+CycleResult sweepCycle(const CompiledMechanism& m, const SweepOptions& options)
+{
+    return Sweeper(m, options).run();
+}
+
+}  // namespace clevis

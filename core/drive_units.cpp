@@ -1,0 +1,21 @@
+#include "drive_units.h"
+
+#include <cstdio>
+
+namespace clevis {
+
+double driveDisplayValue(DriverType type, double si) { return type == DriverType::Rotary ? radToDeg(si) : si; }
+
+const char* driveDisplayUnit(DriverType type) { return type == DriverType::Rotary ? "°" : "m"; }
+
+const char* effortUnit(DriverType type) { return type == DriverType::Rotary ? "N·m" : "N"; }
+
+std::string formatDrivePosition(const CompiledDriver& d, double si)
+{
+    char text[96];
+    if (d.type == DriverType::Rotary) std::snprintf(text, sizeof text, "%s = %.2f°", d.name.c_str(), radToDeg(si));
+    else std::snprintf(text, sizeof text, "%s = %.5f m", d.name.c_str(), si);
+    return text;
+}
+
+}  // namespace clevis

@@ -1,0 +1,189 @@
+#include "step_solver.h"
+
+#include "transmission_angle.h"
+
+#include <array>
+#include <cmath>
+
+namespace clevis {
+namespace {
+
+constexpr int kMaxNewtonIterations = 30;
+
+// The two bodies a constraint acts on and the point on each through which its
+// force is reported: the second body's joint point (where the pair touches),
+// or for a cylinder its own two ends.
+std::array<BodyPoint, 2> actionPoints(const CompiledMechanism& m, const Constraint& c)
+{
+    if (c.owner() == ConstraintOwner::Joint) {
+        const CompiledJoint& j = m.joints[c.ownerIndex()];
+        return {BodyPoint{j.body[0], j.point[1].local}, j.point[1]};
+    }
+    const CompiledDriver& d = m.drivers[c.ownerIndex()];
+    if (d.joint < 0) return {d.ends[0], d.ends[1]};
+    const CompiledJoint& j = m.joints[d.joint];
+    return {BodyPoint{j.body[0], j.point[1].local}, j.point[1]};
+}
+
+}  // namespace
+
+StepSolver::StepSolver(const CompiledMechanism& mechanism)
+    : m_(mechanism),
+      system_(mechanism),
+      factor_(system_.rowScale(), system_.columnScale()),
+      transmission_(findTransmissionPins(mechanism)),
+      tolerance_(1e-11 * mechanism.lengthScale)
+{
+}
+
+VectorXd StepSolver::drawnPose() const
+{
+    VectorXd q(system_.coordinates());
+    for (std::size_t b = 0; b < m_.bodies.size(); ++b) q.segment<3>(3 * b) << m_.bodies[b].mass.cg, 0.0;
+    return q;
+}
+
+double StepSolver::residual(const VectorXd& q, double t, int* worstRow) const
+{
+    VectorXd phi;
+    system_.position(q, t, phi, nullptr);
+    if (phi.size() == 0) return 0.0;
+    Eigen::Index row = 0;
+    const double worst = phi.cwiseProduct(system_.rowScale()).cwiseAbs().maxCoeff(&row);
+    if (worstRow) *worstRow = int(row);
+    return worst;
+}
+
+bool StepSolver::assemble(double t, VectorXd& q)
+{
+    const int n = system_.coordinates();
+    for (int iteration = 0; iteration < kMaxNewtonIterations; ++iteration) {
+        system_.position(q, t, phi_, &entries_);
+        const double r = phi_.cwiseProduct(system_.rowScale()).cwiseAbs().maxCoeff();
+        if (!std::isfinite(r) || r > 1e3 * m_.lengthScale) return false;
+        if (r <= tolerance_ && iteration > 0) return true;
+        if (!factor_.factor(n, entries_)) return false;
+        const VectorXd dq = factor_.solve(-phi_);
+        if (!dq.allFinite()) return false;
+        q += dq;
+        if (r <= tolerance_) return true;
+    }
+    return false;
+}
+
+StepResult StepSolver::analyse(double t, const VectorXd& q)
+{
+    const int n = system_.coordinates();
+    StepResult r;
+    r.t = t;
+    r.q = q;
+    for (const auto& motion : system_.motions()) {
+        const DriveState s = motion(t);
+        r.drivePosition.push_back(s.position);
+        r.driveRate.push_back(s.rate);
+    }
+    system_.position(q, t, phi_, &entries_);
+    const bool factored = factor_.factor(n, entries_);
+    r.reciprocalCondition = factored ? factor_.reciprocalCondition() : 0.0;
+    r.nearSingular = r.reciprocalCondition < kNearSingular;
+
+    VectorXd nu, gamma;
+    system_.rates(q, VectorXd::Zero(n), t, nu, gamma);  // ν does not depend on q̇
+    r.qd = factor_.solve(nu);
+    system_.rates(q, r.qd, t, nu, gamma);
+    r.qdd = factor_.solve(gamma);
+
+    const std::vector<AppliedLoad> loads = appliedLoads(m_, q, r.qd, t, r.drivePosition);
+    VectorXd rhs = generalizedForces(m_, q, loads);
+    for (std::size_t b = 0; b < m_.bodies.size(); ++b) {
+        const auto& mp = m_.bodies[b].mass;
+        rhs.segment<2>(3 * b) -= mp.mass * r.qdd.segment<2>(3 * b);
+        rhs[3 * b + 2] -= mp.inertia * r.qdd[3 * b + 2];
+    }
+    r.lambda = factor_.solveTransposed(rhs);  // Φ_qᵀ λ = Q − M q̈
+
+    fillActions(q, t, r);
+    fillReactionsAndEfforts(r);
+    fillGroundLoad(loads, r);
+
+    r.kinetic = kineticEnergy(m_, r.qd);
+    const LoadEnergies e = loadEnergies(m_, q, r.qd, t, r.drivePosition);
+    r.gravityPotential = e.gravityPotential;
+    r.springPotential = e.springPotential;
+    r.damperDissipation = e.damperDissipation;
+    r.appliedPower = e.appliedPower;
+    for (const auto& pin : transmission_) r.transmissionDeg.push_back(transmissionAngleDeg(m_, pin, q));
+    return r;
+}
+
+// The generalised constraint force on the bodies of constraint k is
+// −Φ_q,kᵀ λ_k; on each body it is a force F and a moment about the centre of
+// mass, reported as F through the action point plus the remaining couple.
+void StepSolver::fillActions(const VectorXd& q, double t, StepResult& r) const
+{
+    const auto& constraints = system_.constraints();
+    r.actions[0].resize(constraints.size());
+    r.actions[1].resize(constraints.size());
+    std::vector<Eigen::Triplet<double>> partials;
+    VectorXd scratch;
+    for (std::size_t k = 0; k < constraints.size(); ++k) {
+        const Constraint& c = *constraints[k];
+        const auto points = actionPoints(m_, c);
+        scratch.resize(c.rows());
+        partials.clear();
+        c.position(q, t, RowWriter(0, &scratch, &partials));
+        Eigen::Vector3d gen[2] = {Eigen::Vector3d::Zero(), Eigen::Vector3d::Zero()};
+        for (const auto& e : partials) {
+            const int side = e.col() / 3 == points[0].body ? 0 : 1;
+            gen[side][e.col() % 3] -= e.value() * r.lambda[system_.firstRow(k) + e.row()];
+        }
+        for (int side = 0; side < 2; ++side) {
+            ConstraintAction& a = r.actions[side][k];
+            a.body = points[side].body;
+            a.at = pointPosition(q, points[side]);
+            if (a.body == kGround) continue;
+            a.force = gen[side].head<2>();
+            a.couple = gen[side][2] - cross(a.at - bodyOrigin(q, a.body), a.force);
+        }
+    }
+}
+
+void StepSolver::fillReactionsAndEfforts(StepResult& r) const
+{
+    const auto& constraints = system_.constraints();
+    for (std::size_t k = 0; k < constraints.size(); ++k) {
+        const Constraint& c = *constraints[k];
+        if (c.owner() == ConstraintOwner::Joint) {
+            const bool secondMoves = r.actions[1][k].body != kGround;
+            const ConstraintAction& a = secondMoves ? r.actions[1][k] : r.actions[0][k];
+            const double sign = secondMoves ? 1.0 : -1.0;
+            r.joints.push_back({sign * a.force, sign * a.couple});
+        }
+        else {
+            // Φ = coordinate − s(t): the driver's push on its second body is −λ.
+            const double effort = -r.lambda[system_.firstRow(k)];
+            const int d = c.ownerIndex();
+            r.effort.push_back(effort);
+            r.power.push_back(effort * r.driveRate[d]);
+        }
+    }
+}
+
+void StepSolver::fillGroundLoad(const std::vector<AppliedLoad>& loads, StepResult& r) const
+{
+    for (std::size_t k = 0; k < system_.constraints().size(); ++k)
+        for (int side = 0; side < 2; ++side) {
+            if (r.actions[side][k].body != kGround) continue;
+            const ConstraintAction& other = r.actions[1 - side][k];
+            if (other.body == kGround) continue;
+            r.groundForce -= other.force;
+            r.groundMoment -= cross(other.at, other.force) + other.couple;
+        }
+    for (const auto& l : loads) {
+        if (l.body != kGround) continue;
+        r.groundForce += l.force;
+        r.groundMoment += cross(l.at, l.force) + l.couple;
+    }
+}
+
+}  // namespace clevis

@@ -1,0 +1,49 @@
+// One position of the cycle: assemble (Newton–Raphson on Φ(q, t) = 0), then
+// velocities Φ_q q̇ = ν, accelerations Φ_q q̈ = γ and the multipliers of
+// M q̈ + Φ_qᵀ λ = Q, from which every reaction and driver effort follows.
+#pragma once
+
+#include "applied_loads.h"
+#include "constraint_system.h"
+#include "jacobian_factor.h"
+#include "results.h"
+
+namespace clevis {
+
+class StepSolver {
+public:
+    explicit StepSolver(const CompiledMechanism& mechanism);
+
+    // The drawn pose: each body's centre where drawn, angle zero.
+    VectorXd drawnPose() const;
+
+    // Newton–Raphson from `q` (updated in place). False if it does not
+    // converge: the mechanism cannot be assembled at time t near that pose.
+    bool assemble(double t, VectorXd& q);
+
+    // Constraint residual at q in balanced units; the index of the worst row.
+    double residual(const VectorXd& q, double t, int* worstRow = nullptr) const;
+
+    // Everything at an assembled pose.
+    StepResult analyse(double t, const VectorXd& q);
+
+    const ConstraintSystem& system() const { return system_; }
+    const std::vector<TransmissionPin>& transmissionPins() const { return transmission_; }
+
+    static constexpr double kNearSingular = 1e-4;  // reciprocal condition number of J̃
+
+private:
+    void fillActions(const VectorXd& q, double t, StepResult& r) const;
+    void fillReactionsAndEfforts(StepResult& r) const;
+    void fillGroundLoad(const std::vector<AppliedLoad>& loads, StepResult& r) const;
+
+    const CompiledMechanism& m_;
+    ConstraintSystem system_;
+    JacobianFactor factor_;
+    std::vector<Eigen::Triplet<double>> entries_;
+    VectorXd phi_;
+    std::vector<TransmissionPin> transmission_;
+    double tolerance_;
+};
+
+}  // namespace clevis
