@@ -1,0 +1,27 @@
+// Clevis's drawing palette, shared by the canvas, the plots, the free-body
+// diagrams and the exports. Hues are taken from the Okabe–Ito set, which
+// stays distinguishable for the common forms of colour-blindness and in
+// grey-scale print; each role also differs by line style or shape, never by
+// colour alone.
+#pragma once
+
+#include <QColor>
+
+namespace clevis::ui::palette {
+
+inline QColor paper() { return {0xFB, 0xFA, 0xF7}; }      // canvas and diagram background
+inline QColor gridMinor() { return {0xEC, 0xEA, 0xE4}; }
+inline QColor gridMajor() { return {0xDA, 0xD7, 0xCE}; }
+inline QColor ink() { return {0x22, 0x22, 0x22}; }        // outlines, text, joint reactions
+inline QColor groundHatch() { return {0x6B, 0x6B, 0x6B}; }
+inline QColor link() { return {0x00, 0x72, 0xB2}; }       // blue: moving bodies
+inline QColor linkFill() { return {0xD6, 0xE9, 0xF5}; }
+inline QColor driver() { return {0xD5, 0x5E, 0x00}; }     // vermillion: motors and cylinders, drive effort
+inline QColor load() { return {0x00, 0x9E, 0x73}; }       // bluish green: applied forces and torques
+inline QColor spring() { return {0xCC, 0x79, 0xA7}; }     // reddish purple: springs and dampers
+inline QColor weight() { return {0xE6, 0x9F, 0x00}; }     // orange: gravity
+inline QColor inertia() { return {0x56, 0xB4, 0xE9}; }    // sky blue, dashed: m·a_G, I_G·α
+inline QColor selection() { return {0xF0, 0xE4, 0x42}; }  // yellow halo behind the selected part
+inline QColor problem() { return {0xB0, 0x00, 0x20}; }    // the part an error names
+
+}  // namespace clevis::ui::palette
