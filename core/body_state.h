@@ -4,6 +4,7 @@
 #include "compiled_mechanism.h"
 
 #include <Eigen/Core>
+#include <vector>
 
 namespace clevis {
 
@@ -39,5 +40,35 @@ inline Vec2 pointVelocity(const VectorXd& q, const VectorXd& qd, const BodyPoint
 {
     return bodyVelocity(qd, p.body) + bodyRate(qd, p.body) * perp(pointArm(q, p));
 }
+
+// Body coordinates with each body's rotation matrix computed once, for the
+// hot paths that place many points on the same bodies.
+class Pose {
+public:
+    Pose(const VectorXd& q)  // implicit: any q can be read as a pose
+        : q_(q), rotations_(q.size() / 3)
+    {
+        for (std::size_t b = 0; b < rotations_.size(); ++b) rotations_[b] = rotation(q[3 * b + 2]);
+    }
+    const VectorXd& q() const { return q_; }
+    double angle(int body) const { return bodyAngle(q_, body); }
+    Vec2 origin(int body) const { return bodyOrigin(q_, body); }
+    // A(φ)s' of a body point (zero for ground, whose points are global).
+    Vec2 arm(const BodyPoint& p) const { return p.body == kGround ? Vec2::Zero() : Vec2(rotations_[p.body] * p.local); }
+    Vec2 point(const BodyPoint& p) const { return p.body == kGround ? p.local : Vec2(origin(p.body) + arm(p)); }
+    Vec2 velocity(const VectorXd& qd, const BodyPoint& p) const
+    {
+        return bodyVelocity(qd, p.body) + bodyRate(qd, p.body) * perp(arm(p));
+    }
+    // A body-fixed direction in global axes.
+    Vec2 direction(int body, const Vec2& local) const
+    {
+        return body == kGround ? local : Vec2(rotations_[body] * local);
+    }
+
+private:
+    const VectorXd& q_;
+    std::vector<Eigen::Matrix2d> rotations_;
+};
 
 }  // namespace clevis

@@ -49,9 +49,9 @@ public:
     // Rows that constrain an angle rather than a length (for unit balancing).
     virtual bool angularRow(int row) const = 0;
     // Φ and, when the writer carries one, the Jacobian.
-    virtual void position(const VectorXd& q, double t, const RowWriter& out) const = 0;
+    virtual void position(const Pose& q, double t, const RowWriter& out) const = 0;
     // ν = −Φ_t into `nu`, γ into `gamma`.
-    virtual void rates(const VectorXd& q, const VectorXd& qd, double t, const RowWriter& nu,
+    virtual void rates(const Pose& q, const VectorXd& qd, double t, const RowWriter& nu,
                        const RowWriter& gamma) const = 0;
 
     ConstraintOwner owner() const { return owner_; }

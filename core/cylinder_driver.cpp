@@ -21,29 +21,29 @@ public:
     int rows() const override { return 1; }
     bool angularRow(int) const override { return false; }
 
-    void position(const VectorXd& q, double t, const RowWriter& out) const override
+    void position(const Pose& q, double t, const RowWriter& out) const override
     {
-        const Vec2 d = pointPosition(q, j_) - pointPosition(q, i_);
+        const Vec2 d = q.point(j_) - q.point(i_);
         const double length = d.norm();
         const Vec2 u = d / length;
         out.value(0, length - motion_(t).position);
         out.partial(0, i_.body, -u);
-        out.partial(0, i_.body, 2, -u.dot(perp(pointArm(q, i_))));
+        out.partial(0, i_.body, 2, -u.dot(perp(q.arm(i_))));
         out.partial(0, j_.body, u);
-        out.partial(0, j_.body, 2, u.dot(perp(pointArm(q, j_))));
+        out.partial(0, j_.body, 2, u.dot(perp(q.arm(j_))));
     }
 
-    void rates(const VectorXd& q, const VectorXd& qd, double t, const RowWriter& nu,
+    void rates(const Pose& q, const VectorXd& qd, double t, const RowWriter& nu,
                const RowWriter& gamma) const override
     {
-        const Vec2 d = pointPosition(q, j_) - pointPosition(q, i_);
+        const Vec2 d = q.point(j_) - q.point(i_);
         const double length = d.norm();
         const Vec2 u = d / length;
-        const Vec2 dd = pointVelocity(q, qd, j_) - pointVelocity(q, qd, i_);
+        const Vec2 dd = q.velocity(qd, j_) - q.velocity(qd, i_);
         const double wi = bodyRate(qd, i_.body), wj = bodyRate(qd, j_.body);
         const double along = u.dot(dd);
         const double quadratic = (dd.squaredNorm() - along * along) / length +
-                                 u.dot(pointArm(q, i_) * wi * wi - pointArm(q, j_) * wj * wj);
+                                 u.dot(q.arm(i_) * wi * wi - q.arm(j_) * wj * wj);
         const DriveState s = motion_(t);
         nu.value(0, s.rate);
         gamma.value(0, s.accel - quadratic);

@@ -16,9 +16,7 @@ bool JacobianFactor::factor(int size, const std::vector<Eigen::Triplet<double>>&
         denseMatrix_.setZero(size, size);
         for (const auto& e : entries) denseMatrix_(e.row(), e.col()) += e.value();
         columnSums = denseMatrix_.cwiseAbs().colwise().sum();
-        denseLu_.compute(denseMatrix_);
-        const Eigen::VectorXd pivots = denseLu_.matrixLU().diagonal().cwiseAbs();
-        if (size && !(pivots.minCoeff() > 1e-14 * pivots.maxCoeff())) return false;
+        if (!denseLu_.compute(denseMatrix_) || !(denseLu_.minPivot() > 1e-14 * denseLu_.maxPivot())) return false;
     } else {
         sparseMatrix_.resize(size, size);
         sparseMatrix_.setFromTriplets(entries.begin(), entries.end());
@@ -36,26 +34,40 @@ bool JacobianFactor::factor(int size, const std::vector<Eigen::Triplet<double>>&
     return std::isfinite(norm1_);
 }
 
-Eigen::VectorXd JacobianFactor::solveScaled(const Eigen::VectorXd& b) const
+void JacobianFactor::solveScaledInPlace(Eigen::VectorXd& b) const
 {
-    return dense_ ? Eigen::VectorXd(denseLu_.solve(b)) : Eigen::VectorXd(sparseLu_.solve(b));
+    if (dense_) denseLu_.solveInPlace(b);
+    else b = sparseLu_.solve(b);
 }
 
-Eigen::VectorXd JacobianFactor::solveScaledTransposed(const Eigen::VectorXd& b) const
+void JacobianFactor::solveScaledTransposedInPlace(Eigen::VectorXd& b) const
 {
-    return dense_ ? Eigen::VectorXd(denseLu_.transpose().solve(b)) : Eigen::VectorXd(sparseLu_.transpose().solve(b));
+    if (dense_) denseLu_.solveTransposedInPlace(b);
+    else b = sparseLu_.transpose().solve(b);
 }
 
 // Φ_q = D_r⁻¹ J̃ D_c⁻¹, so Φ_q x = b gives x = D_c J̃⁻¹ (D_r b) ...
+void JacobianFactor::solveInPlace(Eigen::VectorXd& b) const
+{
+    b.array() *= rowScale_.array();
+    solveScaledInPlace(b);
+    b.array() *= columnScale_.array();
+}
+
 Eigen::VectorXd JacobianFactor::solve(const Eigen::VectorXd& b) const
 {
-    return columnScale_.cwiseProduct(solveScaled(rowScale_.cwiseProduct(b)));
+    Eigen::VectorXd x = b;
+    solveInPlace(x);
+    return x;
 }
 
 // ... and Φ_qᵀ y = f gives y = D_r J̃⁻ᵀ (D_c f).
 Eigen::VectorXd JacobianFactor::solveTransposed(const Eigen::VectorXd& f) const
 {
-    return rowScale_.cwiseProduct(solveScaledTransposed(columnScale_.cwiseProduct(f)));
+    Eigen::VectorXd y = f.cwiseProduct(columnScale_);
+    solveScaledTransposedInPlace(y);
+    y.array() *= rowScale_.array();
+    return y;
 }
 
 // Estimate of ‖J̃⁻¹‖₁ by Hager's method as refined by Higham (the estimator
@@ -65,12 +77,14 @@ double JacobianFactor::reciprocalCondition() const
     const Eigen::Index n = columnScale_.size();
     if (n == 0 || norm1_ == 0.0) return 0.0;
     Eigen::VectorXd x = Eigen::VectorXd::Constant(n, 1.0 / double(n));
+    Eigen::VectorXd y, z;
     double estimate = 0.0;
     for (int iteration = 0; iteration < 5; ++iteration) {
-        const Eigen::VectorXd y = solveScaled(x);
+        y = x;
+        solveScaledInPlace(y);
         estimate = y.lpNorm<1>();
-        const Eigen::VectorXd sign = y.unaryExpr([](double v) { return v < 0 ? -1.0 : 1.0; });
-        const Eigen::VectorXd z = solveScaledTransposed(sign);
+        z = y.unaryExpr([](double v) { return v < 0 ? -1.0 : 1.0; });
+        solveScaledTransposedInPlace(z);
         Eigen::Index j = 0;
         if (z.cwiseAbs().maxCoeff(&j) <= z.dot(x)) break;
         x.setZero();

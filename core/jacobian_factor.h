@@ -1,10 +1,12 @@
 // LU factorisation of the square, scaled constraint Jacobian J̃, with solves
 // of Φ_q x = b and Φ_qᵀ y = f in the original units (see constraint_system.h).
 //
-// Small systems use a dense partial-pivoting LU, which measures faster there;
+// Small systems use a dense partial-pivoting LU (small_lu.h), which measures faster there;
 // larger ones a sparse LU whose pattern is analysed once, so the cost per step
 // grows about linearly with the number of bodies.
 #pragma once
+
+#include "small_lu.h"
 
 #include <Eigen/Dense>
 #include <Eigen/SparseCore>
@@ -25,17 +27,18 @@ public:
 
     Eigen::VectorXd solve(const Eigen::VectorXd& b) const;            // x with Φ_q x = b
     Eigen::VectorXd solveTransposed(const Eigen::VectorXd& f) const;  // y with Φ_qᵀ y = f
+    void solveInPlace(Eigen::VectorXd& b) const;
     // Reciprocal 1-norm condition number estimate of J̃ (Hager–Higham).
     double reciprocalCondition() const;
 
 private:
-    Eigen::VectorXd solveScaled(const Eigen::VectorXd& b) const;
-    Eigen::VectorXd solveScaledTransposed(const Eigen::VectorXd& b) const;
+    void solveScaledInPlace(Eigen::VectorXd& b) const;
+    void solveScaledTransposedInPlace(Eigen::VectorXd& b) const;
 
     Eigen::VectorXd rowScale_, columnScale_;
     bool dense_ = true;
     double norm1_ = 0.0;
-    Eigen::PartialPivLU<Eigen::MatrixXd> denseLu_;
+    SmallLu denseLu_;
     Eigen::MatrixXd denseMatrix_;
     mutable Eigen::SparseLU<Eigen::SparseMatrix<double>, Eigen::COLAMDOrdering<int>> sparseLu_;
     Eigen::SparseMatrix<double> sparseMatrix_;

@@ -18,9 +18,9 @@ struct LineGap {
     BodyPoint onI, onJ;
     Vec2 directionLocal;  // e' in body i
 
-    double value(const VectorXd& q) const;
-    void partials(const VectorXd& q, int row, const RowWriter& out) const;
-    double quadratic(const VectorXd& q, const VectorXd& qd) const;
+    double value(const Pose& q) const;
+    void partials(const Pose& q, int row, const RowWriter& out) const;
+    double quadratic(const Pose& q, const VectorXd& qd) const;
 };
 
 }  // namespace clevis

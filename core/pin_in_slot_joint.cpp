@@ -19,13 +19,13 @@ public:
     int rows() const override { return 1; }
     bool angularRow(int) const override { return false; }
 
-    void position(const VectorXd& q, double, const RowWriter& out) const override
+    void position(const Pose& q, double, const RowWriter& out) const override
     {
         out.value(0, gap_.value(q));
         gap_.partials(q, 0, out);
     }
 
-    void rates(const VectorXd& q, const VectorXd& qd, double, const RowWriter& nu,
+    void rates(const Pose& q, const VectorXd& qd, double, const RowWriter& nu,
                const RowWriter& gamma) const override
     {
         nu.value(0, 0.0);

@@ -16,12 +16,12 @@ public:
     int rows() const override { return 2; }
     bool angularRow(int) const override { return false; }
 
-    void position(const VectorXd& q, double, const RowWriter& out) const override
+    void position(const Pose& q, double, const RowWriter& out) const override
     {
-        const Vec2 phi = pointPosition(q, j_) - pointPosition(q, i_);
+        const Vec2 phi = q.point(j_) - q.point(i_);
         out.value(0, phi.x());
         out.value(1, phi.y());
-        const Vec2 bi = perp(pointArm(q, i_)), bj = perp(pointArm(q, j_));
+        const Vec2 bi = perp(q.arm(i_)), bj = perp(q.arm(j_));
         for (int r = 0; r < 2; ++r) {
             out.partial(r, i_.body, r, -1.0);
             out.partial(r, i_.body, 2, -bi[r]);
@@ -30,11 +30,11 @@ public:
         }
     }
 
-    void rates(const VectorXd& q, const VectorXd& qd, double, const RowWriter& nu,
+    void rates(const Pose& q, const VectorXd& qd, double, const RowWriter& nu,
                const RowWriter& gamma) const override
     {
         const double wi = bodyRate(qd, i_.body), wj = bodyRate(qd, j_.body);
-        const Vec2 g = pointArm(q, j_) * wj * wj - pointArm(q, i_) * wi * wi;
+        const Vec2 g = q.arm(j_) * wj * wj - q.arm(i_) * wi * wi;
         for (int r = 0; r < 2; ++r) {
             nu.value(r, 0.0);
             gamma.value(r, g[r]);

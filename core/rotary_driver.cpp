@@ -20,14 +20,14 @@ public:
     int rows() const override { return 1; }
     bool angularRow(int) const override { return true; }
 
-    void position(const VectorXd& q, double t, const RowWriter& out) const override
+    void position(const Pose& q, double t, const RowWriter& out) const override
     {
-        out.value(0, bodyAngle(q, j_) - bodyAngle(q, i_) + offset_ - motion_(t).position);
+        out.value(0, q.angle(j_) - q.angle(i_) + offset_ - motion_(t).position);
         out.partial(0, i_, 2, -1.0);
         out.partial(0, j_, 2, 1.0);
     }
 
-    void rates(const VectorXd&, const VectorXd&, double t, const RowWriter& nu, const RowWriter& gamma) const override
+    void rates(const Pose&, const VectorXd&, double t, const RowWriter& nu, const RowWriter& gamma) const override
     {
         const DriveState s = motion_(t);
         nu.value(0, s.rate);

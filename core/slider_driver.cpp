@@ -25,13 +25,13 @@ public:
     int rows() const override { return 1; }
     bool angularRow(int) const override { return false; }
 
-    void position(const VectorXd& q, double t, const RowWriter& out) const override
+    void position(const Pose& q, double t, const RowWriter& out) const override
     {
         out.value(0, gap_.value(q) + offset_ - motion_(t).position);
         gap_.partials(q, 0, out);
     }
 
-    void rates(const VectorXd& q, const VectorXd& qd, double t, const RowWriter& nu,
+    void rates(const Pose& q, const VectorXd& qd, double t, const RowWriter& nu,
                const RowWriter& gamma) const override
     {
         const DriveState s = motion_(t);

@@ -20,17 +20,17 @@ public:
     int rows() const override { return 2; }
     bool angularRow(int row) const override { return row == 0; }
 
-    void position(const VectorXd& q, double, const RowWriter& out) const override
+    void position(const Pose& q, double, const RowWriter& out) const override
     {
         const int bi = gap_.onI.body, bj = gap_.onJ.body;
-        out.value(0, bodyAngle(q, bj) - bodyAngle(q, bi));
+        out.value(0, q.angle(bj) - q.angle(bi));
         out.partial(0, bi, 2, -1.0);
         out.partial(0, bj, 2, 1.0);
         out.value(1, gap_.value(q));
         gap_.partials(q, 1, out);
     }
 
-    void rates(const VectorXd& q, const VectorXd& qd, double, const RowWriter& nu,
+    void rates(const Pose& q, const VectorXd& qd, double, const RowWriter& nu,
                const RowWriter& gamma) const override
     {
         nu.value(0, 0.0);

@@ -10,19 +10,22 @@ namespace {
 
 constexpr int kMaxNewtonIterations = 30;
 
-// The two bodies a constraint acts on and the point on each through which its
-// force is reported: the second body's joint point (where the pair touches),
-// or for a cylinder its own two ends.
-std::array<BodyPoint, 2> actionPoints(const CompiledMechanism& m, const Constraint& c)
+// The two bodies a constraint acts on and, for each, the point through which
+// its force is reported: for both bodies the second body's joint point (where
+// the pair touches; on a slider it moves along the first body), or for a
+// cylinder each body's own end.
+using ActionPoint = StepSolver::ActionPoint;
+
+std::array<ActionPoint, 2> actionPoints(const CompiledMechanism& m, const Constraint& c)
 {
     if (c.owner() == ConstraintOwner::Joint) {
         const CompiledJoint& j = m.joints[c.ownerIndex()];
-        return {BodyPoint{j.body[0], j.point[1].local}, j.point[1]};
+        return {ActionPoint{j.body[0], j.point[1]}, ActionPoint{j.body[1], j.point[1]}};
     }
     const CompiledDriver& d = m.drivers[c.ownerIndex()];
-    if (d.joint < 0) return {d.ends[0], d.ends[1]};
+    if (d.joint < 0) return {ActionPoint{d.ends[0].body, d.ends[0]}, ActionPoint{d.ends[1].body, d.ends[1]}};
     const CompiledJoint& j = m.joints[d.joint];
-    return {BodyPoint{j.body[0], j.point[1].local}, j.point[1]};
+    return {ActionPoint{j.body[0], j.point[1]}, ActionPoint{j.body[1], j.point[1]}};
 }
 
 }  // namespace
@@ -34,6 +37,12 @@ StepSolver::StepSolver(const CompiledMechanism& mechanism)
       transmission_(findTransmissionPins(mechanism)),
       tolerance_(1e-11 * mechanism.lengthScale)
 {
+    const auto& constraints = system_.constraints();
+    ownerOfRow_.resize(system_.rows());
+    for (std::size_t k = 0; k < constraints.size(); ++k) {
+        actionPoints_.push_back(actionPoints(m_, *constraints[k]));
+        for (int row = 0; row < constraints[k]->rows(); ++row) ownerOfRow_[system_.firstRow(k) + row] = int(k);
+    }
 }
 
 VectorXd StepSolver::drawnPose() const
@@ -63,9 +72,10 @@ bool StepSolver::assemble(double t, VectorXd& q)
         if (!std::isfinite(r) || r > 1e3 * m_.lengthScale) return false;
         if (r <= tolerance_ && iteration > 0) return true;
         if (!factor_.factor(n, entries_)) return false;
-        const VectorXd dq = factor_.solve(-phi_);
-        if (!dq.allFinite()) return false;
-        q += dq;
+        phi_ = -phi_;
+        factor_.solveInPlace(phi_);  // Newton step Δq = −Φ_q⁻¹Φ
+        if (!phi_.allFinite()) return false;
+        q += phi_;
         if (r <= tolerance_) return true;
     }
     return false;
@@ -88,7 +98,7 @@ StepResult StepSolver::analyse(double t, const VectorXd& q)
     r.nearSingular = r.reciprocalCondition < kNearSingular;
 
     VectorXd nu, gamma;
-    system_.rates(q, VectorXd::Zero(n), t, nu, gamma);  // ν does not depend on q̇
+    system_.rates(q, VectorXd::Zero(n), t, nu, gamma);  // ν does not depend on q̇; γ is recomputed below
     r.qd = factor_.solve(nu);
     system_.rates(q, r.qd, t, nu, gamma);
     r.qdd = factor_.solve(gamma);
@@ -102,7 +112,7 @@ StepResult StepSolver::analyse(double t, const VectorXd& q)
     }
     r.lambda = factor_.solveTransposed(rhs);  // Φ_qᵀ λ = Q − M q̈
 
-    fillActions(q, t, r);
+    fillActions(q, r);
     fillReactionsAndEfforts(r);
     fillGroundLoad(loads, r);
 
@@ -119,38 +129,39 @@ StepResult StepSolver::analyse(double t, const VectorXd& q)
 // The generalised constraint force on the bodies of constraint k is
 // −Φ_q,kᵀ λ_k; on each body it is a force F and a moment about the centre of
 // mass, reported as F through the action point plus the remaining couple.
-void StepSolver::fillActions(const VectorXd& q, double t, StepResult& r) const
+// The Jacobian entries are those analyse() just factored, unscaled.
+void StepSolver::fillActions(const VectorXd& q, StepResult& r) const
 {
-    const auto& constraints = system_.constraints();
-    r.actions[0].resize(constraints.size());
-    r.actions[1].resize(constraints.size());
-    std::vector<Eigen::Triplet<double>> partials;
-    VectorXd scratch;
-    for (std::size_t k = 0; k < constraints.size(); ++k) {
-        const Constraint& c = *constraints[k];
-        const auto points = actionPoints(m_, c);
-        scratch.resize(c.rows());
-        partials.clear();
-        c.position(q, t, RowWriter(0, &scratch, &partials));
-        Eigen::Vector3d gen[2] = {Eigen::Vector3d::Zero(), Eigen::Vector3d::Zero()};
-        for (const auto& e : partials) {
-            const int side = e.col() / 3 == points[0].body ? 0 : 1;
-            gen[side][e.col() % 3] -= e.value() * r.lambda[system_.firstRow(k) + e.row()];
-        }
+    const std::size_t count = system_.constraints().size();
+    std::vector<std::array<Eigen::Vector3d, 2>> gen(count, {Eigen::Vector3d::Zero(), Eigen::Vector3d::Zero()});
+    const auto& points = actionPoints_;
+    const VectorXd& rowScale = system_.rowScale();
+    const VectorXd& columnScale = system_.columnScale();
+    for (const auto& e : entries_) {
+        const int k = ownerOfRow_[e.row()];
+        const int side = e.col() / 3 == points[k][0].body ? 0 : 1;
+        const double partial = e.value() / (rowScale[e.row()] * columnScale[e.col()]);
+        gen[k][side][e.col() % 3] -= partial * r.lambda[e.row()];
+    }
+    r.actions[0].resize(count);
+    r.actions[1].resize(count);
+    for (std::size_t k = 0; k < count; ++k)
         for (int side = 0; side < 2; ++side) {
             ConstraintAction& a = r.actions[side][k];
-            a.body = points[side].body;
-            a.at = pointPosition(q, points[side]);
+            a.body = points[k][side].body;
+            a.at = pointPosition(q, points[k][side].at);
             if (a.body == kGround) continue;
-            a.force = gen[side].head<2>();
-            a.couple = gen[side][2] - cross(a.at - bodyOrigin(q, a.body), a.force);
+            a.force = gen[k][side].head<2>();
+            a.couple = gen[k][side][2] - cross(a.at - bodyOrigin(q, a.body), a.force);
         }
-    }
 }
 
 void StepSolver::fillReactionsAndEfforts(StepResult& r) const
 {
     const auto& constraints = system_.constraints();
+    r.joints.reserve(m_.joints.size());
+    r.effort.reserve(m_.drivers.size());
+    r.power.reserve(m_.drivers.size());
     for (std::size_t k = 0; k < constraints.size(); ++k) {
         const Constraint& c = *constraints[k];
         if (c.owner() == ConstraintOwner::Joint) {

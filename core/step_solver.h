@@ -8,6 +8,8 @@
 #include "jacobian_factor.h"
 #include "results.h"
 
+#include <array>
+
 namespace clevis {
 
 class StepSolver {
@@ -32,8 +34,15 @@ public:
 
     static constexpr double kNearSingular = 1e-4;  // reciprocal condition number of J̃
 
+    // A body a constraint acts on and the point (possibly fixed in the other
+    // body) through which its force on that body is reported.
+    struct ActionPoint {
+        int body;
+        BodyPoint at;
+    };
+
 private:
-    void fillActions(const VectorXd& q, double t, StepResult& r) const;
+    void fillActions(const VectorXd& q, StepResult& r) const;
     void fillReactionsAndEfforts(StepResult& r) const;
     void fillGroundLoad(const std::vector<AppliedLoad>& loads, StepResult& r) const;
 
@@ -43,6 +52,8 @@ private:
     std::vector<Eigen::Triplet<double>> entries_;
     VectorXd phi_;
     std::vector<TransmissionPin> transmission_;
+    std::vector<std::array<ActionPoint, 2>> actionPoints_;  // per constraint
+    std::vector<int> ownerOfRow_;                         // constraint of each row
     double tolerance_;
 };
 
