@@ -1,6 +1,7 @@
 #include "compiled_mechanism.h"
 
 #include "mass_properties.h"
+#include "mechanism_file_format.h"
 #include "model_error.h"
 
 #include <Eigen/Geometry>
@@ -10,24 +11,13 @@
 
 namespace clevis {
 
-const char* jointTypeName(JointType type)
-{
-    switch (type) {
-    case JointType::Pin: return "pin";
-    case JointType::Slider: return "slider";
-    case JointType::PinInSlot: return "pin_in_slot";
-    }
-    return "?";
-}
+const char* jointTypeName(JointType type) { return nameOf(kJointTypes, type); }
 
 const char* camLawName(CamLaw law)
 {
-    switch (law) {
-    case CamLaw::Cycloidal: return "cycloidal";
-    case CamLaw::Polynomial345: return "polynomial_345";
-    case CamLaw::ModifiedTrapezoid: return "modified_trapezoid";
-    }
-    return "?";
+    for (const auto& l : kMotionLaws)
+        if (l.kind == LawKind::Rise && l.cam == law) return l.name;
+    return "";
 }
 
 namespace {
