@@ -36,6 +36,7 @@ private:
     BodyPoint point(int body, const Vec2& global) const;
     std::vector<Vec2> attachmentPoints(int body) const;
     MassProperties massOf(std::size_t b) const;
+    void checkAttachmentNames() const;
     void compileJoints();
     void compileDrivers();
     void compileLoads();
@@ -129,6 +130,19 @@ MassProperties Compiler::massOf(std::size_t b) const
         else throw ModelError(path, "body \"" + body.name + "\" is not attached to anything");
     }
     return total;
+}
+
+// Bars find their ends from the joints that name them, so a misspelt body
+// name must be reported as such before any mass is worked out.
+void Compiler::checkAttachmentNames() const
+{
+    for (std::size_t k = 0; k < in_.joints.size(); ++k)
+        for (int side = 0; side < 2; ++side)
+            bodyIndex(in_.joints[k].bodies[side], at("joints", k) + ".bodies[" + std::to_string(side) + "]");
+    for (std::size_t k = 0; k < in_.drivers.size(); ++k)
+        for (int side = 0; side < 2; ++side)
+            if (const auto& end = in_.drivers[k].ends[side])
+                bodyIndex(end->body, at("drivers", k) + ".between[" + std::to_string(side) + "].body");
 }
 
 void Compiler::compileJoints()
@@ -275,6 +289,7 @@ CompiledMechanism Compiler::run()
         bodies_[in_.bodies[b].name] = int(b);
         out_.bodies.push_back({in_.bodies[b].name, {}});
     }
+    checkAttachmentNames();
     for (std::size_t b = 0; b < in_.bodies.size(); ++b) out_.bodies[b].mass = massOf(b);
     compileJoints();
     compileDrivers();

@@ -37,6 +37,10 @@ struct TransmissionSummary {
     PeakAt minimum, maximum;  // degrees
 };
 
+// Less energy than this passing through the mechanism over the cycle (J) is
+// rounding noise: there is nothing to balance and relativeResidual is 0.
+inline constexpr double kNegligibleEnergy = 1e-9;
+
 // Energy balance over the solved span [t₀, t₁]:
 //   W_drivers = ΔT + ΔV_gravity + ΔV_springs + W_dampers − W_loads + residual.
 struct EnergyBalance {

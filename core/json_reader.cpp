@@ -135,9 +135,12 @@ ModelError JsonNode::notAChoice(const std::string& s, const std::vector<const ch
 void JsonNode::object(std::initializer_list<const char*> known) const
 {
     expect(value_->is_object(), "an object");
-    for (const auto& [key, value] : value_->items())
+    // Not a structured binding: clang before 16 cannot capture one in a lambda.
+    for (const auto& item : value_->items()) {
+        const std::string& key = item.key();
         if (std::none_of(known.begin(), known.end(), [&](const char* k) { return key == k; }))
-            child(value, keyPath(key)).warn("unknown key (ignored)");
+            child(item.value(), keyPath(key)).warn("unknown key (ignored)");
+    }
 }
 
 bool JsonNode::has(const char* key) const

@@ -51,6 +51,21 @@ Vec2 lineDirection(const CompiledMechanism& m, const TransmissionPin& pin, int s
     return pointPosition(q, pin.far[side]) - pointPosition(q, j.point[side]);
 }
 
+// A body turned or pushed by a driver against ground is an input link: the
+// angle at its pins says nothing about how well force is passed on, and a
+// driven pin has no transmission angle either.
+bool isDriven(const CompiledMechanism& m, int joint, int body)
+{
+    for (const auto& d : m.drivers) {
+        if (d.joint == joint) return true;
+        if (d.joint < 0) continue;
+        const CompiledJoint& driven = m.joints[d.joint];
+        if ((driven.body[0] == kGround && driven.body[1] == body) || (driven.body[1] == kGround && driven.body[0] == body))
+            return true;
+    }
+    return false;
+}
+
 }  // namespace
 
 std::vector<TransmissionPin> findTransmissionPins(const CompiledMechanism& m)
@@ -59,6 +74,7 @@ std::vector<TransmissionPin> findTransmissionPins(const CompiledMechanism& m)
     for (std::size_t k = 0; k < m.joints.size(); ++k) {
         const CompiledJoint& j = m.joints[k];
         if (j.type != JointType::Pin || j.body[0] == kGround || j.body[1] == kGround) continue;
+        if (isDriven(m, int(k), j.body[0]) || isDriven(m, int(k), j.body[1])) continue;
         TransmissionPin pin;
         pin.joint = int(k);
         if (chooseLine(m, j.body[0], j, pin.far[0], pin.axisJoint[0]) &&

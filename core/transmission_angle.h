@@ -1,4 +1,5 @@
-// Transmission angle μ at pins between two moving bodies: the angle between
+// Transmission angle μ at pins between two moving bodies that are not input
+// links (see transmission_angle.cpp): the angle between
 // the two bodies' lines through the pin. Force is passed on best at 90°; a
 // common rule of practice is to keep μ within 40°–140°.
 #pragma once

@@ -1,0 +1,77 @@
+#include "analyze_command.h"
+
+#include "analysis_error.h"
+#include "cycle_summary.h"
+#include "cycle_sweep.h"
+#include "mechanism_file.h"
+#include "model_error.h"
+#include "results_csv.h"
+#include "results_json.h"
+#include "summary_text.h"
+
+#include <fstream>
+#include <functional>
+
+namespace clevis::cli {
+namespace {
+
+// Writes a result file; false (with a message naming it) if it cannot be written.
+bool writeOutput(const std::string& path, const std::function<void(std::ostream&)>& write, std::ostream& err)
+{
+    std::ofstream file(path, std::ios::binary);
+    if (file) write(file);
+    file.close();
+    if (file) return true;
+    err << path << ": cannot write the file\n";
+    return false;
+}
+
+bool writeOutputs(const AnalyzeOptions& options, const CompiledMechanism& m, const CycleResult& r,
+                  const CycleSummary& s, std::ostream& err)
+{
+    bool ok = true;
+    if (!options.jsonOut.empty())
+        ok &= writeOutput(options.jsonOut, [&](std::ostream& f) { f << resultsToJson(m, r, s).dump(2) << '\n'; }, err);
+    if (!options.csvOut.empty())
+        ok &= writeOutput(options.csvOut, [&](std::ostream& f) { writeResultsCsv(f, m, r); }, err);
+    return ok;
+}
+
+// Incomplete cycles and near-singular positions make the figures unreliable.
+bool trustworthy(const CycleResult& r, const CycleSummary& s, const std::string& file, std::ostream& err)
+{
+    const bool trusted = r.complete && s.nearSingularSteps == 0;
+    if (!trusted)
+        err << file << ": the results are not trustworthy: "
+            << (r.complete ? "some positions are near singular" : "the cycle could not be completed") << '\n';
+    for (const auto& w : r.warnings) err << file << ": warning: " << w.message << '\n';
+    return trusted;
+}
+
+}  // namespace
+
+int runAnalyze(const AnalyzeOptions& options, std::ostream& out, std::ostream& err)
+{
+    try {
+        const LoadedMechanism loaded = loadMechanismFile(options.file);
+        for (const auto& w : loaded.warnings) err << options.file << ": warning: " << w << '\n';
+        const CompiledMechanism m = compile(loaded.mechanism);
+        SweepOptions sweep;
+        sweep.steps = options.steps;
+        const CycleResult r = sweepCycle(m, sweep);
+        const CycleSummary s = summarize(m, r);
+        out << summaryText(m, r, s) << std::flush;
+        const bool written = writeOutputs(options, m, r, s, err);
+        const bool trusted = trustworthy(r, s, options.file, err);
+        return written && trusted ? kExitOk : kExitFailed;
+    }
+    catch (const ModelError& e) {
+        err << options.file << ": " << e.what() << '\n';
+    }
+    catch (const AnalysisError& e) {
+        err << options.file << ": " << e.what() << '\n';
+    }
+    return kExitFailed;
+}
+
+}  // namespace clevis::cli

@@ -1,0 +1,30 @@
+// clevis-cli: the analysis without the GUI, for scripts and batch runs.
+#include "analyze_command.h"
+#include "cli_options.h"
+
+#include <iostream>
+
+namespace {
+
+int run(const clevis::cli::Command& command)
+{
+    using namespace clevis::cli;
+    if (const auto* help = std::get_if<HelpRequest>(&command)) std::cout << helpText(help->topic);
+    else if (std::holds_alternative<VersionRequest>(command)) std::cout << "clevis-cli " CLEVIS_VERSION "\n";
+    else return runAnalyze(std::get<AnalyzeOptions>(command), std::cout, std::cerr);
+    return kExitOk;
+}
+
+}  // namespace
+
+int main(int argc, char** argv)
+{
+    using namespace clevis::cli;
+    try {
+        return run(parseCommandLine({argv + 1, argv + argc}));
+    }
+    catch (const UsageError& e) {
+        std::cerr << "clevis-cli: " << e.what() << "\nTry \"clevis-cli --help\".\n";
+        return kExitUsage;
+    }
+}

@@ -1,0 +1,131 @@
+#include "cli_options.h"
+
+#include <charconv>
+#include <optional>
+
+namespace clevis::cli {
+namespace {
+
+// The same limit as a file's "cycle.steps".
+constexpr int kMaxSteps = 100000;
+
+const char* const kOverview = R"(clevis-cli: the forces in a planar linkage over its whole cycle, without the GUI.
+
+Usage:
+  clevis-cli analyze FILE [--steps N] [--json OUT] [--csv OUT]
+  clevis-cli analyze --help
+  clevis-cli --help
+  clevis-cli --version
+
+Commands:
+  analyze    solve the mechanism in FILE over its cycle and print a summary
+
+Run "clevis-cli analyze --help" for the options, units, sign conventions and
+exit codes. Documentation: docs/file-format.md (mechanism files),
+docs/results-format.md (the --json and --csv output), docs/method.md (the
+solver and its sign conventions).
+)";
+
+const char* const kAnalyzeHelp = R"(Usage: clevis-cli analyze FILE [--steps N] [--json OUT] [--csv OUT]
+
+Solves the mechanism in FILE (a Clevis mechanism file, docs/file-format.md)
+over its whole cycle and prints a summary: peak and RMS joint loads, driver
+effort, power and work, the load on the frame, transmission angles and an
+energy-balance check.
+
+Options:
+  --steps N    intervals over the cycle, N >= 1 (N+1 positions are solved);
+               default: the file's "cycle.steps", else 360
+  --json OUT   write every step and the summary as JSON to the file OUT
+  --csv OUT    write one row per step as CSV to the file OUT
+  -h, --help   show this help
+  (--steps=N, --json=OUT and --csv=OUT work too)
+
+Units: SI (m, s, kg, N, N·m, W, J), except angles: degrees. Rotary driver
+positions are in degrees, linear ones in metres.
+
+Signs: a joint's reaction is the force its first-listed body exerts on its
+second, in global axes; a driver's effort is the torque (N·m) or force (N) it
+applies to its second body, positive along the driver's coordinate; the frame
+load is the force the mechanism puts on ground and its moment about the
+origin; angles are counter-clockwise from +x. Details: docs/method.md and
+docs/results-format.md.
+
+Exit status:
+  0  the whole cycle was solved and no position is near singular
+  1  FILE cannot be read or is not a valid mechanism (the message on stderr
+     starts with FILE), an output cannot be written, or the results are not
+     trustworthy: the cycle could not be completed or some positions are near
+     singular (dead centre, toggle). In that last case the summary is still
+     printed and the outputs written; the warnings follow on stderr.
+  2  wrong command line
+)";
+
+bool isHelp(const std::string& arg) { return arg == "--help" || arg == "-h"; }
+
+int parseSteps(const std::string& text)
+{
+    int value = 0;
+    const auto [end, error] = std::from_chars(text.data(), text.data() + text.size(), value);
+    if (error != std::errc() || end != text.data() + text.size() || value < 1 || value > kMaxSteps)
+        throw UsageError("--steps needs a whole number from 1 to " + std::to_string(kMaxSteps) + ", not \"" + text + "\"");
+    return value;
+}
+
+class ArgumentReader {
+public:
+    explicit ArgumentReader(const std::vector<std::string>& args) : args_(args) {}
+    bool done() const { return next_ >= args_.size(); }
+    std::string take() { return args_[next_++]; }
+    // The value given as "--name=value", or else the next argument.
+    std::string valueOf(const std::string& option, const std::optional<std::string>& attached)
+    {
+        const std::string value = attached ? *attached : done() ? std::string() : take();
+        if (value.empty()) throw UsageError(option + " needs a value");
+        return value;
+    }
+
+private:
+    const std::vector<std::string>& args_;
+    std::size_t next_ = 0;
+};
+
+Command parseAnalyze(ArgumentReader& in)
+{
+    AnalyzeOptions options;
+    while (!in.done()) {
+        const std::string arg = in.take();
+        if (isHelp(arg)) return HelpRequest{"analyze"};
+        if (arg.size() > 1 && arg[0] == '-') {
+            const std::size_t equals = arg.find('=');
+            const std::string name = arg.substr(0, equals);
+            const std::optional<std::string> value =
+                equals == std::string::npos ? std::nullopt : std::optional(arg.substr(equals + 1));
+            if (name == "--steps") options.steps = parseSteps(in.valueOf(name, value));
+            else if (name == "--json") options.jsonOut = in.valueOf(name, value);
+            else if (name == "--csv") options.csvOut = in.valueOf(name, value);
+            else throw UsageError("unknown option \"" + arg + "\" for analyze");
+        }
+        else if (options.file.empty()) options.file = arg;
+        else throw UsageError("analyze takes one FILE; \"" + arg + "\" is a second one");
+    }
+    if (options.file.empty()) throw UsageError("analyze needs a mechanism FILE");
+    return options;
+}
+
+}  // namespace
+
+Command parseCommandLine(const std::vector<std::string>& args)
+{
+    ArgumentReader in(args);
+    if (in.done()) throw UsageError("no command given");
+    const std::string command = in.take();
+    if (isHelp(command)) return HelpRequest{};
+    if (command == "--version") return VersionRequest{};
+    if (command == "analyze") return parseAnalyze(in);
+    throw UsageError("unknown command \"" + command + "\"");
+}
+
+std::string helpText(const std::string& topic) { return topic == "analyze" ? kAnalyzeHelp : kOverview; }
+
+}  // namespace clevis::cli

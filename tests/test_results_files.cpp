@@ -1,0 +1,182 @@
+// The JSON and CSV result files: their shape, units and the bearing-frame
+// reactions, on a link whose pin load is known in closed form.
+#include "compiled_mechanism.h"
+#include "cycle_summary.h"
+#include "cycle_sweep.h"
+#include "mechanism_builders.h"
+#include "results_csv.h"
+#include "results_json.h"
+
+#include <gtest/gtest.h>
+
+#include <sstream>
+
+using namespace clevis;
+using nlohmann::json;
+
+namespace {
+
+constexpr double kMass = 2.0, kArm = 0.3, kOmega = 4.0;  // kg, m, rad/s
+
+// A link named with a comma (to exercise CSV quoting) spinning at constant
+// speed without gravity on a ground pin at the origin, G on +x when drawn.
+Mechanism spinningLink(int steps)
+{
+    Mechanism m;
+    m.name = "spinner";
+    m.gravity = Vec2::Zero();
+    m.bodies = {test::pointBody("arm, left", kMass, Vec2(kArm, 0.0), 0.01)};
+    m.joints = {test::pin("O", kGroundName, "arm, left", Vec2::Zero())};
+    m.drivers = {test::rotary("motor", "O", ConstantSpeed{kOmega, 0.0})};
+    m.cycle.steps = steps;
+    return m;
+}
+
+struct Solved {
+    CompiledMechanism m;
+    CycleResult r;
+    CycleSummary s;
+};
+
+Solved solve(const Mechanism& mech)
+{
+    Solved out{compile(mech), {}, {}};
+    out.r = sweepCycle(out.m);
+    out.s = summarize(out.m, out.r);
+    return out;
+}
+
+// Splits one CSV line, honouring quoted fields.
+std::vector<std::string> csvFields(const std::string& line)
+{
+    std::vector<std::string> fields(1);
+    bool quoted = false;
+    for (std::size_t i = 0; i < line.size(); ++i) {
+        const char c = line[i];
+        if (c == '"' && quoted && i + 1 < line.size() && line[i + 1] == '"') fields.back() += line[++i];
+        else if (c == '"') quoted = !quoted;
+        else if (c == ',' && !quoted) fields.emplace_back();
+        else fields.back() += c;
+    }
+    return fields;
+}
+
+TEST(ResultsJson, HasTheDocumentedShape)
+{
+    const Solved x = solve(spinningLink(24));
+    const json j = resultsToJson(x.m, x.r, x.s);
+    for (const char* key : {"steps", "summary", "warnings", "complete", "duration_s", "planned_steps"})
+        EXPECT_TRUE(j.contains(key)) << key;
+    EXPECT_EQ(j["steps"].size(), 25u);
+    EXPECT_EQ(j["planned_steps"], 24);
+    EXPECT_TRUE(j["complete"].get<bool>());
+    EXPECT_NEAR(j["duration_s"].get<double>(), 2 * kPi / kOmega, 1e-12);
+
+    const json& step = j["steps"][6];
+    EXPECT_NEAR(step["drive"]["motor"].get<double>(), 90.0, 1e-9);  // degrees, a quarter turn
+    const json& body = step["bodies"]["arm, left"];
+    for (const char* key : {"x", "y", "angle_deg", "vx", "vy", "omega", "ax", "ay", "alpha"})
+        EXPECT_TRUE(body.contains(key)) << key;
+    EXPECT_NEAR(body["angle_deg"].get<double>(), 90.0, 1e-9);
+    EXPECT_NEAR(body["omega"].get<double>(), kOmega, 1e-12);
+    for (const char* key : {"fx", "fy", "moment", "local"}) EXPECT_TRUE(step["joints"]["O"].contains(key)) << key;
+    for (const char* key : {"effort", "power"}) EXPECT_TRUE(step["drivers"]["motor"].contains(key)) << key;
+    for (const char* key : {"fx", "fy", "moment"}) EXPECT_TRUE(step["ground"].contains(key)) << key;
+    for (const char* key : {"kinetic", "gravity", "spring"}) EXPECT_TRUE(step["energy"].contains(key)) << key;
+    EXPECT_TRUE(step["transmission_deg"].is_object());
+    EXPECT_FALSE(step["near_singular"].get<bool>());
+
+    const json& summary = j["summary"];
+    for (const char* key : {"peak_n", "peak_step", "peak_t", "peak_drive", "rms_n"})
+        EXPECT_TRUE(summary["joints"]["O"].contains(key)) << key;
+    EXPECT_FALSE(summary["joints"]["O"].contains("peak_moment_nm"));  // a pin
+    EXPECT_EQ(summary["drivers"]["motor"]["unit"], "N·m");
+    for (const char* key : {"peak", "rms", "mean", "peak_power_w", "peak_regen_w", "work_j"})
+        EXPECT_TRUE(summary["drivers"]["motor"].contains(key)) << key;
+    for (const char* key : {"peak_force_n", "peak_force_step", "peak_moment_nm", "peak_moment_step"})
+        EXPECT_TRUE(summary["ground"].contains(key)) << key;
+    for (const char* key : {"driver_work_j", "kinetic_change_j", "gravity_change_j", "spring_change_j", "damper_work_j",
+                            "load_work_j", "residual_j", "gross_j", "relative_residual"})
+        EXPECT_TRUE(summary["energy_balance"].contains(key)) << key;
+    EXPECT_EQ(summary["near_singular_steps"], 0);
+    const double centripetal = kMass * kOmega * kOmega * kArm;  // m ω² d
+    EXPECT_NEAR(summary["joints"]["O"]["peak_n"].get<double>(), centripetal, 1e-9 * centripetal);
+}
+
+// The pin pulls G towards O with m ω² d: in the link's own frame that is a
+// constant (−m ω² d, 0) (G lies on the link's +x axis), while the ground,
+// whose frame is global, feels +m ω² d along the turning line O→G.
+TEST(ResultsJson, BearingReactionsAreInEachBodysFrame)
+{
+    const Solved x = solve(spinningLink(24));
+    const json j = resultsToJson(x.m, x.r, x.s);
+    const double f = kMass * kOmega * kOmega * kArm;
+    for (const json& step : j["steps"]) {
+        const double theta = kOmega * step["t"].get<double>();
+        const json& local = step["joints"]["O"]["local"];
+        EXPECT_NEAR(local["second"]["fx"].get<double>(), -f, 1e-9 * f);
+        EXPECT_NEAR(local["second"]["fy"].get<double>(), 0.0, 1e-9 * f);
+        EXPECT_NEAR(local["first"]["fx"].get<double>(), f * std::cos(theta), 1e-9 * f);
+        EXPECT_NEAR(local["first"]["fy"].get<double>(), f * std::sin(theta), 1e-9 * f);
+    }
+}
+
+// Against a brake the motor always delivers power (T₀ω > 0), so there is no
+// regenerative peak and its step is null.
+TEST(ResultsJson, AMissingStepIsNull)
+{
+    Mechanism mech = spinningLink(12);
+    mech.loads = {TorqueLoad{"brake", "arm, left", -2.0, std::nullopt}};
+    const Solved x = solve(mech);
+    ASSERT_EQ(x.s.drivers[0].peakRegenerative.step, -1);
+    const json j = resultsToJson(x.m, x.r, x.s);
+    EXPECT_TRUE(j["summary"]["drivers"]["motor"]["peak_regen_step"].is_null());
+    EXPECT_EQ(j["summary"]["drivers"]["motor"]["peak_regen_w"], 0.0);
+    EXPECT_TRUE(j["summary"]["drivers"]["motor"]["peak_power_step"].is_number_integer());
+}
+
+TEST(ResultsCsv, HeaderCarriesUnitsAndEveryRowMatchesIt)
+{
+    const Solved x = solve(spinningLink(24));
+    std::ostringstream out;
+    writeResultsCsv(out, x.m, x.r);
+    std::istringstream in(out.str());
+    std::string line;
+    std::getline(in, line);
+    EXPECT_EQ(line.rfind("t [s],motor [deg],\"arm, left.x [m]\",", 0), 0u) << line;
+    const std::vector<std::string> header = csvFields(line);
+    for (const char* column : {"O.fx [N]", "O.moment [N·m]", "motor.effort [N·m]", "motor.power [W]",
+                               "ground.fx [N]", "ground.moment [N·m]", "kinetic [J]", "near_singular"})
+        EXPECT_NE(std::find(header.begin(), header.end(), column), header.end()) << column;
+    int rows = 0;
+    while (std::getline(in, line)) {
+        EXPECT_EQ(csvFields(line).size(), header.size()) << line;
+        ++rows;
+    }
+    EXPECT_EQ(rows, 25);
+}
+
+TEST(ResultsCsv, ValuesAreTheStepResultsInDisplayUnits)
+{
+    const Solved x = solve(spinningLink(8));
+    std::ostringstream out;
+    writeResultsCsv(out, x.m, x.r);
+    std::istringstream in(out.str());
+    std::string line;
+    std::getline(in, line);
+    const std::vector<std::string> header = csvFields(line);
+    const auto column = [&](const std::string& name) {
+        return std::size_t(std::find(header.begin(), header.end(), name) - header.begin());
+    };
+    for (const StepResult& s : x.r.steps) {
+        std::getline(in, line);
+        const std::vector<std::string> v = csvFields(line);
+        EXPECT_NEAR(std::stod(v[column("t [s]")]), s.t, 1e-11);
+        EXPECT_NEAR(std::stod(v[column("motor [deg]")]), radToDeg(s.drivePosition[0]), 1e-9);
+        EXPECT_NEAR(std::stod(v[column("arm, left.angle [deg]")]), radToDeg(s.q[2]), 1e-9);
+        EXPECT_NEAR(std::stod(v[column("O.fy [N]")]), s.joints[0].force.y(), 1e-9);
+        EXPECT_EQ(v[column("near_singular")], s.nearSingular ? "1" : "0");
+    }
+}
+
+}  // namespace
