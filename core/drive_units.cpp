@@ -1,5 +1,6 @@
 #include "drive_units.h"
 
+#include <cmath>
 #include <cstdio>
 
 namespace clevis {
@@ -13,7 +14,12 @@ const char* effortUnit(DriverType type) { return type == DriverType::Rotary ? "N
 std::string formatDrivePosition(const CompiledDriver& d, double si)
 {
     char text[96];
-    if (d.type == DriverType::Rotary) std::snprintf(text, sizeof text, "%s = %.2f°", d.name.c_str(), radToDeg(si));
+    if (d.type == DriverType::Rotary) {
+        // A crank turning whole revolutions is read as a crank angle, 0°–360°.
+        double deg = radToDeg(si);
+        if (std::holds_alternative<ConstantSpeed>(d.motion)) deg -= 360.0 * std::floor(deg / 360.0);
+        std::snprintf(text, sizeof text, "%s = %.2f°", d.name.c_str(), deg);
+    }
     else std::snprintf(text, sizeof text, "%s = %.5f m", d.name.c_str(), si);
     return text;
 }

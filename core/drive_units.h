@@ -11,6 +11,7 @@ namespace clevis {
 double driveDisplayValue(DriverType type, double si);
 const char* driveDisplayUnit(DriverType type);
 const char* effortUnit(DriverType type);  // "N·m" or "N"
-std::string formatDrivePosition(const CompiledDriver& d, double si);  // e.g. "motor = 123.4°"
+// e.g. "motor = 123.40°"; constant-speed cranks are shown modulo one revolution.
+std::string formatDrivePosition(const CompiledDriver& d, double si);
 
 }  // namespace clevis
