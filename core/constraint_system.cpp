@@ -1,5 +1,7 @@
 #include "constraint_system.h"
 
+#include <algorithm>
+
 namespace clevis {
 namespace {
 
@@ -38,13 +40,56 @@ ConstraintSystem::ConstraintSystem(const CompiledMechanism& m, bool includeDrive
         firstRow_.push_back(rows_);
         rows_ += c->rows();
     }
-    const double length = m.lengthScale;
-    rowScale_ = VectorXd::Ones(rows_);
-    for (std::size_t k = 0; k < constraints_.size(); ++k)
-        for (int r = 0; r < constraints_[k]->rows(); ++r)
-            if (constraints_[k]->angularRow(r)) rowScale_[firstRow_[k] + r] = length;
+    balanceUnits(m);
+}
+
+// Each body's own size: the farthest of its joint points and cylinder ends
+// from its centre of mass. A body whose only attachment sits at its centre
+// (a slider block) takes a tenth of the bodies' mean size instead.
+std::vector<double> bodySizes(const CompiledMechanism& m)
+{
+    std::vector<double> size(m.bodies.size(), 0.0);
+    const auto extend = [&](const BodyPoint& p) {
+        if (p.body != kGround) size[p.body] = std::max(size[p.body], p.local.norm());
+    };
+    for (const auto& j : m.joints) {
+        extend(j.point[0]);
+        extend(j.point[1]);
+    }
+    for (const auto& d : m.drivers) {
+        extend(d.ends[0]);
+        extend(d.ends[1]);
+    }
+    double mean = 0.0;
+    for (const double s : size) mean += s / double(size.size());
+    const double floor = std::max(0.1 * mean, 1e-6 * m.lengthScale);
+    for (double& s : size) s = std::max(s, floor);
+    return size;
+}
+
+// Rotations count as arc lengths on the body's own size, and an angular row
+// is multiplied by the largest size among the bodies it turns: the balance
+// stays local, so a long chain of sound links is not mistaken for a singular
+// one merely because the whole mechanism is large.
+void ConstraintSystem::balanceUnits(const CompiledMechanism& m)
+{
+    const std::vector<double> size = bodySizes(m);
     columnScale_ = VectorXd::Ones(coordinates_);
-    for (int b = 0; b < coordinates_ / 3; ++b) columnScale_[3 * b + 2] = 1.0 / length;
+    for (std::size_t b = 0; b < size.size(); ++b) columnScale_[3 * b + 2] = 1.0 / size[b];
+    rowScale_ = VectorXd::Ones(rows_);
+    VectorXd drawn = VectorXd::Zero(coordinates_), phi(rows_);
+    for (std::size_t b = 0; b < m.bodies.size(); ++b) drawn.segment<2>(3 * b) = m.bodies[b].mass.cg;
+    const Pose pose(drawn);
+    std::vector<Eigen::Triplet<double>> entries;
+    for (std::size_t k = 0; k < constraints_.size(); ++k) {
+        entries.clear();
+        constraints_[k]->position(pose, 0.0, RowWriter(0, &phi, &entries));
+        std::vector<double> turned(constraints_[k]->rows(), 0.0);
+        for (const auto& e : entries)
+            if (e.col() % 3 == 2) turned[e.row()] = std::max(turned[e.row()], size[e.col() / 3]);
+        for (int r = 0; r < constraints_[k]->rows(); ++r)
+            if (constraints_[k]->angularRow(r) && turned[r] > 0.0) rowScale_[firstRow_[k] + r] = turned[r];
+    }
 }
 
 void ConstraintSystem::position(const VectorXd& q, double t, VectorXd& phi,

@@ -2,11 +2,12 @@
 // assembly into Φ, Φ_q, ν and γ.
 //
 // Units are balanced for the linear algebra: the solver works with the
-// scaled Jacobian J̃ = D_r Φ_q D_c, where D_c divides each φ column by the
-// mechanism's characteristic length L (so rotations count as arc lengths)
-// and D_r multiplies each angular row by L. Every entry of J̃ is then
-// dimensionless and of order one, which makes its condition number a fair
-// measure of how close the mechanism is to a singular position.
+// scaled Jacobian J̃ = D_r Φ_q D_c, where D_c divides each body's φ column by
+// that body's size L_b (so rotations count as arc lengths) and D_r
+// multiplies each angular row by the size of the bodies it turns. Every
+// entry of J̃ is then dimensionless and of order one, which makes its
+// condition number a fair measure of how close the mechanism is to a
+// singular position.
 #pragma once
 
 #include "constraint.h"
@@ -35,6 +36,8 @@ public:
     const VectorXd& columnScale() const { return columnScale_; }
 
 private:
+    void balanceUnits(const CompiledMechanism& m);
+
     std::vector<std::unique_ptr<Constraint>> constraints_;
     std::vector<int> firstRow_;
     std::vector<DriverMotion> motions_;

@@ -5,6 +5,7 @@
 #include "mobility_check.h"
 #include "step_solver.h"
 
+#include <algorithm>
 #include <cmath>
 #include <sstream>
 
@@ -12,9 +13,22 @@ namespace clevis {
 namespace {
 
 constexpr int kMaxBisections = 8;
-// A converged pose this far from the extrapolated one (as a fraction of the
-// mechanism's size) suggests Newton jumped to another assembly branch.
+// A converged pose this far from the extrapolated one (as a fraction of a
+// body's size, or in radians) suggests Newton jumped to another assembly branch.
 constexpr double kJumpFraction = 0.05;
+
+// The largest move of any body, as a fraction of its own size L_b: the φ
+// entries of the column scale hold 1/L_b (constraint_system.h).
+double largestRelativeMove(const Eigen::VectorXd& delta, const Eigen::VectorXd& columnScale)
+{
+    double largest = 0.0;
+    for (Eigen::Index b = 0; 3 * b < delta.size(); ++b) {
+        const double inverseSize = columnScale[3 * b + 2];
+        largest = std::max({largest, std::abs(delta[3 * b]) * inverseSize, std::abs(delta[3 * b + 1]) * inverseSize,
+                            std::abs(delta[3 * b + 2])});
+    }
+    return largest;
+}
 
 bool finiteStep(const StepResult& s)
 {
@@ -75,8 +89,7 @@ bool Sweeper::advance(const StepResult& from, double t, StepResult& to, int dept
     const Eigen::VectorXd guess = from.q + h * from.qd + 0.5 * h * h * from.qdd;
     Eigen::VectorXd q = guess;
     const bool converged = solver_.assemble(t, q);
-    const double jump = converged ? (q - guess).cwiseProduct(solver_.system().columnScale().cwiseInverse()).cwiseAbs().maxCoeff() : 0.0;
-    const bool suspicious = jump > kJumpFraction * m_.lengthScale;
+    const bool suspicious = converged && largestRelativeMove(q - guess, solver_.system().columnScale()) > kJumpFraction;
     if (converged && (!suspicious || depth >= kMaxBisections)) {
         to = solver_.analyse(t, q);
         if (suspicious && !branchWarned_) {

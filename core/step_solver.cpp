@@ -2,6 +2,7 @@
 
 #include "transmission_angle.h"
 
+#include <algorithm>
 #include <array>
 #include <cmath>
 
@@ -35,7 +36,8 @@ StepSolver::StepSolver(const CompiledMechanism& mechanism)
       system_(mechanism),
       factor_(system_.rowScale(), system_.columnScale()),
       transmission_(findTransmissionPins(mechanism)),
-      tolerance_(1e-11 * mechanism.lengthScale)
+      tolerance_(1e-11 * mechanism.lengthScale),
+      nearSingular_(1e-3 * std::min(1.0, 10.0 / double(std::max<std::size_t>(mechanism.bodies.size(), 1))))
 {
     const auto& constraints = system_.constraints();
     ownerOfRow_.resize(system_.rows());
@@ -95,7 +97,7 @@ StepResult StepSolver::analyse(double t, const VectorXd& q)
     system_.position(q, t, phi_, &entries_);
     const bool factored = factor_.factor(n, entries_);
     r.reciprocalCondition = factored ? factor_.reciprocalCondition() : 0.0;
-    r.nearSingular = r.reciprocalCondition < kNearSingular;
+    r.nearSingular = r.reciprocalCondition < nearSingular_;
 
     VectorXd nu, gamma;
     system_.rates(q, VectorXd::Zero(n), t, nu, gamma);  // ν does not depend on q̇; γ is recomputed below

@@ -32,7 +32,12 @@ public:
     const ConstraintSystem& system() const { return system_; }
     const std::vector<TransmissionPin>& transmissionPins() const { return transmission_; }
 
-    static constexpr double kNearSingular = 1e-4;  // reciprocal condition number of J̃
+    // Steps whose reciprocal condition number of J̃ falls below this are
+    // flagged near singular: 10⁻³ for up to ten bodies (a crank-slider is then
+    // within about 0.2° of a driven dead centre), falling in proportion for
+    // larger mechanisms, since the condition of a long chain of sound links
+    // grows with its length.
+    double nearSingularThreshold() const { return nearSingular_; }
 
     // A body a constraint acts on and the point (possibly fixed in the other
     // body) through which its force on that body is reported.
@@ -55,6 +60,7 @@ private:
     std::vector<std::array<ActionPoint, 2>> actionPoints_;  // per constraint
     std::vector<int> ownerOfRow_;                         // constraint of each row
     double tolerance_;
+    double nearSingular_;
 };
 
 }  // namespace clevis
