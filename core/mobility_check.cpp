@@ -36,12 +36,19 @@ std::string ownerName(const CompiledMechanism& m, const ConstraintSystem& s, int
 std::vector<std::set<std::string>> dependentGroups(const CompiledMechanism& m, const ConstraintSystem& s,
                                                    const Eigen::MatrixXd& j, int& rank)
 {
+    std::vector<std::set<std::string>> groups;
+    // Eigen's decompositions read past an empty matrix: no constraints, no rank.
+    rank = 0;
+    if (j.rows() == 0) return groups;
     Eigen::ColPivHouseholderQR<Eigen::MatrixXd> qr(j.transpose());
     qr.setThreshold(kRankTolerance);
     rank = int(qr.rank());
-    std::vector<std::set<std::string>> groups;
     if (rank == j.rows()) return groups;
     const auto& perm = qr.colsPermutation().indices();
+    if (rank == 0) {  // every row is zero: each depends on nothing else
+        for (int d = 0; d < j.rows(); ++d) groups.push_back({ownerName(m, s, perm[d])});
+        return groups;
+    }
     Eigen::MatrixXd independent(j.cols(), rank);
     for (int i = 0; i < rank; ++i) independent.col(i) = j.row(perm[i]).transpose();
     const Eigen::ColPivHouseholderQR<Eigen::MatrixXd> basis(independent);
@@ -57,9 +64,13 @@ std::vector<std::set<std::string>> dependentGroups(const CompiledMechanism& m, c
 
 std::vector<std::string> movingBodies(const CompiledMechanism& m, const Eigen::MatrixXd& j)
 {
+    std::vector<std::string> bodies;
+    if (j.rows() == 0) {  // nothing holds any body (and Eigen cannot factor an empty matrix)
+        for (const auto& b : m.bodies) bodies.push_back(b.name);
+        return bodies;
+    }
     const Eigen::FullPivLU<Eigen::MatrixXd> lu = Eigen::FullPivLU<Eigen::MatrixXd>(j).setThreshold(kRankTolerance);
     const Eigen::MatrixXd kernel = lu.kernel();
-    std::vector<std::string> bodies;
     if (lu.rank() == j.cols()) return bodies;
     for (std::size_t b = 0; b < m.bodies.size(); ++b)
         if (kernel.middleRows(3 * b, 3).cwiseAbs().maxCoeff() > 1e-7) bodies.push_back(m.bodies[b].name);
@@ -105,6 +116,7 @@ MobilityReport checkMobility(const CompiledMechanism& m, const Eigen::VectorXd& 
                 if (d.name == name) conflicting.insert(name);
     if (r.redundantGroups.empty()) r.conflictingDrivers.assign(conflicting.begin(), conflicting.end());
     r.freeBodies = movingBodies(m, full);
+    r.singularPose = r.redundantGroups.empty() && r.mobility == r.drivers && fullRank < all.coordinates();
     return r;
 }
 
@@ -118,6 +130,13 @@ std::string MobilityReport::describe() const
         s << "\nRedundant constraint: joints " << joinNames(g)
           << " fix the same motion twice, so their reactions are statically indeterminate;"
              " free one of them (for example, a pin in a slot instead of a pin).";
+    if (singularPose) {
+        s << "\nThe drawn pose is a dead centre or toggle for driver(s) " << joinNames(conflictingDrivers)
+          << ": there they cannot control " << joinNames(freeBodies)
+          << ", and which way the mechanism would go is undetermined. Draw it a little away from that position"
+             " or start the drivers elsewhere.";
+        return s.str();
+    }
     if (!freeBodies.empty())
         s << "\n" << (mobility - drivers > 0 ? mobility - drivers : 1) << " degree(s) of freedom not driven: with every driver held, "
           << joinNames(freeBodies) << " can still move. Add a driver or a joint.";

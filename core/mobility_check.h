@@ -20,6 +20,10 @@ struct MobilityReport {
     std::vector<std::vector<std::string>> redundantGroups;  // joints whose reactions are indeterminate together
     std::vector<std::string> freeBodies;                    // bodies that move with every driver held
     std::vector<std::string> conflictingDrivers;            // drivers that fight each other or the joints
+    // The counts agree but the drawn pose is a dead centre or toggle for the
+    // drivers (their square Jacobian is singular there): `freeBodies` and
+    // `conflictingDrivers` then name what it locks or leaves loose.
+    bool singularPose = false;
     bool ok() const { return redundantGroups.empty() && freeBodies.empty() && conflictingDrivers.empty() && mobility == drivers; }
     std::string describe() const;  // plain-words statement, naming the items
 };
