@@ -57,10 +57,9 @@ double relativeAngle(const CompiledMechanism& m, const Pose& q, int joint)
 
 }  // namespace
 
-std::vector<AppliedLoad> appliedLoads(const CompiledMechanism& m, const VectorXd& coordinates, const VectorXd& qd,
-                                      double t, const std::vector<double>& drive)
+std::vector<AppliedLoad> appliedLoads(const CompiledMechanism& m, const Pose& q, const VectorXd& qd, double t,
+                                      const std::vector<double>& drive)
 {
-    const Pose q(coordinates);
     std::vector<AppliedLoad> out;
     out.reserve(m.bodies.size() + m.forces.size() + m.torques.size() +
                 2 * (m.springs.size() + m.dampers.size() + m.torsionSprings.size()));
@@ -108,10 +107,9 @@ double kineticEnergy(const CompiledMechanism& m, const VectorXd& qd)
     return e;
 }
 
-LoadEnergies loadEnergies(const CompiledMechanism& m, const VectorXd& coordinates, const VectorXd& qd, double t,
+LoadEnergies loadEnergies(const CompiledMechanism& m, const Pose& q, const VectorXd& qd, double t,
                           const std::vector<double>& drive)
 {
-    const Pose q(coordinates);
     LoadEnergies e;
     for (std::size_t b = 0; b < m.bodies.size(); ++b)
         e.gravityPotential -= m.bodies[b].mass.mass * m.gravity.dot(q.origin(int(b)));

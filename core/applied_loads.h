@@ -27,7 +27,7 @@ struct LoadEnergies {
     double appliedPower = 0.0;      // W, forces and torques (not weight, springs, dampers)
 };
 
-std::vector<AppliedLoad> appliedLoads(const CompiledMechanism& m, const VectorXd& q, const VectorXd& qd, double t,
+std::vector<AppliedLoad> appliedLoads(const CompiledMechanism& m, const Pose& q, const VectorXd& qd, double t,
                                       const std::vector<double>& drivePositions);
 
 // Q = Σ over loads on moving bodies of [F; couple + (P − r_G) × F].
@@ -36,7 +36,7 @@ VectorXd generalizedForces(const CompiledMechanism& m, const VectorXd& q, const 
 // Kinetic energy ½ Σ (m|v_G|² + I_G ω²).
 double kineticEnergy(const CompiledMechanism& m, const VectorXd& qd);
 
-LoadEnergies loadEnergies(const CompiledMechanism& m, const VectorXd& q, const VectorXd& qd, double t,
+LoadEnergies loadEnergies(const CompiledMechanism& m, const Pose& q, const VectorXd& qd, double t,
                           const std::vector<double>& drivePositions);
 
 }  // namespace clevis

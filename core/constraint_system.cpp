@@ -92,26 +92,24 @@ void ConstraintSystem::balanceUnits(const CompiledMechanism& m)
     }
 }
 
-void ConstraintSystem::position(const VectorXd& q, double t, VectorXd& phi,
+void ConstraintSystem::position(const Pose& q, double t, VectorXd& phi,
                                 std::vector<Eigen::Triplet<double>>* jacobian) const
 {
     phi.resize(rows_);
     if (jacobian) jacobian->clear();
-    const Pose pose(q);
     for (std::size_t k = 0; k < constraints_.size(); ++k)
-        constraints_[k]->position(pose, t, RowWriter(firstRow_[k], &phi, jacobian));
+        constraints_[k]->position(q, t, RowWriter(firstRow_[k], &phi, jacobian));
     if (!jacobian) return;
     for (auto& e : *jacobian)
         e = Eigen::Triplet<double>(e.row(), e.col(), e.value() * rowScale_[e.row()] * columnScale_[e.col()]);
 }
 
-void ConstraintSystem::rates(const VectorXd& q, const VectorXd& qd, double t, VectorXd& nu, VectorXd& gamma) const
+void ConstraintSystem::rates(const Pose& q, const VectorXd& qd, double t, VectorXd& nu, VectorXd& gamma) const
 {
     nu.resize(rows_);
     gamma.resize(rows_);
-    const Pose pose(q);
     for (std::size_t k = 0; k < constraints_.size(); ++k)
-        constraints_[k]->rates(pose, qd, t, RowWriter(firstRow_[k], &nu, nullptr), RowWriter(firstRow_[k], &gamma, nullptr));
+        constraints_[k]->rates(q, qd, t, RowWriter(firstRow_[k], &nu, nullptr), RowWriter(firstRow_[k], &gamma, nullptr));
 }
 
 }  // namespace clevis

@@ -28,9 +28,9 @@ public:
     const std::vector<DriverMotion>& motions() const { return motions_; }
 
     // Φ into `phi` and the scaled Jacobian J̃ into `jacobian` (may be null).
-    void position(const VectorXd& q, double t, VectorXd& phi, std::vector<Eigen::Triplet<double>>* jacobian) const;
+    void position(const Pose& q, double t, VectorXd& phi, std::vector<Eigen::Triplet<double>>* jacobian) const;
     // ν and γ, unscaled.
-    void rates(const VectorXd& q, const VectorXd& qd, double t, VectorXd& nu, VectorXd& gamma) const;
+    void rates(const Pose& q, const VectorXd& qd, double t, VectorXd& nu, VectorXd& gamma) const;
 
     const VectorXd& rowScale() const { return rowScale_; }
     const VectorXd& columnScale() const { return columnScale_; }

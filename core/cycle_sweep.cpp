@@ -3,6 +3,7 @@
 #include "analysis_error.h"
 #include "drive_units.h"
 #include "mobility_check.h"
+#include "model_limits.h"
 #include "step_solver.h"
 
 #include <algorithm>
@@ -44,6 +45,7 @@ public:
 private:
     void assembleDrawnPose(Eigen::VectorXd& q);
     bool advance(const StepResult& from, double t, StepResult& to, int depth);
+    void flagCrossings();
     void warnNearSingular();
     void warnUnreachable(double tFail);
     std::string drivePositions(const StepResult& s) const;
@@ -67,8 +69,11 @@ void Sweeper::assembleDrawnPose(Eigen::VectorXd& q)
 {
     const Eigen::VectorXd drawn = q;
     if (solver_.assemble(0.0, q)) return;
+    // Every joint is closed at the drawn pose by construction, so only a
+    // driver can be open there; the gap that cannot be closed shows where
+    // Newton stopped, with the drivers' positions (nearly) met.
     int row = 0;
-    solver_.residual(drawn, 0.0, &row);
+    solver_.residual(q.allFinite() ? q : drawn, 0.0, &row);
     const auto& constraints = solver_.system().constraints();
     std::size_t k = constraints.size() - 1;
     while (k > 0 && solver_.system().firstRow(k) > row) --k;
@@ -107,8 +112,24 @@ bool Sweeper::advance(const StepResult& from, double t, StepResult& to, int dept
     return advance(middle, t, to, depth + 1);
 }
 
+// Steps can land on either side of a toggle without coming near it; the
+// sign of det Φ_q still tells that a singular position lies between two
+// steps, and both are flagged (unless one of them is already flagged as
+// being at it).
+void Sweeper::flagCrossings()
+{
+    auto& steps = result_.steps;
+    for (std::size_t i = 1; i < steps.size(); ++i) {
+        StepResult& before = steps[i - 1];
+        StepResult& after = steps[i];
+        if (before.jacobianSign != after.jacobianSign && !before.nearSingular && !after.nearSingular)
+            before.nearSingular = after.nearSingular = true;
+    }
+}
+
 void Sweeper::warnNearSingular()
 {
+    flagCrossings();
     const auto& steps = result_.steps;
     for (std::size_t i = 0; i < steps.size(); ++i) {
         if (!steps[i].nearSingular) continue;
@@ -135,7 +156,12 @@ void Sweeper::warnUnreachable(double tFail)
 
 CycleResult Sweeper::run()
 {
+    if (m_.bodies.empty())
+        throw AnalysisError("There is nothing to analyse: the mechanism has no moving bodies. Add a body and join it "
+                            "to ground.", {});
     const int steps = options_.steps > 0 ? options_.steps : m_.steps;
+    const ModelSize size{m_.bodies.size(), m_.joints.size(), m_.drivers.size(), 0, steps};
+    if (const auto exceeded = exceededLimit(size)) throw AnalysisError("Cannot analyse: " + exceeded->message + ".", {});
     result_.plannedSteps = steps;
     result_.duration = m_.duration;
     result_.transmissionPins = solver_.transmissionPins();

@@ -70,6 +70,11 @@ Eigen::VectorXd JacobianFactor::solveTransposed(const Eigen::VectorXd& f) const
     return y;
 }
 
+int JacobianFactor::determinantSign() const
+{
+    return dense_ ? denseLu_.determinantSign() : int(sparseLu_.signDeterminant());
+}
+
 // Estimate of ‖J̃⁻¹‖₁ by Hager's method as refined by Higham (the estimator
 // LAPACK's xGECON uses): at most five solve pairs, then 1/(‖J̃‖₁ ‖J̃⁻¹‖₁).
 double JacobianFactor::reciprocalCondition() const

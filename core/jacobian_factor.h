@@ -30,6 +30,9 @@ public:
     void solveInPlace(Eigen::VectorXd& b) const;
     // Reciprocal 1-norm condition number estimate of J̃ (Hager–Higham).
     double reciprocalCondition() const;
+    // Sign of det J̃ (the scaling is positive, so also of det Φ_q): it flips
+    // only where the Jacobian passes through a singular position.
+    int determinantSign() const;
 
 private:
     void solveScaledInPlace(Eigen::VectorXd& b) const;

@@ -49,7 +49,8 @@ struct StepResult {
     double damperDissipation = 0.0, appliedPower = 0.0;                   // W
     std::vector<double> transmissionDeg;           // per transmission pin
     double reciprocalCondition = 1.0;
-    bool nearSingular = false;
+    int jacobianSign = 1;       // sign of det Φ_q; a change between steps means a singular position was crossed
+    bool nearSingular = false;  // close to, or just past, a singular position
 };
 
 struct Warning {

@@ -16,15 +16,19 @@ bool SmallLu::compute(const Eigen::MatrixXd& matrix)
     double* a = lu_.data();
     minPivot_ = n ? INFINITY : 0.0;
     maxPivot_ = 0.0;
+    sign_ = 1;
     for (int k = 0; k < n; ++k) {
         double* colK = a + k * n;
         int p = k;
         for (int i = k + 1; i < n; ++i)
             if (std::abs(colK[i]) > std::abs(colK[p])) p = i;
         pivot_[k] = p;
-        if (p != k)
+        if (p != k) {
             for (int j = 0; j < n; ++j) std::swap(a[k + j * n], a[p + j * n]);
+            sign_ = -sign_;
+        }
         const double ukk = colK[k];
+        if (ukk < 0.0) sign_ = -sign_;
         minPivot_ = std::min(minPivot_, std::abs(ukk));
         maxPivot_ = std::max(maxPivot_, std::abs(ukk));
         if (ukk == 0.0) return false;

@@ -18,11 +18,14 @@ public:
     // Smallest and largest |U_kk|.
     double minPivot() const { return minPivot_; }
     double maxPivot() const { return maxPivot_; }
+    // Sign of det A: the pivots' signs times (−1) per row swap.
+    int determinantSign() const { return sign_; }
 
 private:
     Eigen::MatrixXd lu_;
     std::vector<int> pivot_;  // row swapped with row k at step k
     double minPivot_ = 0.0, maxPivot_ = 0.0;
+    int sign_ = 1;
 };
 
 }  // namespace clevis

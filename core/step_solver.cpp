@@ -94,18 +94,20 @@ StepResult StepSolver::analyse(double t, const VectorXd& q)
         r.drivePosition.push_back(s.position);
         r.driveRate.push_back(s.rate);
     }
-    system_.position(q, t, phi_, &entries_);
+    const Pose pose(q);
+    system_.position(pose, t, phi_, &entries_);
     const bool factored = factor_.factor(n, entries_);
     r.reciprocalCondition = factored ? factor_.reciprocalCondition() : 0.0;
+    r.jacobianSign = factored ? factor_.determinantSign() : 0;
     r.nearSingular = r.reciprocalCondition < nearSingular_;
 
     VectorXd nu, gamma;
-    system_.rates(q, VectorXd::Zero(n), t, nu, gamma);  // ν does not depend on q̇; γ is recomputed below
+    system_.rates(pose, VectorXd::Zero(n), t, nu, gamma);  // ν does not depend on q̇; γ is recomputed below
     r.qd = factor_.solve(nu);
-    system_.rates(q, r.qd, t, nu, gamma);
+    system_.rates(pose, r.qd, t, nu, gamma);
     r.qdd = factor_.solve(gamma);
 
-    const std::vector<AppliedLoad> loads = appliedLoads(m_, q, r.qd, t, r.drivePosition);
+    const std::vector<AppliedLoad> loads = appliedLoads(m_, pose, r.qd, t, r.drivePosition);
     VectorXd rhs = generalizedForces(m_, q, loads);
     for (std::size_t b = 0; b < m_.bodies.size(); ++b) {
         const auto& mp = m_.bodies[b].mass;
@@ -114,17 +116,17 @@ StepResult StepSolver::analyse(double t, const VectorXd& q)
     }
     r.lambda = factor_.solveTransposed(rhs);  // Φ_qᵀ λ = Q − M q̈
 
-    fillActions(q, r);
+    fillActions(pose, r);
     fillReactionsAndEfforts(r);
     fillGroundLoad(loads, r);
 
     r.kinetic = kineticEnergy(m_, r.qd);
-    const LoadEnergies e = loadEnergies(m_, q, r.qd, t, r.drivePosition);
+    const LoadEnergies e = loadEnergies(m_, pose, r.qd, t, r.drivePosition);
     r.gravityPotential = e.gravityPotential;
     r.springPotential = e.springPotential;
     r.damperDissipation = e.damperDissipation;
     r.appliedPower = e.appliedPower;
-    for (const auto& pin : transmission_) r.transmissionDeg.push_back(transmissionAngleDeg(m_, pin, q));
+    for (const auto& pin : transmission_) r.transmissionDeg.push_back(transmissionAngleDeg(m_, pin, pose));
     return r;
 }
 
@@ -132,7 +134,7 @@ StepResult StepSolver::analyse(double t, const VectorXd& q)
 // −Φ_q,kᵀ λ_k; on each body it is a force F and a moment about the centre of
 // mass, reported as F through the action point plus the remaining couple.
 // The Jacobian entries are those analyse() just factored, unscaled.
-void StepSolver::fillActions(const VectorXd& q, StepResult& r) const
+void StepSolver::fillActions(const Pose& q, StepResult& r) const
 {
     const std::size_t count = system_.constraints().size();
     std::vector<std::array<Eigen::Vector3d, 2>> gen(count, {Eigen::Vector3d::Zero(), Eigen::Vector3d::Zero()});
@@ -151,10 +153,10 @@ void StepSolver::fillActions(const VectorXd& q, StepResult& r) const
         for (int side = 0; side < 2; ++side) {
             ConstraintAction& a = r.actions[side][k];
             a.body = points[k][side].body;
-            a.at = pointPosition(q, points[k][side].at);
+            a.at = q.point(points[k][side].at);
             if (a.body == kGround) continue;
             a.force = gen[k][side].head<2>();
-            a.couple = gen[k][side][2] - cross(a.at - bodyOrigin(q, a.body), a.force);
+            a.couple = gen[k][side][2] - cross(a.at - q.origin(a.body), a.force);
         }
 }
 

@@ -47,7 +47,7 @@ public:
     };
 
 private:
-    void fillActions(const VectorXd& q, StepResult& r) const;
+    void fillActions(const Pose& q, StepResult& r) const;
     void fillReactionsAndEfforts(StepResult& r) const;
     void fillGroundLoad(const std::vector<AppliedLoad>& loads, StepResult& r) const;
 

@@ -41,14 +41,14 @@ bool chooseLine(const CompiledMechanism& m, int body, const CompiledJoint& pin, 
     return found || axisJoint >= 0;
 }
 
-Vec2 lineDirection(const CompiledMechanism& m, const TransmissionPin& pin, int side, const Eigen::VectorXd& q)
+Vec2 lineDirection(const CompiledMechanism& m, const TransmissionPin& pin, int side, const Pose& q)
 {
     const CompiledJoint& j = m.joints[pin.joint];
     if (pin.axisJoint[side] >= 0) {
         const CompiledJoint& axis = m.joints[pin.axisJoint[side]];
-        return perp(rotation(bodyAngle(q, axis.body[0])) * axis.axisLocal);
+        return perp(q.direction(axis.body[0], axis.axisLocal));
     }
-    return pointPosition(q, pin.far[side]) - pointPosition(q, j.point[side]);
+    return q.point(pin.far[side]) - q.point(j.point[side]);
 }
 
 // A body turned or pushed by a driver against ground is an input link: the
@@ -84,7 +84,7 @@ std::vector<TransmissionPin> findTransmissionPins(const CompiledMechanism& m)
     return pins;
 }
 
-double transmissionAngleDeg(const CompiledMechanism& m, const TransmissionPin& pin, const Eigen::VectorXd& q)
+double transmissionAngleDeg(const CompiledMechanism& m, const TransmissionPin& pin, const Pose& q)
 {
     const Vec2 a = lineDirection(m, pin, 0, q), b = lineDirection(m, pin, 1, q);
     double mu = radToDeg(std::atan2(std::abs(cross(a, b)), a.dot(b)));

@@ -4,6 +4,7 @@
 // common rule of practice is to keep μ within 40°–140°.
 #pragma once
 
+#include "body_state.h"
 #include "results.h"
 
 namespace clevis {
@@ -12,6 +13,6 @@ std::vector<TransmissionPin> findTransmissionPins(const CompiledMechanism& m);
 
 // μ in degrees: in [0°, 180°] between two links, folded into [0°, 90°] where
 // a slide normal (which has no sense) takes a link's place.
-double transmissionAngleDeg(const CompiledMechanism& m, const TransmissionPin& pin, const Eigen::VectorXd& q);
+double transmissionAngleDeg(const CompiledMechanism& m, const TransmissionPin& pin, const Pose& q);
 
 }  // namespace clevis
