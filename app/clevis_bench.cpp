@@ -1,0 +1,68 @@
+// clevis-bench: the time to solve a full 360-step cycle of the bundled flap
+// folder (a four-bar) and of generated four-bar chains of 10, 50 and 200
+// bodies, with the CPU time per step as the counter `time_per_step` (shown
+// with its unit, e.g. 3.4us; in seconds in JSON output). The mobility check
+// that starts every cycle is also timed on its own, since its dense rank
+// tests grow with the cube of the size.
+#include "chain_generator.h"
+#include "cycle_sweep.h"
+#include "mechanism_file.h"
+#include "mobility_check.h"
+#include "step_solver.h"
+
+#include <benchmark/benchmark.h>
+
+namespace {
+
+constexpr int kSteps = 360;
+
+void timeCycle(benchmark::State& state, const clevis::CompiledMechanism& m)
+{
+    clevis::SweepOptions options;
+    options.steps = kSteps;
+    for (auto _ : state) {
+        clevis::CycleResult result = clevis::sweepCycle(m, options);
+        if (!result.complete) {
+            state.SkipWithError(("\"" + m.name + "\" did not complete its cycle").c_str());
+            break;
+        }
+        benchmark::DoNotOptimize(result);
+    }
+    // A rate counter is divided by the CPU time; inverted, it is time per step.
+    state.counters["time_per_step"] =
+        benchmark::Counter(double(state.iterations()) * kSteps, benchmark::Counter::kIsRate | benchmark::Counter::kInvert);
+}
+
+void FlapFolderCycle(benchmark::State& state)
+{
+    const clevis::CompiledMechanism m =
+        clevis::compile(clevis::loadMechanismFile(CLEVIS_SAMPLES_DIR "/flap_folder.json").mechanism);
+    timeCycle(state, m);
+}
+BENCHMARK(FlapFolderCycle)->Unit(benchmark::kMicrosecond);
+
+void FourBarChainCycle(benchmark::State& state)
+{
+    const clevis::CompiledMechanism m = clevis::compile(clevis::test::fourBarChain(int(state.range(0))));
+    timeCycle(state, m);
+}
+BENCHMARK(FourBarChainCycle)->ArgName("bodies")->Arg(10)->Arg(50)->Arg(200)->Unit(benchmark::kMillisecond);
+
+void FourBarChainMobilityCheck(benchmark::State& state)
+{
+    const clevis::CompiledMechanism m = clevis::compile(clevis::test::fourBarChain(int(state.range(0))));
+    const Eigen::VectorXd drawn = clevis::StepSolver(m).drawnPose();
+    for (auto _ : state) {
+        const clevis::MobilityReport report = clevis::checkMobility(m, drawn);
+        if (!report.ok()) {
+            state.SkipWithError(report.describe().c_str());
+            break;
+        }
+        benchmark::DoNotOptimize(report);
+    }
+}
+BENCHMARK(FourBarChainMobilityCheck)->ArgName("bodies")->Arg(10)->Arg(50)->Arg(200)->Unit(benchmark::kMillisecond);
+
+}  // namespace
+
+BENCHMARK_MAIN();
