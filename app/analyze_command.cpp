@@ -1,6 +1,7 @@
 #include "analyze_command.h"
 
 #include "analysis_error.h"
+#include "atomic_file.h"
 #include "cycle_summary.h"
 #include "cycle_sweep.h"
 #include "mechanism_file.h"
@@ -9,21 +10,26 @@
 #include "results_json.h"
 #include "summary_text.h"
 
-#include <fstream>
 #include <functional>
+#include <sstream>
 
 namespace clevis::cli {
 namespace {
 
-// Writes a result file; false (with a message naming it) if it cannot be written.
+// Writes a result file atomically, so a failed run never leaves half a file
+// in place of the last good one; false (with a message naming it and the
+// reason) if it cannot be written.
 bool writeOutput(const std::string& path, const std::function<void(std::ostream&)>& write, std::ostream& err)
 {
-    std::ofstream file(path, std::ios::binary);
-    if (file) write(file);
-    file.close();
-    if (file) return true;
-    err << path << ": cannot write the file\n";
-    return false;
+    std::ostringstream text;
+    write(text);
+    try {
+        writeFileAtomically(path, text.str(), false);
+        return true;
+    } catch (const FileWriteError& e) {
+        err << e.what() << '\n';
+        return false;
+    }
 }
 
 bool writeOutputs(const AnalyzeOptions& options, const CompiledMechanism& m, const CycleResult& r,

@@ -1,24 +1,36 @@
 #include "cli_options.h"
 
+#include "model_limits.h"
+
 #include <charconv>
 #include <optional>
 
 namespace clevis::cli {
 namespace {
 
-// The same limit as a file's "cycle.steps".
-constexpr int kMaxSteps = 100000;
 
 const char* const kOverview = R"(clevis-cli: the forces in a planar linkage over its whole cycle, without the GUI.
 
 Usage:
   clevis-cli analyze FILE [--steps N] [--json OUT] [--csv OUT]
+  clevis-cli fbd FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT) --out F.svg|F.pdf|F.png
+                 [--steps N] [--dalembert]
+  clevis-cli report FILE --out review.pdf [--steps N]
   clevis-cli analyze --help
   clevis-cli --help
   clevis-cli --version
 
 Commands:
   analyze    solve the mechanism in FILE over its cycle and print a summary
+  fbd        draw one body's free-body diagram at one position (with numbers):
+             --at-deg A  at the first rotary driver's angle A (degrees, modulo
+                         360°), --at-t T at time T s, or
+                         --at-peak JOINT where that joint's load peaks;
+             --dalembert draws the inertia force and couple on the body
+  report     write the design-review PDF: drawing, inputs, plots, peak loads,
+             free-body diagrams at the critical positions, energy balance,
+             cautions
+  (fbd and report are present in builds that include the desktop app.)
 
 Run "clevis-cli analyze --help" for the options, units, sign conventions and
 exit codes. Documentation: docs/file-format.md (mechanism files),

@@ -3,6 +3,7 @@
 #include "mass_properties.h"
 #include "mechanism_file_format.h"
 #include "model_error.h"
+#include "model_limits.h"
 
 #include <Eigen/Geometry>
 #include <algorithm>
@@ -37,6 +38,7 @@ private:
     std::vector<Vec2> attachmentPoints(int body) const;
     MassProperties massOf(std::size_t b) const;
     void checkAttachmentNames() const;
+    void checkNotADuplicatePin(std::size_t k) const;
     void compileJoints();
     void compileDrivers();
     void compileLoads();
@@ -145,6 +147,26 @@ void Compiler::checkAttachmentNames() const
                 bodyIndex(end->body, at("drivers", k) + ".between[" + std::to_string(side) + "].body");
 }
 
+// Two pins joining the same pair of bodies at the same point are one hinge
+// entered twice: always a slip, and it would make both pins' reactions
+// indeterminate, so it is refused here with the fix spelled out.
+void Compiler::checkNotADuplicatePin(std::size_t k) const
+{
+    const Joint& j = in_.joints[k];
+    if (j.type != JointType::Pin) return;
+    const auto samePair = [&](const Joint& o) {
+        return (o.bodies[0] == j.bodies[0] && o.bodies[1] == j.bodies[1]) ||
+               (o.bodies[0] == j.bodies[1] && o.bodies[1] == j.bodies[0]);
+    };
+    for (std::size_t i = 0; i < k; ++i) {
+        const Joint& o = in_.joints[i];
+        if (o.type == JointType::Pin && samePair(o) && (o.at - j.at).norm() < 1e-9)
+            throw ModelError(at("joints", k), "pin \"" + j.name + "\" joins \"" + j.bodies[0] + "\" and \"" +
+                                                  j.bodies[1] + "\" at the same point as pin \"" + o.name + "\" (" +
+                                                  at("joints", i) + "): it is the same hinge twice; delete one of them");
+    }
+}
+
 void Compiler::compileJoints()
 {
     for (std::size_t k = 0; k < in_.joints.size(); ++k) {
@@ -157,6 +179,7 @@ void Compiler::compileJoints()
         }
         if (c.body[0] == c.body[1])
             throw ModelError(path + ".bodies", "a joint needs two different bodies (both are \"" + j.bodies[0] + "\")");
+        checkNotADuplicatePin(k);
         joints_[j.name] = int(k);
         out_.joints.push_back(c);
     }
@@ -280,8 +303,23 @@ void Compiler::chooseLengthScale()
     out_.lengthScale = box.isEmpty() ? 1.0 : std::max(box.diagonal().norm(), 1e-3);
 }
 
+// Before any work that grows with the size: checking that a huge file is too
+// large must not itself take long.
+void checkSize(const Mechanism& m)
+{
+    const ModelSize size{m.bodies.size(), m.joints.size(), m.drivers.size(), m.loads.size(), m.cycle.steps};
+    if (const auto exceeded = exceededLimit(size)) {
+        const char* path = exceeded->kind == LimitKind::Bodies ? "bodies"
+                           : exceeded->kind == LimitKind::Joints ? "joints"
+                           : exceeded->kind == LimitKind::Loads  ? "loads"
+                                                                 : "cycle.steps";
+        throw ModelError(path, exceeded->message);
+    }
+}
+
 CompiledMechanism Compiler::run()
 {
+    checkSize(in_);
     out_.name = in_.name;
     out_.gravity = in_.gravity;
     out_.steps = in_.cycle.steps;

@@ -91,10 +91,39 @@ std::string joined(const Names& names)
     return out;
 }
 
+// A mechanism file nests about five levels deep; far deeper text is refused
+// before parsing so that no recursive step (building or reading the
+// document) can exhaust the stack.
+constexpr int kMaxNesting = 64;
+
+// The 1-based position of the bracket that opens level kMaxNesting + 1, or
+// 0. Brackets inside strings do not count; unbalanced text is left to the parser.
+std::size_t tooDeepAt(const std::string& text)
+{
+    int depth = 0;
+    bool inString = false;
+    for (std::size_t i = 0; i < text.size(); ++i) {
+        const char c = text[i];
+        if (inString) {
+            if (c == '\\') ++i;
+            else if (c == '"') inString = false;
+        }
+        else if (c == '"') inString = true;
+        else if (c == '[' || c == '{') {
+            if (++depth > kMaxNesting) return i + 1;
+        }
+        else if ((c == ']' || c == '}') && --depth < 0) return 0;
+    }
+    return 0;
+}
+
 }  // namespace
 
 nlohmann::json parseJsonText(const std::string& text)
 {
+    if (const std::size_t at = tooDeepAt(text))
+        throw ModelError(lineAndColumn(text, at), "arrays and objects nested more than " +
+                                                          std::to_string(kMaxNesting) + " levels deep");
     nlohmann::json result;
     LocatingParser parser(result);
     if (!nlohmann::json::sax_parse(text, &parser))

@@ -5,6 +5,7 @@
 #include "json_reader.h"
 #include "materials.h"
 #include "mechanism_file_format.h"
+#include "model_limits.h"
 
 #include <cerrno>
 #include <cstring>
@@ -16,7 +17,6 @@ namespace clevis {
 namespace {
 
 constexpr std::size_t kMaxFileBytes = 16 * 1024 * 1024;
-constexpr int kMaxSteps = 100000;
 
 // Names must be unique within each list; remembers where each was first used.
 class NameRegister {
