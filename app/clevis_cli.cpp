@@ -1,6 +1,9 @@
 // clevis-cli: the analysis without the GUI, for scripts and batch runs.
 #include "analyze_command.h"
 #include "cli_options.h"
+#ifdef CLEVIS_HAS_RENDER
+#include "cli_render_commands.h"
+#endif
 
 #include <iostream>
 
@@ -20,6 +23,12 @@ int run(const clevis::cli::Command& command)
 int main(int argc, char** argv)
 {
     using namespace clevis::cli;
+#ifdef CLEVIS_HAS_RENDER
+    // The drawing commands parse their own options (they need Qt's renderer).
+    const std::string first = argc > 1 ? argv[1] : "";
+    if (first == "fbd") return runFbdCommand({argv + 2, argv + argc});
+    if (first == "report") return runReportCommand({argv + 2, argv + argc});
+#endif
     try {
         return run(parseCommandLine({argv + 1, argv + argc}));
     }

@@ -1,0 +1,234 @@
+// Headless exports: a free-body diagram written by `clevis-cli fbd` carries
+// the solver's numbers for that body and step, and the design-review report
+// renders page by page with its sections and the summary's peak table.
+#include "cli_render_commands.h"
+#include "cycle_summary.h"
+#include "cycle_sweep.h"
+#include "free_body.h"
+#include "mechanism_file.h"
+#include "render_units.h"
+#include "review_report.h"
+
+#include <QDir>
+#include <QFile>
+#include <QProcess>
+#include <QRegularExpression>
+#include <QTemporaryDir>
+
+#include <gtest/gtest.h>
+
+#include <cmath>
+#include <map>
+
+using namespace clevis;
+
+namespace {
+
+const std::string kPress = std::string(CLEVIS_SAMPLES_DIR) + "/punch_press.json";
+
+struct Solved {
+    CompiledMechanism m;
+    CycleResult r;
+    CycleSummary s;
+};
+
+Solved solveFile(const std::string& path)
+{
+    Solved out{compile(loadMechanismFile(path).mechanism), {}, {}};
+    out.r = sweepCycle(out.m);
+    out.s = summarize(out.m, out.r);
+    return out;
+}
+
+// The SVG's text runs grouped into lines by their baseline, left to right.
+using SvgLines = std::map<double, std::vector<std::pair<double, QString>>>;
+
+SvgLines svgLines(const QString& path)
+{
+    QFile f(path);
+    EXPECT_TRUE(f.open(QIODevice::ReadOnly)) << path.toStdString();
+    const QString svg = QString::fromUtf8(f.readAll());
+    static const QRegularExpression run(R"re(<text[^>]*\bx="([-\d.e]+)" y="([-\d.e]+)"[^>]*>([^<]*)</text>)re");
+    SvgLines lines;
+    for (auto it = run.globalMatch(svg); it.hasNext();) {
+        const auto m = it.next();
+        QString text = m.captured(3).trimmed();
+        text.replace("&amp;", "&").replace("&lt;", "<").replace("&gt;", ">");
+        lines[m.captured(2).toDouble()].emplace_back(m.captured(1).toDouble(), text);
+    }
+    for (auto& [y, runs] : lines) std::sort(runs.begin(), runs.end());
+    return lines;
+}
+
+// The number a cell or run starts with, after an optional "name = " prefix.
+double leadingNumber(const QString& text)
+{
+    static const QRegularExpression number(R"((-?\d+(\.\d+)?))");
+    const auto m = number.match(text.section("= ", -1));
+    EXPECT_TRUE(m.hasMatch()) << text.toStdString();
+    return m.captured(1).toDouble();
+}
+
+// The table row whose first cell is `name`, cell by column heading (a cell
+// belongs to the heading that starts at its x; empty cells have no run).
+std::map<QString, QString> tableRow(const SvgLines& lines, const std::string& name)
+{
+    std::vector<std::pair<double, QString>> headings;
+    for (const auto& [y, runs] : lines)
+        if (!runs.empty() && runs.front().second == "Load") headings = runs;
+    EXPECT_FALSE(headings.empty()) << "no table heading";
+    for (const auto& [y, runs] : lines) {
+        if (runs.empty() || runs.front().second != QString::fromStdString(name)) continue;
+        std::map<QString, QString> cells;
+        for (const auto& [x, text] : runs)
+            for (auto h = headings.rbegin(); h != headings.rend(); ++h)
+                if (h->first <= x + 0.5) {
+                    cells[h->second] = text;
+                    break;
+                }
+        return cells;
+    }
+    ADD_FAILURE() << "no table row " << name;
+    return {};
+}
+
+// A run that starts with `prefix` (e.g. "Fx = " of "ΣFx = 12 N").
+double runValue(const SvgLines& lines, const QString& prefix)
+{
+    for (const auto& [y, runs] : lines)
+        for (const auto& r : runs)
+            if (r.second.startsWith(prefix)) return leadingNumber(r.second);
+    ADD_FAILURE() << "no run " << prefix.toStdString();
+    return NAN;
+}
+
+void expectShown(double shown, double exact)
+{
+    // Four significant figures (or the unit's integer digits) are printed.
+    EXPECT_NEAR(shown, exact, 6e-4 * std::abs(exact) + 1e-4) << "exact " << exact;
+}
+
+int run(int (*command)(const std::vector<std::string>&), std::vector<std::string> args) { return command(args); }
+
+TEST(FreeBodySvg, NumbersEqualTheSolversForEveryBody)
+{
+    const Solved solved = solveFile(kPress);
+    QTemporaryDir dir;
+    for (const auto& body : solved.m.bodies) {
+        const QString out = dir.filePath(QString::fromStdString(body.name) + ".svg");
+        ASSERT_EQ(run(cli::runFbdCommand, {kPress, "--body", body.name, "--at-deg", "160", "--out", out.toStdString()}), 0);
+        // 160° of a one-revolution cycle in 360 steps from 0°: step 160.
+        const FreeBodyDiagram d = freeBodyDiagram(solved.m, solved.r, findBody(solved.m, body.name), 160);
+        const SvgLines lines = svgLines(out);
+        ASSERT_FALSE(d.items.empty());
+        for (const FreeBodyItem& item : d.items) {
+            const auto cells = tableRow(lines, item.name);
+            ASSERT_EQ(cells.count("Fx"), 1u) << item.name;
+            expectShown(leadingNumber(cells.at("Fx")), item.force.x());
+            expectShown(leadingNumber(cells.at("Fy")), item.force.y());
+            expectShown(leadingNumber(cells.at("|F|")), item.force.norm());
+            expectShown(leadingNumber(cells.at("Couple")), item.couple);
+            EXPECT_EQ(cells.at("Kind"), freeBodyItemKindName(item.kind));
+        }
+        expectShown(runValue(lines, "Fx = "), d.fx.sum);
+        expectShown(runValue(lines, "Fy = "), d.fy.sum);
+        expectShown(runValue(lines, "M_G = "), d.moment.sum);
+        expectShown(runValue(lines, "m·aGx = "), d.fx.kinetic);
+        expectShown(runValue(lines, "m·aGy = "), d.fy.kinetic);
+    }
+}
+
+TEST(FreeBodySvg, SharedPinArrowsAreEqualAndOpposite)
+{
+    QTemporaryDir dir;
+    const QString crank = dir.filePath("crank.svg"), rod = dir.filePath("rod.svg");
+    ASSERT_EQ(run(cli::runFbdCommand, {kPress, "--body", "crankshaft", "--at-peak", "crank_pin", "--out", crank.toStdString()}), 0);
+    ASSERT_EQ(run(cli::runFbdCommand, {kPress, "--body", "connecting_rod", "--at-peak", "crank_pin", "--out", rod.toStdString()}), 0);
+    const auto onCrank = tableRow(svgLines(crank), "crank_pin"), onRod = tableRow(svgLines(rod), "crank_pin");
+    ASSERT_TRUE(onCrank.count("Fy") && onRod.count("Fy"));
+    EXPECT_GT(std::abs(leadingNumber(onRod.at("Fy"))), 1000.0);  // the press stroke loads this pin
+    EXPECT_DOUBLE_EQ(leadingNumber(onCrank.at("Fx")), -leadingNumber(onRod.at("Fx")));
+    EXPECT_DOUBLE_EQ(leadingNumber(onCrank.at("Fy")), -leadingNumber(onRod.at("Fy")));
+    EXPECT_EQ(onCrank.at("|F|"), onRod.at("|F|"));  // the same magnitude
+    EXPECT_EQ(onCrank.at("From"), "connecting_rod");
+    EXPECT_EQ(onRod.at("From"), "crankshaft");
+}
+
+TEST(FreeBodySvg, PdfAndPngAreWritten)
+{
+    QTemporaryDir dir;
+    for (const char* suffix : {"pdf", "png"}) {
+        const QString out = dir.filePath(QString("ram.") + suffix);
+        ASSERT_EQ(run(cli::runFbdCommand, {kPress, "--body", "ram", "--at-t", "0.5", "--out", out.toStdString()}), 0);
+        EXPECT_GT(QFile(out).size(), 2000) << suffix;
+    }
+}
+
+TEST(FbdCommand, NamesTheOffendingItem)
+{
+    testing::internal::CaptureStderr();
+    EXPECT_EQ(run(cli::runFbdCommand, {kPress, "--body", "flywheel", "--at-deg", "10", "--out", "/tmp/x.svg"}), 2);
+    EXPECT_NE(testing::internal::GetCapturedStderr().find("flywheel"), std::string::npos);
+    testing::internal::CaptureStderr();
+    EXPECT_EQ(run(cli::runFbdCommand, {kPress, "--body", "ram", "--at-peak", "knee", "--out", "/tmp/x.svg"}), 2);
+    EXPECT_NE(testing::internal::GetCapturedStderr().find("knee"), std::string::npos);
+    testing::internal::CaptureStderr();
+    EXPECT_EQ(run(cli::runFbdCommand, {kPress, "--body", "ram", "--out", "/tmp/x.svg"}), 2);
+    testing::internal::GetCapturedStderr();
+    testing::internal::CaptureStderr();
+    EXPECT_EQ(run(cli::runFbdCommand, {"/nonexistent/press.json", "--body", "ram", "--at-t", "0", "--out", "/tmp/x.svg"}), 1);
+    EXPECT_NE(testing::internal::GetCapturedStderr().find("press.json"), std::string::npos);
+}
+
+QString tool(const QString& program, const QStringList& args)
+{
+    QProcess p;
+    p.start(program, args);
+    EXPECT_TRUE(p.waitForFinished(60000)) << program.toStdString();
+    EXPECT_EQ(p.exitCode(), 0) << program.toStdString() << ": " << p.readAllStandardError().toStdString();
+    return QString::fromUtf8(p.readAllStandardOutput());
+}
+
+TEST(ReviewReport, RendersEveryPageWithItsSectionsAndThePeakTable)
+{
+    const Solved solved = solveFile(kPress);
+    QTemporaryDir dir;
+    const QString pdf = dir.filePath("review.pdf");
+    ASSERT_EQ(run(cli::runReportCommand, {kPress, "--out", pdf.toStdString()}), 0);
+
+    const QString info = tool("pdfinfo", {pdf});
+    const int pages = QRegularExpression(R"(Pages:\s+(\d+))").match(info).captured(1).toInt();
+    ASSERT_GE(pages, 5);
+    tool("pdftoppm", {"-r", "40", "-png", pdf, dir.filePath("page")});
+    EXPECT_EQ(QDir(dir.path()).entryList({"page-*.png"}).size(), pages);
+
+    const QString text = tool("pdftotext", {"-layout", pdf, "-"});
+    for (const QString& section : ui::reviewReportSections()) EXPECT_TRUE(text.contains(section)) << section.toStdString();
+    for (const char* caution : {"ideal joints", "Fatigue is not covered", "service and dynamic factors", "local codes",
+                                "licensed engineer"})
+        EXPECT_TRUE(text.contains(caution)) << caution;
+
+    // The peak table, row by row, has summarize()'s numbers.
+    const ui::RenderUnits u;
+    const QStringList lines = text.split('\n');
+    const auto rowOf = [&](const std::string& name) {
+        for (const QString& l : lines)
+            if (l.trimmed().startsWith(QString::fromStdString(name) + " ") && l.contains("(step ")) return l;
+        return QString();
+    };
+    for (const auto& j : solved.s.joints) {
+        const QString row = rowOf(j.name);
+        EXPECT_TRUE(row.contains(u.force(j.peak.value))) << j.name << ": " << row.toStdString();
+        EXPECT_TRUE(row.contains(u.force(j.rms))) << j.name << ": " << row.toStdString();
+        EXPECT_TRUE(row.contains(QString("(step %1)").arg(j.peak.step))) << j.name;
+    }
+    for (const auto& d : solved.s.drivers) {
+        const QString row = rowOf(d.name);
+        EXPECT_TRUE(row.contains(u.torque(d.peak.value))) << d.name << ": " << row.toStdString();
+        EXPECT_TRUE(row.contains(u.torque(d.rms))) << d.name;
+        EXPECT_TRUE(row.contains(u.torque(d.mean))) << d.name;
+        EXPECT_TRUE(row.contains(ui::formatQuantity(d.work, "J"))) << d.name;
+    }
+}
+
+}  // namespace

@@ -1,0 +1,140 @@
+// The results views offscreen: the scrubber, the plot cursor and the current
+// step move together; a click on a plot moves the scrubber; selecting a body
+// shows its diagram; the peak table jumps to a peak.
+#include "analysis_state.h"
+#include "cycle_axis.h"
+#include "drive_scrubber.h"
+#include "free_body_view.h"
+#include "mechanism_document.h"
+#include "mechanism_file.h"
+#include "peak_table.h"
+#include "plot_stack.h"
+
+#include <QApplication>
+#include <QSlider>
+#include <QDoubleSpinBox>
+#include <QTest>
+#include <qcustomplot.h>
+
+#include <gtest/gtest.h>
+
+#include <memory>
+
+using namespace clevis;
+using namespace clevis::ui;
+
+namespace {
+
+struct Session {
+    MechanismDocument doc;
+    std::unique_ptr<AnalysisState> analysis;
+
+    Session()
+    {
+        doc.reset(loadMechanismFile(std::string(CLEVIS_SAMPLES_DIR) + "/punch_press.json").mechanism, "punch_press.json");
+        analysis = std::make_unique<AnalysisState>(&doc);
+        analysis->waitForIdle();
+        QCoreApplication::processEvents();
+    }
+};
+
+TEST(ResultsWidgets, ScrubberMovesThePlotCursorAndTheStep)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult()) << s.analysis->errorText().toStdString();
+    DriveScrubber scrubber(s.analysis.get());
+    PlotStack plots(s.analysis.get());
+    const CycleAxis axis = cycleAxis(s.analysis->compiled(), s.analysis->result());
+    scrubber.slider()->setValue(90);
+    EXPECT_EQ(s.analysis->currentStep(), 90);
+    EXPECT_DOUBLE_EQ(plots.cursorX(), axis.values[90]);
+    // The exact box takes the driver's unit and lands on the nearest step.
+    scrubber.positionBox()->setValue(200.2);
+    EXPECT_EQ(s.analysis->currentStep(), 200);
+    EXPECT_EQ(scrubber.slider()->value(), 200);
+    EXPECT_DOUBLE_EQ(plots.cursorX(), axis.values[200]);
+    QTest::keyClick(scrubber.slider(), Qt::Key_Right);
+    EXPECT_EQ(s.analysis->currentStep(), 201);
+}
+
+TEST(ResultsWidgets, ClickOnAPlotMovesTheScrubber)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult());
+    DriveScrubber scrubber(s.analysis.get());
+    PlotStack plots(s.analysis.get());
+    plots.resize(900, 700);
+    plots.show();
+    QCoreApplication::processEvents();
+    plots.plot()->replot();
+    const QPoint at = plots.pixelForStep(250);
+    ASSERT_FALSE(at.isNull());
+    QTest::mouseClick(plots.plot(), Qt::LeftButton, Qt::NoModifier, at);
+    EXPECT_NEAR(s.analysis->currentStep(), 250, 1);
+    EXPECT_EQ(scrubber.slider()->value(), s.analysis->currentStep());
+    EXPECT_TRUE(plots.peakListText().contains("main_motor torque")) << plots.peakListText().toStdString();
+    QTest::mouseMove(plots.plot(), plots.pixelForStep(100));
+    EXPECT_TRUE(plots.readoutText().contains(" N")) << plots.readoutText().toStdString();
+}
+
+TEST(ResultsWidgets, SelectingABodyShowsItsDiagramAtTheCurrentStep)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult());
+    FreeBodyView view(&s.doc, s.analysis.get());
+    EXPECT_FALSE(view.diagram().has_value());
+    s.analysis->setCurrentStep(150);
+    s.doc.setSelection({Selection::Kind::Body, "connecting_rod", -1});
+    ASSERT_TRUE(view.diagram().has_value());
+    EXPECT_EQ(view.diagram()->bodyName, "connecting_rod");
+    EXPECT_EQ(view.diagram()->step, 150);
+    s.analysis->setCurrentStep(151);
+    EXPECT_EQ(view.diagram()->step, 151);
+    s.doc.setSelection({});
+    EXPECT_FALSE(view.diagram().has_value());
+}
+
+TEST(ResultsWidgets, ArrowsOnBodiesSharingAPinAreEqualAndOpposite)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult());
+    FreeBodyView crank(&s.doc, s.analysis.get()), rod(&s.doc, s.analysis.get());
+    s.analysis->setCurrentStep(152);
+    s.doc.setSelection({Selection::Kind::Body, "crankshaft", -1});
+    const FreeBodyDiagram onCrank = *crank.diagram();
+    s.doc.setSelection({Selection::Kind::Body, "connecting_rod", -1});
+    const FreeBodyDiagram onRod = *rod.diagram();
+    const auto pinForce = [](const FreeBodyDiagram& d) {
+        for (const auto& i : d.items)
+            if (i.name == "crank_pin") return i.force;
+        ADD_FAILURE() << "no crank_pin on " << d.bodyName;
+        return Vec2(Vec2::Zero());
+    };
+    EXPECT_GT(pinForce(onRod).norm(), 1000.0);
+    EXPECT_NEAR((pinForce(onCrank) + pinForce(onRod)).norm(), 0.0, 1e-9 * pinForce(onRod).norm());
+}
+
+TEST(ResultsWidgets, PeakTableRowJumpsToThePeak)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult());
+    PeakTable table(s.analysis.get());
+    table.resize(700, 300);
+    table.show();
+    QCoreApplication::processEvents();
+    const int row = 1;  // crank_pin, the second joint
+    const int expected = s.analysis->summary().joints[1].peak.step;
+    ASSERT_GT(expected, 0);
+    QTest::mouseClick(table.viewport(), Qt::LeftButton, Qt::NoModifier, table.visualRect(table.model()->index(row, 0)).center());
+    EXPECT_EQ(s.analysis->currentStep(), expected);
+}
+
+}  // namespace
+
+int main(int argc, char** argv)
+{
+    qputenv("QT_QPA_PLATFORM", "offscreen");
+    QApplication app(argc, argv);
+    testing::InitGoogleTest(&argc, argv);
+    return RUN_ALL_TESTS();
+}
