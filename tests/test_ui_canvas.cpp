@@ -1,0 +1,181 @@
+// The canvas driven with mouse events: a four-bar drawn from nothing with the
+// tools, a motor added, a mass typed in, saved, reopened and compared with the
+// expected file; the status line must report one degree of freedom and a
+// mechanism that solves.
+#include "analysis_state.h"
+#include "canvas_view.h"
+#include "file_actions.h"
+#include "main_window.h"
+#include "mechanism_document.h"
+#include "mechanism_file.h"
+#include "property_editor.h"
+#include "sketch_geometry.h"
+#include "status_line.h"
+#include "tool_palette.h"
+
+#include <QAction>
+#include <QComboBox>
+#include <QLineEdit>
+#include <QTemporaryDir>
+#include <QTest>
+
+#include <gtest/gtest.h>
+
+using namespace clevis;
+using namespace clevis::ui;
+
+namespace {
+
+class CanvasTest : public ::testing::Test {
+protected:
+    void SetUp() override
+    {
+        window.resize(1400, 900);
+        window.show();
+        ASSERT_TRUE(QTest::qWaitForWindowExposed(&window));
+        window.canvas()->fitToView();
+    }
+
+    QPoint at(double x, double y) const { return window.canvas()->view().toScreen({x, y}).toPoint(); }
+    void useTool(const char* name) { window.tools()->action(QString::fromUtf8(name))->trigger(); }
+    void click(double x, double y) { QTest::mouseClick(window.canvas(), Qt::LeftButton, {}, at(x, y)); }
+    const Mechanism& mechanism() const { return window.document()->mechanism(); }
+
+    template <typename W>
+    W* field(const char* name)
+    {
+        auto* editor = window.findChild<PropertyEditor*>();
+        editor->rebuildNow();
+        return editor->findChild<W*>(QString::fromUtf8(name));
+    }
+
+    // Four-bar with its pins on the 10 mm grid: crank 50 mm, coupler 161 mm,
+    // rocker 124 mm, frame 200 mm (a crank-rocker: 50 + 200 < 161 + 124).
+    void drawFourBar()
+    {
+        useTool("Ground pin");
+        click(0.0, 0.0);
+        click(0.2, 0.0);
+        useTool("Pin");
+        click(0.03, 0.04);
+        click(0.17, 0.12);
+        useTool("Link");
+        click(0.0, 0.0), click(0.03, 0.04);
+        click(0.03, 0.04), click(0.17, 0.12);
+        click(0.17, 0.12), click(0.2, 0.0);
+        useTool("Motor");
+        click(0.0, 0.0);
+    }
+
+    MainWindow window;
+};
+
+TEST_F(CanvasTest, DrawAFourBarSetAMassSaveAndReopen)
+{
+    drawFourBar();
+    ASSERT_EQ(mechanism().bodies.size(), 3u);
+    ASSERT_EQ(mechanism().joints.size(), 4u);
+    ASSERT_EQ(mechanism().drivers.size(), 1u);
+
+    useTool("Select");
+    click(0.015, 0.02);  // the middle of the crank
+    ASSERT_EQ(window.document()->selection().kind, Selection::Kind::Body);
+    ASSERT_EQ(window.document()->selection().name.toStdString(), "link1");
+    auto* source = field<QComboBox>("massSource");
+    ASSERT_NE(source, nullptr);
+    emit source->activated(1);  // typed values
+    auto* mass = field<QLineEdit>("mass");
+    ASSERT_NE(mass, nullptr);
+    mass->setFocus();
+    mass->selectAll();
+    QTest::keyClicks(mass, "2.5");
+    QTest::keyClick(mass, Qt::Key_Return);
+    ASSERT_EQ(mechanism().bodies[0].mass, 2.5);
+
+    QTemporaryDir dir;
+    const QString path = dir.filePath("drawn.json");
+    QString error;
+    ASSERT_TRUE(window.files()->saveTo(path, &error)) << error.toStdString();
+    EXPECT_FALSE(window.document()->isModified());
+    window.document()->reset({}, {});
+    ASSERT_TRUE(window.files()->open(path, &error)) << error.toStdString();
+
+    const Mechanism expected = loadMechanismFile(CLEVIS_TEST_DATA "/drawn_four_bar.json").mechanism;
+    EXPECT_EQ(mechanismToJson(mechanism()).dump(2), mechanismToJson(expected).dump(2));
+
+    AnalysisState* analysis = window.analysis();
+    analysis->waitForIdle();
+    EXPECT_TRUE(analysis->errorText().isEmpty()) << analysis->errorText().toStdString();
+    ASSERT_TRUE(analysis->mobility().has_value());
+    EXPECT_EQ(analysis->mobility()->mobility, 1);
+    EXPECT_EQ(analysis->mobility()->drivers, 1);
+    ASSERT_TRUE(analysis->hasResult());
+    EXPECT_TRUE(analysis->result().complete);
+    const QString status = window.statusLine()->analysisText();
+    EXPECT_TRUE(status.contains("1 degree of freedom")) << status.toStdString();
+    EXPECT_TRUE(status.contains("1 driver")) << status.toStdString();
+    EXPECT_TRUE(status.contains("Solves over the whole cycle")) << status.toStdString();
+}
+
+TEST_F(CanvasTest, WithoutAMotorTheStatusSaysItDoesNotSolve)
+{
+    drawFourBar();
+    window.document()->undoStack()->undo();  // the motor
+    window.analysis()->waitForIdle();
+    const QString status = window.statusLine()->analysisText();
+    EXPECT_TRUE(status.contains("1 degree of freedom, 0 drivers")) << status.toStdString();
+    EXPECT_TRUE(status.contains("Does not solve")) << status.toStdString();
+}
+
+TEST_F(CanvasTest, DraggingAPinIsOneUndoStepAndTheLinksFollow)
+{
+    drawFourBar();
+    useTool("Select");
+    const int steps = window.document()->undoStack()->count();
+    QTest::mousePress(window.canvas(), Qt::LeftButton, {}, at(0.17, 0.12));
+    for (double x : {0.172, 0.175, 0.18}) {
+        QMouseEvent move(QEvent::MouseMove, at(x, 0.13), window.canvas()->mapToGlobal(at(x, 0.13)), Qt::NoButton, Qt::LeftButton, {});
+        QApplication::sendEvent(window.canvas(), &move);
+    }
+    QTest::mouseRelease(window.canvas(), Qt::LeftButton, {}, at(0.18, 0.13));
+    EXPECT_EQ(window.document()->undoStack()->count(), steps + 1);
+    const Joint& moved = mechanism().joints[jointIndex(mechanism(), "P2")];
+    EXPECT_NEAR(moved.at.x(), 0.18, 1e-12);  // snapped to the grid
+    EXPECT_NEAR(moved.at.y(), 0.13, 1e-12);
+    const auto coupler = bodyPins(mechanism(), "link2");
+    EXPECT_NEAR(coupler[1].x(), 0.18, 1e-12);
+    window.document()->undoStack()->undo();
+    EXPECT_NEAR(mechanism().joints[jointIndex(mechanism(), "P2")].at.x(), 0.17, 1e-12);
+}
+
+TEST_F(CanvasTest, EscapeCancelsALinkHalfDrawn)
+{
+    useTool("Ground pin");
+    click(0.0, 0.0);
+    useTool("Link");
+    click(0.0, 0.0);
+    QTest::keyClick(window.canvas(), Qt::Key_Escape);
+    click(0.05, 0.05);  // starts a new link instead of finishing the cancelled one
+    EXPECT_TRUE(mechanism().bodies.empty());
+}
+
+TEST_F(CanvasTest, APointNearlyLevelWithTheStartSnapsLevel)
+{
+    useTool("Link");
+    click(0.0, 0.0);
+    // 2 px above the start's level, off the grid in x: lands level, on the grid in x.
+    const QPoint p = at(0.1234, 0.0) - QPoint(0, 2);
+    QTest::mouseClick(window.canvas(), Qt::LeftButton, {}, p);
+    ASSERT_EQ(mechanism().joints.size(), 2u);
+    EXPECT_DOUBLE_EQ(mechanism().joints[1].at.y(), 0.0);
+}
+
+TEST_F(CanvasTest, EditNamesAreReadableInTheUndoStack)
+{
+    drawFourBar();
+    EXPECT_EQ(window.document()->undoStack()->undoText().toStdString(), "Add motor motor1");
+    window.document()->undoStack()->undo();
+    EXPECT_EQ(window.document()->undoStack()->undoText().toStdString(), "Add link");
+}
+
+}  // namespace

@@ -1,0 +1,214 @@
+// The document and its edits: each kind of edit, undone and redone, gives
+// back exactly the saved JSON it started from and the one it produced.
+#include "compiled_mechanism.h"
+#include "mechanism_document.h"
+#include "mechanism_edits.h"
+#include "mechanism_file.h"
+#include "sketch_geometry.h"
+
+#include <gtest/gtest.h>
+
+#include <functional>
+
+using namespace clevis;
+using namespace clevis::ui;
+
+namespace {
+
+std::string saved(const MechanismDocument& doc)
+{
+    return mechanismToJson(doc.mechanism()).dump();
+}
+
+// A four-bar as the tools build it: two ground pins, two pins, three links, a motor.
+Mechanism drawnFourBar()
+{
+    Mechanism m;
+    const std::string o1 = edits::addGroundPin(m, {0.0, 0.0});
+    const std::string o2 = edits::addGroundPin(m, {0.2, 0.0});
+    const std::string a = edits::addPin(m, {0.03, 0.04});
+    const std::string b = edits::addPin(m, {0.17, 0.12});
+    edits::addBody(m, {o1, a});
+    edits::addBody(m, {a, b});
+    edits::addBody(m, {b, o2});
+    edits::addRotaryMotor(m, o1);
+    return m;
+}
+
+struct NamedEdit {
+    const char* name;
+    std::function<void(Mechanism&)> edit;
+};
+
+class EditRoundTrip : public ::testing::TestWithParam<NamedEdit> {};
+
+TEST_P(EditRoundTrip, UndoAndRedoRestoreTheSavedJsonExactly)
+{
+    MechanismDocument doc;
+    doc.reset(drawnFourBar(), {});
+    const std::string before = saved(doc);
+    doc.apply(QString::fromUtf8(GetParam().name), GetParam().edit);
+    const std::string after = saved(doc);
+    ASSERT_NE(before, after) << "the edit must change the document for this test to mean anything";
+    ASSERT_EQ(doc.undoStack()->count(), 1);
+    EXPECT_EQ(doc.undoStack()->undoText().toStdString(), GetParam().name);
+    doc.undoStack()->undo();
+    EXPECT_EQ(saved(doc), before);
+    doc.undoStack()->redo();
+    EXPECT_EQ(saved(doc), after);
+    doc.undoStack()->undo();
+    EXPECT_EQ(saved(doc), before);
+}
+
+const Selection bodySel{Selection::Kind::Body, "link2", -1};
+
+INSTANTIATE_TEST_SUITE_P(
+    EveryKindOfEdit, EditRoundTrip,
+    ::testing::Values(
+        NamedEdit{"Add ground pin", [](Mechanism& m) { edits::addGroundPin(m, {0.3, 0.0}); }},
+        NamedEdit{"Add pin", [](Mechanism& m) { edits::addPin(m, {0.1, 0.2}); }},
+        NamedEdit{"Add link", [](Mechanism& m) { edits::addBody(m, {"P1", "O2"}); }},
+        NamedEdit{"Add plate", [](Mechanism& m) { edits::addBody(m, {"P1", "P2", edits::addPin(m, {0.1, 0.2})}); }},
+        NamedEdit{"Add slider", [](Mechanism& m) { edits::addSlider(m, kGroundName, {0.3, 0.1}, 15.0); }},
+        NamedEdit{"Add pin in slot", [](Mechanism& m) { edits::addPinInSlot(m, "link2", {0.1, 0.08}, 30.0); }},
+        NamedEdit{"Add motor", [](Mechanism& m) { edits::addRotaryMotor(m, "O2"); }},
+        NamedEdit{"Add slider drive", [](Mechanism& m) { edits::addSliderDrive(m, edits::addSlider(m, kGroundName, {0.3, 0.1}, 0.0)); }},
+        NamedEdit{"Add cylinder", [](Mechanism& m) { edits::addCylinder(m, {kGroundName, {0.1, -0.05}}, {"link3", {0.18, 0.06}}); }},
+        NamedEdit{"Add force", [](Mechanism& m) { edits::addForce(m, {"link2", {0.1, 0.08}}, {0.0, -150.0}); }},
+        NamedEdit{"Add torque", [](Mechanism& m) { edits::addTorque(m, "link3", -4.0); }},
+        NamedEdit{"Add spring", [](Mechanism& m) { edits::addSpring(m, {kGroundName, {0.1, 0.2}}, {"link2", {0.1, 0.08}}); }},
+        NamedEdit{"Add damper", [](Mechanism& m) { edits::addDamper(m, {kGroundName, {0.1, 0.2}}, {"link2", {0.1, 0.08}}); }},
+        NamedEdit{"Add point mass", [](Mechanism& m) { edits::addPointMass(m, "link1", {0.015, 0.02}, 0.3); }},
+        NamedEdit{"Move pin", [](Mechanism& m) { edits::moveJoint(m, jointIndex(m, "P2"), {0.18, 0.13}); }},
+        NamedEdit{"Delete link", [](Mechanism& m) { edits::remove(m, bodySel); }},
+        NamedEdit{"Delete pin", [](Mechanism& m) { edits::remove(m, {Selection::Kind::Joint, "O1", -1}); }},
+        NamedEdit{"Delete motor", [](Mechanism& m) { edits::remove(m, {Selection::Kind::Driver, "motor1", -1}); }},
+        NamedEdit{"Rename body", [](Mechanism& m) { edits::renameBody(m, "link1", "crank"); }},
+        NamedEdit{"Rename joint", [](Mechanism& m) { edits::renameJoint(m, "O1", "A0"); }},
+        NamedEdit{"Rename driver", [](Mechanism& m) { edits::renameDriver(m, "motor1", "gearmotor"); }},
+        NamedEdit{"Set mass", [](Mechanism& m) {
+                      m.bodies[0].mass = 1.5;
+                      m.bodies[0].cg = Vec2(0.015, 0.02);
+                  }},
+        NamedEdit{"Set section", [](Mechanism& m) { m.bodies[1].section = BarSection{0.02, 0.008, 2700.0, std::nullopt}; }},
+        NamedEdit{"Set motion", [](Mechanism& m) { m.drivers[0].motion = Rise{CamLaw::Cycloidal, 0.0, 1.0, 0.0, 1.5}; }}),
+    [](const auto& info) {
+        std::string n = info.param.name;
+        for (auto& c : n)
+            if (!std::isalnum(static_cast<unsigned char>(c))) c = '_';
+        return n;
+    });
+
+TEST(MechanismDocument, ConsecutiveEditsWithOneMergeIdAreOneUndoStep)
+{
+    MechanismDocument doc;
+    doc.reset(drawnFourBar(), {});
+    const std::string before = saved(doc);
+    const int p = jointIndex(doc.mechanism(), "P1");
+    for (double x : {0.031, 0.032, 0.035}) doc.apply("Move pin P1", [=](Mechanism& m) { edits::moveJoint(m, p, {x, 0.04}); }, 1);
+    EXPECT_EQ(doc.undoStack()->count(), 1);
+    EXPECT_DOUBLE_EQ(doc.mechanism().joints[p].at.x(), 0.035);
+    doc.undoStack()->undo();
+    EXPECT_EQ(saved(doc), before);
+}
+
+TEST(MechanismDocument, TwoSeparateDragsAreTwoUndoSteps)
+{
+    MechanismDocument doc;
+    doc.reset(drawnFourBar(), {});
+    const int p = jointIndex(doc.mechanism(), "P1");
+    doc.apply("Move pin P1", [=](Mechanism& m) { edits::moveJoint(m, p, {0.04, 0.04}); }, 1);
+    doc.closeMergeRun();
+    doc.apply("Move pin P1", [=](Mechanism& m) { edits::moveJoint(m, p, {0.05, 0.04}); }, 1);
+    EXPECT_EQ(doc.undoStack()->count(), 2);
+}
+
+TEST(MechanismDocument, AnEditThatChangesNothingIsNotRecorded)
+{
+    MechanismDocument doc;
+    doc.reset(drawnFourBar(), {});
+    doc.apply("Nothing", [](Mechanism& m) { m.bodies[0].name = m.bodies[0].name; });
+    EXPECT_EQ(doc.undoStack()->count(), 0);
+    EXPECT_FALSE(doc.isModified());
+}
+
+TEST(MechanismDocument, ModifiedFollowsTheCleanState)
+{
+    MechanismDocument doc;
+    doc.reset(drawnFourBar(), "/tmp/x.json");
+    EXPECT_FALSE(doc.isModified());
+    doc.apply("Add pin", [](Mechanism& m) { edits::addPin(m, {0.3, 0.3}); });
+    EXPECT_TRUE(doc.isModified());
+    doc.markSaved("/tmp/y.json");
+    EXPECT_FALSE(doc.isModified());
+    EXPECT_EQ(doc.filePath().toStdString(), "/tmp/y.json");
+    doc.undoStack()->undo();
+    EXPECT_TRUE(doc.isModified());
+}
+
+TEST(MechanismDocument, UndoingAnAddClearsASelectionOfTheRemovedPart)
+{
+    MechanismDocument doc;
+    doc.reset(drawnFourBar(), {});
+    doc.apply("Add torque", [](Mechanism& m) { edits::addTorque(m, "link3", 2.0); });
+    doc.setSelection({Selection::Kind::Load, {}, 0});
+    doc.undoStack()->undo();
+    EXPECT_EQ(doc.selection().kind, Selection::Kind::None);
+}
+
+TEST(MechanismEdits, LinksDrawnPinToPinJoinTheBodies)
+{
+    const Mechanism m = drawnFourBar();
+    ASSERT_EQ(m.joints.size(), 4u);
+    EXPECT_EQ(m.joints[0].bodies[0], kGroundName);
+    EXPECT_EQ(m.joints[0].bodies[1], "link1");
+    EXPECT_EQ(m.joints[2].bodies[0], "link1");  // P1: crank to coupler
+    EXPECT_EQ(m.joints[2].bodies[1], "link2");
+    EXPECT_EQ(m.joints[3].bodies[0], "link2");  // P2: coupler to rocker
+    EXPECT_EQ(m.joints[3].bodies[1], "link3");
+    EXPECT_EQ(m.joints[1].bodies[1], "link3");  // O2: ground to rocker
+}
+
+TEST(MechanismEdits, AThirdLinkOnAFullPinAddsAPinBesideIt)
+{
+    Mechanism m = drawnFourBar();
+    const std::string c = edits::addPin(m, {0.1, 0.25});
+    edits::addBody(m, {"P1", c});
+    const auto here = jointsAt(m, {0.03, 0.04}, 1e-9);
+    ASSERT_EQ(here.size(), 2u);
+    EXPECT_EQ(m.joints[here[1]].bodies[0], "link1");
+    EXPECT_EQ(m.joints[here[1]].bodies[1], "link4");
+}
+
+TEST(MechanismEdits, MovingAPinMovesWhatIsFixedAtTheSamePoint)
+{
+    Mechanism m = drawnFourBar();
+    edits::addSpring(m, {kGroundName, {0.1, 0.2}}, {"link2", {0.17, 0.12}});
+    edits::moveJoint(m, jointIndex(m, "P2"), {0.16, 0.13});
+    EXPECT_EQ(m.joints[jointIndex(m, "P2")].at, Vec2(0.16, 0.13));
+    EXPECT_EQ(std::get<SpringLoad>(m.loads[0]).b.at, Vec2(0.16, 0.13));
+    EXPECT_EQ(std::get<SpringLoad>(m.loads[0]).a.at, Vec2(0.1, 0.2));
+}
+
+TEST(MechanismEdits, RenamingABodyUpdatesEveryReference)
+{
+    Mechanism m = drawnFourBar();
+    edits::addTorque(m, "link1", 1.0);
+    edits::renameBody(m, "link1", "crank");
+    EXPECT_EQ(m.bodies[0].name, "crank");
+    EXPECT_EQ(m.joints[0].bodies[1], "crank");
+    EXPECT_EQ(std::get<TorqueLoad>(m.loads[0]).body, "crank");
+    EXPECT_EQ(compile(m).bodies.size(), 3u);  // still consistent for the solver
+}
+
+TEST(MechanismEdits, DeletingABodyOpensItsPinsAndDropsItsLoads)
+{
+    Mechanism m = drawnFourBar();
+    edits::addTorque(m, "link2", 1.0);
+    edits::remove(m, {Selection::Kind::Body, "link2", -1});
+    EXPECT_EQ(m.bodies.size(), 2u);
+    EXPECT_TRUE(m.loads.empty());
+    EXPECT_EQ(m.joints[jointIndex(m, "P1")].bodies[1], "");
+}
+
+}  // namespace

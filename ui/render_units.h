@@ -1,0 +1,31 @@
+// The units a drawing or report is labelled in, as plain values, so the
+// renderers need no settings or widgets: the desktop app fills it from the
+// user's display units, the command line uses millimetres, newtons and
+// newton-metres.
+#pragma once
+
+#include <QString>
+
+namespace clevis::ui {
+
+struct RenderUnits {
+    double lengthPerMetre = 1000.0;
+    QString lengthSymbol = "mm";
+    double forcePerNewton = 1.0;
+    QString forceSymbol = "N";
+    double torquePerNewtonMetre = 1.0;
+    QString torqueSymbol = "N·m";
+
+    QString length(double metres) const;
+    QString force(double newtons) const;
+    QString torque(double newtonMetres) const;
+};
+
+// `value` to four significant figures in fixed notation (no exponent for
+// the magnitudes a machine carries), with `unit`.
+QString formatQuantity(double value, const QString& unit);
+
+// An angle in degrees as "37.2°", measured counter-clockwise from +x.
+QString formatDirection(double degrees);
+
+}  // namespace clevis::ui
