@@ -166,7 +166,7 @@ CycleResult Sweeper::run()
     result_.duration = m_.duration;
     result_.transmissionPins = solver_.transmissionPins();
     Eigen::VectorXd q = solver_.drawnPose();
-    const MobilityReport mobility = checkMobility(m_, q);
+    const MobilityReport mobility = solver_.regularAt(q, 0.0) ? MobilityReport{} : checkMobility(m_, q);
     if (!mobility.ok()) {
         std::vector<std::string> items = mobility.freeBodies;
         for (const auto& g : mobility.redundantGroups) items.insert(items.end(), g.begin(), g.end());

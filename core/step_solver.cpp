@@ -54,6 +54,13 @@ VectorXd StepSolver::drawnPose() const
     return q;
 }
 
+bool StepSolver::regularAt(const VectorXd& q, double t)
+{
+    if (system_.rows() != system_.coordinates()) return false;
+    system_.position(q, t, phi_, &entries_);
+    return factor_.factor(system_.coordinates(), entries_) && factor_.reciprocalCondition() >= nearSingular_;
+}
+
 double StepSolver::residual(const VectorXd& q, double t, int* worstRow) const
 {
     VectorXd phi;

@@ -23,6 +23,11 @@ public:
     // converge: the mechanism cannot be assembled at time t near that pose.
     bool assemble(double t, VectorXd& q);
 
+    // True when the constraint Jacobian at q is square and well conditioned:
+    // then no joint is redundant, no body moves freely and no driver
+    // conflicts, and the dense mobility diagnosis can be skipped.
+    bool regularAt(const VectorXd& q, double t);
+
     // Constraint residual at q in balanced units; the index of the worst row.
     double residual(const VectorXd& q, double t, int* worstRow = nullptr) const;
 
