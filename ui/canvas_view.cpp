@@ -3,6 +3,7 @@
 #include "analysis_state.h"
 #include "display_units.h"
 #include "mechanism_document.h"
+#include "posed_mechanism.h"
 #include "sketch_geometry.h"
 #include "sketch_painter.h"
 #include "tools/select_tool.h"
@@ -44,6 +45,7 @@ CanvasView::CanvasView(MechanismDocument* doc, AnalysisState* analysis, QWidget*
     connect(doc_, &MechanismDocument::selectionChanged, this, qOverload<>(&QWidget::update));
     connect(doc_, &MechanismDocument::documentReset, this, &CanvasView::fitToView);
     connect(analysis_, &AnalysisState::resultChanged, this, qOverload<>(&QWidget::update));
+    connect(analysis_, &AnalysisState::currentStepChanged, this, qOverload<>(&QWidget::update));
     connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, qOverload<>(&QWidget::update));
 }
 
@@ -99,7 +101,13 @@ void CanvasView::paintEvent(QPaintEvent*)
     QPainter p(this);
     p.setRenderHint(QPainter::Antialiasing);
     paintGrid(p, view_, rect());
-    PaintContext c{p, view_, doc_->mechanism(), doc_->selection(), analysis_->offendingItems()};
+    // Away from the start of the cycle the mechanism is shown where the
+    // scrubber has it; edits are made on the drawn pose (see mousePressEvent).
+    const bool scrubbed = analysis_->hasResult() && analysis_->currentStep() > 0;
+    const Mechanism posed =
+        scrubbed ? posedMechanism(doc_->mechanism(), analysis_->compiled(), analysis_->result().steps[analysis_->currentStep()])
+                 : Mechanism{};
+    PaintContext c{p, view_, scrubbed ? posed : doc_->mechanism(), doc_->selection(), analysis_->offendingItems()};
     paintSketch(c);
     tool_->paintPreview(p);
 }
@@ -113,6 +121,7 @@ void CanvasView::mousePressEvent(QMouseEvent* e)
         return;
     }
     if (e->button() != Qt::LeftButton) return;
+    analysis_->setCurrentStep(0);  // back to the drawn pose, where the document's coordinates are
     told_ = false;
     tool_->press(pointer(e->position(), e->modifiers()));
     if (!told_) announce();  // a note about this click stays until the next one
