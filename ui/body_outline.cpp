@@ -4,6 +4,7 @@
 #include <QPolygonF>
 
 #include <algorithm>
+#include <cmath>
 
 namespace clevis::ui {
 namespace {
@@ -30,6 +31,32 @@ QPolygonF convexHull(std::vector<QPointF> pts)
     return QPolygonF(QList<QPointF>(hull.begin(), hull.end()));
 }
 
+// Points (nearly) on one line make a hull of no area, which Qt's path
+// arithmetic cannot stroke and unite reliably: such a body is a bar between
+// its two farthest points.
+QPolygonF barIfFlat(const QPolygonF& hull)
+{
+    if (hull.size() < 3) return hull;
+    double area = 0.0, longest = 0.0;
+    QPointF a = hull.front(), b = hull.back();
+    for (int i = 0; i < hull.size(); ++i) {
+        const QPointF p = hull[i], q = hull[(i + 1) % hull.size()];
+        area += p.x() * q.y() - q.x() * p.y();
+        for (const QPointF& r : hull) {
+            const QPointF d = r - p;
+            if (QPointF::dotProduct(d, d) > longest) {
+                longest = QPointF::dotProduct(d, d);
+                a = p;
+                b = r;
+            }
+        }
+    }
+    if (std::abs(area) / 2 > 1e-3 * longest) return hull;
+    QPolygonF bar;
+    bar << a << b;
+    return bar;
+}
+
 QPainterPath block(const SlideBlock& b, double halfWidth)
 {
     const QPointF u = b.axis, n(-b.axis.y(), b.axis.x());
@@ -50,7 +77,7 @@ QPainterPath bodyOutline(const std::vector<QPointF>& points, double halfWidth, c
     QPainterPath outline;
     outline.setFillRule(Qt::WindingFill);
     if (!points.empty()) {
-        const QPolygonF hull = convexHull(points);
+        const QPolygonF hull = barIfFlat(convexHull(points));
         QPainterPath core;
         if (hull.size() == 1) core.addEllipse(hull.front(), halfWidth, halfWidth);
         else {
