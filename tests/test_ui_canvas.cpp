@@ -14,6 +14,8 @@
 #include "tool_palette.h"
 
 #include <QAction>
+#include <QDir>
+#include <QFileInfo>
 #include <QComboBox>
 #include <QLineEdit>
 #include <QTemporaryDir>
@@ -176,6 +178,32 @@ TEST_F(CanvasTest, EditNamesAreReadableInTheUndoStack)
     EXPECT_EQ(window.document()->undoStack()->undoText().toStdString(), "Add motor motor1");
     window.document()->undoStack()->undo();
     EXPECT_EQ(window.document()->undoStack()->undoText().toStdString(), "Add link");
+}
+
+// A save that cannot be written (here: a folder stands where the file
+// should go) says so, keeps the document unsaved and leaves what was there;
+// a good save keeps the previous file as NAME.bak.
+TEST_F(CanvasTest, AFailedSaveKeepsTheDocumentUnsavedAndAGoodOneKeepsABackup)
+{
+    window.document()->reset(loadMechanismFile(CLEVIS_TEST_DATA "/drawn_four_bar.json").mechanism, {});
+    window.document()->apply("Rename", [](Mechanism& m) { m.name = "edited"; });
+    ASSERT_TRUE(window.document()->isModified());
+    QTemporaryDir dir;
+    const QString blocked = dir.filePath("blocked.json");
+    ASSERT_TRUE(QDir().mkdir(blocked));
+    QString error;
+    EXPECT_FALSE(window.files()->saveTo(blocked, &error));
+    EXPECT_TRUE(error.contains("blocked.json")) << error.toStdString();
+    EXPECT_TRUE(window.document()->isModified());
+    EXPECT_TRUE(QFileInfo(blocked).isDir());
+
+    const QString path = dir.filePath("press.json");
+    ASSERT_TRUE(window.files()->saveTo(path, &error)) << error.toStdString();
+    window.document()->apply("Rename", [](Mechanism& m) { m.name = "edited again"; });
+    ASSERT_TRUE(window.files()->saveTo(path, &error)) << error.toStdString();
+    EXPECT_FALSE(window.document()->isModified());
+    EXPECT_EQ(loadMechanismFile((path + ".bak").toStdString()).mechanism.name, "edited");
+    EXPECT_EQ(loadMechanismFile(path.toStdString()).mechanism.name, "edited again");
 }
 
 }  // namespace

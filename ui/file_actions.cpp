@@ -1,5 +1,7 @@
 #include "file_actions.h"
 
+#include "atomic_file.h"
+
 #include "mechanism_document.h"
 #include "menu_action.h"
 #include "mechanism_file.h"
@@ -12,7 +14,6 @@
 #include <QMainWindow>
 #include <QMenu>
 #include <QMessageBox>
-#include <QSaveFile>
 #include <QSettings>
 
 namespace clevis::ui {
@@ -122,11 +123,13 @@ bool FileActions::saveTo(const QString& path, QString* error)
         else QMessageBox::warning(window_, tr("Cannot save"), why);
         return false;
     }
-    QSaveFile file(path);
-    const std::string text = saveMechanismText(doc_->mechanism());
-    const bool ok = file.open(QIODevice::WriteOnly) && file.write(text.data(), qint64(text.size())) == qint64(text.size()) && file.commit();
-    if (!ok) {
-        const QString why = tr("Cannot save %1: %2").arg(path, file.errorString());
+    try {
+        // Atomic, keeping the previous file as NAME.bak; on failure the old
+        // file is intact and the document stays unsaved.
+        writeFileAtomically(path.toStdString(), saveMechanismText(doc_->mechanism()), true);
+    }
+    catch (const FileWriteError& e) {
+        const QString why = QString::fromStdString(e.what());
         if (error) *error = why;
         else QMessageBox::warning(window_, tr("Cannot save"), why);
         return false;
