@@ -44,6 +44,7 @@ public:
 
 private:
     void assembleDrawnPose(Eigen::VectorXd& q);
+    Eigen::VectorXd predict(const StepResult& from, double t) const;
     bool advance(const StepResult& from, double t, StepResult& to, int depth);
     void flagCrossings();
     void warnNearSingular();
@@ -86,12 +87,28 @@ void Sweeper::assembleDrawnPose(Eigen::VectorXd& q)
                         {name});
 }
 
+// The pose at t from Taylor's series about `from`; at a near-singular pose
+// its velocities and accelerations are unreliable (Φ_q hardly determines
+// them), so the secant through the step before is followed instead, which
+// keeps the drawn branch through a change point.
+Eigen::VectorXd Sweeper::predict(const StepResult& from, double t) const
+{
+    const double h = t - from.t;
+    const auto& steps = result_.steps;
+    const bool fromStored = !steps.empty() && &from == &steps.back();
+    const StepResult* before = fromStored ? (steps.size() >= 2 ? &steps[steps.size() - 2] : nullptr)
+                                          : (steps.empty() ? nullptr : &steps.back());
+    if (from.nearSingular && before && before->t < from.t)
+        return from.q + (h / (from.t - before->t)) * (from.q - before->q);
+    return from.q + h * from.qd + 0.5 * h * h * from.qdd;
+}
+
 // Newton from the previous step's pose extrapolated to t; on failure or a
 // suspicious jump, reach t in two halves.
 bool Sweeper::advance(const StepResult& from, double t, StepResult& to, int depth)
 {
+    const Eigen::VectorXd guess = predict(from, t);
     const double h = t - from.t;
-    const Eigen::VectorXd guess = from.q + h * from.qd + 0.5 * h * h * from.qdd;
     Eigen::VectorXd q = guess;
     const bool converged = solver_.assemble(t, q);
     const bool suspicious = converged && largestRelativeMove(q - guess, solver_.system().columnScale()) > kJumpFraction;

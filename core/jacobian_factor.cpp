@@ -1,5 +1,6 @@
 #include "jacobian_factor.h"
 
+#include <algorithm>
 #include <cmath>
 
 namespace clevis {
@@ -11,27 +12,54 @@ JacobianFactor::JacobianFactor(const Eigen::VectorXd& rowScale, const Eigen::Vec
 
 bool JacobianFactor::factor(int size, const std::vector<Eigen::Triplet<double>>& entries)
 {
-    Eigen::VectorXd columnSums = Eigen::VectorXd::Zero(size);
+    columnSums_.setZero(size);
     if (dense_) {
         denseMatrix_.setZero(size, size);
         for (const auto& e : entries) denseMatrix_(e.row(), e.col()) += e.value();
-        columnSums = denseMatrix_.cwiseAbs().colwise().sum();
+        columnSums_ = denseMatrix_.cwiseAbs().colwise().sum();
         if (!denseLu_.compute(denseMatrix_) || !(denseLu_.minPivot() > 1e-14 * denseLu_.maxPivot())) return false;
     } else {
-        sparseMatrix_.resize(size, size);
-        sparseMatrix_.setFromTriplets(entries.begin(), entries.end());
+        fillSparse(size, entries);
         for (int k = 0; k < sparseMatrix_.outerSize(); ++k)
             for (Eigen::SparseMatrix<double>::InnerIterator it(sparseMatrix_, k); it; ++it)
-                columnSums[it.col()] += std::abs(it.value());
-        if (!patternAnalysed_) {
-            sparseLu_.analyzePattern(sparseMatrix_);
-            patternAnalysed_ = true;
-        }
+                columnSums_[it.col()] += std::abs(it.value());
         sparseLu_.factorize(sparseMatrix_);
         if (sparseLu_.info() != Eigen::Success) return false;
     }
-    norm1_ = size ? columnSums.maxCoeff() : 0.0;
+    norm1_ = size ? columnSums_.maxCoeff() : 0.0;
     return std::isfinite(norm1_);
+}
+
+// The constraints write the same entries in the same order at every pose, so
+// after the first assembly each entry's place among the stored nonzeros is
+// known and the values are written straight there; a different pattern
+// (another size or order) is assembled and analysed afresh.
+void JacobianFactor::fillSparse(int size, const std::vector<Eigen::Triplet<double>>& entries)
+{
+    if (!samePattern(size, entries)) {
+        sparseMatrix_.resize(size, size);
+        sparseMatrix_.setFromTriplets(entries.begin(), entries.end());
+        sparseMatrix_.makeCompressed();
+        pattern_.clear();
+        for (const auto& e : entries) {
+            const int* begin = sparseMatrix_.innerIndexPtr() + sparseMatrix_.outerIndexPtr()[e.col()];
+            const int* end = sparseMatrix_.innerIndexPtr() + sparseMatrix_.outerIndexPtr()[e.col() + 1];
+            pattern_.push_back({e.row(), e.col(), int(std::lower_bound(begin, end, e.row()) - sparseMatrix_.innerIndexPtr())});
+        }
+        sparseLu_.analyzePattern(sparseMatrix_);
+        return;
+    }
+    double* values = sparseMatrix_.valuePtr();
+    std::fill(values, values + sparseMatrix_.nonZeros(), 0.0);
+    for (std::size_t i = 0; i < entries.size(); ++i) values[pattern_[i].slot] += entries[i].value();
+}
+
+bool JacobianFactor::samePattern(int size, const std::vector<Eigen::Triplet<double>>& entries) const
+{
+    if (sparseMatrix_.rows() != size || pattern_.size() != entries.size()) return false;
+    for (std::size_t i = 0; i < entries.size(); ++i)
+        if (pattern_[i].row != entries[i].row() || pattern_[i].col != entries[i].col()) return false;
+    return true;
 }
 
 void JacobianFactor::solveScaledInPlace(Eigen::VectorXd& b) const
@@ -77,23 +105,30 @@ int JacobianFactor::determinantSign() const
 
 // Estimate of ‖J̃⁻¹‖₁ by Hager's method as refined by Higham (the estimator
 // LAPACK's xGECON uses): at most five solve pairs, then 1/(‖J̃‖₁ ‖J̃⁻¹‖₁).
-double JacobianFactor::reciprocalCondition() const
+// Each iterate ‖J̃⁻¹x‖₁ with ‖x‖₁ = 1 is a lower bound of ‖J̃⁻¹‖₁ whatever
+// the start, so the largest one seen is kept.
+double JacobianFactor::reciprocalCondition()
 {
     const Eigen::Index n = columnScale_.size();
     if (n == 0 || norm1_ == 0.0) return 0.0;
-    Eigen::VectorXd x = Eigen::VectorXd::Constant(n, 1.0 / double(n));
-    Eigen::VectorXd y, z;
+    if (worstColumn_ >= 0 && worstColumn_ < n) {
+        x_.setZero(n);
+        x_[worstColumn_] = 1.0;
+    } else {
+        x_.setConstant(n, 1.0 / double(n));
+    }
     double estimate = 0.0;
     for (int iteration = 0; iteration < 5; ++iteration) {
-        y = x;
-        solveScaledInPlace(y);
-        estimate = y.lpNorm<1>();
-        z = y.unaryExpr([](double v) { return v < 0 ? -1.0 : 1.0; });
-        solveScaledTransposedInPlace(z);
+        y_ = x_;
+        solveScaledInPlace(y_);
+        estimate = std::max(estimate, y_.lpNorm<1>());
+        z_ = y_.unaryExpr([](double v) { return v < 0 ? -1.0 : 1.0; });
+        solveScaledTransposedInPlace(z_);
         Eigen::Index j = 0;
-        if (z.cwiseAbs().maxCoeff(&j) <= z.dot(x)) break;
-        x.setZero();
-        x[j] = 1.0;
+        if (z_.cwiseAbs().maxCoeff(&j) <= z_.dot(x_)) break;
+        x_.setZero();
+        x_[j] = 1.0;
+        worstColumn_ = j;
     }
     if (!std::isfinite(estimate)) return 0.0;
     return estimate > 0.0 ? 1.0 / (norm1_ * estimate) : 0.0;

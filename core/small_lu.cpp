@@ -13,6 +13,7 @@ bool SmallLu::compute(const Eigen::MatrixXd& matrix)
     lu_ = matrix;
     const int n = int(matrix.rows());
     pivot_.resize(n);
+    inverseDiagonal_.resize(n);
     double* a = lu_.data();
     minPivot_ = n ? INFINITY : 0.0;
     maxPivot_ = 0.0;
@@ -33,6 +34,7 @@ bool SmallLu::compute(const Eigen::MatrixXd& matrix)
         maxPivot_ = std::max(maxPivot_, std::abs(ukk));
         if (ukk == 0.0) return false;
         const double inverse = 1.0 / ukk;
+        inverseDiagonal_[k] = inverse;
         for (int i = k + 1; i < n; ++i) colK[i] *= inverse;
         for (int j = k + 1; j < n; ++j) {
             double* colJ = a + j * n;
@@ -55,8 +57,9 @@ void SmallLu::solveInPlace(Eigen::VectorXd& rhs) const
         const double bj = b[j];
         for (int i = j + 1; i < n; ++i) b[i] -= a[i + j * n] * bj;
     }
+    const double* inverseDiagonal = inverseDiagonal_.data();
     for (int j = n - 1; j >= 0; --j) {
-        const double bj = b[j] / a[j + j * n];
+        const double bj = b[j] * inverseDiagonal[j];
         b[j] = bj;
         for (int i = 0; i < j; ++i) b[i] -= a[i + j * n] * bj;
     }
@@ -68,10 +71,11 @@ void SmallLu::solveTransposedInPlace(Eigen::VectorXd& rhs) const
     const int n = int(lu_.rows());
     const double* a = lu_.data();
     double* b = rhs.data();
+    const double* inverseDiagonal = inverseDiagonal_.data();
     for (int i = 0; i < n; ++i) {
         double s = b[i];
         for (int k = 0; k < i; ++k) s -= a[k + i * n] * b[k];
-        b[i] = s / a[i + i * n];
+        b[i] = s * inverseDiagonal[i];
     }
     for (int i = n - 1; i >= 0; --i) {
         double s = b[i];

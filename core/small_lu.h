@@ -23,7 +23,8 @@ public:
 
 private:
     Eigen::MatrixXd lu_;
-    std::vector<int> pivot_;  // row swapped with row k at step k
+    std::vector<int> pivot_;                // row swapped with row k at step k
+    std::vector<double> inverseDiagonal_;  // 1/U_kk: the solves multiply
     double minPivot_ = 0.0, maxPivot_ = 0.0;
     int sign_ = 1;
 };

@@ -5,11 +5,14 @@
 #include <algorithm>
 #include <array>
 #include <cmath>
+#include <limits>
 
 namespace clevis {
 namespace {
 
 constexpr int kMaxNewtonIterations = 30;
+// A step with a kept (older) Jacobian must cut the residual at least this much.
+constexpr double kChordContraction = 0.1;
 
 // The two bodies a constraint acts on and, for each, the point through which
 // its force is reported: for both bodies the second body's joint point (where
@@ -54,10 +57,19 @@ VectorXd StepSolver::drawnPose() const
     return q;
 }
 
+// Φ and the scaled Jacobian entries at (q, t), remembering where they were
+// taken: analyse() right after a converged assemble() finds them ready.
+void StepSolver::evaluate(const Pose& q, double t)
+{
+    system_.position(q, t, phi_, &entries_);
+    entriesPose_ = q.q();
+    entriesTime_ = t;
+}
+
 bool StepSolver::regularAt(const VectorXd& q, double t)
 {
     if (system_.rows() != system_.coordinates()) return false;
-    system_.position(q, t, phi_, &entries_);
+    evaluate(q, t);
     return factor_.factor(system_.coordinates(), entries_) && factor_.reciprocalCondition() >= nearSingular_;
 }
 
@@ -72,20 +84,44 @@ double StepSolver::residual(const VectorXd& q, double t, int* worstRow) const
     return worst;
 }
 
+// Newton–Raphson that keeps the last factorisation (normally the Jacobian of
+// the previous step, which analyse() left) while the residual falls at least
+// tenfold per iteration, and refactors at the current pose when it does not
+// (or when that Jacobian was near singular, or the last assembly failed):
+// one step of a cycle then costs one factorisation instead of two.
 bool StepSolver::assemble(double t, VectorXd& q)
 {
+    if (newton(t, q)) return true;
+    keepFactor_ = false;  // a retry from another pose starts afresh
+    return false;
+}
+
+// Chord steps converge linearly, so when the residual reaches the tolerance
+// after one of them, one more is taken, which leaves the pose well inside
+// it; after a true Newton step the pose is already far inside, and near a
+// singular position another step would only add noise.
+bool StepSolver::newton(double t, VectorXd& q)
+{
     const int n = system_.coordinates();
+    double previous = std::numeric_limits<double>::infinity();
+    bool chord = keepFactor_;
     for (int iteration = 0; iteration < kMaxNewtonIterations; ++iteration) {
-        system_.position(q, t, phi_, &entries_);
+        evaluate(q, t);
         const double r = phi_.cwiseProduct(system_.rowScale()).cwiseAbs().maxCoeff();
         if (!std::isfinite(r) || r > 1e3 * m_.lengthScale) return false;
-        if (r <= tolerance_ && iteration > 0) return true;
-        if (!factor_.factor(n, entries_)) return false;
+        const bool converged = r <= tolerance_;
+        if (converged && iteration > 0 && !chord) return true;
+        if (!keepFactor_ || (!converged && r > kChordContraction * previous)) {
+            keepFactor_ = factor_.factor(n, entries_);
+            if (!keepFactor_) return false;
+            chord = false;
+        }
+        previous = r;
         phi_ = -phi_;
         factor_.solveInPlace(phi_);  // Newton step Δq = −Φ_q⁻¹Φ
         if (!phi_.allFinite()) return false;
         q += phi_;
-        if (r <= tolerance_) return true;
+        if (converged) return true;
     }
     return false;
 }
@@ -102,17 +138,18 @@ StepResult StepSolver::analyse(double t, const VectorXd& q)
         r.driveRate.push_back(s.rate);
     }
     const Pose pose(q);
-    system_.position(pose, t, phi_, &entries_);
+    if (!(t == entriesTime_ && q == entriesPose_)) evaluate(pose, t);
     const bool factored = factor_.factor(n, entries_);
     r.reciprocalCondition = factored ? factor_.reciprocalCondition() : 0.0;
     r.jacobianSign = factored ? factor_.determinantSign() : 0;
     r.nearSingular = r.reciprocalCondition < nearSingular_;
+    keepFactor_ = factored && !r.nearSingular;  // a near-singular Jacobian would mislead the next assembly
 
-    VectorXd nu, gamma;
-    system_.rates(pose, VectorXd::Zero(n), t, nu, gamma);  // ν does not depend on q̇; γ is recomputed below
-    r.qd = factor_.solve(nu);
-    system_.rates(pose, r.qd, t, nu, gamma);
-    r.qdd = factor_.solve(gamma);
+    zeroRates_.setZero(n);
+    system_.rates(pose, zeroRates_, t, nu_, gamma_);  // ν does not depend on q̇; γ is recomputed below
+    r.qd = factor_.solve(nu_);
+    system_.rates(pose, r.qd, t, nu_, gamma_);
+    r.qdd = factor_.solve(gamma_);
 
     const std::vector<AppliedLoad> loads = appliedLoads(m_, pose, r.qd, t, r.drivePosition);
     VectorXd rhs = generalizedForces(m_, q, loads);

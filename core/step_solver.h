@@ -9,6 +9,7 @@
 #include "results.h"
 
 #include <array>
+#include <limits>
 
 namespace clevis {
 
@@ -52,6 +53,8 @@ public:
     };
 
 private:
+    void evaluate(const Pose& q, double t);
+    bool newton(double t, VectorXd& q);
     void fillActions(const Pose& q, StepResult& r) const;
     void fillReactionsAndEfforts(StepResult& r) const;
     void fillGroundLoad(const std::vector<AppliedLoad>& loads, StepResult& r) const;
@@ -60,7 +63,10 @@ private:
     ConstraintSystem system_;
     JacobianFactor factor_;
     std::vector<Eigen::Triplet<double>> entries_;
-    VectorXd phi_;
+    VectorXd phi_, nu_, gamma_, zeroRates_;  // scratch, kept to avoid allocations
+    VectorXd entriesPose_;                    // where entries_ were taken
+    double entriesTime_ = std::numeric_limits<double>::quiet_NaN();
+    bool keepFactor_ = false;  // the held factorisation may start the next assembly
     std::vector<TransmissionPin> transmission_;
     std::vector<std::array<ActionPoint, 2>> actionPoints_;  // per constraint
     std::vector<int> ownerOfRow_;                         // constraint of each row
