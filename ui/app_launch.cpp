@@ -2,6 +2,8 @@
 
 #include "file_actions.h"
 #include "main_window.h"
+#include "recovery_prompt.h"
+#include "recovery_store.h"
 #include "screenshot.h"
 
 #include <QApplication>
@@ -20,7 +22,9 @@ int runDesktopApp(int argc, char** argv)
     QCommandLineParser parser;
     parser.setApplicationDescription(QObject::tr(
         "Clevis: sketch a planar linkage, edit it, and see the loads in every pin over the cycle.\n"
-        "Without a display, use --screenshot (e.g. with QT_QPA_PLATFORM=offscreen) or clevis-cli."));
+        "Without a display, use --screenshot (e.g. with QT_QPA_PLATFORM=offscreen) or clevis-cli.\n"
+        "Unsaved changes are autosaved every minute to %1 and offered back at the next start if Clevis "
+        "ends without closing; set CLEVIS_RECOVERY_DIR to use another folder.").arg(RecoveryStore::defaultFolder()));
     parser.addHelpOption();
     parser.addVersionOption();
     const QCommandLineOption screenshot(QStringLiteral("screenshot"),
@@ -47,6 +51,7 @@ int runDesktopApp(int argc, char** argv)
     }
     window.show();
     if (!files.isEmpty()) window.files()->open(files.front());  // tells the user in a dialog if it cannot
+    offerRecoveryInDialogs(window);  // never reached by --screenshot, so headless runs do not wait on it
     return app.exec();
 }
 

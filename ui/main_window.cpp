@@ -1,6 +1,7 @@
 #include "main_window.h"
 
 #include "analysis_state.h"
+#include "autosave_timer.h"
 #include "canvas_view.h"
 #include "file_actions.h"
 #include "mechanism_document.h"
@@ -26,12 +27,13 @@
 
 namespace clevis::ui {
 
-MainWindow::MainWindow(QWidget* parent)
+MainWindow::MainWindow(const QString& recoveryFolder, QWidget* parent)
     : QMainWindow(parent),
       doc_(new MechanismDocument(this)),
       analysis_(new AnalysisState(doc_, this)),
       canvas_(new CanvasView(doc_, analysis_, this)),
       files_(new FileActions(this, doc_)),
+      autosave_(new AutosaveTimer(doc_, RecoveryStore(recoveryFolder), this)),
       tools_(new ToolPalette(canvas_, this)),
       status_(new StatusLine(analysis_, this))
 {
@@ -41,6 +43,7 @@ MainWindow::MainWindow(QWidget* parent)
     statusBar()->addWidget(status_, 1);
     connect(canvas_, &CanvasView::hintChanged, status_, &StatusLine::showHint);
     connect(files_, &FileActions::note, status_, &StatusLine::showHint);
+    connect(autosave_, &AutosaveTimer::note, status_, &StatusLine::showHint);
     buildDocks();
     buildMenus();
     status_->showHint(canvas_->tool()->hint());
@@ -48,6 +51,14 @@ MainWindow::MainWindow(QWidget* parent)
     installResultsViews(this, doc_, analysis_);
 #endif
     resize(1400, 900);
+}
+
+MainWindow::~MainWindow()
+{
+    // Before the document: its undo stack, cleared as it is destroyed, would
+    // look like a saved document and delete the recovery file that a window
+    // closed without the clean-exit path must leave.
+    delete autosave_;
 }
 
 void MainWindow::buildDocks()
@@ -105,8 +116,13 @@ void MainWindow::deleteSelection()
 
 void MainWindow::closeEvent(QCloseEvent* e)
 {
-    if (files_->maybeSave()) e->accept();
-    else e->ignore();
+    if (!files_->maybeSave()) {
+        e->ignore();
+        return;
+    }
+    // Saved or knowingly discarded: a clean exit leaves nothing to recover.
+    autosave_->discard();
+    e->accept();
 }
 
 void MainWindow::dragEnterEvent(QDragEnterEvent* e)

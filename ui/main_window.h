@@ -2,11 +2,14 @@
 // on the right, the status line below. It only creates and wires the pieces.
 #pragma once
 
+#include "recovery_store.h"
+
 #include <QMainWindow>
 
 namespace clevis::ui {
 
 class AnalysisState;
+class AutosaveTimer;
 class CanvasView;
 class FileActions;
 class MechanismDocument;
@@ -16,12 +19,15 @@ class ToolPalette;
 class MainWindow : public QMainWindow {
     Q_OBJECT
 public:
-    explicit MainWindow(QWidget* parent = nullptr);
+    // Unsaved changes are autosaved to `recoveryFolder` (see RecoveryStore).
+    explicit MainWindow(const QString& recoveryFolder = RecoveryStore::defaultFolder(), QWidget* parent = nullptr);
+    ~MainWindow() override;
 
     MechanismDocument* document() const { return doc_; }
     AnalysisState* analysis() const { return analysis_; }
     CanvasView* canvas() const { return canvas_; }
     FileActions* files() const { return files_; }
+    AutosaveTimer* autosave() const { return autosave_; }
     ToolPalette* tools() const { return tools_; }
     StatusLine* statusLine() const { return status_; }
 
@@ -39,6 +45,7 @@ private:
     AnalysisState* analysis_;
     CanvasView* canvas_;
     FileActions* files_;
+    AutosaveTimer* autosave_;
     ToolPalette* tools_;
     StatusLine* status_;
 };
