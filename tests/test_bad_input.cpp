@@ -1,12 +1,12 @@
 // Malformed and oversized mechanism files through `clevis-cli analyze`, as a
 // user meets them: each must exit with 1 and say on stderr which file and
 // which place in it is wrong — never crash, hang or print results.
+#include "cli_runner.h"
 #include "model_limits.h"
 
 #include <gtest/gtest.h>
 #include <nlohmann/json.hpp>
 
-#include <sys/wait.h>
 #include <unistd.h>
 
 #include <algorithm>
@@ -23,22 +23,10 @@ using nlohmann::json;
 
 namespace {
 
-struct CliRun {
-    int exitCode = -1;
-    std::string out, err;
-};
-
-std::string readFile(const fs::path& path)
-{
-    std::ifstream in(path, std::ios::binary);
-    std::ostringstream text;
-    text << in.rdbuf();
-    return text.str();
-}
-
-std::string quoted(const fs::path& path) { return "'" + path.string() + "'"; }
-
-bool contains(const std::string& text, const std::string& part) { return text.find(part) != std::string::npos; }
+using clevis::test::CliRun;
+using clevis::test::contains;
+using clevis::test::quoted;
+using clevis::test::readFile;
 
 // A crank–rocker four-bar that analyses cleanly: ground pivots O (0, 0) and
 // C (0.4, 0), crank O→A 0.1 m, coupler A→B, rocker C→B.
@@ -81,15 +69,7 @@ protected:
 
     CliRun run(const std::string& args, const std::string& stdinFrom = "/dev/null")
     {
-        const fs::path out = dir_ / "stdout.txt", err = dir_ / "stderr.txt";
-        const std::string command = std::string("'") + CLEVIS_CLI_PATH + "' " + args + " <" + stdinFrom + " >" +
-                                    quoted(out) + " 2>" + quoted(err);
-        const int status = std::system(command.c_str());
-        CliRun r;
-        r.exitCode = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
-        r.out = readFile(out);
-        r.err = readFile(err);
-        return r;
+        return clevis::test::runCli(dir_, args, stdinFrom);
     }
 
     // Runs `analyze` on `text`; expects exit 1, no summary, and stderr naming

@@ -1,9 +1,10 @@
 // clevis-cli as a user runs it: the built binary on mechanism files written
 // to a scratch directory, checked for exit codes, messages and output files.
+#include "cli_runner.h"
+
 #include <gtest/gtest.h>
 #include <nlohmann/json.hpp>
 
-#include <sys/wait.h>
 #include <unistd.h>
 
 #include <cmath>
@@ -17,20 +18,10 @@ namespace fs = std::filesystem;
 
 namespace {
 
-struct CliRun {
-    int exitCode = -1;
-    std::string out, err;
-};
-
-std::string readFile(const fs::path& path)
-{
-    std::ifstream in(path, std::ios::binary);
-    std::ostringstream text;
-    text << in.rdbuf();
-    return text.str();
-}
-
-std::string quoted(const fs::path& path) { return "'" + path.string() + "'"; }
+using clevis::test::CliRun;
+using clevis::test::contains;
+using clevis::test::quoted;
+using clevis::test::readFile;
 
 // A slider-crank press, drawn at the crank's dead centre: crank O→A 0.1 m,
 // rod A→B 0.35 m (a steel bar), ram sliding along +x. "colour" is a key the
@@ -70,23 +61,10 @@ protected:
         return path;
     }
 
-    CliRun run(const std::string& args)
-    {
-        const fs::path out = dir_ / "stdout.txt", err = dir_ / "stderr.txt";
-        const std::string command =
-            std::string("'") + CLEVIS_CLI_PATH + "' " + args + " >" + quoted(out) + " 2>" + quoted(err);
-        const int status = std::system(command.c_str());
-        CliRun r;
-        r.exitCode = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
-        r.out = readFile(out);
-        r.err = readFile(err);
-        return r;
-    }
+    CliRun run(const std::string& args) { return clevis::test::runCli(dir_, args); }
 
     fs::path dir_;
 };
-
-bool contains(const std::string& text, const std::string& part) { return text.find(part) != std::string::npos; }
 
 TEST_F(CliTest, AnalyzePrintsASummaryWithUnits)
 {

@@ -1,0 +1,48 @@
+// Running the built clevis-cli as a user would, for the tests that check its
+// exit codes, messages and output files. CLEVIS_CLI_PATH is set by CMake.
+#pragma once
+
+#include <sys/wait.h>
+
+#include <cstdlib>
+#include <filesystem>
+#include <fstream>
+#include <sstream>
+#include <string>
+
+namespace clevis::test {
+
+struct CliRun {
+    int exitCode = -1;
+    std::string out, err;
+};
+
+inline std::string readFile(const std::filesystem::path& path)
+{
+    std::ifstream in(path, std::ios::binary);
+    std::ostringstream text;
+    text << in.rdbuf();
+    return text.str();
+}
+
+inline std::string quoted(const std::filesystem::path& path) { return "'" + path.string() + "'"; }
+
+inline bool contains(const std::string& text, const std::string& part) { return text.find(part) != std::string::npos; }
+
+// Runs `clevis-cli ARGS` with stdin from `stdinFrom`, keeping its stdout and
+// stderr in files under `scratch`.
+inline CliRun runCli(const std::filesystem::path& scratch, const std::string& args,
+                     const std::string& stdinFrom = "/dev/null")
+{
+    const std::filesystem::path out = scratch / "stdout.txt", err = scratch / "stderr.txt";
+    const std::string command = std::string("'") + CLEVIS_CLI_PATH + "' " + args + " <" + stdinFrom + " >" +
+                                quoted(out) + " 2>" + quoted(err);
+    const int status = std::system(command.c_str());
+    CliRun r;
+    r.exitCode = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
+    r.out = readFile(out);
+    r.err = readFile(err);
+    return r;
+}
+
+}  // namespace clevis::test
