@@ -1,7 +1,9 @@
 // clevis-bench: the time to solve a full 360-step cycle of the bundled flap
 // folder (a four-bar) and of generated four-bar chains of 10, 50 and 200
 // bodies, with the CPU time per step as the counter `time_per_step` (shown
-// with its unit, e.g. 3.4us; in seconds in JSON output). The mobility check
+// with its unit, e.g. 3.4us; in seconds in JSON output). Fans of four-bars
+// round one driven hub, whose Jacobian has no narrow band, time the sparse
+// LU path against the band path (jacobian_factor.h). The mobility check
 // that starts every cycle is also timed on its own, since its dense rank
 // tests grow with the cube of the size.
 #include "chain_generator.h"
@@ -47,6 +49,13 @@ void FourBarChainCycle(benchmark::State& state)
     timeCycle(state, m);
 }
 BENCHMARK(FourBarChainCycle)->ArgName("bodies")->Arg(10)->Arg(50)->Arg(200)->Unit(benchmark::kMillisecond);
+
+void FourBarFanCycle(benchmark::State& state)
+{
+    const clevis::CompiledMechanism m = clevis::compile(clevis::test::fourBarFan(int(state.range(0))));
+    timeCycle(state, m);
+}
+BENCHMARK(FourBarFanCycle)->ArgName("loops")->Arg(5)->Arg(14)->Arg(40)->Unit(benchmark::kMillisecond);
 
 void FourBarChainMobilityCheck(benchmark::State& state)
 {

@@ -1,7 +1,7 @@
 // The whole cycle: check mobility, assemble at t = 0 from the drawn pose,
 // then step through time, each step starting Newton from the previous pose
-// extrapolated with its velocity and acceleration, so the assembly branch the
-// user drew is kept.
+// extrapolated with its velocity, acceleration and change of acceleration,
+// so the assembly branch the user drew is kept.
 #pragma once
 
 #include "results.h"

@@ -6,72 +6,115 @@
 namespace clevis {
 
 JacobianFactor::JacobianFactor(const Eigen::VectorXd& rowScale, const Eigen::VectorXd& columnScale)
-    : rowScale_(rowScale), columnScale_(columnScale), dense_(columnScale.size() <= kDenseLimit)
+    : rowScale_(rowScale), columnScale_(columnScale)
 {
 }
 
 bool JacobianFactor::factor(int size, const std::vector<Eigen::Triplet<double>>& entries)
 {
     columnSums_.setZero(size);
-    if (dense_) {
-        denseMatrix_.setZero(size, size);
-        for (const auto& e : entries) denseMatrix_(e.row(), e.col()) += e.value();
-        columnSums_ = denseMatrix_.cwiseAbs().colwise().sum();
-        if (!denseLu_.compute(denseMatrix_) || !(denseLu_.minPivot() > 1e-14 * denseLu_.maxPivot())) return false;
-    } else {
-        fillSparse(size, entries);
-        for (int k = 0; k < sparseMatrix_.outerSize(); ++k)
-            for (Eigen::SparseMatrix<double>::InnerIterator it(sparseMatrix_, k); it; ++it)
-                columnSums_[it.col()] += std::abs(it.value());
-        sparseLu_.factorize(sparseMatrix_);
-        if (sparseLu_.info() != Eigen::Success) return false;
-    }
+    if (!samePattern(size, entries)) learnPattern(size, entries);
+    if (!(method_ == Method::Band ? factorBand(entries) : factorSparse(entries))) return false;
     norm1_ = size ? columnSums_.maxCoeff() : 0.0;
     return std::isfinite(norm1_);
 }
 
-// The constraints write the same entries in the same order at every pose, so
-// after the first assembly each entry's place among the stored nonzeros is
-// known and the values are written straight there; a different pattern
-// (another size or order) is assembled and analysed afresh.
-void JacobianFactor::fillSparse(int size, const std::vector<Eigen::Triplet<double>>& entries)
+bool JacobianFactor::factorBand(const std::vector<Eigen::Triplet<double>>& entries)
 {
-    if (!samePattern(size, entries)) {
-        sparseMatrix_.resize(size, size);
-        sparseMatrix_.setFromTriplets(entries.begin(), entries.end());
-        sparseMatrix_.makeCompressed();
-        pattern_.clear();
-        for (const auto& e : entries) {
-            const int* begin = sparseMatrix_.innerIndexPtr() + sparseMatrix_.outerIndexPtr()[e.col()];
-            const int* end = sparseMatrix_.innerIndexPtr() + sparseMatrix_.outerIndexPtr()[e.col() + 1];
-            pattern_.push_back({e.row(), e.col(), int(std::lower_bound(begin, end, e.row()) - sparseMatrix_.innerIndexPtr())});
-        }
-        sparseLu_.analyzePattern(sparseMatrix_);
-        return;
+    bandLu_.setZero();
+    double* values = bandLu_.values();
+    for (std::size_t i = 0; i < entries.size(); ++i) values[pattern_[i].slot] += entries[i].value();
+    const int n = bandLu_.size();
+    for (int k = 0; k < n; ++k) {
+        double sum = 0.0;
+        for (int i = std::max(0, k - bandLu_.upper()); i <= std::min(n - 1, k + bandLu_.lower()); ++i)
+            sum += std::abs(values[bandLu_.slot(i, k)]);
+        columnSums_[order_.columnAt[k]] = sum;
     }
+    return bandLu_.factor() && bandLu_.minPivot() > 1e-14 * bandLu_.maxPivot();
+}
+
+bool JacobianFactor::factorSparse(const std::vector<Eigen::Triplet<double>>& entries)
+{
     double* values = sparseMatrix_.valuePtr();
     std::fill(values, values + sparseMatrix_.nonZeros(), 0.0);
     for (std::size_t i = 0; i < entries.size(); ++i) values[pattern_[i].slot] += entries[i].value();
+    for (int k = 0; k < sparseMatrix_.outerSize(); ++k)
+        for (Eigen::SparseMatrix<double>::InnerIterator it(sparseMatrix_, k); it; ++it)
+            columnSums_[it.col()] += std::abs(it.value());
+    sparseLu_.factorize(sparseMatrix_);
+    return sparseLu_.info() == Eigen::Success;
+}
+
+// The constraints write the same entries in the same order at every pose, so
+// the band order, the choice between band and sparse LU and each entry's
+// place among the stored values are worked out when a pattern is first seen
+// (or changes: another size or order), and the values are then written
+// straight to their places.
+void JacobianFactor::learnPattern(int size, const std::vector<Eigen::Triplet<double>>& entries)
+{
+    std::vector<std::pair<int, int>> positions;
+    positions.reserve(entries.size());
+    for (const auto& e : entries) positions.emplace_back(e.row(), e.col());
+    order_ = orderIntoBand(size, positions);
+    method_ = order_.lower * (order_.lower + order_.upper + 1) <= kBandWorkLimit ? Method::Band : Method::Sparse;
+    patternSize_ = size;
+    pattern_.clear();
+    if (method_ == Method::Band) {
+        bandLu_.reshape(size, order_.lower, order_.upper);
+        for (const auto& e : entries)
+            pattern_.push_back({e.row(), e.col(), bandLu_.slot(order_.rowPlace[e.row()], order_.columnPlace[e.col()])});
+        return;
+    }
+    sparseMatrix_.resize(size, size);
+    sparseMatrix_.setFromTriplets(entries.begin(), entries.end());
+    sparseMatrix_.makeCompressed();
+    for (const auto& e : entries) {
+        const int* begin = sparseMatrix_.innerIndexPtr() + sparseMatrix_.outerIndexPtr()[e.col()];
+        const int* end = sparseMatrix_.innerIndexPtr() + sparseMatrix_.outerIndexPtr()[e.col() + 1];
+        pattern_.push_back({e.row(), e.col(), int(std::lower_bound(begin, end, e.row()) - sparseMatrix_.innerIndexPtr())});
+    }
+    sparseLu_.analyzePattern(sparseMatrix_);
 }
 
 bool JacobianFactor::samePattern(int size, const std::vector<Eigen::Triplet<double>>& entries) const
 {
-    if (sparseMatrix_.rows() != size || pattern_.size() != entries.size()) return false;
+    if (patternSize_ != size || pattern_.size() != entries.size()) return false;
     for (std::size_t i = 0; i < entries.size(); ++i)
         if (pattern_[i].row != entries[i].row() || pattern_[i].col != entries[i].col()) return false;
     return true;
 }
 
+// In band order the system reads B y = b′ with B(i, k) = J̃(rowAt[i], columnAt[k]),
+// b′_i = b_rowAt[i] and x_columnAt[k] = y_k; transposed, rows and columns trade places.
 void JacobianFactor::solveScaledInPlace(Eigen::VectorXd& b) const
 {
-    if (dense_) denseLu_.solveInPlace(b);
-    else b = sparseLu_.solve(b);
+    switch (method_) {
+    case Method::Band:
+        permuted_.resize(b.size());
+        for (Eigen::Index i = 0; i < b.size(); ++i) permuted_[i] = b[order_.rowAt[i]];
+        bandLu_.solveInPlace(permuted_.data());
+        for (Eigen::Index k = 0; k < b.size(); ++k) b[order_.columnAt[k]] = permuted_[k];
+        return;
+    case Method::Sparse:
+        b = sparseLu_.solve(b);
+        return;
+    }
 }
 
 void JacobianFactor::solveScaledTransposedInPlace(Eigen::VectorXd& b) const
 {
-    if (dense_) denseLu_.solveTransposedInPlace(b);
-    else b = sparseLu_.transpose().solve(b);
+    switch (method_) {
+    case Method::Band:
+        permuted_.resize(b.size());
+        for (Eigen::Index k = 0; k < b.size(); ++k) permuted_[k] = b[order_.columnAt[k]];
+        bandLu_.solveTransposedInPlace(permuted_.data());
+        for (Eigen::Index i = 0; i < b.size(); ++i) b[order_.rowAt[i]] = permuted_[i];
+        return;
+    case Method::Sparse:
+        b = sparseLu_.transpose().solve(b);
+        return;
+    }
 }
 
 // Φ_q = D_r⁻¹ J̃ D_c⁻¹, so Φ_q x = b gives x = D_c J̃⁻¹ (D_r b) ...
@@ -100,7 +143,11 @@ Eigen::VectorXd JacobianFactor::solveTransposed(const Eigen::VectorXd& f) const
 
 int JacobianFactor::determinantSign() const
 {
-    return dense_ ? denseLu_.determinantSign() : int(sparseLu_.signDeterminant());
+    switch (method_) {
+    case Method::Band: return bandLu_.determinantSign() * order_.sign;
+    case Method::Sparse: return int(sparseLu_.signDeterminant());
+    }
+    return 0;
 }
 
 // Estimate of ‖J̃⁻¹‖₁ by Hager's method as refined by Higham (the estimator

@@ -1,12 +1,17 @@
 // LU factorisation of the square, scaled constraint Jacobian J̃, with solves
 // of Φ_q x = b and Φ_qᵀ y = f in the original units (see constraint_system.h).
 //
-// Small systems use a dense partial-pivoting LU (small_lu.h), which measures faster there;
-// larger ones a sparse LU whose pattern is analysed once, so the cost per step
-// grows about linearly with the number of bodies.
+// Two ways, chosen once per pattern of nonzeros:
+// - a band LU (band_lu.h) after a bandwidth-reducing order (band_ordering.h)
+//   when the rows and columns gather into a narrow band, as the Jacobian of
+//   a chain of links does, so the cost per step grows linearly with the
+//   number of bodies. Everyday linkages of a few bodies take this path too:
+//   there it measured as fast as a dense LU (clevis-bench);
+// - otherwise (many bodies tied to one, say) Eigen's sparse LU.
 #pragma once
 
-#include "small_lu.h"
+#include "band_lu.h"
+#include "band_ordering.h"
 
 #include <Eigen/Dense>
 #include <Eigen/SparseCore>
@@ -17,13 +22,18 @@ namespace clevis {
 
 class JacobianFactor {
 public:
-    // Systems up to this many coordinates take the dense path.
-    static constexpr int kDenseLimit = 60;
+    enum class Method { Band, Sparse };
+
+    // The band path is taken while its elimination work per column,
+    // kl·(kl + ku + 1) multiply-adds, stays under this: on clevis-bench's fan
+    // of four-bars the two paths cost the same at 14 loops (kl = 29, ku = 26).
+    static constexpr int kBandWorkLimit = 1500;
 
     JacobianFactor(const Eigen::VectorXd& rowScale, const Eigen::VectorXd& columnScale);
 
     // False when the factorisation breaks down (a numerically singular matrix).
     bool factor(int size, const std::vector<Eigen::Triplet<double>>& scaledEntries);
+    Method method() const { return method_; }
 
     Eigen::VectorXd solve(const Eigen::VectorXd& b) const;            // x with Φ_q x = b
     Eigen::VectorXd solveTransposed(const Eigen::VectorXd& f) const;  // y with Φ_qᵀ y = f
@@ -38,26 +48,30 @@ public:
     int determinantSign() const;
 
 private:
+    bool factorBand(const std::vector<Eigen::Triplet<double>>& entries);
+    bool factorSparse(const std::vector<Eigen::Triplet<double>>& entries);
+    void learnPattern(int size, const std::vector<Eigen::Triplet<double>>& entries);
+    bool samePattern(int size, const std::vector<Eigen::Triplet<double>>& entries) const;
     void solveScaledInPlace(Eigen::VectorXd& b) const;
     void solveScaledTransposedInPlace(Eigen::VectorXd& b) const;
-    void fillSparse(int size, const std::vector<Eigen::Triplet<double>>& entries);
-    bool samePattern(int size, const std::vector<Eigen::Triplet<double>>& entries) const;
 
-    // Where each written entry lands among the sparse matrix's nonzeros.
+    // Where each written entry lands among the band's or the sparse matrix's values.
     struct EntrySlot {
         int row, col, slot;
     };
 
     Eigen::VectorXd rowScale_, columnScale_;
-    bool dense_ = true;
+    Method method_ = Method::Band;
     double norm1_ = 0.0;
     Eigen::Index worstColumn_ = -1;          // of the last condition estimate
     Eigen::VectorXd columnSums_, x_, y_, z_;  // scratch, kept to avoid allocations
-    SmallLu denseLu_;
-    Eigen::MatrixXd denseMatrix_;
+    int patternSize_ = -1;
+    std::vector<EntrySlot> pattern_;
+    BandOrdering order_;
+    BandLu bandLu_;
+    mutable Eigen::VectorXd permuted_;  // the band solves' right-hand side, in band order
     mutable Eigen::SparseLU<Eigen::SparseMatrix<double>, Eigen::COLAMDOrdering<int>> sparseLu_;
     Eigen::SparseMatrix<double> sparseMatrix_;
-    std::vector<EntrySlot> pattern_;
 };
 
 }  // namespace clevis

@@ -13,6 +13,9 @@ namespace {
 constexpr int kMaxNewtonIterations = 30;
 // A step with a kept (older) Jacobian must cut the residual at least this much.
 constexpr double kChordContraction = 0.1;
+// A residual this far inside the tolerance needs no further chord step (at a
+// tenth, the hand-method check of the four-bar missed 1e-12 rad).
+constexpr double kWellInside = 0.01;
 
 // The two bodies a constraint acts on and, for each, the point through which
 // its force is reported: for both bodies the second body's joint point (where
@@ -97,9 +100,10 @@ bool StepSolver::assemble(double t, VectorXd& q)
 }
 
 // Chord steps converge linearly, so when the residual reaches the tolerance
-// after one of them, one more is taken, which leaves the pose well inside
-// it; after a true Newton step the pose is already far inside, and near a
-// singular position another step would only add noise.
+// after one of them, one more is taken (unless it is already well inside),
+// which keeps the closed-form and hand-method checks at 1e-12; after a true
+// Newton step the pose is already far inside, and near a singular position
+// another step would only add noise.
 bool StepSolver::newton(double t, VectorXd& q)
 {
     const int n = system_.coordinates();
@@ -110,7 +114,7 @@ bool StepSolver::newton(double t, VectorXd& q)
         const double r = phi_.cwiseProduct(system_.rowScale()).cwiseAbs().maxCoeff();
         if (!std::isfinite(r) || r > 1e3 * m_.lengthScale) return false;
         const bool converged = r <= tolerance_;
-        if (converged && iteration > 0 && !chord) return true;
+        if (converged && iteration > 0 && (!chord || r <= kWellInside * tolerance_)) return true;
         if (!keepFactor_ || (!converged && r > kChordContraction * previous)) {
             keepFactor_ = factor_.factor(n, entries_);
             if (!keepFactor_) return false;

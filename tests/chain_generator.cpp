@@ -2,6 +2,7 @@
 
 #include "mechanism_builders.h"
 
+#include <cmath>
 #include <stdexcept>
 #include <string>
 
@@ -66,6 +67,30 @@ Mechanism fourBarChain(int bodies)
         m.joints.push_back(pin(numbered("G", k), kGroundName, "lever", pivot(k)));
         const Vec2 slot = drivePoint - pivot(k);
         m.joints.push_back(pinInSlot("S", "lever", previous, drivePoint, radToDeg(std::atan2(slot.y(), slot.x()))));
+    }
+    return m;
+}
+
+// Loop i, at θ = 2πi/loops: hub point 0.04 m out along θ, rocker pivot 0.3 m
+// out, rocker 0.1 m long pointing 90° round from θ; coupler ≈ 0.279 m.
+// Grashof: 0.04 + 0.3 < 0.279 + 0.1, so the hub turns fully.
+Mechanism fourBarFan(int loops)
+{
+    if (loops < 1) throw std::invalid_argument("a four-bar fan needs at least 1 loop");
+    Mechanism m;
+    m.name = numbered("four-bar fan of ", loops) + " loops";
+    m.bodies.push_back(pointBody("hub", 0.5, Vec2::Zero(), 1e-3));
+    m.joints.push_back(pin("O", kGroundName, "hub", Vec2::Zero()));
+    m.drivers.push_back(rotary("motor", "O", ConstantSpeed{2.0 * kPi, 0.0}));
+    for (int i = 0; i < loops; ++i) {
+        const double theta = 2.0 * kPi * i / loops;
+        const Vec2 radial(std::cos(theta), std::sin(theta)), round(-std::sin(theta), std::cos(theta));
+        const std::string coupler = numbered("coupler", i), rocker = numbered("rocker", i);
+        m.bodies.push_back(steelBar(coupler));
+        m.bodies.push_back(steelBar(rocker));
+        m.joints.push_back(pin(numbered("H", i), "hub", coupler, kCrank * radial));
+        m.joints.push_back(pin(numbered("R", i), coupler, rocker, kPitch * radial + kArm * round));
+        m.joints.push_back(pin(numbered("P", i), kGroundName, rocker, kPitch * radial));
     }
     return m;
 }

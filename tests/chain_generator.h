@@ -13,4 +13,10 @@ namespace clevis::test {
 // lever. Links are steel bars; gravity acts.
 Mechanism fourBarChain(int bodies);
 
+// A 1-DOF mechanism of 2·loops + 1 moving bodies: a hub driven at 60 rpm on a
+// ground pin swings `loops` rockers, pinned to ground on a circle round it,
+// each through its own coupler (every loop a crank-rocker four-bar). The hub
+// is tied to every loop, so its Jacobian gathers into no narrow band.
+Mechanism fourBarFan(int loops);
+
 }  // namespace clevis::test
