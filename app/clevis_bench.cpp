@@ -7,6 +7,7 @@
 // that starts every cycle is also timed on its own, since its dense rank
 // tests grow with the cube of the size.
 #include "chain_generator.h"
+#include "heap_reuse.h"
 #include "cycle_sweep.h"
 #include "mechanism_file.h"
 #include "mobility_check.h"
@@ -74,4 +75,13 @@ BENCHMARK(FourBarChainMobilityCheck)->ArgName("bodies")->Arg(10)->Arg(50)->Arg(2
 
 }  // namespace
 
-BENCHMARK_MAIN();
+// BENCHMARK_MAIN(), with the allocator set as in clevis and clevis-cli.
+int main(int argc, char** argv)
+{
+    clevis::app::keepFreedHeapForReuse();
+    benchmark::Initialize(&argc, argv);
+    if (benchmark::ReportUnrecognizedArguments(argc, argv)) return 1;
+    benchmark::RunSpecifiedBenchmarks();
+    benchmark::Shutdown();
+    return 0;
+}

@@ -1,6 +1,7 @@
 // clevis-cli: the analysis without the GUI, for scripts and batch runs.
 #include "analyze_command.h"
 #include "cli_options.h"
+#include "heap_reuse.h"
 #ifdef CLEVIS_HAS_RENDER
 #include "cli_render_commands.h"
 #endif
@@ -23,6 +24,7 @@ int run(const clevis::cli::Command& command)
 int main(int argc, char** argv)
 {
     using namespace clevis::cli;
+    clevis::app::keepFreedHeapForReuse();
 #ifdef CLEVIS_HAS_RENDER
     // The drawing commands parse their own options (they need Qt's renderer).
     const std::string first = argc > 1 ? argv[1] : "";
