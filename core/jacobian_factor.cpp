@@ -87,34 +87,37 @@ bool JacobianFactor::samePattern(int size, const std::vector<Eigen::Triplet<doub
 
 // In band order the system reads B y = b′ with B(i, k) = J̃(rowAt[i], columnAt[k]),
 // b′_i = b_rowAt[i] and x_columnAt[k] = y_k; transposed, rows and columns trade places.
+void JacobianFactor::gather(const Eigen::VectorXd& b, const std::vector<int>& at) const
+{
+    permuted_.resize(b.size());
+    for (Eigen::Index i = 0; i < b.size(); ++i) permuted_[i] = b[at[i]];
+}
+
+void JacobianFactor::scatter(Eigen::VectorXd& b, const std::vector<int>& at) const
+{
+    for (Eigen::Index i = 0; i < b.size(); ++i) b[at[i]] = permuted_[i];
+}
+
 void JacobianFactor::solveScaledInPlace(Eigen::VectorXd& b) const
 {
-    switch (method_) {
-    case Method::Band:
-        permuted_.resize(b.size());
-        for (Eigen::Index i = 0; i < b.size(); ++i) permuted_[i] = b[order_.rowAt[i]];
-        bandLu_.solveInPlace(permuted_.data());
-        for (Eigen::Index k = 0; k < b.size(); ++k) b[order_.columnAt[k]] = permuted_[k];
-        return;
-    case Method::Sparse:
+    if (method_ == Method::Sparse) {
         b = sparseLu_.solve(b);
         return;
     }
+    gather(b, order_.rowAt);
+    bandLu_.solveInPlace(permuted_.data());
+    scatter(b, order_.columnAt);
 }
 
 void JacobianFactor::solveScaledTransposedInPlace(Eigen::VectorXd& b) const
 {
-    switch (method_) {
-    case Method::Band:
-        permuted_.resize(b.size());
-        for (Eigen::Index k = 0; k < b.size(); ++k) permuted_[k] = b[order_.columnAt[k]];
-        bandLu_.solveTransposedInPlace(permuted_.data());
-        for (Eigen::Index i = 0; i < b.size(); ++i) b[order_.rowAt[i]] = permuted_[i];
-        return;
-    case Method::Sparse:
+    if (method_ == Method::Sparse) {
         b = sparseLu_.transpose().solve(b);
         return;
     }
+    gather(b, order_.columnAt);
+    bandLu_.solveTransposedInPlace(permuted_.data());
+    scatter(b, order_.rowAt);
 }
 
 // Φ_q = D_r⁻¹ J̃ D_c⁻¹, so Φ_q x = b gives x = D_c J̃⁻¹ (D_r b) ...
@@ -143,11 +146,7 @@ Eigen::VectorXd JacobianFactor::solveTransposed(const Eigen::VectorXd& f) const
 
 int JacobianFactor::determinantSign() const
 {
-    switch (method_) {
-    case Method::Band: return bandLu_.determinantSign() * order_.sign;
-    case Method::Sparse: return int(sparseLu_.signDeterminant());
-    }
-    return 0;
+    return method_ == Method::Band ? bandLu_.determinantSign() * order_.sign : int(sparseLu_.signDeterminant());
 }
 
 // Estimate of ‖J̃⁻¹‖₁ by Hager's method as refined by Higham (the estimator

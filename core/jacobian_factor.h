@@ -6,7 +6,7 @@
 //   when the rows and columns gather into a narrow band, as the Jacobian of
 //   a chain of links does, so the cost per step grows linearly with the
 //   number of bodies. Everyday linkages of a few bodies take this path too:
-//   there it measured as fast as a dense LU (clevis-bench);
+//   a dense LU measured no faster there (flap folder, 10-body chain);
 // - otherwise (many bodies tied to one, say) Eigen's sparse LU.
 #pragma once
 
@@ -54,6 +54,8 @@ private:
     bool samePattern(int size, const std::vector<Eigen::Triplet<double>>& entries) const;
     void solveScaledInPlace(Eigen::VectorXd& b) const;
     void solveScaledTransposedInPlace(Eigen::VectorXd& b) const;
+    void gather(const Eigen::VectorXd& b, const std::vector<int>& at) const;  // permuted_[i] = b[at[i]]
+    void scatter(Eigen::VectorXd& b, const std::vector<int>& at) const;       // b[at[i]] = permuted_[i]
 
     // Where each written entry lands among the band's or the sparse matrix's values.
     struct EntrySlot {
