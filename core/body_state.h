@@ -46,10 +46,15 @@ inline Vec2 pointVelocity(const VectorXd& q, const VectorXd& qd, const BodyPoint
 class Pose {
 public:
     Pose(const VectorXd& q)  // implicit: any q can be read as a pose
-        : q_(q), rotations_(q.size() / 3)
+        : q_(q), rotations_(fillRotations(q, own_))
     {
-        for (std::size_t b = 0; b < rotations_.size(); ++b) rotations_[b] = rotation(q[3 * b + 2]);
     }
+    // The same with the rotations kept in `storage`, which a solver keeps
+    // between poses so that evaluating one allocates nothing.
+    Pose(const VectorXd& q, std::vector<Eigen::Matrix2d>& storage) : q_(q), rotations_(fillRotations(q, storage)) {}
+    Pose(const Pose&) = delete;
+    Pose& operator=(const Pose&) = delete;
+
     const VectorXd& q() const { return q_; }
     double angle(int body) const { return bodyAngle(q_, body); }
     Vec2 origin(int body) const { return bodyOrigin(q_, body); }
@@ -67,8 +72,16 @@ public:
     }
 
 private:
+    static const Eigen::Matrix2d* fillRotations(const VectorXd& q, std::vector<Eigen::Matrix2d>& r)
+    {
+        r.resize(std::size_t(q.size() / 3));
+        for (std::size_t b = 0; b < r.size(); ++b) r[b] = rotation(q[Eigen::Index(3 * b + 2)]);
+        return r.data();
+    }
+
     const VectorXd& q_;
-    std::vector<Eigen::Matrix2d> rotations_;
+    std::vector<Eigen::Matrix2d> own_;    // unless the caller keeps them
+    const Eigen::Matrix2d* rotations_;
 };
 
 }  // namespace clevis

@@ -18,15 +18,15 @@ constexpr int kMaxBisections = 8;
 // body's size, or in radians) suggests Newton jumped to another assembly branch.
 constexpr double kJumpFraction = 0.05;
 
-// The largest move of any body, as a fraction of its own size L_b: the φ
-// entries of the column scale hold 1/L_b (constraint_system.h).
-double largestRelativeMove(const Eigen::VectorXd& delta, const Eigen::VectorXd& columnScale)
+// The largest move of any body from `from` to `to`, as a fraction of its own
+// size L_b: the φ entries of the column scale hold 1/L_b (constraint_system.h).
+double largestRelativeMove(const Eigen::VectorXd& from, const Eigen::VectorXd& to, const Eigen::VectorXd& columnScale)
 {
     double largest = 0.0;
-    for (Eigen::Index b = 0; 3 * b < delta.size(); ++b) {
+    for (Eigen::Index b = 0; 3 * b < to.size(); ++b) {
         const double inverseSize = columnScale[3 * b + 2];
-        largest = std::max({largest, std::abs(delta[3 * b]) * inverseSize, std::abs(delta[3 * b + 1]) * inverseSize,
-                            std::abs(delta[3 * b + 2])});
+        largest = std::max({largest, std::abs(to[3 * b] - from[3 * b]) * inverseSize,
+                            std::abs(to[3 * b + 1] - from[3 * b + 1]) * inverseSize, std::abs(to[3 * b + 2] - from[3 * b + 2])});
     }
     return largest;
 }
@@ -116,7 +116,7 @@ bool Sweeper::advance(const StepResult& from, double t, StepResult& to, int dept
     const double h = t - from.t;
     Eigen::VectorXd q = guess;
     const bool converged = solver_.assemble(t, q);
-    const bool suspicious = converged && largestRelativeMove(q - guess, solver_.system().columnScale()) > kJumpFraction;
+    const bool suspicious = converged && largestRelativeMove(guess, q, solver_.system().columnScale()) > kJumpFraction;
     if (converged && (!suspicious || depth >= kMaxBisections)) {
         to = solver_.analyse(t, q);
         if (suspicious && !branchWarned_) {

@@ -72,7 +72,7 @@ void StepSolver::evaluate(const Pose& q, double t)
 bool StepSolver::regularAt(const VectorXd& q, double t)
 {
     if (system_.rows() != system_.coordinates()) return false;
-    evaluate(q, t);
+    evaluate(Pose(q, rotations_), t);
     return factor_.factor(system_.coordinates(), entries_) && factor_.reciprocalCondition() >= nearSingular_;
 }
 
@@ -110,7 +110,7 @@ bool StepSolver::newton(double t, VectorXd& q)
     double previous = std::numeric_limits<double>::infinity();
     bool chord = keepFactor_;
     for (int iteration = 0; iteration < kMaxNewtonIterations; ++iteration) {
-        evaluate(q, t);
+        evaluate(Pose(q, rotations_), t);
         const double r = phi_.cwiseProduct(system_.rowScale()).cwiseAbs().maxCoeff();
         if (!std::isfinite(r) || r > 1e3 * m_.lengthScale) return false;
         const bool converged = r <= tolerance_;
@@ -141,7 +141,7 @@ StepResult StepSolver::analyse(double t, const VectorXd& q)
         r.drivePosition.push_back(s.position);
         r.driveRate.push_back(s.rate);
     }
-    const Pose pose(q);
+    const Pose pose(q, rotations_);
     if (!(t == entriesTime_ && q == entriesPose_)) evaluate(pose, t);
     const bool factored = factor_.factor(n, entries_);
     r.reciprocalCondition = factored ? factor_.reciprocalCondition() : 0.0;
