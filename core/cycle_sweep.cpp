@@ -90,10 +90,10 @@ void Sweeper::assembleDrawnPose(Eigen::VectorXd& q)
 // The pose at t from Taylor's series about `from` to third order, the jerk
 // taken from the change of acceleration since the step before (which puts
 // the first Newton residual about thirty times lower than second order does
-// on the flap folder); at a near-singular pose
-// its velocities and accelerations are unreliable (Φ_q hardly determines
-// them), so the secant through the step before is followed instead, which
-// keeps the drawn branch through a change point.
+// on the flap folder). At a near-singular pose velocities and accelerations
+// are unreliable (Φ_q hardly determines them): from one, the secant through
+// the step before is followed instead, which keeps the drawn branch through
+// a change point; after one, the jerk is left out.
 Eigen::VectorXd Sweeper::predict(const StepResult& from, double t) const
 {
     const double h = t - from.t;
@@ -104,7 +104,8 @@ Eigen::VectorXd Sweeper::predict(const StepResult& from, double t) const
     if (from.nearSingular && before && before->t < from.t)
         return from.q + (h / (from.t - before->t)) * (from.q - before->q);
     Eigen::VectorXd q = from.q + h * from.qd + 0.5 * h * h * from.qdd;
-    if (before && before->t < from.t) q += (h * h * h / (6.0 * (from.t - before->t))) * (from.qdd - before->qdd);
+    if (before && before->t < from.t && !before->nearSingular)
+        q += (h * h * h / (6.0 * (from.t - before->t))) * (from.qdd - before->qdd);
     return q;
 }
 

@@ -64,7 +64,7 @@ private:
     JacobianFactor factor_;
     std::vector<Eigen::Triplet<double>> entries_;
     VectorXd phi_, nu_, gamma_, zeroRates_;  // scratch, kept to avoid allocations
-    std::vector<Eigen::Matrix2d> rotations_;  // of the pose being evaluated
+    std::vector<Eigen::Matrix2d> rotations_;  // of the one Pose alive at a time (evaluate, analyse)
     VectorXd entriesPose_;                    // where entries_ were taken
     double entriesTime_ = std::numeric_limits<double>::quiet_NaN();
     bool keepFactor_ = false;  // the held factorisation may start the next assembly

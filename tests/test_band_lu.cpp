@@ -16,7 +16,6 @@
 #include <gtest/gtest.h>
 
 #include <algorithm>
-#include <cctype>
 #include <numeric>
 #include <random>
 #include <string>
@@ -200,18 +199,19 @@ TEST(BandOrdering, ChainBandStaysNarrowAtAnyLength)
     }
 }
 
-// The fan with loop i alone (hub, coupler i, rocker i and their pins).
+// The fan with loop i alone: the hub and its pin O, coupler i, rocker i and
+// their pins Hi, Ri, Pi (names as in test::fourBarFan).
 Mechanism oneLoop(const Mechanism& fan, int i)
 {
-    const std::string suffix = std::to_string(i);
-    const auto ofOtherLoop = [&](const std::string& name) {
-        return name != "hub" && name != "O" && name != kGroundName &&
-               !(name.size() > suffix.size() && name.compare(name.size() - suffix.size(), suffix.size(), suffix) == 0 &&
-                 !std::isdigit(static_cast<unsigned char>(name[name.size() - suffix.size() - 1])));
+    const auto kept = [&](const std::string& name) {
+        if (name == "hub" || name == "O") return true;
+        for (const char* prefix : {"coupler", "rocker", "H", "R", "P"})
+            if (name == prefix + std::to_string(i)) return true;
+        return false;
     };
     Mechanism m = fan;
-    std::erase_if(m.bodies, [&](const Body& b) { return ofOtherLoop(b.name); });
-    std::erase_if(m.joints, [&](const Joint& j) { return ofOtherLoop(j.name); });
+    std::erase_if(m.bodies, [&](const Body& b) { return !kept(b.name); });
+    std::erase_if(m.joints, [&](const Joint& j) { return !kept(j.name); });
     return m;
 }
 
