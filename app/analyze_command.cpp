@@ -1,14 +1,14 @@
-#include "analyze_command.h"
+#include "app/analyze_command.h"
 
-#include "analysis_error.h"
-#include "atomic_file.h"
-#include "cycle_summary.h"
-#include "cycle_sweep.h"
-#include "mechanism_file.h"
-#include "model_error.h"
-#include "results_csv.h"
-#include "results_json.h"
-#include "summary_text.h"
+#include "core/solver/analysis_error.h"
+#include "core/file/atomic_file.h"
+#include "core/results/cycle_summary.h"
+#include "core/solver/cycle_sweep.h"
+#include "core/file/mechanism_file.h"
+#include "core/model/model_error.h"
+#include "core/results/results_csv.h"
+#include "core/results/results_json.h"
+#include "core/results/summary_text.h"
 
 #include <functional>
 #include <sstream>

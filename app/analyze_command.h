@@ -2,7 +2,7 @@
 // the requested result files.
 #pragma once
 
-#include "cli_options.h"
+#include "app/cli_options.h"
 
 #include <ostream>
 

@@ -6,12 +6,12 @@
 // LU path against the band path (jacobian_factor.h). The mobility check
 // that starts every cycle is also timed on its own, since its dense rank
 // tests grow with the cube of the size.
-#include "chain_generator.h"
-#include "heap_reuse.h"
-#include "cycle_sweep.h"
-#include "mechanism_file.h"
-#include "mobility_check.h"
-#include "step_solver.h"
+#include "tests/chain_generator.h"
+#include "app/heap_reuse.h"
+#include "core/solver/cycle_sweep.h"
+#include "core/file/mechanism_file.h"
+#include "core/solver/mobility_check.h"
+#include "core/solver/step_solver.h"
 
 #include <benchmark/benchmark.h>
 

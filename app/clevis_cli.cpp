@@ -1,9 +1,9 @@
 // clevis-cli: the analysis without the GUI, for scripts and batch runs.
-#include "analyze_command.h"
-#include "cli_options.h"
-#include "heap_reuse.h"
+#include "app/analyze_command.h"
+#include "app/cli_options.h"
+#include "app/heap_reuse.h"
 #ifdef CLEVIS_HAS_RENDER
-#include "cli_render_commands.h"
+#include "app/cli_render_commands.h"
 #endif
 
 #include <iostream>

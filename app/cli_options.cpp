@@ -1,6 +1,6 @@
-#include "cli_options.h"
+#include "app/cli_options.h"
 
-#include "model_limits.h"
+#include "core/model/model_limits.h"
 
 #include <charconv>
 #include <optional>

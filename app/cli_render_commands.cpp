@@ -1,13 +1,13 @@
-#include "cli_render_commands.h"
+#include "app/cli_render_commands.h"
 
-#include "analysis_error.h"
-#include "cycle_summary.h"
-#include "cycle_sweep.h"
-#include "free_body.h"
-#include "free_body_painter.h"
-#include "mechanism_file.h"
-#include "model_error.h"
-#include "review_report.h"
+#include "core/solver/analysis_error.h"
+#include "core/results/cycle_summary.h"
+#include "core/solver/cycle_sweep.h"
+#include "core/results/free_body.h"
+#include "render/free_body_painter.h"
+#include "core/file/mechanism_file.h"
+#include "core/model/model_error.h"
+#include "render/review_report.h"
 
 #include <QGuiApplication>
 

@@ -1,4 +1,4 @@
-#include "heap_reuse.h"
+#include "app/heap_reuse.h"
 
 #include <cstdlib>  // defines __GLIBC__ on glibc systems
 #if defined(__GLIBC__)

@@ -1,6 +1,6 @@
-#include "chain_generator.h"
+#include "tests/chain_generator.h"
 
-#include "mechanism_builders.h"
+#include "tests/mechanism_builders.h"
 
 #include <cmath>
 #include <stdexcept>

@@ -2,7 +2,7 @@
 // mechanisms and for checking that it still solves them.
 #pragma once
 
-#include "mechanism.h"
+#include "core/model/mechanism.h"
 
 namespace clevis::test {
 

@@ -2,7 +2,7 @@
 // geometry next to the closed form it is checked against.
 #pragma once
 
-#include "mechanism.h"
+#include "core/model/mechanism.h"
 
 namespace clevis::test {
 

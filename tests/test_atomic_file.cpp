@@ -5,7 +5,7 @@
 // path through a regular file, a folder in place of the file, a file-size
 // limit (setrlimit) that stops the write half-way, and — where the test may
 // mount file systems — a read-only and a full tmpfs.
-#include "atomic_file.h"
+#include "core/file/atomic_file.h"
 
 #include <gtest/gtest.h>
 

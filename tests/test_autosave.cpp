@@ -3,15 +3,15 @@
 // one ended without a clean exit; a clean close, a save or another document
 // leaves no recovery file; a folder that cannot be written gives one quiet
 // note; and two instances never take each other's files.
-#include "atomic_file.h"
-#include "autosave_timer.h"
-#include "file_actions.h"
-#include "main_window.h"
-#include "mechanism_document.h"
-#include "mechanism_edits.h"
-#include "mechanism_file.h"
-#include "recovery_prompt.h"
-#include "recovery_store.h"
+#include "core/file/atomic_file.h"
+#include "ui/files/autosave_timer.h"
+#include "ui/files/file_actions.h"
+#include "ui/shell/main_window.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/document/mechanism_edits.h"
+#include "core/file/mechanism_file.h"
+#include "ui/files/recovery_prompt.h"
+#include "ui/files/recovery_store.h"
 
 #include <QApplication>
 #include <QDir>

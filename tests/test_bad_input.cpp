@@ -1,8 +1,8 @@
 // Malformed and oversized mechanism files through `clevis-cli analyze`, as a
 // user meets them: each must exit with 1 and say on stderr which file and
 // which place in it is wrong — never crash, hang or print results.
-#include "cli_runner.h"
-#include "model_limits.h"
+#include "tests/cli_runner.h"
+#include "core/model/model_limits.h"
 
 #include <gtest/gtest.h>
 #include <nlohmann/json.hpp>

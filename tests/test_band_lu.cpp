@@ -3,14 +3,14 @@
 // Jacobian factorisation's two paths on generated mechanisms: a chain (band)
 // and a fan round one hub (sparse), the fan also against its loops solved
 // one at a time.
-#include "band_lu.h"
-#include "band_ordering.h"
-#include "chain_generator.h"
-#include "compiled_mechanism.h"
-#include "constraint_system.h"
-#include "cycle_sweep.h"
-#include "jacobian_factor.h"
-#include "step_solver.h"
+#include "core/solver/band_lu.h"
+#include "core/solver/band_ordering.h"
+#include "tests/chain_generator.h"
+#include "core/solver/compiled_mechanism.h"
+#include "core/solver/constraint_system.h"
+#include "core/solver/cycle_sweep.h"
+#include "core/solver/jacobian_factor.h"
+#include "core/solver/step_solver.h"
 
 #include <Eigen/Dense>
 #include <gtest/gtest.h>

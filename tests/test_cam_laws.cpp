@@ -1,7 +1,7 @@
 // Normalised rise laws against their standard definitions and the peak
 // factors of standard cam-design tables, and driver motions built on them.
-#include "cam_law.h"
-#include "driver_motion.h"
+#include "core/solver/cam_law.h"
+#include "core/solver/driver_motion.h"
 
 #include <gtest/gtest.h>
 

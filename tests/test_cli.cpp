@@ -1,6 +1,6 @@
 // clevis-cli as a user runs it: the built binary on mechanism files written
 // to a scratch directory, checked for exit codes, messages and output files.
-#include "cli_runner.h"
+#include "tests/cli_runner.h"
 
 #include <gtest/gtest.h>
 #include <nlohmann/json.hpp>

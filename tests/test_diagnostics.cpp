@@ -1,12 +1,12 @@
 // What the solver says about mechanisms it cannot analyse as drawn: too few
 // or too many drivers, redundant joints, links that cannot be joined, and
 // dead centres.
-#include "analysis_error.h"
-#include "compiled_mechanism.h"
-#include "cycle_sweep.h"
-#include "mechanism_builders.h"
-#include "mobility_check.h"
-#include "step_solver.h"
+#include "core/solver/analysis_error.h"
+#include "core/solver/compiled_mechanism.h"
+#include "core/solver/cycle_sweep.h"
+#include "tests/mechanism_builders.h"
+#include "core/solver/mobility_check.h"
+#include "core/solver/step_solver.h"
 
 #include <gtest/gtest.h>
 

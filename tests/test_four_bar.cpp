@@ -1,10 +1,10 @@
 // Four-bar linkage: rocker angle against Freudenstein's equation, transmission
 // angle against the law of cosines, and Grashof's classification, both on its
 // own and as the solver meets it (full cycle, or a stop at the toggle).
-#include "compiled_mechanism.h"
-#include "cycle_sweep.h"
-#include "grashof.h"
-#include "mechanism_builders.h"
+#include "core/solver/compiled_mechanism.h"
+#include "core/solver/cycle_sweep.h"
+#include "core/model/grashof.h"
+#include "tests/mechanism_builders.h"
 
 #include <gtest/gtest.h>
 

@@ -2,11 +2,11 @@
 // own Φ, then joints and drivers at work in small mechanisms checked against
 // closed forms: a slider's reaction moment, a piston-driven slider-crank, a
 // cylinder-driven arm, and a two-link arm with a motor at each joint.
-#include "compiled_mechanism.h"
-#include "constraint.h"
-#include "cycle_sweep.h"
-#include "driver_motion.h"
-#include "mechanism_builders.h"
+#include "core/solver/compiled_mechanism.h"
+#include "core/solver/constraints/constraint.h"
+#include "core/solver/cycle_sweep.h"
+#include "core/solver/driver_motion.h"
+#include "tests/mechanism_builders.h"
 
 #include <gtest/gtest.h>
 

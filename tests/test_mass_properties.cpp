@@ -1,9 +1,9 @@
 // Mass properties of bars and point masses against handbook formulas, and a
 // body compiled from a bar section plus point masses.
-#include "compiled_mechanism.h"
-#include "mass_properties.h"
-#include "mechanism_builders.h"
-#include "model_error.h"
+#include "core/solver/compiled_mechanism.h"
+#include "core/model/mass_properties.h"
+#include "tests/mechanism_builders.h"
+#include "core/model/model_error.h"
 
 #include <gtest/gtest.h>
 

@@ -1,7 +1,7 @@
-#include "file_units.h"
-#include "materials.h"
-#include "mechanism_file.h"
-#include "model_error.h"
+#include "core/file/file_units.h"
+#include "core/model/materials.h"
+#include "core/file/mechanism_file.h"
+#include "core/model/model_error.h"
 
 #include <gtest/gtest.h>
 

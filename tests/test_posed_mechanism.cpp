@@ -1,9 +1,9 @@
 // The mechanism drawn at a solved step: its joints sit where the closed-form
 // slider-crank kinematics put them.
-#include "compiled_mechanism.h"
-#include "cycle_sweep.h"
-#include "mechanism_builders.h"
-#include "posed_mechanism.h"
+#include "core/solver/compiled_mechanism.h"
+#include "core/solver/cycle_sweep.h"
+#include "tests/mechanism_builders.h"
+#include "core/results/posed_mechanism.h"
 
 #include <gtest/gtest.h>
 

@@ -1,13 +1,13 @@
 // Headless exports: a free-body diagram written by `clevis-cli fbd` carries
 // the solver's numbers for that body and step, and the design-review report
 // renders page by page with its sections and the summary's peak table.
-#include "cli_render_commands.h"
-#include "cycle_summary.h"
-#include "cycle_sweep.h"
-#include "free_body.h"
-#include "mechanism_file.h"
-#include "render_units.h"
-#include "review_report.h"
+#include "app/cli_render_commands.h"
+#include "core/results/cycle_summary.h"
+#include "core/solver/cycle_sweep.h"
+#include "core/results/free_body.h"
+#include "core/file/mechanism_file.h"
+#include "render/render_units.h"
+#include "render/review_report.h"
 
 #include <QDir>
 #include <QFile>

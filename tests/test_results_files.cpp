@@ -1,11 +1,11 @@
 // The JSON and CSV result files: their shape, units and the bearing-frame
 // reactions, on a link whose pin load is known in closed form.
-#include "compiled_mechanism.h"
-#include "cycle_summary.h"
-#include "cycle_sweep.h"
-#include "mechanism_builders.h"
-#include "results_csv.h"
-#include "results_json.h"
+#include "core/solver/compiled_mechanism.h"
+#include "core/results/cycle_summary.h"
+#include "core/solver/cycle_sweep.h"
+#include "tests/mechanism_builders.h"
+#include "core/results/results_csv.h"
+#include "core/results/results_json.h"
 
 #include <gtest/gtest.h>
 

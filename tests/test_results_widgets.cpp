@@ -1,14 +1,14 @@
 // The results views offscreen: the scrubber, the plot cursor and the current
 // step move together; a click on a plot moves the scrubber; selecting a body
 // shows its diagram; the peak table jumps to a peak.
-#include "analysis_state.h"
-#include "cycle_axis.h"
-#include "drive_scrubber.h"
-#include "free_body_view.h"
-#include "mechanism_document.h"
-#include "mechanism_file.h"
-#include "peak_table.h"
-#include "plot_stack.h"
+#include "ui/analysis/analysis_state.h"
+#include "render/cycle_axis.h"
+#include "ui/results/drive_scrubber.h"
+#include "ui/results/free_body_view.h"
+#include "ui/document/mechanism_document.h"
+#include "core/file/mechanism_file.h"
+#include "ui/results/peak_table.h"
+#include "ui/results/plot_stack.h"
 
 #include <QApplication>
 #include <QSlider>

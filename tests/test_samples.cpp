@@ -8,11 +8,11 @@
 //    drivers' power equals dT/dt + dV_gravity/dt + dV_springs/dt + the damper
 //    dissipation − the power of the applied forces and torques, every rate
 //    computed analytically from q, q̇ and q̈ at that step.
-#include "applied_loads.h"
-#include "chain_generator.h"
-#include "cycle_summary.h"
-#include "cycle_sweep.h"
-#include "mechanism_file.h"
+#include "core/solver/applied_loads.h"
+#include "tests/chain_generator.h"
+#include "core/results/cycle_summary.h"
+#include "core/solver/cycle_sweep.h"
+#include "core/file/mechanism_file.h"
 
 #include <gtest/gtest.h>
 

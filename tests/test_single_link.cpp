@@ -1,9 +1,9 @@
 // One link on a ground pin, driven by a motor at the pin: the pin reaction and
 // the drive torque against the Newton–Euler equations of a rigid body turning
 // about a fixed point.
-#include "compiled_mechanism.h"
-#include "cycle_sweep.h"
-#include "mechanism_builders.h"
+#include "core/solver/compiled_mechanism.h"
+#include "core/solver/cycle_sweep.h"
+#include "tests/mechanism_builders.h"
 
 #include <gtest/gtest.h>
 

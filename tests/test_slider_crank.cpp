@@ -1,7 +1,7 @@
 // Slider-crank kinematics and crank torque against closed forms.
-#include "compiled_mechanism.h"
-#include "cycle_sweep.h"
-#include "mechanism_builders.h"
+#include "core/solver/compiled_mechanism.h"
+#include "core/solver/cycle_sweep.h"
+#include "tests/mechanism_builders.h"
 
 #include <gtest/gtest.h>
 

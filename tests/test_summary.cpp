@@ -1,14 +1,14 @@
 // The cycle summary: trapezoid integrals, peaks, RMS and the energy balance
 // on mechanisms whose answers are known in closed form, and the readable
 // summary text built from them.
-#include "compiled_mechanism.h"
-#include "cycle_summary.h"
-#include "cycle_sweep.h"
-#include "mechanism_builders.h"
-#include "number_text.h"
-#include "step_integral.h"
-#include "summary_text.h"
-#include "text_table.h"
+#include "core/solver/compiled_mechanism.h"
+#include "core/results/cycle_summary.h"
+#include "core/solver/cycle_sweep.h"
+#include "tests/mechanism_builders.h"
+#include "core/results/number_text.h"
+#include "core/results/step_integral.h"
+#include "core/results/summary_text.h"
+#include "core/results/text_table.h"
 
 #include <gtest/gtest.h>
 

@@ -3,9 +3,9 @@
 // differentiation in time, and Newton–Euler for each link with equal and
 // opposite pin forces). Every pin reaction component and the crank torque
 // must agree.
-#include "compiled_mechanism.h"
-#include "cycle_sweep.h"
-#include "mechanism_builders.h"
+#include "core/solver/compiled_mechanism.h"
+#include "core/solver/cycle_sweep.h"
+#include "tests/mechanism_builders.h"
 
 #include <gtest/gtest.h>
 #include <nlohmann/json.hpp>

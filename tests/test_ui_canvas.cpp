@@ -2,16 +2,16 @@
 // tools, a motor added, a mass typed in, saved, reopened and compared with the
 // expected file; the status line must report one degree of freedom and a
 // mechanism that solves.
-#include "analysis_state.h"
-#include "canvas_view.h"
-#include "file_actions.h"
-#include "main_window.h"
-#include "mechanism_document.h"
-#include "mechanism_file.h"
-#include "property_editor.h"
-#include "sketch_geometry.h"
-#include "status_line.h"
-#include "tool_palette.h"
+#include "ui/analysis/analysis_state.h"
+#include "ui/canvas/canvas_view.h"
+#include "ui/files/file_actions.h"
+#include "ui/shell/main_window.h"
+#include "ui/document/mechanism_document.h"
+#include "core/file/mechanism_file.h"
+#include "ui/panels/property_editor.h"
+#include "ui/document/sketch_geometry.h"
+#include "ui/panels/status_line.h"
+#include "ui/canvas/tool_palette.h"
 
 #include <QAction>
 #include <QDir>

@@ -1,10 +1,10 @@
 // The document and its edits: each kind of edit, undone and redone, gives
 // back exactly the saved JSON it started from and the one it produced.
-#include "compiled_mechanism.h"
-#include "mechanism_document.h"
-#include "mechanism_edits.h"
-#include "mechanism_file.h"
-#include "sketch_geometry.h"
+#include "core/solver/compiled_mechanism.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/document/mechanism_edits.h"
+#include "core/file/mechanism_file.h"
+#include "ui/document/sketch_geometry.h"
 
 #include <gtest/gtest.h>
 

@@ -2,8 +2,8 @@
 // the screenshot promises, the canvas's paper showing, and the mechanism drawn
 // on it (the blue outline of its moving bodies).
 //   usage: test_ui_screenshot PATH/TO/clevis SAMPLE.json
-#include "palette.h"
-#include "screenshot.h"
+#include "render/palette.h"
+#include "ui/shell/screenshot.h"
 
 #include <QCoreApplication>
 #include <QImage>

@@ -2,11 +2,11 @@
 // what parses goes on to compile() and a short sweepCycle. The only
 // acceptable failures are the core's own ModelError and AnalysisError; any
 // other exception, a crash, a hang or a sanitizer report is a bug.
-#include "analysis_error.h"
-#include "compiled_mechanism.h"
-#include "cycle_sweep.h"
-#include "mechanism_file.h"
-#include "model_error.h"
+#include "core/solver/analysis_error.h"
+#include "core/solver/compiled_mechanism.h"
+#include "core/solver/cycle_sweep.h"
+#include "core/file/mechanism_file.h"
+#include "core/model/model_error.h"
 
 #include <algorithm>
 #include <cstddef>

@@ -1,0 +1,154 @@
+#include "core/file/atomic_file.h"
+
+#include <fcntl.h>
+#include <sys/stat.h>
+#include <unistd.h>
+
+#include <atomic>
+#include <cerrno>
+#include <cstring>
+#include <filesystem>
+#include <fstream>
+#include <optional>
+#include <sstream>
+
+namespace clevis {
+namespace {
+
+namespace fs = std::filesystem;
+
+[[noreturn]] void fail(const std::string& path, const std::string& what, int error)
+{
+    throw FileWriteError(path, "cannot save \"" + path + "\": " + what + ": " + std::strerror(error));
+}
+
+// The file a save replaces: the target of a symbolic link, so that the link
+// itself survives.
+std::string resolvedTarget(const std::string& path)
+{
+    std::error_code ec;
+    if (!fs::is_symlink(path, ec)) return path;
+    const fs::path target = fs::weakly_canonical(path, ec);
+    return ec ? path : target.string();
+}
+
+std::optional<struct stat> existing(const std::string& path)
+{
+    struct stat st {};
+    if (::stat(path.c_str(), &st) != 0) return std::nullopt;
+    return st;
+}
+
+// Removes the temporary file unless the save got as far as renaming it.
+class TemporaryFile {
+public:
+    TemporaryFile(const std::string& target, const std::string& reportedPath) : reported_(reportedPath)
+    {
+        // Created like any new file (mode 0666 less the umask); the process id
+        // and a counter keep names apart, a leftover from a crash is skipped.
+        static std::atomic<unsigned> counter{0};
+        const fs::path p(target);
+        const std::string stem =
+            (p.parent_path() / ("." + p.filename().string() + ".saving-" + std::to_string(::getpid()) + "-")).string();
+        do {
+            name_ = stem + std::to_string(counter++);
+            fd_ = ::open(name_.c_str(), O_WRONLY | O_CREAT | O_EXCL | O_CLOEXEC, 0666);
+        } while (fd_ < 0 && errno == EEXIST);
+        if (fd_ < 0) {
+            const int error = errno;
+            const std::string dir = p.parent_path().empty() ? "." : p.parent_path().string();
+            fail(reported_, "cannot create a temporary file in \"" + dir + "\"", error);
+        }
+    }
+    ~TemporaryFile()
+    {
+        if (fd_ >= 0) ::close(fd_);
+        if (!renamed_) ::unlink(name_.c_str());
+    }
+    TemporaryFile(const TemporaryFile&) = delete;
+    TemporaryFile& operator=(const TemporaryFile&) = delete;
+
+    const std::string& name() const { return name_; }
+
+    void write(const std::string& content, std::optional<mode_t> keepMode)
+    {
+        if (keepMode && ::fchmod(fd_, *keepMode) != 0) fail(reported_, "cannot set the file's permissions", errno);
+        std::size_t done = 0;
+        while (done < content.size()) {
+            const ssize_t n = ::write(fd_, content.data() + done, content.size() - done);
+            if (n < 0 && errno == EINTR) continue;
+            if (n < 0) fail(reported_, "cannot write the file", errno);
+            done += std::size_t(n);
+        }
+        if (::fsync(fd_) != 0) fail(reported_, "cannot flush the file to the disk", errno);
+        const int fd = fd_;
+        fd_ = -1;
+        if (::close(fd) != 0) fail(reported_, "cannot finish writing the file", errno);
+    }
+
+    void renameOver(const std::string& target)
+    {
+        if (::rename(name_.c_str(), target.c_str()) != 0) fail(reported_, "cannot replace the file", errno);
+        renamed_ = true;
+    }
+
+private:
+    std::string reported_, name_;
+    int fd_ = -1;
+    bool renamed_ = false;
+};
+
+std::string fileText(const std::string& path)
+{
+    std::ifstream in(path, std::ios::binary);
+    std::ostringstream text;
+    text << in.rdbuf();
+    if (!in && !in.eof()) fail(path, "cannot read the previous file for its backup", errno);
+    return text.str();
+}
+
+// The previous file becomes the backup by a second name (a hard link), so
+// the target never disappears; where links are not possible it is copied.
+void keepBackupOf(const std::string& target, const std::string& reportedPath)
+{
+    const std::string backup = target + ".bak";
+    if (::unlink(backup.c_str()) != 0 && errno != ENOENT)
+        fail(reportedPath, "cannot replace the old backup \"" + backup + "\"", errno);
+    if (::link(target.c_str(), backup.c_str()) == 0) return;
+    writeFileAtomically(backup, fileText(target), false);
+}
+
+// Makes the rename itself durable. Best effort: the new file is already in
+// place, and a directory that cannot be synced is no reason to report the
+// save as failed.
+void syncDirectoryOf(const std::string& target)
+{
+    const fs::path dir = fs::path(target).parent_path();
+    const int fd = ::open(dir.empty() ? "." : dir.c_str(), O_RDONLY | O_DIRECTORY);
+    if (fd < 0) return;
+    ::fsync(fd);
+    ::close(fd);
+}
+
+}  // namespace
+
+void writeFileAtomically(const std::string& path, const std::string& content, bool keepBackup,
+                         const std::function<void(const std::string&)>& beforeRename)
+{
+    const std::string target = resolvedTarget(path);
+    const std::optional<struct stat> old = existing(target);
+    if (old && S_ISDIR(old->st_mode)) fail(path, "a folder has that name", EISDIR);
+    TemporaryFile temp(target, path);
+    temp.write(content, old ? std::optional<mode_t>(old->st_mode & 07777) : std::nullopt);
+    if (keepBackup && old) keepBackupOf(target, path);
+    if (beforeRename) beforeRename(temp.name());
+    temp.renameOver(target);
+    syncDirectoryOf(target);
+}
+
+void writeFileAtomically(const std::string& path, const std::string& content, bool keepBackup)
+{
+    writeFileAtomically(path, content, keepBackup, {});
+}
+
+}  // namespace clevis

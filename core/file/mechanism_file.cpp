@@ -1,0 +1,472 @@
+// Reading mechanism files: every value is checked for type and range where
+// it stands, so that an error names its path.
+#include "core/file/mechanism_file.h"
+
+#include "core/file/json_reader.h"
+#include "core/model/materials.h"
+#include "core/file/mechanism_file_format.h"
+#include "core/model/model_limits.h"
+
+#include <cerrno>
+#include <cstring>
+#include <filesystem>
+#include <fstream>
+#include <map>
+
+namespace clevis {
+namespace {
+
+constexpr std::size_t kMaxFileBytes = 16 * 1024 * 1024;
+
+// Names must be unique within each list; remembers where each was first used.
+class NameRegister {
+public:
+    void add(const std::string& name, const JsonNode& item)
+    {
+        const auto [first, added] = firstUse_.emplace(name, item.path());
+        if (!added)
+            throw ModelError(item.keyPath("name"), "duplicate name \"" + name + "\" (also " + first->second + ")");
+    }
+    bool contains(const std::string& name) const { return firstUse_.contains(name); }
+
+private:
+    std::map<std::string, std::string> firstUse_;
+};
+
+double quantity(const JsonNode& node, const Quantity& q)
+{
+    return toSi(q.unit, node.at(q.key).number());
+}
+
+double quantityOr(const JsonNode& node, const Quantity& q, double fallback)
+{
+    return node.has(q.key) ? quantity(node, q) : fallback;
+}
+
+std::vector<double> quantities(const JsonNode& values, FileUnit unit)
+{
+    std::vector<double> out = values.numbers();
+    for (double& v : out) v = toSi(unit, v);
+    return out;
+}
+
+std::vector<double> increasingQuantities(const JsonNode& values, FileUnit unit)
+{
+    std::vector<double> out = values.increasing();
+    for (double& v : out) v = toSi(unit, v);
+    return out;
+}
+
+// A table's second column, as many values as its first.
+std::vector<double> pairedColumn(const JsonNode& node, const char* key, const char* firstKey, std::size_t count,
+                                 FileUnit unit)
+{
+    const JsonNode column = node.at(key);
+    std::vector<double> out = quantities(column, unit);
+    if (out.size() != count)
+        throw column.error("has " + std::to_string(out.size()) + " values but " + firstKey + " has " +
+                           std::to_string(count));
+    return out;
+}
+
+BodyPointRef readPointRef(const JsonNode& node)
+{
+    node.object({"body", "at"});
+    return {node.at("body").name(), node.at("at").point()};
+}
+
+std::vector<JsonNode> listOf(const JsonNode& root, const char* key)
+{
+    return root.has(key) ? root.at(key).elements() : std::vector<JsonNode>{};
+}
+
+// ---- bodies ----
+
+PointMass readPointMass(const JsonNode& node)
+{
+    node.object({"name", "mass", "at"});
+    PointMass p;
+    if (const auto name = node.find("name")) p.name = name->string();
+    p.mass = node.at("mass").number(Bound::NonNegative);
+    p.at = node.at("at").point();
+    return p;
+}
+
+double readDensity(const JsonNode& section)
+{
+    const std::string key = section.oneOf({"density", "material"});
+    if (key == "density") return section.at("density").number(Bound::Positive);
+    return section.at("material").choice(materials()).density;
+}
+
+BarSection readSection(const JsonNode& node)
+{
+    node.object({"width", "thickness", "density", "material", "ends"});
+    BarSection s;
+    s.width = node.at("width").number(Bound::Positive);
+    s.thickness = node.at("thickness").number(Bound::Positive);
+    s.density = readDensity(node);
+    if (const auto ends = node.find("ends")) {
+        const std::vector<JsonNode> e = ends->elements(2);
+        s.ends = std::pair{e[0].point(), e[1].point()};
+    }
+    return s;
+}
+
+Body readBody(const JsonNode& node)
+{
+    node.object({"name", "mass", "cg", "inertia", "section", "point_masses"});
+    Body b;
+    const JsonNode name = node.at("name");
+    b.name = name.name();
+    if (b.name == kGroundName)
+        throw name.error("\"ground\" is the fixed frame, present in every mechanism; it cannot be declared");
+    if (const auto n = node.find("mass")) b.mass = n->number(Bound::NonNegative);
+    if (const auto n = node.find("cg")) b.cg = n->point();
+    if (const auto n = node.find("inertia")) b.inertia = n->number(Bound::NonNegative);
+    if (const auto n = node.find("section")) {
+        if (b.mass || b.cg || b.inertia)
+            throw n->error("a body takes either mass, cg and inertia or a section, not both");
+        b.section = readSection(*n);
+    }
+    for (const JsonNode& p : listOf(node, "point_masses")) b.pointMasses.push_back(readPointMass(p));
+    return b;
+}
+
+// ---- joints ----
+
+Joint readJoint(const JsonNode& node)
+{
+    node.object({"name", "type", "bodies", "at", "axis_deg"});
+    Joint j;
+    j.name = node.at("name").name();
+    j.type = node.at("type").choice(kJointTypes).value;
+    const JsonNode bodies = node.at("bodies");
+    const std::vector<JsonNode> pair = bodies.elements(2);
+    j.bodies[0] = pair[0].name();
+    j.bodies[1] = pair[1].name();
+    if (j.bodies[0] == j.bodies[1]) throw bodies.error("joins \"" + j.bodies[0] + "\" to itself");
+    j.at = node.at("at").point();
+    if (const auto axis = node.find("axis_deg")) {
+        if (j.type == JointType::Pin) axis->warn("applies only to slider and pin_in_slot joints (ignored)");
+        else j.axisDeg = axis->number();
+    }
+    return j;
+}
+
+// ---- drivers ----
+
+ConstantSpeed readConstantSpeed(const JsonNode& node, const DriverQuantities& q)
+{
+    return {quantity(node, q.speed), quantityOr(node, q.accel, 0.0)};
+}
+
+Rise readRise(const JsonNode& node, CamLaw law, const DriverQuantities& q)
+{
+    node.object({"law", q.from.key, q.to.key, "start_s", "end_s"});
+    Rise r{law, quantity(node, q.from), quantity(node, q.to), 0.0, std::nullopt};
+    if (const auto start = node.find("start_s")) r.start = start->number(Bound::NonNegative);
+    if (const auto end = node.find("end_s")) {
+        r.end = end->number();
+        if (!(*r.end > r.start)) throw end->error("must be later than start_s (" + shortestDecimal(r.start) + ")");
+    }
+    return r;
+}
+
+MotionTable readMotionTable(const JsonNode& node, const DriverQuantities& q)
+{
+    node.object({"law", "time_s", q.position.key});
+    MotionTable t;
+    t.time = node.at("time_s").increasing();
+    t.position = pairedColumn(node, q.position.key, "time_s", t.time.size(), q.position.unit);
+    return t;
+}
+
+Motion readMotion(const JsonNode& node, const DriverQuantities& q)
+{
+    const MotionLaw& law = node.at("law").choice(kMotionLaws);
+    switch (law.kind) {
+    case LawKind::ConstantSpeed: node.object({"law", q.speed.key, q.accel.key}); return readConstantSpeed(node, q);
+    case LawKind::Rise: return readRise(node, law.cam, q);
+    case LawKind::Table: break;
+    }
+    return readMotionTable(node, q);
+}
+
+// Constant speed may be written straight into the driver instead of a motion.
+Motion readDriverMotion(const JsonNode& node, const DriverQuantities& q)
+{
+    if (std::string(node.oneOf({q.speed.key, "motion"})) != "motion") return readConstantSpeed(node, q);
+    if (node.has(q.accel.key))
+        throw ModelError(node.keyPath(q.accel.key),
+                         std::string("only goes with ") + q.speed.key + "; with a motion, put it there");
+    return readMotion(node.at("motion"), q);
+}
+
+// A linear driver acts at a slider joint or between two body points.
+void readLinearPlace(const JsonNode& node, Driver& d)
+{
+    if (std::string(node.oneOf({"joint", "between"})) == "joint") {
+        d.joint = node.at("joint").name();
+        d.offset = quantityOr(node, kLinearQuantities.offset, 0.0);
+        return;
+    }
+    const std::vector<JsonNode> ends = node.at("between").elements(2);
+    d.ends[0] = readPointRef(ends[0]);
+    d.ends[1] = readPointRef(ends[1]);
+    if (const auto position = node.find(kLinearQuantities.offset.key))
+        position->warn("applies only to a linear driver at a slider joint (ignored)");
+}
+
+Driver readDriver(const JsonNode& node)
+{
+    Driver d;
+    d.type = node.at("type").choice(kDriverTypes).value;
+    const DriverQuantities& q = quantitiesOf(d.type);
+    const bool linear = d.type == DriverType::Linear;
+    // "between" is known to linear drivers only; "joint" stands in for it otherwise.
+    node.object(
+        {"name", "type", "joint", linear ? "between" : "joint", "motion", q.offset.key, q.speed.key, q.accel.key});
+    d.name = node.at("name").name();
+    if (linear) {
+        readLinearPlace(node, d);
+    } else {
+        d.joint = node.at("joint").name();
+        d.offset = quantityOr(node, q.offset, 0.0);
+    }
+    d.motion = readDriverMotion(node, q);
+    return d;
+}
+
+// ---- loads ----
+
+// Over time, or over a driver's position in the unit its type uses.
+LoadProfile readProfile(const JsonNode& node, const std::vector<Driver>& drivers)
+{
+    node.object({"driver", "time_s", "at_deg", "at", "factor"});
+    LoadProfile p;
+    const char* key = node.oneOf({"time_s", kRotaryQuantities.profileAt.key, kLinearQuantities.profileAt.key});
+    FileUnit unit = FileUnit::Si;
+    if (std::string(key) == "time_s") {
+        if (node.has("driver")) throw ModelError(node.keyPath("driver"), "a profile over time_s names no driver");
+    } else {
+        const JsonNode driver = node.at("driver");
+        p.driver = driver.name();
+        const Driver* d = findDriver(drivers, p.driver);
+        if (!d) throw driver.error("no driver named \"" + p.driver + "\"");
+        const Quantity& at = quantitiesOf(d->type).profileAt;
+        if (at.key != std::string(key))
+            throw ModelError(node.keyPath(key), "driver \"" + p.driver + "\" is " + nameOf(kDriverTypes, d->type) +
+                                                    ": give its positions as \"" + at.key + "\"");
+        unit = at.unit;
+    }
+    p.at = increasingQuantities(node.at(key), unit);
+    p.factor = pairedColumn(node, "factor", key, p.at.size(), FileUnit::Si);
+    return p;
+}
+
+std::optional<LoadProfile> readOptionalProfile(const JsonNode& node, const std::vector<Driver>& drivers)
+{
+    if (const auto profile = node.find("profile")) return readProfile(*profile, drivers);
+    return std::nullopt;
+}
+
+Load readForce(const JsonNode& node, const std::vector<Driver>& drivers)
+{
+    node.object({"type", "name", "body", "at", "force", "turns_with_body", "profile"});
+    ForceLoad f;
+    f.point = {node.at("body").name(), node.at("at").point()};
+    f.force = node.at("force").point();
+    if (const auto turns = node.find("turns_with_body")) f.turnsWithBody = turns->boolean();
+    f.profile = readOptionalProfile(node, drivers);
+    return f;
+}
+
+Load readTorque(const JsonNode& node, const std::vector<Driver>& drivers)
+{
+    node.object({"type", "name", "body", "torque", "profile"});
+    TorqueLoad t;
+    t.body = node.at("body").name();
+    t.torque = node.at("torque").number();
+    t.profile = readOptionalProfile(node, drivers);
+    return t;
+}
+
+Load readSpring(const JsonNode& node, const std::vector<Driver>&)
+{
+    node.object({"type", "name", "a", "b", "stiffness", "free_length"});
+    SpringLoad s;
+    s.a = readPointRef(node.at("a"));
+    s.b = readPointRef(node.at("b"));
+    s.stiffness = node.at("stiffness").number(Bound::NonNegative);
+    s.freeLength = node.at("free_length").number(Bound::NonNegative);
+    return s;
+}
+
+Load readDamper(const JsonNode& node, const std::vector<Driver>&)
+{
+    node.object({"type", "name", "a", "b", "damping"});
+    DamperLoad d;
+    d.a = readPointRef(node.at("a"));
+    d.b = readPointRef(node.at("b"));
+    d.damping = node.at("damping").number(Bound::NonNegative);
+    return d;
+}
+
+Load readTorsionSpring(const JsonNode& node, const std::vector<Driver>&)
+{
+    node.object({"type", "name", "joint", "stiffness", "free_angle_deg"});
+    TorsionSpringLoad t;
+    t.joint = node.at("joint").name();
+    t.stiffness = node.at("stiffness").number(Bound::NonNegative);
+    t.freeAngle = quantityOr(node, kTorsionFreeAngle, 0.0);
+    return t;
+}
+
+struct LoadType {
+    const char* name;
+    Load (*read)(const JsonNode&, const std::vector<Driver>&);
+};
+constexpr LoadType kLoadTypes[] = {
+    {"force", readForce},   {"torque", readTorque}, {"spring", readSpring}, {"damper", readDamper},
+    {"torsion_spring", readTorsionSpring},
+};
+
+void setName(Load& load, const std::string& name)
+{
+    std::visit([&](auto& l) { l.name = name; }, load);
+}
+
+// Unnamed loads are called after their type and a count: "force 1",
+// "force 2", … skipping names that other loads already have.
+void nameUnnamedLoads(std::vector<Load>& loads, const std::vector<const LoadType*>& types,
+                      const std::vector<JsonNode>& nodes, NameRegister& names)
+{
+    std::map<std::string, int> counts;
+    for (std::size_t i = 0; i < loads.size(); ++i) {
+        if (nodes[i].has("name")) continue;
+        const std::string type = types[i]->name;
+        std::string name;
+        do name = type + " " + std::to_string(++counts[type]);
+        while (names.contains(name));
+        setName(loads[i], name);
+        names.add(name, nodes[i]);
+    }
+}
+
+std::vector<Load> readLoads(const JsonNode& root, const std::vector<Driver>& drivers)
+{
+    const std::vector<JsonNode> nodes = listOf(root, "loads");
+    std::vector<Load> loads;
+    std::vector<const LoadType*> types;
+    NameRegister names;
+    for (const JsonNode& node : nodes) {
+        types.push_back(&node.at("type").choice(kLoadTypes));
+        loads.push_back(types.back()->read(node, drivers));
+        if (const auto name = node.find("name")) {
+            setName(loads.back(), name->name());
+            names.add(name->name(), node);
+        }
+    }
+    nameUnnamedLoads(loads, types, nodes, names);
+    return loads;
+}
+
+// ---- the document ----
+
+void readVersion(const JsonNode& root)
+{
+    if (!root.has("clevis"))
+        throw ModelError("clevis", "required key missing; a mechanism file starts with \"clevis\": " +
+                                       std::to_string(kFileVersion));
+    const JsonNode version = root.at("clevis");
+    const double v = version.number();
+    if (v != kFileVersion)
+        throw version.error("unsupported file version " + shortestDecimal(v) + "; this program reads version " +
+                            std::to_string(kFileVersion));
+}
+
+Vec2 readGravity(const JsonNode& node)
+{
+    if (!node.isBoolean()) return node.point();
+    if (node.boolean()) throw node.error("true is not allowed: give [gx, gy] in m/s², or false for no gravity");
+    return Vec2::Zero();
+}
+
+CycleSettings readCycle(const JsonNode& node)
+{
+    node.object({"steps", "duration_s"});
+    CycleSettings c;
+    if (const auto steps = node.find("steps")) c.steps = steps->integer(1, kMaxSteps);
+    if (const auto duration = node.find("duration_s")) c.duration = duration->number(Bound::Positive);
+    return c;
+}
+
+template <class Item>
+std::vector<Item> readNamedList(const JsonNode& root, const char* key, Item (*read)(const JsonNode&))
+{
+    std::vector<Item> items;
+    NameRegister names;
+    for (const JsonNode& node : listOf(root, key)) {
+        items.push_back(read(node));
+        names.add(items.back().name, node);
+    }
+    return items;
+}
+
+Mechanism readMechanism(const JsonNode& root)
+{
+    readVersion(root);
+    root.object({"clevis", "name", "gravity", "bodies", "joints", "drivers", "cycle", "loads"});
+    Mechanism m;
+    if (const auto name = root.find("name")) m.name = name->string();
+    if (const auto gravity = root.find("gravity")) m.gravity = readGravity(*gravity);
+    m.bodies = readNamedList(root, "bodies", readBody);
+    m.joints = readNamedList(root, "joints", readJoint);
+    m.drivers = readNamedList(root, "drivers", readDriver);
+    if (const auto cycle = root.find("cycle")) m.cycle = readCycle(*cycle);
+    m.loads = readLoads(root, m.drivers);
+    return m;
+}
+
+ModelError tooLarge(const std::string& path)
+{
+    return ModelError("", "\"" + path + "\" is larger than " + std::to_string(kMaxFileBytes >> 20) +
+                              " MiB, too large to be a mechanism file");
+}
+
+// Refuses a huge file by its size, or, where the size is not known in
+// advance (a pipe), once the limit is passed while reading.
+std::string readFileText(const std::string& path)
+{
+    std::error_code unknownSize;
+    const auto size = std::filesystem::file_size(path, unknownSize);
+    if (!unknownSize && size > kMaxFileBytes) throw tooLarge(path);
+    std::ifstream in(path, std::ios::binary);
+    if (!in) throw ModelError("", "cannot open \"" + path + "\": " + std::strerror(errno));
+    std::string text;
+    char chunk[1 << 16];
+    while (in.read(chunk, sizeof chunk) || in.gcount() > 0) {
+        text.append(chunk, static_cast<std::size_t>(in.gcount()));
+        if (text.size() > kMaxFileBytes) throw tooLarge(path);
+    }
+    if (in.bad()) throw ModelError("", "cannot read \"" + path + "\"");
+    return text;
+}
+
+}  // namespace
+
+LoadedMechanism parseMechanism(const std::string& jsonText)
+{
+    const nlohmann::json document = parseJsonText(jsonText);
+    LoadedMechanism out;
+    out.mechanism = readMechanism(JsonNode(document, "", out.warnings));
+    return out;
+}
+
+LoadedMechanism loadMechanismFile(const std::string& path)
+{
+    return parseMechanism(readFileText(path));
+}
+
+}  // namespace clevis

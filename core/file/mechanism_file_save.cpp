@@ -1,0 +1,235 @@
+// Writing mechanism files: the inverse of the reader, key for key, with
+// optional values left out when they are absent and motions always in the
+// long form.
+#include "core/file/mechanism_file.h"
+
+#include "core/file/json_layout.h"
+#include "core/file/mechanism_file_format.h"
+
+namespace clevis {
+namespace {
+
+// Ordered, so that a saved file lists keys as a person would write them.
+using Json = nlohmann::ordered_json;
+
+Json point(const Vec2& v)
+{
+    return Json::array({v.x(), v.y()});
+}
+
+Json values(const std::vector<double>& si, FileUnit unit)
+{
+    Json out = Json::array();
+    for (double v : si) out.push_back(fromSi(unit, v));
+    return out;
+}
+
+void put(Json& out, const Quantity& q, double si)
+{
+    out[q.key] = fromSi(q.unit, si);
+}
+
+Json pointRef(const BodyPointRef& r)
+{
+    return {{"body", r.body}, {"at", point(r.at)}};
+}
+
+Json pointMassJson(const PointMass& p)
+{
+    Json out;
+    if (!p.name.empty()) out["name"] = p.name;
+    out["mass"] = p.mass;
+    out["at"] = point(p.at);
+    return out;
+}
+
+Json sectionJson(const BarSection& s)
+{
+    Json out{{"width", s.width}, {"thickness", s.thickness}, {"density", s.density}};
+    if (s.ends) out["ends"] = Json::array({point(s.ends->first), point(s.ends->second)});
+    return out;
+}
+
+Json bodyJson(const Body& b)
+{
+    Json out{{"name", b.name}};
+    if (b.mass) out["mass"] = *b.mass;
+    if (b.cg) out["cg"] = point(*b.cg);
+    if (b.inertia) out["inertia"] = *b.inertia;
+    if (b.section) out["section"] = sectionJson(*b.section);
+    if (!b.pointMasses.empty()) {
+        out["point_masses"] = Json::array();
+        for (const PointMass& p : b.pointMasses) out["point_masses"].push_back(pointMassJson(p));
+    }
+    return out;
+}
+
+Json jointJson(const Joint& j)
+{
+    Json out{{"name", j.name},
+             {"type", nameOf(kJointTypes, j.type)},
+             {"bodies", Json::array({j.bodies[0], j.bodies[1]})},
+             {"at", point(j.at)}};
+    if (j.type != JointType::Pin) out["axis_deg"] = j.axisDeg;
+    return out;
+}
+
+const char* riseLawName(CamLaw cam)
+{
+    for (const MotionLaw& law : kMotionLaws)
+        if (law.kind == LawKind::Rise && law.cam == cam) return law.name;
+    return "";
+}
+
+Json motionJson(const Motion& motion, const DriverQuantities& q)
+{
+    Json out;
+    if (const auto* c = std::get_if<ConstantSpeed>(&motion)) {
+        out["law"] = "constant_speed";
+        put(out, q.speed, c->speed);
+        put(out, q.accel, c->accel);
+    } else if (const auto* r = std::get_if<Rise>(&motion)) {
+        out["law"] = riseLawName(r->law);
+        put(out, q.from, r->from);
+        put(out, q.to, r->to);
+        out["start_s"] = r->start;
+        if (r->end) out["end_s"] = *r->end;
+    } else {
+        const auto& t = std::get<MotionTable>(motion);
+        out["law"] = "table";
+        out["time_s"] = t.time;
+        out[q.position.key] = values(t.position, q.position.unit);
+    }
+    return out;
+}
+
+Json driverJson(const Driver& d)
+{
+    const DriverQuantities& q = quantitiesOf(d.type);
+    Json out{{"name", d.name}, {"type", nameOf(kDriverTypes, d.type)}};
+    if (d.ends[0] && d.ends[1]) {
+        out["between"] = Json::array({pointRef(*d.ends[0]), pointRef(*d.ends[1])});
+    } else {
+        out["joint"] = d.joint;
+        put(out, q.offset, d.offset);
+    }
+    out["motion"] = motionJson(d.motion, q);
+    return out;
+}
+
+// Positions are written in the unit of the driver they follow (SI when the
+// driver is unknown, as the file would not load anyway).
+Json profileJson(const LoadProfile& p, const std::vector<Driver>& drivers)
+{
+    Json out;
+    if (p.driver.empty()) {
+        out["time_s"] = p.at;
+    } else {
+        const Driver* d = findDriver(drivers, p.driver);
+        const Quantity& at = quantitiesOf(d ? d->type : DriverType::Linear).profileAt;
+        out["driver"] = p.driver;
+        out[at.key] = values(p.at, at.unit);
+    }
+    out["factor"] = p.factor;
+    return out;
+}
+
+Json loadHeader(const char* type, const std::string& name)
+{
+    Json out{{"type", type}};
+    if (!name.empty()) out["name"] = name;
+    return out;
+}
+
+Json betweenPoints(const char* type, const std::string& name, const BodyPointRef& a, const BodyPointRef& b)
+{
+    Json out = loadHeader(type, name);
+    out["a"] = pointRef(a);
+    out["b"] = pointRef(b);
+    return out;
+}
+
+class LoadWriter {
+public:
+    explicit LoadWriter(const std::vector<Driver>& drivers) : drivers_(drivers) {}
+
+    Json operator()(const ForceLoad& f) const
+    {
+        Json out = loadHeader("force", f.name);
+        out["body"] = f.point.body;
+        out["at"] = point(f.point.at);
+        out["force"] = point(f.force);
+        out["turns_with_body"] = f.turnsWithBody;
+        if (f.profile) out["profile"] = profileJson(*f.profile, drivers_);
+        return out;
+    }
+    Json operator()(const TorqueLoad& t) const
+    {
+        Json out = loadHeader("torque", t.name);
+        out["body"] = t.body;
+        out["torque"] = t.torque;
+        if (t.profile) out["profile"] = profileJson(*t.profile, drivers_);
+        return out;
+    }
+    Json operator()(const SpringLoad& s) const
+    {
+        Json out = betweenPoints("spring", s.name, s.a, s.b);
+        out["stiffness"] = s.stiffness;
+        out["free_length"] = s.freeLength;
+        return out;
+    }
+    Json operator()(const DamperLoad& d) const
+    {
+        Json out = betweenPoints("damper", d.name, d.a, d.b);
+        out["damping"] = d.damping;
+        return out;
+    }
+    Json operator()(const TorsionSpringLoad& t) const
+    {
+        Json out = loadHeader("torsion_spring", t.name);
+        out["joint"] = t.joint;
+        out["stiffness"] = t.stiffness;
+        put(out, kTorsionFreeAngle, t.freeAngle);
+        return out;
+    }
+
+private:
+    const std::vector<Driver>& drivers_;
+};
+
+template <class Item, class Write>
+Json list(const std::vector<Item>& items, Write write)
+{
+    Json out = Json::array();
+    for (const Item& item : items) out.push_back(write(item));
+    return out;
+}
+
+Json document(const Mechanism& m)
+{
+    Json out{{"clevis", kFileVersion}};
+    if (!m.name.empty()) out["name"] = m.name;
+    out["gravity"] = m.gravity == Vec2::Zero() ? Json(false) : point(m.gravity);
+    out["bodies"] = list(m.bodies, bodyJson);
+    out["joints"] = list(m.joints, jointJson);
+    out["drivers"] = list(m.drivers, driverJson);
+    out["cycle"] = {{"steps", m.cycle.steps}};
+    if (m.cycle.duration) out["cycle"]["duration_s"] = *m.cycle.duration;
+    const LoadWriter writeLoad(m.drivers);
+    out["loads"] = list(m.loads, [&](const Load& l) { return std::visit(writeLoad, l); });
+    return out;
+}
+
+}  // namespace
+
+nlohmann::json mechanismToJson(const Mechanism& m)
+{
+    return nlohmann::json(document(m));
+}
+
+std::string saveMechanismText(const Mechanism& m)
+{
+    return layoutJson(document(m));
+}
+
+}  // namespace clevis

@@ -1,0 +1,23 @@
+// Mass, centre of mass and moment of inertia of bodies built from bars and
+// point masses.
+#pragma once
+
+#include "core/solver/compiled_mechanism.h"
+
+#include <vector>
+
+namespace clevis {
+
+// Solid bar of rectangular section from a to b: m = ρ·w·t·L, centre at the
+// midpoint, I_G = m(L² + w²)/12 about the axis normal to the plane.
+MassProperties barMassProperties(const Vec2& a, const Vec2& b, double width, double thickness, double density);
+
+// Point mass: no inertia about its own centre.
+MassProperties pointMassProperties(double mass, const Vec2& at);
+
+// Sum of parts: masses add, the centre is the mass-weighted mean and each
+// part's inertia moves to the common centre by the parallel-axis theorem
+// I = I_G + m·d².
+MassProperties combine(const std::vector<MassProperties>& parts);
+
+}  // namespace clevis

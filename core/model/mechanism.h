@@ -1,0 +1,186 @@
+// The mechanism as the user describes it: named parts, global coordinates at
+// the drawn pose, SI units. This is the document; the solver works on a
+// compiled copy (see compiled_mechanism.h) with names resolved to indices.
+#pragma once
+
+#include "core/model/geometry.h"
+
+#include <optional>
+#include <string>
+#include <variant>
+#include <vector>
+
+namespace clevis {
+
+inline constexpr const char* kGroundName = "ground";
+
+struct PointMass {
+    std::string name;
+    double mass = 0.0;  // kg
+    Vec2 at = Vec2::Zero();  // global position at the drawn pose, m
+
+    bool operator==(const PointMass&) const = default;
+};
+
+// A straight bar of rectangular cross-section between two points (by default
+// the two farthest-apart joints on the body).
+struct BarSection {
+    double width = 0.0;      // m, in the plane of motion
+    double thickness = 0.0;  // m, out of plane
+    double density = 0.0;    // kg/m³
+    std::optional<std::pair<Vec2, Vec2>> ends;  // m
+
+    bool operator==(const BarSection&) const = default;
+};
+
+struct Body {
+    std::string name;
+    // Mass properties typed in directly ...
+    std::optional<double> mass;     // kg
+    std::optional<Vec2> cg;         // m, global at the drawn pose
+    std::optional<double> inertia;  // kg·m² about the centre of mass
+    // ... or derived from a bar section, plus point masses in either case.
+    std::optional<BarSection> section;
+    std::vector<PointMass> pointMasses;
+
+    bool operator==(const Body&) const = default;
+};
+
+enum class JointType { Pin, Slider, PinInSlot };
+
+// `bodies[0]` is the first-listed body: reactions are the force it exerts on
+// `bodies[1]`. For sliders and pin-in-slot joints the axis is fixed in the
+// first body; the pin of a pin-in-slot belongs to the second.
+struct Joint {
+    std::string name;
+    JointType type = JointType::Pin;
+    std::string bodies[2];
+    Vec2 at = Vec2::Zero();  // m, global at the drawn pose
+    double axisDeg = 0.0;    // slide or slot direction at the drawn pose
+
+    bool operator==(const Joint&) const = default;
+};
+
+enum class CamLaw { Cycloidal, Polynomial345, ModifiedTrapezoid };
+
+// Motion of a driver's coordinate over time, in SI (rad or m).
+struct ConstantSpeed {
+    double speed = 0.0;  // rad/s or m/s
+    double accel = 0.0;  // rad/s² or m/s²
+
+    bool operator==(const ConstantSpeed&) const = default;
+};
+struct Rise {
+    CamLaw law = CamLaw::Cycloidal;
+    double from = 0.0, to = 0.0;  // rad or m
+    double start = 0.0;           // s
+    std::optional<double> end;    // s, defaults to the end of the cycle
+
+    bool operator==(const Rise&) const = default;
+};
+struct MotionTable {
+    std::vector<double> time;      // s, strictly increasing
+    std::vector<double> position;  // rad or m
+
+    bool operator==(const MotionTable&) const = default;
+};
+using Motion = std::variant<ConstantSpeed, Rise, MotionTable>;
+
+struct BodyPointRef {
+    std::string body;
+    Vec2 at = Vec2::Zero();  // m, global at the drawn pose
+
+    bool operator==(const BodyPointRef&) const = default;
+};
+
+enum class DriverType { Rotary, Linear };
+
+// Rotary: at a pin, rotation of its second body relative to its first.
+// Linear: at a slider (displacement of its second body along the axis) or
+// between two points (a cylinder's length).
+struct Driver {
+    std::string name;
+    DriverType type = DriverType::Rotary;
+    std::string joint;                       // rotary, or linear at a slider
+    std::optional<BodyPointRef> ends[2];     // linear between two points
+    double offset = 0.0;                     // position at the drawn pose, rad (rotary) or m (slider)
+    Motion motion = ConstantSpeed{};
+
+    bool operator==(const Driver&) const = default;
+};
+
+// Scale factor applied to a load over the cycle, linearly interpolated and
+// held constant beyond the table ends.
+struct LoadProfile {
+    std::string driver;           // empty: over time
+    std::vector<double> at;       // s, or driver position in rad / m
+    std::vector<double> factor;
+
+    bool operator==(const LoadProfile&) const = default;
+};
+
+struct ForceLoad {
+    std::string name;
+    BodyPointRef point;
+    Vec2 force = Vec2::Zero();  // N, global at the drawn pose
+    bool turnsWithBody = false;
+    std::optional<LoadProfile> profile;
+
+    bool operator==(const ForceLoad&) const = default;
+};
+struct TorqueLoad {
+    std::string name;
+    std::string body;
+    double torque = 0.0;  // N·m, counter-clockwise positive
+    std::optional<LoadProfile> profile;
+
+    bool operator==(const TorqueLoad&) const = default;
+};
+struct SpringLoad {
+    std::string name;
+    BodyPointRef a, b;
+    double stiffness = 0.0;   // N/m
+    double freeLength = 0.0;  // m
+
+    bool operator==(const SpringLoad&) const = default;
+};
+struct DamperLoad {
+    std::string name;
+    BodyPointRef a, b;
+    double damping = 0.0;  // N·s/m
+
+    bool operator==(const DamperLoad&) const = default;
+};
+struct TorsionSpringLoad {
+    std::string name;
+    std::string joint;         // a pin
+    double stiffness = 0.0;    // N·m/rad
+    double freeAngle = 0.0;    // rad, relative rotation at which it is relaxed (0 = drawn pose)
+
+    bool operator==(const TorsionSpringLoad&) const = default;
+};
+using Load = std::variant<ForceLoad, TorqueLoad, SpringLoad, DamperLoad, TorsionSpringLoad>;
+
+struct CycleSettings {
+    int steps = 360;
+    std::optional<double> duration;  // s
+
+    bool operator==(const CycleSettings&) const = default;
+};
+
+struct Mechanism {
+    std::string name;
+    Vec2 gravity{0.0, -9.80665};  // m/s²
+    std::vector<Body> bodies;     // moving bodies; ground is implicit
+    std::vector<Joint> joints;
+    std::vector<Driver> drivers;
+    std::vector<Load> loads;
+    CycleSettings cycle;
+
+    bool operator==(const Mechanism&) const = default;
+};
+
+const char* jointTypeName(JointType type);
+const char* camLawName(CamLaw law);
+
+}  // namespace clevis

@@ -1,0 +1,17 @@
+// How a driver's position is shown to people: degrees for rotary drivers,
+// metres for linear ones (the core keeps radians and metres).
+#pragma once
+
+#include "core/solver/compiled_mechanism.h"
+
+#include <string>
+
+namespace clevis {
+
+double driveDisplayValue(DriverType type, double si);
+const char* driveDisplayUnit(DriverType type);
+const char* effortUnit(DriverType type);  // "N·m" or "N"
+// e.g. "motor = 123.40°"; constant-speed cranks are shown modulo one revolution.
+std::string formatDrivePosition(const CompiledDriver& d, double si);
+
+}  // namespace clevis

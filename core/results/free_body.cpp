@@ -1,0 +1,176 @@
+#include "core/results/free_body.h"
+
+#include "core/solver/applied_loads.h"
+
+#include <stdexcept>
+
+namespace clevis {
+namespace {
+
+// Moves a force-plus-couple to act through `point`: the couple changes so the
+// moment about every point stays the same.
+FreeBodyItem throughPoint(FreeBodyItem item, const Vec2& point)
+{
+    item.couple += cross(item.at - point, item.force);
+    item.at = point;
+    return item;
+}
+
+// Where a joint's pair touches: the second body's joint point.
+Vec2 contactPoint(const StepResult& s, const CompiledJoint& j) { return pointPosition(s.q, j.point[1]); }
+
+Vec2 axisOf(const StepResult& s, const CompiledJoint& j)
+{
+    return j.type == JointType::Pin ? Vec2::Zero() : Vec2(rotation(bodyAngle(s.q, j.body[0])) * j.axisLocal);
+}
+
+FreeBodyItem fromAction(const ConstraintAction& a)
+{
+    FreeBodyItem item;
+    item.at = a.at;
+    item.force = a.force;
+    item.couple = a.couple;
+    return item;
+}
+
+void addJointReactions(const CompiledMechanism& m, const StepResult& s, int body, std::vector<FreeBodyItem>& out)
+{
+    for (std::size_t k = 0; k < m.joints.size(); ++k) {
+        const CompiledJoint& j = m.joints[k];
+        for (int side = 0; side < 2; ++side) {
+            if (j.body[side] != body) continue;
+            FreeBodyItem item = throughPoint(fromAction(s.actions[side][k]), contactPoint(s, j));
+            item.kind = FreeBodyItemKind::JointReaction;
+            item.name = j.name;
+            item.otherBody = m.bodyName(j.body[1 - side]);
+            item.jointType = j.type;
+            item.axis = axisOf(s, j);
+            out.push_back(std::move(item));
+        }
+    }
+}
+
+void addDriverActions(const CompiledMechanism& m, const StepResult& s, int body, std::vector<FreeBodyItem>& out)
+{
+    for (std::size_t d = 0; d < m.drivers.size(); ++d) {
+        const CompiledDriver& driver = m.drivers[d];
+        const std::size_t k = m.joints.size() + d;  // constraints: joints, then drivers
+        for (int side = 0; side < 2; ++side) {
+            const ConstraintAction& a = s.actions[side][k];
+            if (a.body != body) continue;
+            FreeBodyItem item = fromAction(a);
+            int other = s.actions[1 - side][k].body;
+            if (driver.joint >= 0) {
+                const CompiledJoint& j = m.joints[driver.joint];
+                item = throughPoint(item, contactPoint(s, j));
+                item.jointType = j.type;
+                item.axis = axisOf(s, j);
+                other = j.body[1 - side];
+            }
+            else {
+                item.axis = (pointPosition(s.q, driver.ends[1]) - pointPosition(s.q, driver.ends[0])).normalized();
+            }
+            item.kind = FreeBodyItemKind::DriverAction;
+            item.name = driver.name;
+            item.otherBody = m.bodyName(other);
+            out.push_back(std::move(item));
+        }
+    }
+}
+
+// The applied load's kind, found by which of the mechanism's names its source
+// view points into (names can repeat across kinds; the storage cannot).
+template <class List>
+bool ownedBy(const List& list, std::string_view source)
+{
+    for (const auto& item : list)
+        if (item.name.data() == source.data()) return true;
+    return false;
+}
+
+FreeBodyItemKind loadKind(const CompiledMechanism& m, std::string_view source)
+{
+    if (ownedBy(m.forces, source)) return FreeBodyItemKind::Force;
+    if (ownedBy(m.torques, source)) return FreeBodyItemKind::Torque;
+    if (ownedBy(m.springs, source)) return FreeBodyItemKind::Spring;
+    if (ownedBy(m.dampers, source)) return FreeBodyItemKind::Damper;
+    if (ownedBy(m.torsionSprings, source)) return FreeBodyItemKind::TorsionSpring;
+    return FreeBodyItemKind::Weight;
+}
+
+void addAppliedLoads(const CompiledMechanism& m, const StepResult& s, int body, std::vector<FreeBodyItem>& out)
+{
+    for (const AppliedLoad& l : appliedLoads(m, s.q, s.qd, s.t, s.drivePosition)) {
+        if (l.body != body) continue;
+        FreeBodyItem item;
+        item.kind = loadKind(m, l.source);
+        item.name = std::string(l.source);
+        item.at = l.at;
+        item.force = l.force;
+        item.couple = l.couple;
+        out.push_back(std::move(item));
+    }
+}
+
+FreeBodyEquation equation(double sum, double kinetic) { return {sum, kinetic, sum - kinetic}; }
+
+}  // namespace
+
+FreeBodyDiagram freeBodyDiagram(const CompiledMechanism& m, const CycleResult& r, int body, int step)
+{
+    if (body < 0 || body >= int(m.bodies.size()))
+        throw std::out_of_range("free-body diagram: body index " + std::to_string(body) + " is not a moving body");
+    if (step < 0 || step >= int(r.steps.size()))
+        throw std::out_of_range("free-body diagram: step " + std::to_string(step) + " is outside the solved cycle");
+    const StepResult& s = r.steps[step];
+    FreeBodyDiagram d;
+    d.body = body;
+    d.bodyName = m.bodies[body].name;
+    d.step = step;
+    d.t = s.t;
+    d.cg = bodyOrigin(s.q, body);
+    d.angle = bodyAngle(s.q, body);
+    d.mass = m.bodies[body].mass.mass;
+    d.inertia = m.bodies[body].mass.inertia;
+    d.accel = s.qdd.segment<2>(3 * body);
+    d.alpha = s.qdd[3 * body + 2];
+    addJointReactions(m, s, body, d.items);
+    addDriverActions(m, s, body, d.items);
+    addAppliedLoads(m, s, body, d.items);
+
+    Vec2 force = Vec2::Zero();
+    double moment = 0.0;
+    for (const auto& item : d.items) {
+        force += item.force;
+        moment += item.couple + cross(item.at - d.cg, item.force);
+    }
+    d.fx = equation(force.x(), d.inertiaForce().x());
+    d.fy = equation(force.y(), d.inertiaForce().y());
+    d.moment = equation(moment, d.inertiaCouple());
+    return d;
+}
+
+int findBody(const CompiledMechanism& m, const std::string& name)
+{
+    if (name == kGroundName) return kGround;
+    for (std::size_t b = 0; b < m.bodies.size(); ++b)
+        if (m.bodies[b].name == name) return int(b);
+    return -2;
+}
+
+const char* freeBodyItemKindName(FreeBodyItemKind kind)
+{
+    switch (kind) {
+    case FreeBodyItemKind::JointReaction: return "joint";
+    case FreeBodyItemKind::DriverAction: return "driver";
+    case FreeBodyItemKind::Weight: return "weight";
+    case FreeBodyItemKind::Force: return "force";
+    case FreeBodyItemKind::Torque: return "torque";
+    case FreeBodyItemKind::Spring: return "spring";
+    case FreeBodyItemKind::Damper: return "damper";
+    case FreeBodyItemKind::TorsionSpring: return "torsion spring";
+    }
+    return "load";
+}
+
+}  // namespace clevis

@@ -1,0 +1,90 @@
+#include "core/results/results_csv.h"
+
+#include "core/results/drive_units.h"
+
+#include <locale>
+#include <sstream>
+#include <string>
+#include <vector>
+
+namespace clevis {
+namespace {
+
+// RFC 4180 quoting: a field with a comma, quote or line break is enclosed in
+// quotes, its quotes doubled.
+std::string csvField(const std::string& text)
+{
+    if (text.find_first_of(",\"\r\n") == std::string::npos) return text;
+    std::string quoted = "\"";
+    for (const char c : text) {
+        if (c == '"') quoted += '"';
+        quoted += c;
+    }
+    return quoted + "\"";
+}
+
+// Headers spell degrees "deg", as the other angle columns do.
+std::string driveHeaderUnit(DriverType type) { return type == DriverType::Rotary ? "deg" : "m"; }
+
+std::vector<std::string> header(const CompiledMechanism& m, const CycleResult& r)
+{
+    std::vector<std::string> h{"t [s]"};
+    for (const auto& d : m.drivers) h.push_back(d.name + " [" + driveHeaderUnit(d.type) + "]");
+    static const char* const bodyColumns[] = {".x [m]",       ".y [m]",       ".angle [deg]",
+                                              ".vx [m/s]",    ".vy [m/s]",    ".omega [rad/s]",
+                                              ".ax [m/s²]",   ".ay [m/s²]",   ".alpha [rad/s²]"};
+    for (const auto& b : m.bodies)
+        for (const char* column : bodyColumns) h.push_back(b.name + column);
+    for (const auto& j : m.joints)
+        for (const char* column : {".fx [N]", ".fy [N]", ".moment [N·m]"}) h.push_back(j.name + column);
+    for (const auto& d : m.drivers) {
+        h.push_back(d.name + ".effort [" + effortUnit(d.type) + "]");
+        h.push_back(d.name + ".power [W]");
+    }
+    for (const char* column : {"ground.fx [N]", "ground.fy [N]", "ground.moment [N·m]", "kinetic [J]", "gravity [J]",
+                               "spring [J]"})
+        h.push_back(column);
+    for (const auto& pin : r.transmissionPins) h.push_back(m.joints[pin.joint].name + ".transmission [deg]");
+    h.push_back("near_singular");
+    return h;
+}
+
+void writeRow(std::ostream& out, const std::vector<double>& values, bool nearSingular)
+{
+    for (const double v : values) out << v << ',';
+    out << (nearSingular ? 1 : 0) << '\n';
+}
+
+std::vector<double> rowValues(const CompiledMechanism& m, const StepResult& s)
+{
+    std::vector<double> v{s.t};
+    for (std::size_t d = 0; d < m.drivers.size(); ++d) v.push_back(driveDisplayValue(m.drivers[d].type, s.drivePosition[d]));
+    for (Eigen::Index i = 0; i < s.q.size(); i += 3) {
+        v.insert(v.end(), {s.q[i], s.q[i + 1], radToDeg(s.q[i + 2])});
+        v.insert(v.end(), {s.qd[i], s.qd[i + 1], s.qd[i + 2]});
+        v.insert(v.end(), {s.qdd[i], s.qdd[i + 1], s.qdd[i + 2]});
+    }
+    for (const auto& j : s.joints) v.insert(v.end(), {j.force.x(), j.force.y(), j.moment});
+    for (std::size_t d = 0; d < s.effort.size(); ++d) v.insert(v.end(), {s.effort[d], s.power[d]});
+    v.insert(v.end(), {s.groundForce.x(), s.groundForce.y(), s.groundMoment, s.kinetic, s.gravityPotential,
+                       s.springPotential});
+    v.insert(v.end(), s.transmissionDeg.begin(), s.transmissionDeg.end());
+    return v;
+}
+
+}  // namespace
+
+void writeResultsCsv(std::ostream& out, const CompiledMechanism& m, const CycleResult& r)
+{
+    // Built in the classic locale so the decimal point is always '.'.
+    std::ostringstream text;
+    text.imbue(std::locale::classic());
+    text.precision(12);
+    const std::vector<std::string> h = header(m, r);
+    for (std::size_t i = 0; i < h.size(); ++i) text << (i ? "," : "") << csvField(h[i]);
+    text << '\n';
+    for (const auto& s : r.steps) writeRow(text, rowValues(m, s), s.nearSingular);
+    out << text.str();
+}
+
+}  // namespace clevis

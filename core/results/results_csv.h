@@ -1,0 +1,14 @@
+// The per-step results as a CSV table for spreadsheets: one row per step,
+// each column headed by its name and unit, e.g. "O.fx [N]". The columns are
+// described in docs/results-format.md.
+#pragma once
+
+#include "core/results/results.h"
+
+#include <ostream>
+
+namespace clevis {
+
+void writeResultsCsv(std::ostream& out, const CompiledMechanism& m, const CycleResult& r);
+
+}  // namespace clevis

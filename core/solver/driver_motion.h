@@ -1,0 +1,25 @@
+// Prescribed position, rate and acceleration of a driver's coordinate.
+#pragma once
+
+#include "core/solver/compiled_mechanism.h"
+#include "core/solver/cubic_spline.h"
+
+namespace clevis {
+
+struct DriveState {
+    double position, rate, accel;  // rad or m, per s, per s²
+};
+
+class DriverMotion {
+public:
+    DriverMotion(const Motion& motion, double drawnPosition, double cycleDuration);
+    DriveState operator()(double t) const;
+
+private:
+    Motion motion_;
+    double start_;  // constant speed: position at t = 0
+    double cycle_;
+    CubicSpline table_;
+};
+
+}  // namespace clevis

@@ -1,0 +1,49 @@
+#include "render/cycle_axis.h"
+
+#include "core/results/drive_units.h"
+
+#include <cmath>
+
+namespace clevis::ui {
+namespace {
+
+bool strictlyMonotonic(const std::vector<double>& v)
+{
+    if (v.size() < 2) return false;
+    const double sign = v[1] > v[0] ? 1.0 : -1.0;
+    for (std::size_t i = 1; i < v.size(); ++i)
+        if (sign * (v[i] - v[i - 1]) <= 0) return false;
+    return true;
+}
+
+}  // namespace
+
+int CycleAxis::nearestStep(double x) const
+{
+    int best = 0;
+    for (std::size_t i = 1; i < values.size(); ++i)
+        if (std::abs(values[i] - x) < std::abs(values[best] - x)) best = int(i);
+    return best;
+}
+
+CycleAxis cycleAxis(const CompiledMechanism& m, const CycleResult& r)
+{
+    CycleAxis axis;
+    if (m.drivers.size() == 1) {
+        const CompiledDriver& d = m.drivers.front();
+        for (const auto& s : r.steps) axis.values.push_back(driveDisplayValue(d.type, s.drivePosition[0]));
+        if (strictlyMonotonic(axis.values)) {
+            axis.unit = driveDisplayUnit(d.type);
+            axis.label = QString("%1 (%2)").arg(QString::fromStdString(d.name), axis.unit);
+            axis.byTime = false;
+            return axis;
+        }
+        axis.values.clear();
+    }
+    for (const auto& s : r.steps) axis.values.push_back(s.t);
+    axis.unit = "s";
+    axis.label = "time (s)";
+    return axis;
+}
+
+}  // namespace clevis::ui

@@ -1,0 +1,26 @@
+// The horizontal axis results are plotted against: the driver's position
+// when a single driver moves steadily one way through the cycle (what a
+// designer thinks in: crank angle, ram stroke), otherwise time.
+#pragma once
+
+#include "core/results/results.h"
+
+#include <QString>
+
+#include <vector>
+
+namespace clevis::ui {
+
+struct CycleAxis {
+    QString label;   // e.g. "motor (°)" or "time (s)"
+    QString unit;    // "°", "m" or "s"
+    bool byTime = true;
+    std::vector<double> values;  // one per step, in `unit`
+
+    // The step whose value is nearest `x`.
+    int nearestStep(double x) const;
+};
+
+CycleAxis cycleAxis(const CompiledMechanism& m, const CycleResult& r);
+
+}  // namespace clevis::ui

@@ -1,0 +1,97 @@
+#include "render/label_placer.h"
+
+#include <QFontMetricsF>
+#include <QPainter>
+
+#include <algorithm>
+#include <cmath>
+#include <limits>
+
+namespace clevis::ui {
+namespace {
+
+constexpr double kPi = 3.14159265358979323846;
+constexpr double kPadding = 2.0;
+
+double overlapArea(const QRectF& a, const QRectF& b)
+{
+    const QRectF i = a.intersected(b);
+    return i.isValid() ? i.width() * i.height() : 0.0;
+}
+
+bool crosses(const QLineF& line, const QRectF& box)
+{
+    if (box.contains(line.p1()) || box.contains(line.p2())) return true;
+    const QLineF edges[] = {{box.topLeft(), box.topRight()}, {box.topRight(), box.bottomRight()},
+                            {box.bottomRight(), box.bottomLeft()}, {box.bottomLeft(), box.topLeft()}};
+    for (const QLineF& e : edges)
+        if (line.intersects(e, nullptr) == QLineF::BoundedIntersection) return true;
+    return false;
+}
+
+}  // namespace
+
+LabelPlacer::LabelPlacer(const QRectF& area, const QFont& font) : area_(area), font_(font) {}
+
+void LabelPlacer::addObstacle(const QPainterPath& shape) { shapes_.push_back(shape); }
+void LabelPlacer::addObstacle(const QRectF& box) { boxes_.push_back(box); }
+void LabelPlacer::addObstacle(const QLineF& line) { lines_.push_back(line); }
+
+double LabelPlacer::cost(const QRectF& box) const
+{
+    double c = 0.0;
+    for (const Placed& p : placed_) c += 50.0 * overlapArea(box, p.box);
+    for (const QRectF& b : boxes_) c += 4.0 * overlapArea(box, b);
+    for (const QLineF& l : lines_) c += crosses(l, box) ? 400.0 : 0.0;
+    for (const QPainterPath& s : shapes_) c += s.intersects(box) ? 300.0 : 0.0;
+    if (!area_.contains(box)) c += 5000.0 + 20.0 * (box.width() * box.height() - overlapArea(box, area_));
+    return c;
+}
+
+void LabelPlacer::add(const QString& text, QPointF anchor, QPointF push)
+{
+    const QFontMetricsF metrics(font_);
+    const QSizeF size = metrics.boundingRect(text).size() + QSizeF(2 * kPadding, 2 * kPadding);
+    const double pushAngle = std::atan2(push.y(), push.x());
+    QRectF best;
+    double bestCost = std::numeric_limits<double>::infinity();
+    for (const double distance : {6.0, 18.0, 34.0})
+        for (int k = 0; k < 16; ++k) {
+            // Alternate either side of the push direction, nearest first.
+            const int step = (k + 1) / 2 * (k % 2 ? 1 : -1);
+            const double a = pushAngle + step * kPi / 8;
+            const QPointF dir(std::cos(a), std::sin(a));
+            // The box edge nearest the anchor sits `distance` away along dir.
+            const QPointF centre = anchor + dir * distance +
+                                   QPointF(dir.x() * size.width() / 2, dir.y() * size.height() / 2);
+            const QRectF box(centre - QPointF(size.width() / 2, size.height() / 2), size);
+            const double c = cost(box) + 0.8 * distance + 2.0 * std::abs(step);
+            if (c < bestCost) {
+                bestCost = c;
+                best = box;
+            }
+        }
+    placed_.push_back({text, best, anchor});
+}
+
+void LabelPlacer::paint(QPainter& p, const QColor& ink, const QColor& paper) const
+{
+    p.save();
+    p.setFont(font_);
+    for (const Placed& l : placed_) {
+        const QPointF nearest(std::clamp(l.anchor.x(), l.box.left(), l.box.right()),
+                              std::clamp(l.anchor.y(), l.box.top(), l.box.bottom()));
+        if (std::hypot(nearest.x() - l.anchor.x(), nearest.y() - l.anchor.y()) > 14) {
+            p.setPen(QPen(ink, 0.5));
+            p.drawLine(l.anchor, nearest);
+        }
+        QColor patch = paper;
+        patch.setAlphaF(0.85);
+        p.fillRect(l.box, patch);
+        p.setPen(ink);
+        p.drawText(l.box, Qt::AlignCenter, l.text);
+    }
+    p.restore();
+}
+
+}  // namespace clevis::ui

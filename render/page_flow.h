@@ -1,0 +1,49 @@
+// Text, tables and figures laid down the pages of a PDF one after another,
+// breaking pages where the next item does not fit, with a running footer.
+// Works in points on A4.
+#pragma once
+
+#include "render/figure_export.h"
+
+#include <QColor>
+#include <QPainter>
+#include <QStringList>
+
+#include <vector>
+
+class QPdfWriter;
+
+namespace clevis::ui {
+
+class PageFlow {
+public:
+    PageFlow(QPdfWriter& writer, QPainter& painter, QString footer);
+
+    double width() const;  // content width, pt
+    void heading(const QString& text);     // a numbered section starts a new page when little room is left
+    void subheading(const QString& text);
+    void paragraph(const QString& text, const QColor& colour = QColor(), bool bold = false);
+    // Columns as fractions of the content width; the first row is the heading.
+    void table(const std::vector<QStringList>& rows, const std::vector<double>& columns);
+    void figure(const Figure& f, double width);
+    void space(double points) { y_ += points; }
+    void newPage();
+    // Starts a new page unless `height` points still fit (keeps a caption with its figure).
+    void keep(double height) { ensure(height); }
+    void finish() { footer(); }  // the last page's footer
+    int page() const { return page_; }
+
+private:
+    void ensure(double height);
+    void footer();
+
+    QPdfWriter& writer_;
+    QPainter& p_;
+    QString footer_;
+    double y_ = 0;
+    int page_ = 1;
+};
+
+QFont reportFont(int pixels, bool bold = false);
+
+}  // namespace clevis::ui

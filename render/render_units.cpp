@@ -1,0 +1,27 @@
+#include "render/render_units.h"
+
+#include <algorithm>
+#include <cmath>
+
+namespace clevis::ui {
+
+QString formatQuantity(double value, const QString& unit)
+{
+    const double magnitude = std::abs(value);
+    // Below this a value is rounding noise of the solver, shown as zero.
+    if (magnitude < 1e-9) return QString("0 %1").arg(unit);
+    const int digitsBeforePoint = int(std::floor(std::log10(magnitude))) + 1;
+    const int decimals = std::clamp(4 - digitsBeforePoint, 0, 9);
+    return QString("%1 %2").arg(QString::number(value, 'f', decimals), unit);
+}
+
+QString formatDirection(double degrees) { return QString::number(degrees, 'f', 1) + QStringLiteral("°"); }
+
+QString RenderUnits::length(double metres) const { return formatQuantity(metres * lengthPerMetre, lengthSymbol); }
+QString RenderUnits::force(double newtons) const { return formatQuantity(newtons * forcePerNewton, forceSymbol); }
+QString RenderUnits::torque(double newtonMetres) const
+{
+    return formatQuantity(newtonMetres * torquePerNewtonMetre, torqueSymbol);
+}
+
+}  // namespace clevis::ui

@@ -1,0 +1,43 @@
+// The design-review report (PDF): the mechanism drawing, the inputs, the
+// loads over the cycle, the peak-load table (the numbers of summarize(), as
+// the command-line summary prints them), free-body diagrams at the critical
+// positions, the energy balance, and the cautions. Needs QtGui only, so it
+// runs headless.
+#pragma once
+
+#include "core/results/cycle_summary.h"
+#include "render/render_units.h"
+
+#include <QString>
+
+#include <functional>
+#include <vector>
+
+namespace clevis::ui {
+
+struct ReviewReportInput {
+    const CompiledMechanism& mechanism;
+    const CycleResult& result;
+    const CycleSummary& summary;
+    QString sourceName;  // the file the mechanism came from
+    RenderUnits units;
+};
+
+// The report's numbered section titles, in order (tests look for them).
+const std::vector<QString>& reviewReportSections();
+
+// A critical position: the step where a joint carries its peak, and the body
+// whose free-body diagram shows it.
+struct CriticalPosition {
+    QString reason;  // e.g. "peak at joint A"
+    int body = -1;
+    int step = -1;
+};
+std::vector<CriticalPosition> criticalPositions(const CompiledMechanism& m, const CycleSummary& s);
+
+// Writes the report; `progress(done, total)` may return false to cancel.
+// False with a message naming the file when it cannot be written.
+bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString* error,
+                       const std::function<bool(int, int)>& progress = {});
+
+}  // namespace clevis::ui

@@ -1,0 +1,124 @@
+#include "ui/analysis/analysis_state.h"
+
+#include "ui/document/mechanism_document.h"
+#include "ui/analysis/solve_worker.h"
+
+#include <QCoreApplication>
+#include <QThread>
+
+#include <algorithm>
+
+namespace clevis::ui {
+
+AnalysisState::AnalysisState(MechanismDocument* doc, QObject* parent)
+    : QObject(parent),
+      doc_(doc),
+      thread_(new QThread(this)),
+      newest_(std::make_shared<std::atomic<quint64>>(0)),
+      outcome_(std::make_shared<SolveOutcome>())
+{
+    qRegisterMetaType<std::shared_ptr<const SolveOutcome>>();
+    worker_ = new SolveWorker(newest_);
+    worker_->moveToThread(thread_);
+    connect(thread_, &QThread::finished, worker_, &QObject::deleteLater);
+    connect(worker_, &SolveWorker::solved, this, &AnalysisState::publish, Qt::QueuedConnection);
+    connect(doc_, &MechanismDocument::mechanismChanged, this, &AnalysisState::requestSolve);
+    thread_->start();
+    requestSolve();
+}
+
+AnalysisState::~AnalysisState()
+{
+    newest_->store(0);  // makes a sweep in progress stop at its next step
+    thread_->quit();
+    thread_->wait();
+}
+
+void AnalysisState::requestSolve()
+{
+    const bool wasBusy = busy();
+    const quint64 generation = ++requested_;
+    newest_->store(generation);
+    QMetaObject::invokeMethod(
+        worker_, [worker = worker_, m = doc_->mechanism(), generation] { worker->solve(m, generation); },
+        Qt::QueuedConnection);
+    if (!wasBusy) emit busyChanged(true);
+}
+
+void AnalysisState::publish(std::shared_ptr<const SolveOutcome> outcome)
+{
+    if (outcome->generation != requested_) return;  // an edit came after this request
+    outcome_ = std::move(outcome);
+    const int last = hasResult() ? int(outcome_->result.steps.size()) - 1 : 0;
+    const int step = std::clamp(currentStep_, 0, last);
+    emit resultChanged();
+    emit busyChanged(false);
+    if (step != currentStep_) {
+        currentStep_ = step;
+        emit currentStepChanged(step);
+    }
+}
+
+bool AnalysisState::hasResult() const
+{
+    return outcome_->compiled && !outcome_->result.steps.empty();
+}
+
+const CompiledMechanism& AnalysisState::compiled() const
+{
+    return *outcome_->compiled;
+}
+
+const CycleResult& AnalysisState::result() const
+{
+    return outcome_->result;
+}
+
+const CycleSummary& AnalysisState::summary() const
+{
+    return outcome_->summary;
+}
+
+QString AnalysisState::errorText() const
+{
+    return outcome_->error;
+}
+
+QStringList AnalysisState::offendingItems() const
+{
+    return outcome_->offendingItems;
+}
+
+const std::optional<MobilityReport>& AnalysisState::mobility() const
+{
+    return outcome_->mobility;
+}
+
+bool AnalysisState::busy() const
+{
+    return outcome_->generation != requested_;
+}
+
+int AnalysisState::currentStep() const
+{
+    return currentStep_;
+}
+
+void AnalysisState::setCurrentStep(int step)
+{
+    const int last = hasResult() ? int(outcome_->result.steps.size()) - 1 : 0;
+    step = std::clamp(step, 0, last);
+    if (step == currentStep_) return;
+    currentStep_ = step;
+    emit currentStepChanged(step);
+}
+
+void AnalysisState::waitForIdle()
+{
+    while (busy()) {
+        QCoreApplication::processEvents(QEventLoop::AllEvents);
+        QThread::msleep(2);
+    }
+}
+
+}  // namespace clevis::ui

@@ -1,0 +1,186 @@
+#include "ui/canvas/canvas_view.h"
+
+#include "ui/analysis/analysis_state.h"
+#include "ui/shell/display_units.h"
+#include "ui/document/mechanism_document.h"
+#include "core/results/posed_mechanism.h"
+#include "ui/document/sketch_geometry.h"
+#include "ui/canvas/sketch_painter.h"
+#include "ui/canvas/tools/select_tool.h"
+
+#include <QKeyEvent>
+#include <QMouseEvent>
+#include <QPainter>
+#include <QWheelEvent>
+
+#include <cmath>
+
+namespace clevis::ui {
+namespace {
+
+// Every point the drawing uses, for fitting the view around it.
+std::vector<Vec2> drawnPoints(const Mechanism& m)
+{
+    std::vector<Vec2> pts;
+    for (const auto& j : m.joints) pts.push_back(j.at);
+    for (const auto& d : m.drivers)
+        for (const auto& e : d.ends)
+            if (e) pts.push_back(e->at);
+    for (const auto& l : m.loads) pts.push_back(loadAnchor(m, l));
+    for (const auto& b : m.bodies)
+        for (const auto& pm : b.pointMasses) pts.push_back(pm.at);
+    return pts;
+}
+
+}  // namespace
+
+CanvasView::CanvasView(MechanismDocument* doc, AnalysisState* analysis, QWidget* parent)
+    : QWidget(parent), doc_(doc), analysis_(analysis), tool_(std::make_unique<SelectTool>(*this))
+{
+    setObjectName(QStringLiteral("canvas"));
+    setMouseTracking(true);
+    setFocusPolicy(Qt::StrongFocus);
+    setAcceptDrops(false);  // files dropped here go to the main window
+    connect(doc_, &MechanismDocument::mechanismChanged, this, qOverload<>(&QWidget::update));
+    connect(doc_, &MechanismDocument::selectionChanged, this, qOverload<>(&QWidget::update));
+    connect(doc_, &MechanismDocument::documentReset, this, &CanvasView::fitToView);
+    connect(analysis_, &AnalysisState::resultChanged, this, qOverload<>(&QWidget::update));
+    connect(analysis_, &AnalysisState::currentStepChanged, this, qOverload<>(&QWidget::update));
+    connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, qOverload<>(&QWidget::update));
+}
+
+CanvasView::~CanvasView() = default;
+
+void CanvasView::setTool(std::unique_ptr<Tool> tool)
+{
+    tool_ = std::move(tool);
+    setCursor(dynamic_cast<SelectTool*>(tool_.get()) ? Qt::ArrowCursor : Qt::CrossCursor);
+    announce();
+    update();
+}
+
+void CanvasView::announce()
+{
+    emit hintChanged(tool_->hint());
+}
+
+void CanvasView::tell(const QString& message)
+{
+    told_ = true;
+    emit hintChanged(message);
+}
+
+void CanvasView::fitToView()
+{
+    const std::vector<Vec2> pts = drawnPoints(doc_->mechanism());
+    if (pts.empty()) {
+        view_.fit({-0.05, -0.05}, {0.25, 0.15}, rect());
+    } else {
+        Vec2 lo = pts[0], hi = pts[0];
+        for (const auto& p : pts) lo = lo.cwiseMin(p), hi = hi.cwiseMax(p);
+        view_.fit(lo, hi, rect());
+    }
+    fitPending_ = width() < 50;
+    update();
+}
+
+void CanvasView::zoomBy(double factor)
+{
+    view_.zoomAt(rect().center(), factor);
+    update();
+}
+
+Pointer CanvasView::pointer(const QPointF& pos, Qt::KeyboardModifiers mods) const
+{
+    const bool free = mods & Qt::AltModifier;  // Alt: place exactly under the pointer
+    return {pos, snap(doc_->mechanism(), view_, pos, free ? std::nullopt : tool_->strokeStart(), !free), mods};
+}
+
+void CanvasView::paintEvent(QPaintEvent*)
+{
+    QPainter p(this);
+    p.setRenderHint(QPainter::Antialiasing);
+    paintGrid(p, view_, rect());
+    // Away from the start of the cycle the mechanism is shown where the
+    // scrubber has it; edits are made on the drawn pose (see mousePressEvent).
+    const bool scrubbed = analysis_->hasResult() && analysis_->currentStep() > 0;
+    const Mechanism posed =
+        scrubbed ? posedMechanism(doc_->mechanism(), analysis_->compiled(), analysis_->result().steps[analysis_->currentStep()])
+                 : Mechanism{};
+    PaintContext c{p, view_, scrubbed ? posed : doc_->mechanism(), doc_->selection(), analysis_->offendingItems()};
+    paintSketch(c);
+    tool_->paintPreview(p);
+}
+
+void CanvasView::mousePressEvent(QMouseEvent* e)
+{
+    setFocus();
+    if (e->button() == Qt::MiddleButton || e->button() == Qt::RightButton) {
+        panFrom_ = e->position();
+        setCursor(Qt::ClosedHandCursor);
+        return;
+    }
+    if (e->button() != Qt::LeftButton) return;
+    analysis_->setCurrentStep(0);  // back to the drawn pose, where the document's coordinates are
+    told_ = false;
+    tool_->press(pointer(e->position(), e->modifiers()));
+    if (!told_) announce();  // a note about this click stays until the next one
+}
+
+void CanvasView::mouseMoveEvent(QMouseEvent* e)
+{
+    if (panFrom_) {
+        view_.panBy(e->position() - *panFrom_);
+        panFrom_ = e->position();
+        update();
+        return;
+    }
+    tool_->move(pointer(e->position(), e->modifiers()));
+}
+
+void CanvasView::mouseReleaseEvent(QMouseEvent* e)
+{
+    if (panFrom_) {
+        panFrom_.reset();
+        setCursor(dynamic_cast<SelectTool*>(tool_.get()) ? Qt::ArrowCursor : Qt::CrossCursor);
+        return;
+    }
+    if (e->button() == Qt::LeftButton) tool_->release(pointer(e->position(), e->modifiers()));
+}
+
+void CanvasView::mouseDoubleClickEvent(QMouseEvent* e)
+{
+    if (e->button() != Qt::LeftButton) return;
+    tool_->finish();
+    announce();
+}
+
+void CanvasView::wheelEvent(QWheelEvent* e)
+{
+    // One notch (120 units) zooms by a fifth; touchpads send smaller steps.
+    const double factor = std::pow(1.2, e->angleDelta().y() / 120.0);
+    view_.zoomAt(e->position(), factor);
+    update();
+}
+
+void CanvasView::keyPressEvent(QKeyEvent* e)
+{
+    if (e->key() == Qt::Key_Escape) {
+        if (!tool_->cancel()) emit toolDismissed();
+        announce();
+        return;
+    }
+    if (e->key() == Qt::Key_Return || e->key() == Qt::Key_Enter) {
+        tool_->finish();
+        announce();
+        return;
+    }
+    QWidget::keyPressEvent(e);
+}
+
+void CanvasView::resizeEvent(QResizeEvent*)
+{
+    if (fitPending_) fitToView();
+}
+
+}  // namespace clevis::ui

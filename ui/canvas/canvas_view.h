@@ -1,0 +1,64 @@
+// The sketching canvas: draws the document at its drawn pose, passes pointer
+// strokes (snapped) to the active tool, zooms with the wheel, pans with the
+// middle or right button. It keeps no part of the mechanism itself.
+#pragma once
+
+#include "ui/canvas/tools/tool.h"
+#include "ui/canvas/view_transform.h"
+
+#include <QWidget>
+
+#include <memory>
+
+namespace clevis::ui {
+
+class AnalysisState;
+class MechanismDocument;
+
+class CanvasView : public QWidget, public ToolHost {
+    Q_OBJECT
+public:
+    CanvasView(MechanismDocument* doc, AnalysisState* analysis, QWidget* parent = nullptr);
+    ~CanvasView() override;
+
+    void setTool(std::unique_ptr<Tool> tool);
+    const Tool* tool() const { return tool_.get(); }
+    void fitToView();
+    void zoomBy(double factor);
+
+    // ToolHost
+    MechanismDocument* document() override { return doc_; }
+    const ViewTransform& view() const override { return view_; }
+    void refresh() override { update(); }
+    void tell(const QString& message) override;
+
+    QSize sizeHint() const override { return {900, 620}; }
+
+signals:
+    void hintChanged(const QString& hint);  // what the active tool expects next, or a note about the last click
+    void toolDismissed();                   // Esc with nothing to cancel: back to selecting
+
+protected:
+    void paintEvent(QPaintEvent*) override;
+    void mousePressEvent(QMouseEvent*) override;
+    void mouseMoveEvent(QMouseEvent*) override;
+    void mouseReleaseEvent(QMouseEvent*) override;
+    void mouseDoubleClickEvent(QMouseEvent*) override;
+    void wheelEvent(QWheelEvent*) override;
+    void keyPressEvent(QKeyEvent*) override;
+    void resizeEvent(QResizeEvent*) override;
+
+private:
+    Pointer pointer(const QPointF& pos, Qt::KeyboardModifiers mods) const;
+    void announce();
+
+    MechanismDocument* doc_;
+    AnalysisState* analysis_;
+    ViewTransform view_;
+    std::unique_ptr<Tool> tool_;
+    std::optional<QPointF> panFrom_;
+    bool fitPending_ = true;
+    bool told_ = false;  // fit once the widget has its real size
+};
+
+}  // namespace clevis::ui

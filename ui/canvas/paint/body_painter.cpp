@@ -1,0 +1,60 @@
+#include "render/palette.h"
+#include "ui/document/sketch_geometry.h"
+#include "ui/canvas/sketch_painter.h"
+#include "ui/canvas/sketch_style.h"
+
+#include <QPainterPath>
+#include <QPainterPathStroker>
+
+namespace clevis::ui {
+namespace {
+
+// A bar is the segment between its pins widened into a rounded slot; a plate
+// is its pins' hull with the same rounded margin, so pins never sit on an edge.
+QPainterPath bodyShape(const std::vector<Vec2>& outline, const ViewTransform& view)
+{
+    QPainterPath spine;
+    spine.moveTo(view.toScreen(outline[0]));
+    for (std::size_t i = 1; i < outline.size(); ++i) spine.lineTo(view.toScreen(outline[i]));
+    if (outline.size() >= 3) spine.closeSubpath();
+    if (outline.size() == 1) spine.lineTo(spine.currentPosition() + QPointF(0.01, 0));
+    QPainterPathStroker stroker;
+    stroker.setWidth(style::kBarWidth);
+    stroker.setCapStyle(Qt::RoundCap);
+    stroker.setJoinStyle(Qt::RoundJoin);
+    const QPainterPath rim = stroker.createStroke(spine);
+    // The stroke alone is a ring round a plate; unite it with the polygon to fill it.
+    return outline.size() >= 3 ? rim.united(spine) : rim.simplified();
+}
+
+QPointF labelPoint(const std::vector<Vec2>& outline, const ViewTransform& view)
+{
+    Vec2 c = Vec2::Zero();
+    for (const auto& p : outline) c += p / double(outline.size());
+    return view.toScreen(c) + QPointF(style::kBarWidth * 0.6, -style::kBarWidth * 0.7);
+}
+
+}  // namespace
+
+void paintBodies(PaintContext& c)
+{
+    QPainter& p = c.painter;
+    p.save();
+    for (const auto& body : c.mechanism.bodies) {
+        const std::vector<Vec2> outline = bodyOutline(c.mechanism, body.name);
+        if (outline.empty()) continue;
+        const QPainterPath shape = bodyShape(outline, c.view);
+        p.setBrush(Qt::NoBrush);
+        p.setPen(c.haloPen(Selection::Kind::Body, body.name, 1.6));
+        p.drawPath(shape);
+        QColor fill = palette::linkFill();
+        if (outline.size() >= 3) fill.setAlpha(200);  // plates overlap the bars under them
+        p.setBrush(fill);
+        p.setPen(QPen(palette::link(), 1.6));
+        p.drawPath(shape);
+        drawLabel(p, labelPoint(outline, c.view), QString::fromStdString(body.name), palette::link());
+    }
+    p.restore();
+}
+
+}  // namespace clevis::ui

@@ -1,0 +1,84 @@
+#include "ui/shell/display_units.h"
+#include "render/palette.h"
+#include "ui/document/sketch_geometry.h"
+#include "ui/canvas/sketch_painter.h"
+#include "ui/canvas/sketch_style.h"
+
+#include <QtMath>
+
+namespace clevis::ui {
+namespace {
+
+// What a driver does, in the words and units a designer reads at a glance.
+QString motionLabel(const Driver& d)
+{
+    if (const auto* c = std::get_if<ConstantSpeed>(&d.motion)) {
+        if (d.type == DriverType::Rotary) return QStringLiteral("%1 rpm").arg(c->speed * 60 / (2 * kPi), 0, 'g', 4);
+        return DisplayUnits::instance().formatLength(c->speed) + QStringLiteral("/s");
+    }
+    if (std::holds_alternative<Rise>(d.motion)) return QStringLiteral("cam law");
+    return QStringLiteral("table");
+}
+
+// A cylinder: a barrel from the first end over half the length, a rod to the second.
+void drawCylinder(QPainter& p, const QPointF& a, const QPointF& b)
+{
+    const QLineF line(a, b);
+    if (line.length() < 1) return;
+    p.save();
+    p.translate(a);
+    p.rotate(-line.angle());
+    const double len = line.length();
+    p.setPen(QPen(palette::driver(), 2.4, Qt::SolidLine, Qt::RoundCap));
+    p.drawLine(QPointF(len * 0.45, 0), QPointF(len, 0));
+    p.setPen(QPen(palette::driver(), 1.6));
+    p.setBrush(palette::paper());
+    p.drawRoundedRect(QRectF(0, -6, len * 0.55, 12), 3, 3);
+    p.restore();
+}
+
+}  // namespace
+
+void paintDrivers(PaintContext& c)
+{
+    QPainter& p = c.painter;
+    p.save();
+    for (const auto& d : c.mechanism.drivers) {
+        if (d.ends[0] && d.ends[1]) {
+            const QPointF a = c.view.toScreen(d.ends[0]->at), b = c.view.toScreen(d.ends[1]->at);
+            p.setPen(c.haloPen(Selection::Kind::Driver, d.name, 12));
+            p.drawLine(a, b);
+            drawCylinder(p, a, b);
+            drawLabel(p, a + QPointF(10, 18), QString::fromStdString(d.name) + "  " + motionLabel(d), palette::driver());
+            continue;
+        }
+        const int j = jointIndex(c.mechanism, d.joint);
+        if (j < 0) continue;
+        const QPointF at = c.view.toScreen(c.mechanism.joints[j].at);
+        p.setBrush(Qt::NoBrush);
+        if (d.type == DriverType::Rotary) {
+            const QPen halo = c.haloPen(Selection::Kind::Driver, d.name, 2.2);
+            if (halo.style() != Qt::NoPen) {
+                p.setPen(halo);
+                p.drawEllipse(at, style::kMotorRadius, style::kMotorRadius);
+            }
+            p.setPen(QPen(palette::driver(), 2.2, Qt::SolidLine, Qt::FlatCap));
+            drawArcArrow(p, at, style::kMotorRadius, 120, 250);
+        } else {
+            // At a slider: a double-headed arrow along the slide.
+            const double a = qDegreesToRadians(c.mechanism.joints[j].axisDeg);
+            const QPointF u(std::cos(a), -std::sin(a)), n(-u.y(), u.x());
+            const QPointF mid = at + n * (style::kBlockSize * 0.9);
+            p.setPen(c.haloPen(Selection::Kind::Driver, d.name, 2.2));
+            p.drawLine(mid - u * 22, mid + u * 22);
+            p.setPen(QPen(palette::driver(), 2.2));
+            drawArrow(p, mid, mid + u * 22);
+            drawArrow(p, mid, mid - u * 22);
+        }
+        drawLabel(p, at + QPointF(style::kMotorRadius + 4, -style::kMotorRadius), QString::fromStdString(d.name) + "  " + motionLabel(d),
+                  palette::driver());
+    }
+    p.restore();
+}
+
+}  // namespace clevis::ui

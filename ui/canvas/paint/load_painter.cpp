@@ -1,0 +1,124 @@
+#include "ui/shell/display_units.h"
+#include "render/palette.h"
+#include "ui/document/sketch_geometry.h"
+#include "ui/canvas/sketch_painter.h"
+#include "ui/canvas/sketch_style.h"
+
+#include <QtMath>
+
+namespace clevis::ui {
+namespace {
+
+QPointF screenDir(const Vec2& v)
+{
+    const double n = v.norm();
+    return n > 0 ? QPointF(v.x() / n, -v.y() / n) : QPointF(1, 0);
+}
+
+// A dashpot: a cup on the first end, a piston plate on a rod from the second.
+void drawDashpot(QPainter& p, const QPointF& a, const QPointF& b)
+{
+    const QLineF line(a, b);
+    const double len = line.length();
+    if (len < 1) return;
+    p.save();
+    p.translate(a);
+    p.rotate(-line.angle());
+    const double mid = len / 2;
+    p.drawLine(QPointF(0, 0), QPointF(mid - 8, 0));
+    p.drawPolyline(QPolygonF() << QPointF(mid + 8, -7) << QPointF(mid - 8, -7) << QPointF(mid - 8, 7) << QPointF(mid + 8, 7));
+    p.drawLine(QPointF(mid, -5), QPointF(mid, 5));
+    p.drawLine(QPointF(mid, 0), QPointF(len, 0));
+    p.restore();
+}
+
+class LoadPainter {
+public:
+    LoadPainter(PaintContext& c, int index) : c_(c), p_(c.painter), index_(index) {}
+
+    void operator()(const ForceLoad& f)
+    {
+        const QPointF tip = c_.view.toScreen(f.point.at);
+        const QPointF tail = tip - screenDir(f.force) * style::kArrowLength;
+        halo(f.name, [&] { p_.drawLine(tail, tip); });
+        p_.setPen(QPen(palette::load(), 2.2));
+        drawArrow(p_, tail, tip);
+        label(tail, QString::fromStdString(f.name) + "  " + DisplayUnits::instance().formatForce(f.force.norm()));
+    }
+    void operator()(const TorqueLoad& t)
+    {
+        const QPointF at = c_.view.toScreen(loadAnchor(c_.mechanism, t));
+        const double r = style::kMotorRadius * 1.5;
+        halo(t.name, [&] { p_.drawEllipse(at, r, r); });
+        p_.setPen(QPen(palette::load(), 2.2));
+        drawArcArrow(p_, at, r, t.torque >= 0 ? -60 : 240, t.torque >= 0 ? 200 : -200);
+        label(at + QPointF(r, -r), QString::fromStdString(t.name) + "  " + DisplayUnits::instance().formatTorque(t.torque));
+    }
+    void operator()(const SpringLoad& s)
+    {
+        const QPointF a = c_.view.toScreen(s.a.at), b = c_.view.toScreen(s.b.at);
+        halo(s.name, [&] { p_.drawLine(a, b); });
+        p_.setPen(QPen(palette::spring(), 1.8, Qt::SolidLine, Qt::RoundCap, Qt::RoundJoin));
+        drawZigZag(p_, a, b);
+        endDots(a, b);
+        label((a + b) / 2 + QPointF(8, -8), QString::fromStdString(s.name) + "  " + DisplayUnits::instance().formatStiffness(s.stiffness));
+    }
+    void operator()(const DamperLoad& d)
+    {
+        const QPointF a = c_.view.toScreen(d.a.at), b = c_.view.toScreen(d.b.at);
+        halo(d.name, [&] { p_.drawLine(a, b); });
+        p_.setPen(QPen(palette::spring(), 1.8));
+        p_.setBrush(Qt::NoBrush);
+        drawDashpot(p_, a, b);
+        endDots(a, b);
+        label((a + b) / 2 + QPointF(8, -10), QString::fromStdString(d.name) + QStringLiteral("  %1 N·s/m").arg(d.damping, 0, 'g', 4));
+    }
+    void operator()(const TorsionSpringLoad& t)
+    {
+        const QPointF at = c_.view.toScreen(loadAnchor(c_.mechanism, t));
+        halo(t.name, [&] { p_.drawEllipse(at, style::kMotorRadius * 1.5, style::kMotorRadius * 1.5); });
+        p_.setPen(QPen(palette::spring(), 1.8));
+        p_.setBrush(Qt::NoBrush);
+        // A coil: three turns of growing radius.
+        QPolygonF coil;
+        for (int i = 0; i <= 90; ++i) {
+            const double a = qDegreesToRadians(i * 12.0), r = 8 + style::kMotorRadius * 0.6 * i / 90.0;
+            coil << at + QPointF(std::cos(a) * r, -std::sin(a) * r);
+        }
+        p_.drawPolyline(coil);
+        label(at + QPointF(16, 20), QString::fromStdString(t.name) + QStringLiteral("  %1 N·m/rad").arg(t.stiffness, 0, 'g', 4));
+    }
+
+private:
+    template <typename Stroke>
+    void halo(const std::string& name, Stroke stroke)
+    {
+        const QPen pen = c_.haloPen(Selection::Kind::Load, name, 2.2, index_);
+        if (pen.style() == Qt::NoPen) return;
+        p_.setPen(pen);
+        p_.setBrush(Qt::NoBrush);
+        stroke();
+    }
+    void endDots(const QPointF& a, const QPointF& b)
+    {
+        p_.setBrush(palette::spring());
+        p_.drawEllipse(a, 2.5, 2.5);
+        p_.drawEllipse(b, 2.5, 2.5);
+    }
+    void label(const QPointF& at, const QString& text) { drawLabel(p_, at, text, palette::ink()); }
+
+    PaintContext& c_;
+    QPainter& p_;
+    int index_;
+};
+
+}  // namespace
+
+void paintLoads(PaintContext& c)
+{
+    c.painter.save();
+    for (std::size_t i = 0; i < c.mechanism.loads.size(); ++i) std::visit(LoadPainter(c, int(i)), c.mechanism.loads[i]);
+    c.painter.restore();
+}
+
+}  // namespace clevis::ui

@@ -1,0 +1,43 @@
+// Draws the mechanism as the document describes it, in Clevis's own symbols:
+// a clevis bracket over a hatched base for ground pins, rounded slots for
+// bars, filled outlines for plates, a block on a rail for sliders, vermillion
+// arc arrows for motors, green arrows for loads, purple zig-zags for springs.
+#pragma once
+
+#include "core/model/mechanism.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/canvas/view_transform.h"
+
+#include <QPainter>
+#include <QStringList>
+
+namespace clevis::ui {
+
+struct PaintContext {
+    QPainter& painter;
+    const ViewTransform& view;
+    const Mechanism& mechanism;
+    Selection selected;
+    QStringList problems;  // names the last analysis blamed
+
+    // The halo behind a part: yellow when selected, red when blamed; none otherwise.
+    bool halo(Selection::Kind kind, const std::string& name, int loadIndex = -1) const;
+    QPen haloPen(Selection::Kind kind, const std::string& name, double width, int loadIndex = -1) const;
+};
+
+void paintSketch(PaintContext& c);  // everything below, in drawing order
+
+void paintGrid(QPainter& p, const ViewTransform& view, const QRectF& area);
+void paintBodies(PaintContext& c);
+void paintJoints(PaintContext& c);  // pins, ground brackets, slider blocks, slots
+void paintDrivers(PaintContext& c);
+void paintLoads(PaintContext& c);
+void paintMasses(PaintContext& c);  // centres of mass and point masses
+
+// Shared strokes.
+void drawArcArrow(QPainter& p, const QPointF& centre, double radius, double startDeg, double spanDeg);
+void drawArrow(QPainter& p, const QPointF& tail, const QPointF& tip);
+void drawZigZag(QPainter& p, const QPointF& a, const QPointF& b);
+void drawLabel(QPainter& p, const QPointF& at, const QString& text, const QColor& colour);
+
+}  // namespace clevis::ui

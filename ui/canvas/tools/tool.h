@@ -1,0 +1,56 @@
+// A drawing or editing tool on the canvas. The canvas snaps the pointer and
+// hands the tool finished positions; the tool turns strokes into edits on the
+// document (one undo step each) and draws its own preview meanwhile.
+#pragma once
+
+#include "ui/document/mechanism_document.h"
+#include "ui/canvas/snapping.h"
+#include "ui/canvas/view_transform.h"
+
+#include <QPainter>
+#include <QString>
+
+#include <optional>
+
+namespace clevis::ui {
+
+// What a tool may use of the canvas it runs on.
+class ToolHost {
+public:
+    virtual ~ToolHost() = default;
+    virtual MechanismDocument* document() = 0;
+    virtual const ViewTransform& view() const = 0;
+    virtual void refresh() = 0;                      // repaint the preview
+    virtual void tell(const QString& message) = 0;   // a short note in the status bar
+};
+
+struct Pointer {
+    QPointF screen;
+    SnapResult snap;
+    Qt::KeyboardModifiers modifiers;
+};
+
+class Tool {
+public:
+    explicit Tool(ToolHost& host) : host_(host) {}
+    virtual ~Tool() = default;
+
+    virtual QString hint() const = 0;  // what to do next, for the status bar
+    // The point horizontal/vertical snapping is measured from, while a stroke is open.
+    virtual std::optional<Vec2> strokeStart() const { return std::nullopt; }
+
+    virtual void press(const Pointer&) {}
+    virtual void move(const Pointer&) {}
+    virtual void release(const Pointer&) {}
+    virtual void finish() {}  // Enter or a double click
+    // Esc: drops the stroke in progress; returns false when there was none.
+    virtual bool cancel() { return false; }
+    virtual void paintPreview(QPainter&) const {}
+
+protected:
+    ToolHost& host_;
+    MechanismDocument& doc() { return *host_.document(); }
+    const Mechanism& mechanism() { return host_.document()->mechanism(); }
+};
+
+}  // namespace clevis::ui

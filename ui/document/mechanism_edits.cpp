@@ -1,0 +1,277 @@
+#include "ui/document/mechanism_edits.h"
+
+#include "core/file/file_units.h"
+#include "ui/document/sketch_geometry.h"
+
+#include <algorithm>
+
+namespace clevis::ui::edits {
+namespace {
+
+// Two points closer than this are the same place on the drawing.
+constexpr double kSamePoint = 1e-9;
+
+std::string addJoint(Mechanism& m, JointType type, const std::string& first, const std::string& second,
+                     const Vec2& at, double axisDeg, const std::string& stem)
+{
+    Joint j;
+    j.name = freshName(m, stem);
+    j.type = type;
+    j.bodies[0] = first;
+    j.bodies[1] = second;
+    j.at = at;
+    j.axisDeg = axisDeg;
+    m.joints.push_back(j);
+    return j.name;
+}
+
+bool hasBody(const Joint& j, const std::string& body)
+{
+    return j.bodies[0] == body || j.bodies[1] == body;
+}
+
+// The body a new pin at an occupied joint hangs from: the frame for a ground
+// pin, the pin's own body for a slot, the block for a slider.
+std::string baseOf(const Joint& j)
+{
+    return j.type == JointType::Pin ? j.bodies[0] : j.bodies[1];
+}
+
+// Fills the joint's open slot with `body`, or adds a pin beside it.
+void attach(Mechanism& m, const std::string& jointName, const std::string& body)
+{
+    const Vec2 at = m.joints[jointIndex(m, jointName)].at;
+    const std::vector<int> here = jointsAt(m, at, kSamePoint);
+    for (int i : here)
+        if (hasBody(m.joints[i], body)) return;
+    for (int i : here) {
+        Joint& j = m.joints[i];
+        if (j.type == JointType::Slider) continue;  // a link rides on the block's pin, not the guide
+        if (j.bodies[0].empty() && j.type == JointType::Pin) { j.bodies[0] = body; return; }
+        if (j.bodies[1].empty() && !j.bodies[0].empty()) { j.bodies[1] = body; return; }
+    }
+    const Joint& j = m.joints[jointIndex(m, jointName)];
+    addJoint(m, JointType::Pin, baseOf(j), body, at, 0.0, "pin");
+}
+
+bool onBody(const BodyPointRef& p, const std::string& body)
+{
+    return p.body == body;
+}
+
+}  // namespace
+
+std::string addGroundPin(Mechanism& m, const Vec2& at)
+{
+    return addJoint(m, JointType::Pin, kGroundName, "", at, 0.0, "O");
+}
+
+std::string addPin(Mechanism& m, const Vec2& at)
+{
+    return addJoint(m, JointType::Pin, "", "", at, 0.0, "P");
+}
+
+std::string addBody(Mechanism& m, const std::vector<std::string>& joints)
+{
+    Body b;
+    b.name = freshName(m, joints.size() > 2 ? "plate" : "link");
+    m.bodies.push_back(b);
+    for (const auto& j : joints) attach(m, j, b.name);
+    return b.name;
+}
+
+std::string addSlider(Mechanism& m, const std::string& guide, const Vec2& at, double axisDeg)
+{
+    Body block;
+    block.name = freshName(m, "block");
+    m.bodies.push_back(block);
+    const std::string slider = addJoint(m, JointType::Slider, guide, block.name, at, axisDeg, "S");
+    addJoint(m, JointType::Pin, block.name, "", at, 0.0, "P");
+    return slider;
+}
+
+std::string addPinInSlot(Mechanism& m, const std::string& slotBody, const Vec2& at, double axisDeg)
+{
+    return addJoint(m, JointType::PinInSlot, slotBody, "", at, axisDeg, "K");
+}
+
+std::string addRotaryMotor(Mechanism& m, const std::string& pinJoint)
+{
+    Driver d;
+    d.name = freshName(m, "motor");
+    d.type = DriverType::Rotary;
+    d.joint = pinJoint;
+    d.motion = ConstantSpeed{toSi(FileUnit::Rpm, 60.0), 0.0};  // as a file's "speed_rpm": 60 reads
+    m.drivers.push_back(d);
+    return d.name;
+}
+
+std::string addSliderDrive(Mechanism& m, const std::string& sliderJoint)
+{
+    Driver d;
+    d.name = freshName(m, "drive");
+    d.type = DriverType::Linear;
+    d.joint = sliderJoint;
+    d.motion = MotionTable{{0.0, 1.0, 2.0}, {0.0, 0.05, 0.0}};
+    m.drivers.push_back(d);
+    return d.name;
+}
+
+std::string addCylinder(Mechanism& m, const BodyPointRef& a, const BodyPointRef& b)
+{
+    Driver d;
+    d.name = freshName(m, "cylinder");
+    d.type = DriverType::Linear;
+    d.ends[0] = a;
+    d.ends[1] = b;
+    const double length = (b.at - a.at).norm();
+    // Extends by a fifth of its drawn length and retracts over two seconds.
+    d.motion = MotionTable{{0.0, 1.0, 2.0}, {length, 1.2 * length, length}};
+    m.drivers.push_back(d);
+    return d.name;
+}
+
+void addForce(Mechanism& m, const BodyPointRef& at, const Vec2& force)
+{
+    ForceLoad f;
+    f.name = freshName(m, "force");
+    f.point = at;
+    f.force = force;
+    m.loads.push_back(f);
+}
+
+void addTorque(Mechanism& m, const std::string& body, double torque)
+{
+    TorqueLoad t;
+    t.name = freshName(m, "torque");
+    t.body = body;
+    t.torque = torque;
+    m.loads.push_back(t);
+}
+
+void addSpring(Mechanism& m, const BodyPointRef& a, const BodyPointRef& b)
+{
+    SpringLoad s;
+    s.name = freshName(m, "spring");
+    s.a = a;
+    s.b = b;
+    s.stiffness = 1000.0;
+    s.freeLength = (b.at - a.at).norm();
+    m.loads.push_back(s);
+}
+
+void addDamper(Mechanism& m, const BodyPointRef& a, const BodyPointRef& b)
+{
+    DamperLoad d;
+    d.name = freshName(m, "damper");
+    d.a = a;
+    d.b = b;
+    d.damping = 50.0;
+    m.loads.push_back(d);
+}
+
+void addPointMass(Mechanism& m, const std::string& body, const Vec2& at, double mass)
+{
+    const int b = bodyIndex(m, body);
+    if (b < 0) return;
+    Body& target = m.bodies[b];
+    target.pointMasses.push_back({freshName(m, "mass"), mass, at});
+}
+
+void moveJoint(Mechanism& m, int joint, const Vec2& to)
+{
+    const Vec2 from = m.joints[joint].at;
+    const auto follow = [&](Vec2& p) {
+        if ((p - from).norm() <= kSamePoint) p = to;
+    };
+    for (auto& j : m.joints) follow(j.at);
+    for (auto& d : m.drivers)
+        for (auto& end : d.ends)
+            if (end) follow(end->at);
+    for (auto& load : m.loads) {
+        if (auto* f = std::get_if<ForceLoad>(&load)) follow(f->point.at);
+        if (auto* s = std::get_if<SpringLoad>(&load)) follow(s->a.at), follow(s->b.at);
+        if (auto* d = std::get_if<DamperLoad>(&load)) follow(d->a.at), follow(d->b.at);
+    }
+}
+
+void remove(Mechanism& m, const Selection& s)
+{
+    const std::string name = s.name.toStdString();
+    const auto eraseIf = [](auto& list, auto pred) { list.erase(std::remove_if(list.begin(), list.end(), pred), list.end()); };
+    switch (s.kind) {
+    case Selection::Kind::None: return;
+    case Selection::Kind::Load:
+        if (s.loadIndex >= 0 && s.loadIndex < int(m.loads.size())) m.loads.erase(m.loads.begin() + s.loadIndex);
+        return;
+    case Selection::Kind::Driver: eraseIf(m.drivers, [&](const Driver& d) { return d.name == name; }); return;
+    case Selection::Kind::Joint:
+        eraseIf(m.joints, [&](const Joint& j) { return j.name == name; });
+        eraseIf(m.drivers, [&](const Driver& d) { return d.joint == name; });
+        eraseIf(m.loads, [&](const Load& l) {
+            const auto* t = std::get_if<TorsionSpringLoad>(&l);
+            return t && t->joint == name;
+        });
+        // A body left with nothing holding it is no longer part of the drawing.
+        eraseIf(m.bodies, [&](const Body& b) { return bodyPins(m, b.name).empty(); });
+        return;
+    case Selection::Kind::Body:
+        eraseIf(m.bodies, [&](const Body& b) { return b.name == name; });
+        for (auto& j : m.joints)
+            for (auto& b : j.bodies)
+                if (b == name) b.clear();
+        eraseIf(m.drivers, [&](const Driver& d) {
+            return (d.ends[0] && onBody(*d.ends[0], name)) || (d.ends[1] && onBody(*d.ends[1], name));
+        });
+        eraseIf(m.loads, [&](const Load& l) {
+            if (const auto* f = std::get_if<ForceLoad>(&l)) return onBody(f->point, name);
+            if (const auto* t = std::get_if<TorqueLoad>(&l)) return t->body == name;
+            if (const auto* sp = std::get_if<SpringLoad>(&l)) return onBody(sp->a, name) || onBody(sp->b, name);
+            if (const auto* d = std::get_if<DamperLoad>(&l)) return onBody(d->a, name) || onBody(d->b, name);
+            return false;
+        });
+        return;
+    }
+}
+
+void renameBody(Mechanism& m, const std::string& from, const std::string& to)
+{
+    const auto swap = [&](std::string& s) {
+        if (s == from) s = to;
+    };
+    for (auto& b : m.bodies) swap(b.name);
+    for (auto& j : m.joints) swap(j.bodies[0]), swap(j.bodies[1]);
+    for (auto& d : m.drivers)
+        for (auto& end : d.ends)
+            if (end) swap(end->body);
+    for (auto& load : m.loads) {
+        if (auto* f = std::get_if<ForceLoad>(&load)) swap(f->point.body);
+        if (auto* t = std::get_if<TorqueLoad>(&load)) swap(t->body);
+        if (auto* s = std::get_if<SpringLoad>(&load)) swap(s->a.body), swap(s->b.body);
+        if (auto* d = std::get_if<DamperLoad>(&load)) swap(d->a.body), swap(d->b.body);
+    }
+}
+
+void renameJoint(Mechanism& m, const std::string& from, const std::string& to)
+{
+    for (auto& j : m.joints)
+        if (j.name == from) j.name = to;
+    for (auto& d : m.drivers)
+        if (d.joint == from) d.joint = to;
+    for (auto& load : m.loads)
+        if (auto* t = std::get_if<TorsionSpringLoad>(&load); t && t->joint == from) t->joint = to;
+}
+
+void renameDriver(Mechanism& m, const std::string& from, const std::string& to)
+{
+    for (auto& d : m.drivers)
+        if (d.name == from) d.name = to;
+    for (auto& load : m.loads) {
+        std::optional<LoadProfile>* profile = nullptr;
+        if (auto* f = std::get_if<ForceLoad>(&load)) profile = &f->profile;
+        if (auto* t = std::get_if<TorqueLoad>(&load)) profile = &t->profile;
+        if (profile && *profile && (*profile)->driver == from) (*profile)->driver = to;
+    }
+}
+
+}  // namespace clevis::ui::edits

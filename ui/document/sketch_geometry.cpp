@@ -1,0 +1,140 @@
+#include "ui/document/sketch_geometry.h"
+
+#include <algorithm>
+#include <set>
+
+namespace clevis::ui {
+namespace {
+
+// Andrew's monotone chain; returns the hull counter-clockwise.
+std::vector<Vec2> convexHull(std::vector<Vec2> p)
+{
+    std::sort(p.begin(), p.end(), [](const Vec2& a, const Vec2& b) { return a.x() < b.x() || (a.x() == b.x() && a.y() < b.y()); });
+    p.erase(std::unique(p.begin(), p.end(), [](const Vec2& a, const Vec2& b) { return (a - b).norm() < 1e-12; }), p.end());
+    if (p.size() < 3) return p;
+    std::vector<Vec2> hull(2 * p.size());
+    std::size_t k = 0;
+    for (std::size_t i = 0; i < p.size(); ++i) {
+        while (k >= 2 && cross(hull[k - 1] - hull[k - 2], p[i] - hull[k - 2]) <= 0) --k;
+        hull[k++] = p[i];
+    }
+    for (std::size_t i = p.size() - 1, t = k + 1; i > 0; --i) {
+        while (k >= t && cross(hull[k - 1] - hull[k - 2], p[i - 1] - hull[k - 2]) <= 0) --k;
+        hull[k++] = p[i - 1];
+    }
+    hull.resize(k - 1);
+    return hull;
+}
+
+template <typename List>
+int indexByName(const List& list, const std::string& name)
+{
+    for (std::size_t i = 0; i < list.size(); ++i)
+        if (list[i].name == name) return int(i);
+    return -1;
+}
+
+}  // namespace
+
+std::vector<Vec2> bodyPins(const Mechanism& m, const std::string& body)
+{
+    std::vector<Vec2> pins;
+    for (const auto& j : m.joints)
+        if (j.bodies[0] == body || j.bodies[1] == body) pins.push_back(j.at);
+    return pins;
+}
+
+std::vector<Vec2> bodyOutline(const Mechanism& m, const std::string& body)
+{
+    // Everything fixed to the body spans it: a bed held by one hinge and a
+    // cylinder is drawn between the two, round its load points and masses.
+    std::vector<Vec2> points = bodyPins(m, body);
+    const auto add = [&](const BodyPointRef& p) {
+        if (p.body == body) points.push_back(p.at);
+    };
+    for (const auto& d : m.drivers)
+        for (const auto& end : d.ends)
+            if (end) add(*end);
+    for (const auto& load : m.loads) {
+        if (const auto* f = std::get_if<ForceLoad>(&load)) add(f->point);
+        if (const auto* s = std::get_if<SpringLoad>(&load)) add(s->a), add(s->b);
+        if (const auto* d = std::get_if<DamperLoad>(&load)) add(d->a), add(d->b);
+    }
+    const int b = bodyIndex(m, body);
+    if (b >= 0) {
+        for (const auto& pm : m.bodies[b].pointMasses) points.push_back(pm.at);
+        if (points.size() < 2 && m.bodies[b].cg) points.push_back(*m.bodies[b].cg);
+    }
+    return convexHull(points);
+}
+
+std::vector<int> jointsAt(const Mechanism& m, const Vec2& p, double tolerance)
+{
+    std::vector<int> found;
+    for (std::size_t i = 0; i < m.joints.size(); ++i)
+        if ((m.joints[i].at - p).norm() <= tolerance) found.push_back(int(i));
+    return found;
+}
+
+int bodyIndex(const Mechanism& m, const std::string& name) { return indexByName(m.bodies, name); }
+int jointIndex(const Mechanism& m, const std::string& name) { return indexByName(m.joints, name); }
+int driverIndex(const Mechanism& m, const std::string& name) { return indexByName(m.drivers, name); }
+
+std::string freshName(const Mechanism& m, const std::string& stem)
+{
+    std::set<std::string> used{kGroundName};
+    for (const auto& b : m.bodies) used.insert(b.name);
+    for (const auto& j : m.joints) used.insert(j.name);
+    for (const auto& d : m.drivers) used.insert(d.name);
+    for (std::size_t i = 0; i < m.loads.size(); ++i) used.insert(loadName(m.loads[i], int(i)));
+    for (int n = 1;; ++n) {
+        std::string name = stem + std::to_string(n);
+        if (!used.count(name)) return name;
+    }
+}
+
+std::string loadName(const Load& load, int index)
+{
+    const std::string own = std::visit([](const auto& l) { return l.name; }, load);
+    if (!own.empty()) return own;
+    static const char* kinds[] = {"force", "torque", "spring", "damper", "torsion spring"};
+    return std::string(kinds[load.index()]) + " " + std::to_string(index + 1);
+}
+
+Vec2 loadAnchor(const Mechanism& m, const Load& load)
+{
+    struct Visitor {
+        const Mechanism& m;
+        Vec2 operator()(const ForceLoad& f) const { return f.point.at; }
+        Vec2 operator()(const TorqueLoad& t) const
+        {
+            const auto outline = bodyOutline(m, t.body);
+            Vec2 c = Vec2::Zero();
+            for (const auto& p : outline) c += p / double(outline.size());
+            return c;
+        }
+        Vec2 operator()(const SpringLoad& s) const { return (s.a.at + s.b.at) / 2; }
+        Vec2 operator()(const DamperLoad& d) const { return (d.a.at + d.b.at) / 2; }
+        Vec2 operator()(const TorsionSpringLoad& t) const
+        {
+            const int j = jointIndex(m, t.joint);
+            return j >= 0 ? m.joints[j].at : Vec2::Zero();
+        }
+    };
+    return std::visit(Visitor{m}, load);
+}
+
+QStringList openPins(const Mechanism& m)
+{
+    QStringList names;
+    for (const auto& j : m.joints)
+        if (j.bodies[0].empty() || j.bodies[1].empty()) names << QString::fromStdString(j.name);
+    return names;
+}
+
+double angleDeg(const Vec2& a, const Vec2& b)
+{
+    return radToDeg(std::atan2(b.y() - a.y(), b.x() - a.x()));
+}
+
+}  // namespace clevis::ui

@@ -1,0 +1,54 @@
+// Builds one property form: each row shows a value of the selected part in
+// display units and, when edited, pushes one undo command on the document.
+#pragma once
+
+#include "core/model/mechanism.h"
+#include "ui/panels/properties/quantity.h"
+
+#include <QString>
+#include <QStringList>
+
+#include <functional>
+#include <optional>
+
+class QFormLayout;
+class QWidget;
+
+namespace clevis::ui {
+
+class MechanismDocument;
+
+class FormBuilder {
+public:
+    using Setter = std::function<void(Mechanism&, double si)>;
+
+    FormBuilder(QFormLayout* form, MechanismDocument* doc) : form_(form), doc_(doc) {}
+
+    // `undo` names the command, e.g. "Set crank mass". Object names (for
+    // tests and accessibility) come from `key`.
+    void number(const QString& key, const QString& label, double si, const Quantity& q, const QString& undo, Setter set);
+    // An empty field means "not given" (nullopt).
+    void optionalNumber(const QString& key, const QString& label, std::optional<double> si, const Quantity& q, const QString& undo,
+                        std::function<void(Mechanism&, std::optional<double>)> set);
+    // A list of numbers separated by commas or spaces.
+    void numberList(const QString& key, const QString& label, const std::vector<double>& si, const Quantity& q, const QString& undo,
+                    std::function<void(Mechanism&, std::vector<double>)> set);
+    void text(const QString& key, const QString& label, const QString& value, const QString& undo,
+              std::function<QString(Mechanism&, const QString&)> set);  // returns a problem, or empty
+    void choice(const QString& key, const QString& label, const QStringList& options, int current, const QString& undo,
+                std::function<void(Mechanism&, int)> set);
+    void check(const QString& key, const QString& label, bool value, const QString& undo, std::function<void(Mechanism&, bool)> set);
+    void info(const QString& label, const QString& value);
+    void heading(const QString& title);
+
+    MechanismDocument* document() const { return doc_; }
+
+private:
+    QFormLayout* form_;
+    MechanismDocument* doc_;
+};
+
+// Reads a number typed by a person ("12.5", "12,5", "1e3"); nullopt if it is none.
+std::optional<double> parseNumber(const QString& text);
+
+}  // namespace clevis::ui

@@ -1,0 +1,59 @@
+#include "ui/panels/property_editor.h"
+
+#include "ui/shell/display_units.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/panels/properties/forms.h"
+#include "ui/document/sketch_geometry.h"
+
+#include <QFormLayout>
+#include <QLineEdit>
+#include <QTimer>
+
+namespace clevis::ui {
+
+PropertyEditor::PropertyEditor(MechanismDocument* doc, QWidget* parent) : QScrollArea(parent), doc_(doc)
+{
+    setObjectName(QStringLiteral("propertyEditor"));
+    setWidgetResizable(true);
+    setFrameShape(QFrame::NoFrame);
+    connect(doc_, &MechanismDocument::mechanismChanged, this, &PropertyEditor::scheduleRebuild);
+    connect(doc_, &MechanismDocument::selectionChanged, this, &PropertyEditor::scheduleRebuild);
+    connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, &PropertyEditor::scheduleRebuild);
+    rebuildNow();
+}
+
+// Deferred: the edit that triggered the rebuild may still be inside the
+// signal of a field that the rebuild deletes.
+void PropertyEditor::scheduleRebuild()
+{
+    if (pending_) return;
+    pending_ = true;
+    QTimer::singleShot(0, this, &PropertyEditor::rebuildNow);
+}
+
+void PropertyEditor::rebuildNow()
+{
+    pending_ = false;
+    // Keep the keyboard in the field that had it, so Tab through a form still works.
+    const QWidget* focused = widget() ? widget()->focusWidget() : nullptr;
+    const QString focusKey = focused ? focused->objectName() : QString();
+
+    auto* page = new QWidget;
+    auto* form = new QFormLayout(page);
+    form->setFieldGrowthPolicy(QFormLayout::AllNonFixedFieldsGrow);
+    FormBuilder f(form, doc_);
+    const Mechanism& m = doc_->mechanism();
+    const Selection s = doc_->selection();
+    const std::string name = s.name.toStdString();
+    const int body = bodyIndex(m, name), joint = jointIndex(m, name), driver = driverIndex(m, name);
+    if (s.kind == Selection::Kind::Body && body >= 0) bodyForm(f, m, m.bodies[body]);
+    else if (s.kind == Selection::Kind::Joint && joint >= 0) jointForm(f, m, m.joints[joint]);
+    else if (s.kind == Selection::Kind::Driver && driver >= 0) driverForm(f, m, m.drivers[driver]);
+    else if (s.kind == Selection::Kind::Load && s.loadIndex >= 0 && s.loadIndex < int(m.loads.size())) loadForm(f, m, s.loadIndex);
+    else mechanismForm(f, m);
+    setWidget(page);  // deletes the previous page
+    if (!focusKey.isEmpty())
+        if (auto* w = page->findChild<QWidget*>(focusKey)) w->setFocus();
+}
+
+}  // namespace clevis::ui

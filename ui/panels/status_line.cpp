@@ -1,0 +1,75 @@
+#include "ui/panels/status_line.h"
+
+#include "ui/analysis/analysis_state.h"
+#include "render/palette.h"
+
+#include <QHBoxLayout>
+#include <QLabel>
+
+namespace clevis::ui {
+namespace {
+
+QString plural(int n, const QString& one, const QString& many)
+{
+    return QStringLiteral("%1 %2").arg(n).arg(n == 1 ? one : many);
+}
+
+}  // namespace
+
+QString describeAnalysis(const AnalysisState& a)
+{
+    QString counts;
+    if (const auto& mob = a.mobility())
+        counts = QObject::tr("%1, %2. ").arg(plural(mob->mobility, QObject::tr("degree of freedom"), QObject::tr("degrees of freedom")),
+                                             plural(mob->drivers, QObject::tr("driver"), QObject::tr("drivers")));
+    if (!a.errorText().isEmpty()) return counts + QObject::tr("Does not solve: %1").arg(a.errorText());
+    if (!a.hasResult()) return counts + QObject::tr("Not solved yet.");
+    const CycleResult& r = a.result();
+    if (!r.complete)
+        return counts + QObject::tr("Solves for part of the cycle only (%1 of %2 steps).").arg(r.steps.size() - 1).arg(r.plannedSteps);
+    return counts + QObject::tr("Solves over the whole cycle (%1 steps, %2 s).").arg(r.plannedSteps).arg(r.duration, 0, 'g', 4);
+}
+
+StatusLine::StatusLine(AnalysisState* analysis, QWidget* parent)
+    : QWidget(parent), analysis_(analysis), mark_(new QLabel), state_(new QLabel), hint_(new QLabel)
+{
+    setObjectName(QStringLiteral("statusLine"));
+    auto* layout = new QHBoxLayout(this);
+    layout->setContentsMargins(6, 2, 6, 2);
+    mark_->setFixedWidth(14);
+    state_->setObjectName(QStringLiteral("analysisStatus"));
+    state_->setTextInteractionFlags(Qt::TextSelectableByMouse);
+    hint_->setObjectName(QStringLiteral("toolHint"));
+    hint_->setAlignment(Qt::AlignRight | Qt::AlignVCenter);
+    layout->addWidget(mark_);
+    layout->addWidget(state_, 3);
+    layout->addWidget(hint_, 2);
+    connect(analysis_, &AnalysisState::resultChanged, this, &StatusLine::refresh);
+    connect(analysis_, &AnalysisState::busyChanged, this, &StatusLine::refresh);
+    refresh();
+}
+
+QString StatusLine::analysisText() const
+{
+    return state_->text();
+}
+
+void StatusLine::showHint(const QString& hint)
+{
+    hint_->setText(hint);
+}
+
+void StatusLine::refresh()
+{
+    const bool solves = analysis_->errorText().isEmpty() && analysis_->hasResult() && analysis_->result().complete;
+    const QString text = describeAnalysis(*analysis_);
+    state_->setText(analysis_->busy() ? text + tr("  (solving…)") : text);
+    state_->setToolTip(text);
+    // The mark differs in shape as well as colour: a filled disc when it solves, a ring with a bar when not.
+    const QColor c = solves ? palette::load() : palette::problem();
+    mark_->setText(solves ? QStringLiteral("●") : QStringLiteral("⊘"));
+    mark_->setStyleSheet(QStringLiteral("color: %1; font-weight: bold;").arg(c.name()));
+    state_->setStyleSheet(solves ? QString() : QStringLiteral("color: %1;").arg(palette::problem().name()));
+}
+
+}  // namespace clevis::ui

@@ -1,0 +1,134 @@
+#include "ui/shell/main_window.h"
+
+#include "ui/analysis/analysis_state.h"
+#include "ui/files/autosave_timer.h"
+#include "ui/canvas/canvas_view.h"
+#include "ui/files/file_actions.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/document/mechanism_edits.h"
+#include "ui/shell/menu_action.h"
+#include "ui/panels/parts_panel.h"
+#include "ui/panels/property_editor.h"
+#include "ui/panels/status_line.h"
+#include "ui/canvas/tool_palette.h"
+#include "ui/shell/units_menu.h"
+
+#include "ui/results/results_views.h"
+
+#include <QCloseEvent>
+#include <QDockWidget>
+#include <QMenuBar>
+#include <QMimeData>
+#include <QStatusBar>
+#include <QToolBar>
+
+namespace clevis::ui {
+
+MainWindow::MainWindow(const QString& recoveryFolder, QWidget* parent)
+    : QMainWindow(parent),
+      doc_(new MechanismDocument(this)),
+      analysis_(new AnalysisState(doc_, this)),
+      canvas_(new CanvasView(doc_, analysis_, this)),
+      files_(new FileActions(this, doc_)),
+      autosave_(new AutosaveTimer(doc_, RecoveryStore(recoveryFolder), this)),
+      tools_(new ToolPalette(canvas_, this)),
+      status_(new StatusLine(analysis_, this))
+{
+    setObjectName(QStringLiteral("mainWindow"));
+    setCentralWidget(canvas_);
+    setAcceptDrops(true);
+    statusBar()->addWidget(status_, 1);
+    connect(canvas_, &CanvasView::hintChanged, status_, &StatusLine::showHint);
+    connect(files_, &FileActions::note, status_, &StatusLine::showHint);
+    connect(autosave_, &AutosaveTimer::note, status_, &StatusLine::showHint);
+    buildDocks();
+    buildMenus();
+    status_->showHint(canvas_->tool()->hint());
+    installResultsViews(this, doc_, analysis_);
+    resize(1400, 900);
+}
+
+MainWindow::~MainWindow()
+{
+    // Before the document: its undo stack, cleared as it is destroyed, would
+    // look like a saved document and delete the recovery file that a window
+    // closed without the clean-exit path must leave.
+    delete autosave_;
+}
+
+void MainWindow::buildDocks()
+{
+    auto* parts = new QDockWidget(tr("Parts"), this);
+    parts->setObjectName(QStringLiteral("partsDock"));
+    parts->setWidget(new PartsPanel(doc_, analysis_, parts));
+    addDockWidget(Qt::LeftDockWidgetArea, parts);
+    auto* props = new QDockWidget(tr("Properties"), this);
+    props->setObjectName(QStringLiteral("propertiesDock"));
+    props->setWidget(new PropertyEditor(doc_, props));
+    addDockWidget(Qt::RightDockWidgetArea, props);
+    resizeDocks({parts, props}, {240, 320}, Qt::Horizontal);
+}
+
+void MainWindow::buildMenus()
+{
+    files_->fill(menuBar()->addMenu(tr("&File")));
+
+    QMenu* edit = menuBar()->addMenu(tr("&Edit"));
+    QAction* undo = doc_->undoStack()->createUndoAction(this, tr("Undo"));
+    undo->setShortcut(QKeySequence::Undo);
+    QAction* redo = doc_->undoStack()->createRedoAction(this, tr("Redo"));
+    redo->setShortcuts({QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_Z), QKeySequence::Redo});
+    edit->addAction(undo);
+    edit->addAction(redo);
+    edit->addSeparator();
+    QAction* del = addMenuAction(edit, tr("&Delete selected part"), QKeySequence::Delete, this, [this] { deleteSelection(); });
+    del->setShortcuts({QKeySequence::Delete, QKeySequence(Qt::Key_Backspace)});
+
+    QMenu* draw = menuBar()->addMenu(tr("&Draw"));
+    auto* bar = new QToolBar(tr("Drawing tools"), this);
+    bar->setObjectName(QStringLiteral("drawingTools"));
+    bar->setToolButtonStyle(Qt::ToolButtonTextUnderIcon);
+    bar->setIconSize(QSize(24, 24));
+    addToolBar(Qt::TopToolBarArea, bar);
+    tools_->fill(draw, bar);
+
+    QMenu* view = menuBar()->addMenu(tr("&View"));
+    addMenuAction(view, tr("&Fit to window"), QKeySequence(Qt::Key_Home), canvas_, [this] { canvas_->fitToView(); });
+    addMenuAction(view, tr("Zoom &in"), QKeySequence::ZoomIn, canvas_, [this] { canvas_->zoomBy(1.25); });
+    addMenuAction(view, tr("Zoom &out"), QKeySequence::ZoomOut, canvas_, [this] { canvas_->zoomBy(0.8); });
+    view->addSeparator();
+    for (QDockWidget* dock : findChildren<QDockWidget*>()) view->addAction(dock->toggleViewAction());
+    menuBar()->addMenu(createUnitsMenu(this));
+}
+
+void MainWindow::deleteSelection()
+{
+    const Selection s = doc_->selection();
+    if (s.kind == Selection::Kind::None) return;
+    const QString what = s.kind == Selection::Kind::Load ? tr("load") : s.name;
+    doc_->apply(tr("Delete %1").arg(what), [s](Mechanism& m) { edits::remove(m, s); });
+}
+
+void MainWindow::closeEvent(QCloseEvent* e)
+{
+    if (!files_->maybeSave()) {
+        e->ignore();
+        return;
+    }
+    // Saved or knowingly discarded: a clean exit leaves nothing to recover.
+    autosave_->discard();
+    e->accept();
+}
+
+void MainWindow::dragEnterEvent(QDragEnterEvent* e)
+{
+    if (e->mimeData()->hasUrls() && e->mimeData()->urls().front().isLocalFile()) e->acceptProposedAction();
+}
+
+void MainWindow::dropEvent(QDropEvent* e)
+{
+    const QString path = e->mimeData()->urls().front().toLocalFile();
+    if (files_->openWithPrompt(path)) e->acceptProposedAction();
+}
+
+}  // namespace clevis::ui

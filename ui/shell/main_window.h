@@ -1,0 +1,53 @@
+// The main window: canvas in the centre, "Parts" on the left, "Properties"
+// on the right, the status line below. It only creates and wires the pieces.
+#pragma once
+
+#include "ui/files/recovery_store.h"
+
+#include <QMainWindow>
+
+namespace clevis::ui {
+
+class AnalysisState;
+class AutosaveTimer;
+class CanvasView;
+class FileActions;
+class MechanismDocument;
+class StatusLine;
+class ToolPalette;
+
+class MainWindow : public QMainWindow {
+    Q_OBJECT
+public:
+    // Unsaved changes are autosaved to `recoveryFolder` (see RecoveryStore).
+    explicit MainWindow(const QString& recoveryFolder = RecoveryStore::defaultFolder(), QWidget* parent = nullptr);
+    ~MainWindow() override;
+
+    MechanismDocument* document() const { return doc_; }
+    AnalysisState* analysis() const { return analysis_; }
+    CanvasView* canvas() const { return canvas_; }
+    FileActions* files() const { return files_; }
+    AutosaveTimer* autosave() const { return autosave_; }
+    ToolPalette* tools() const { return tools_; }
+    StatusLine* statusLine() const { return status_; }
+
+protected:
+    void closeEvent(QCloseEvent*) override;
+    void dragEnterEvent(QDragEnterEvent*) override;
+    void dropEvent(QDropEvent*) override;
+
+private:
+    void buildDocks();
+    void buildMenus();
+    void deleteSelection();
+
+    MechanismDocument* doc_;
+    AnalysisState* analysis_;
+    CanvasView* canvas_;
+    FileActions* files_;
+    AutosaveTimer* autosave_;
+    ToolPalette* tools_;
+    StatusLine* status_;
+};
+
+}  // namespace clevis::ui
