@@ -2,11 +2,17 @@
 // point masses.
 #pragma once
 
-#include "core/solver/compiled_mechanism.h"
+#include "core/model/geometry.h"
 
 #include <vector>
 
 namespace clevis {
+
+struct MassProperties {
+    double mass = 0.0;       // kg
+    Vec2 cg = Vec2::Zero();  // m, global at the drawn pose
+    double inertia = 0.0;    // kg·m² about the centre of mass
+};
 
 // Solid bar of rectangular section from a to b: m = ρ·w·t·L, centre at the
 // midpoint, I_G = m(L² + w²)/12 about the axis normal to the plane.

@@ -2,6 +2,7 @@
 // mass properties are final, motions are in SI. Body index -1 is ground.
 #pragma once
 
+#include "core/model/mass_properties.h"
 #include "core/model/mechanism.h"
 
 #include <string>
@@ -17,12 +18,6 @@ inline constexpr int kGround = -1;
 struct BodyPoint {
     int body = kGround;
     Vec2 local = Vec2::Zero();
-};
-
-struct MassProperties {
-    double mass = 0.0;     // kg
-    Vec2 cg = Vec2::Zero();  // m, global at the drawn pose
-    double inertia = 0.0;  // kg·m² about the centre of mass
 };
 
 struct CompiledBody {
