@@ -7,6 +7,7 @@
 #include "ui/shell/screenshot.h"
 
 #include <QApplication>
+#include <QIcon>
 #include <QCommandLineParser>
 #include <QTextStream>
 
@@ -18,6 +19,7 @@ int runDesktopApp(int argc, char** argv)
     QApplication::setOrganizationName(QStringLiteral("Clevis"));
     QApplication::setApplicationName(QStringLiteral("clevis"));
     QApplication::setApplicationVersion(QStringLiteral(CLEVIS_VERSION));
+    QApplication::setWindowIcon(QIcon(QStringLiteral(":/clevis/clevis.svg")));  // resources/clevis.qrc
 
     QCommandLineParser parser;
     parser.setApplicationDescription(QObject::tr(
