@@ -43,26 +43,26 @@ struct Mark {
     Vec2 force = Vec2::Zero();
     double couple = 0.0;
     bool isCouple = false;
-    StrokeStyle style;
+    ArrowStyle style;
     QString label;
 };
 
-StrokeStyle styleFor(FreeBodyItemKind kind)
+ArrowStyle styleFor(FreeBodyItemKind kind)
 {
     switch (kind) {
-    case FreeBodyItemKind::JointReaction: return {palette::ink(), 1.7, false};
-    case FreeBodyItemKind::DriverAction: return {palette::driver(), 2.0, false};
-    case FreeBodyItemKind::Weight: return {palette::weight(), 1.8, false};
+    case FreeBodyItemKind::JointReaction: return figureArrow(palette::ink(), 1.7);
+    case FreeBodyItemKind::DriverAction: return figureArrow(palette::driver(), 2.0);
+    case FreeBodyItemKind::Weight: return figureArrow(palette::weight(), 1.8);
     case FreeBodyItemKind::Force:
-    case FreeBodyItemKind::Torque: return {palette::load(), 1.8, false};
+    case FreeBodyItemKind::Torque: return figureArrow(palette::load(), 1.8);
     case FreeBodyItemKind::Spring:
     case FreeBodyItemKind::Damper:
-    case FreeBodyItemKind::TorsionSpring: return {palette::spring(), 1.6, false};
+    case FreeBodyItemKind::TorsionSpring: return figureArrow(palette::spring(), 1.6);
     }
-    return {palette::ink(), 1.6, false};
+    return figureArrow(palette::ink(), 1.6);
 }
 
-StrokeStyle inertiaStyle() { return {palette::inertia(), 1.8, true}; }
+ArrowStyle inertiaStyle() { return figureArrow(palette::inertia(), 1.8, true); }
 
 double directionDeg(const Vec2& f) { return radToDeg(std::atan2(f.y(), f.x())); }
 
@@ -93,7 +93,7 @@ constexpr double kNegligibleCouple = 1e-9;
 std::vector<Mark> marksFor(const FreeBodyItem& item, const RenderUnits& u, double coupleFloor)
 {
     std::vector<Mark> out;
-    const StrokeStyle style = styleFor(item.kind);
+    const ArrowStyle style = styleFor(item.kind);
     const QString name = QString::fromStdString(item.name);
     if (item.force.norm() > 1e-9) out.push_back({item.at, item.force, 0.0, false, style, forceText(u, name, item.force)});
     if (std::abs(item.couple) > coupleFloor) {
@@ -188,7 +188,7 @@ public:
         for (const Vec2& p : shape.points) page.push_back(frame_.map(p));
         std::vector<SlideBlock> blocks;
         for (const auto& [p, axis] : shape.blocks) blocks.push_back({frame_.map(p), unit(frame_.mapDirection(axis, 1))});
-        outline_ = bodyOutline(page, kHalfWidth, blocks);
+        outline_ = bodyOutlinePath(page, kHalfWidth, blocks);
         centroid_ = outline_.boundingRect().center();
     }
 

@@ -80,7 +80,7 @@ void MechanismSketch::paint(QPainter& p, const QRectF& target) const
         pts.push_back(frame.map(bodyOrigin(q, int(b))));  // as in the free-body diagrams
         p.setPen(QPen(palette::link(), 1.3));
         p.setBrush(palette::linkFill());
-        const QPainterPath outline = bodyOutline(pts, kHalfWidth, blocks);
+        const QPainterPath outline = bodyOutlinePath(pts, kHalfWidth, blocks);
         p.drawPath(outline);
         labels.addObstacle(outline);
         bodyNames.emplace_back(QString::fromStdString(m_.bodies[b].name), outline.boundingRect().center());
@@ -111,7 +111,7 @@ void MechanismSketch::paint(QPainter& p, const QRectF& target) const
     for (const auto& d : m_.drivers) {
         if (d.type != DriverType::Rotary) continue;
         const QPointF at = frame.map(pointPosition(q, m_.joints[d.joint].point[1]));
-        drawCoupleArrow(p, at, 14, true, {palette::driver(), 1.4, false});
+        drawCoupleArrow(p, at, 14, true, figureArrow(palette::driver(), 1.4));
     }
     labels.paint(p, palette::ink(), palette::paper());
     p.setPen(palette::ink());
