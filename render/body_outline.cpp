@@ -72,7 +72,8 @@ QPainterPath block(const SlideBlock& b, double halfWidth)
 
 }  // namespace
 
-QPainterPath bodyOutline(const std::vector<QPointF>& points, double halfWidth, const std::vector<SlideBlock>& blocks)
+QPainterPath bodyOutlinePath(const std::vector<QPointF>& points, double halfWidth,
+                             const std::vector<SlideBlock>& blocks)
 {
     QPainterPath outline;
     outline.setFillRule(Qt::WindingFill);

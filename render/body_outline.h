@@ -16,7 +16,9 @@ struct SlideBlock {
     QPointF axis;  // unit, page coordinates
 };
 
-// `points` in page units; `halfWidth` is the bar's half width.
-QPainterPath bodyOutline(const std::vector<QPointF>& points, double halfWidth, const std::vector<SlideBlock>& blocks = {});
+// `points` in page (or screen) units; `halfWidth` is the bar's half width.
+// The canvas, the free-body diagrams and the mechanism sketch all draw bodies so.
+QPainterPath bodyOutlinePath(const std::vector<QPointF>& points, double halfWidth,
+                             const std::vector<SlideBlock>& blocks = {});
 
 }  // namespace clevis::ui

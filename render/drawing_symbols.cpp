@@ -3,6 +3,7 @@
 #include <QPainter>
 #include <QPainterPath>
 
+#include <algorithm>
 #include <cmath>
 
 namespace clevis::ui {
@@ -10,73 +11,81 @@ namespace {
 
 constexpr double kPi = 3.14159265358979323846;
 
-QPen strokePen(const StrokeStyle& s)
-{
-    QPen pen(s.colour, s.width, s.dashed ? Qt::DashLine : Qt::SolidLine, Qt::RoundCap, Qt::RoundJoin);
-    if (s.dashed) pen.setDashPattern({4.0, 2.5});
-    return pen;
-}
-
 // A head pointing along `direction` (unit) with its tip at `tip`.
-void drawHead(QPainter& p, QPointF tip, QPointF direction, const StrokeStyle& s)
+void drawHead(QPainter& p, QPointF tip, QPointF direction, const ArrowStyle& style)
 {
-    const double length = 4.0 * s.width + 5.0, half = 0.38 * length;
+    const ArrowHead& h = style.head;
     const QPointF normal(-direction.y(), direction.x());
-    const QPointF base = tip - direction * length;
+    const QPointF base = tip - direction * h.length;
     QPainterPath head;
     head.moveTo(tip);
-    head.lineTo(base + normal * half);
-    head.lineTo(tip - direction * (0.72 * length));
-    head.lineTo(base - normal * half);
+    head.lineTo(base + normal * h.halfWidth);
+    if (h.backMiddle < 1.0) head.lineTo(tip - direction * (h.backMiddle * h.length));  // a swept back
+    head.lineTo(base - normal * h.halfWidth);
     head.closeSubpath();
-    p.setPen(Qt::NoPen);
-    p.setBrush(s.colour);
+    const QColor colour = style.shaft.color();
+    p.setPen(h.rim > 0 ? QPen(colour, h.rim) : QPen(Qt::NoPen));
+    p.setBrush(colour);
     p.drawPath(head);
 }
 
-double headLength(const StrokeStyle& s) { return 4.0 * s.width + 5.0; }
-
 }  // namespace
 
-void drawArrow(QPainter& p, QPointF tail, QPointF head, const StrokeStyle& style)
+ArrowStyle figureArrow(const QColor& colour, double width, bool dashed)
 {
-    const QPointF d = head - tail;
+    QPen pen(colour, width, dashed ? Qt::DashLine : Qt::SolidLine, Qt::RoundCap, Qt::RoundJoin);
+    if (dashed) pen.setDashPattern({4.0, 2.5});
+    const double length = 4.0 * width + 5.0;
+    return {pen, {length, 0.38 * length, 0.72, 0.0}, 0.7 * length};
+}
+
+ArrowStyle sketchArrow(const QPen& pen)
+{
+    return {pen, {9.0, 0.42 * 9.0, 1.0, 1.0}, 9.0};
+}
+
+void drawArrow(QPainter& p, QPointF tail, QPointF tip, const ArrowStyle& style)
+{
+    const QPointF d = tip - tail;
     const double length = std::hypot(d.x(), d.y());
     if (length < 1e-9) return;
     const QPointF unit = d / length;
     p.save();
-    p.setPen(strokePen(style));
+    p.setPen(style.shaft);
     p.setBrush(Qt::NoBrush);
-    // The shaft stops inside the head so the tip stays sharp.
-    const double shaft = std::max(0.0, length - 0.7 * headLength(style));
+    const double shaft = std::max(0.0, length - style.shaftInset);
     if (shaft > 0) p.drawLine(tail, tail + unit * shaft);
-    drawHead(p, head, unit, style);
+    drawHead(p, tip, unit, style);
     p.restore();
 }
 
-void drawCoupleArrow(QPainter& p, QPointF centre, double radius, bool counterClockwise, const StrokeStyle& style)
+void drawArcArrow(QPainter& p, QPointF centre, double radius, double startDeg, double spanDeg, const ArrowStyle& style)
 {
     // Page angles with y down: a point at angle a is centre + r(cos a, −sin a),
     // so increasing a turns counter-clockwise as the reader sees it.
-    const double start = kPi * 0.25, sweep = (counterClockwise ? 1.0 : -1.0) * kPi * 1.45;
     const auto at = [&](double a) { return centre + QPointF(radius * std::cos(a), -radius * std::sin(a)); };
-    const double headAngle = headLength(style) / radius;
-    const double end = start + sweep;
+    const double turn = spanDeg >= 0 ? 1.0 : -1.0;
+    const double start = startDeg * kPi / 180, end = start + spanDeg * kPi / 180;
+    const double shaftEnd = end - turn * style.shaftInset / radius;
     QPainterPath arc;
     const int segments = 40;
-    const double shaftEnd = end - (counterClockwise ? 1.0 : -1.0) * 0.7 * headAngle;
     arc.moveTo(at(start));
     for (int i = 1; i <= segments; ++i) arc.lineTo(at(start + (shaftEnd - start) * i / segments));
     p.save();
-    p.setPen(strokePen(style));
+    p.setPen(style.shaft);
     p.setBrush(Qt::NoBrush);
     p.drawPath(arc);
-    // The head points along the chord from a little before the end to the end.
-    const QPointF tip = at(end), before = at(end - (counterClockwise ? 1.0 : -1.0) * headAngle);
+    // The head lies along the chord under it, so it follows the curve.
+    const QPointF tip = at(end), before = at(end - turn * style.head.length / radius);
     QPointF d = tip - before;
     d /= std::hypot(d.x(), d.y());
     drawHead(p, tip, d, style);
     p.restore();
+}
+
+void drawCoupleArrow(QPainter& p, QPointF centre, double radius, bool counterClockwise, const ArrowStyle& style)
+{
+    drawArcArrow(p, centre, radius, 45.0, counterClockwise ? 261.0 : -261.0, style);
 }
 
 void drawPin(QPainter& p, QPointF at, double radius, const QColor& ink, const QColor& paper)
@@ -91,7 +100,7 @@ void drawPin(QPainter& p, QPointF at, double radius, const QColor& ink, const QC
     p.restore();
 }
 
-void drawCentreOfMass(QPainter& p, QPointF at, double radius, const QColor& ink, const QColor& paper)
+void drawCentreOfMass(QPainter& p, QPointF at, double radius, const QColor& ink, const QColor& paper, double rim)
 {
     p.save();
     const QRectF box(at.x() - radius, at.y() - radius, 2 * radius, 2 * radius);
@@ -102,7 +111,7 @@ void drawCentreOfMass(QPainter& p, QPointF at, double radius, const QColor& ink,
     // Qt pie angles are in 1/16 degree, counter-clockwise from 3 o'clock.
     p.drawPie(box, 0, 90 * 16);
     p.drawPie(box, 180 * 16, 90 * 16);
-    p.setPen(QPen(ink, 1.0));
+    p.setPen(QPen(ink, rim));
     p.setBrush(Qt::NoBrush);
     p.drawEllipse(box);
     p.restore();

@@ -1,7 +1,7 @@
 #include "render/free_body_painter.h"
 
 #include "render/body_outline.h"
-#include "core/solver/body_state.h"
+#include "core/results/body_points_at_step.h"
 #include "render/drawing_symbols.h"
 #include "core/results/drive_units.h"
 #include "render/label_placer.h"
@@ -43,26 +43,26 @@ struct Mark {
     Vec2 force = Vec2::Zero();
     double couple = 0.0;
     bool isCouple = false;
-    StrokeStyle style;
+    ArrowStyle style;
     QString label;
 };
 
-StrokeStyle styleFor(FreeBodyItemKind kind)
+ArrowStyle styleFor(FreeBodyItemKind kind)
 {
     switch (kind) {
-    case FreeBodyItemKind::JointReaction: return {palette::ink(), 1.7, false};
-    case FreeBodyItemKind::DriverAction: return {palette::driver(), 2.0, false};
-    case FreeBodyItemKind::Weight: return {palette::weight(), 1.8, false};
+    case FreeBodyItemKind::JointReaction: return figureArrow(palette::ink(), 1.7);
+    case FreeBodyItemKind::DriverAction: return figureArrow(palette::driver(), 2.0);
+    case FreeBodyItemKind::Weight: return figureArrow(palette::weight(), 1.8);
     case FreeBodyItemKind::Force:
-    case FreeBodyItemKind::Torque: return {palette::load(), 1.8, false};
+    case FreeBodyItemKind::Torque: return figureArrow(palette::load(), 1.8);
     case FreeBodyItemKind::Spring:
     case FreeBodyItemKind::Damper:
-    case FreeBodyItemKind::TorsionSpring: return {palette::spring(), 1.6, false};
+    case FreeBodyItemKind::TorsionSpring: return figureArrow(palette::spring(), 1.6);
     }
-    return {palette::ink(), 1.6, false};
+    return figureArrow(palette::ink(), 1.6);
 }
 
-StrokeStyle inertiaStyle() { return {palette::inertia(), 1.8, true}; }
+ArrowStyle inertiaStyle() { return figureArrow(palette::inertia(), 1.8, true); }
 
 double directionDeg(const Vec2& f) { return radToDeg(std::atan2(f.y(), f.x())); }
 
@@ -93,7 +93,7 @@ constexpr double kNegligibleCouple = 1e-9;
 std::vector<Mark> marksFor(const FreeBodyItem& item, const RenderUnits& u, double coupleFloor)
 {
     std::vector<Mark> out;
-    const StrokeStyle style = styleFor(item.kind);
+    const ArrowStyle style = styleFor(item.kind);
     const QString name = QString::fromStdString(item.name);
     if (item.force.norm() > 1e-9) out.push_back({item.at, item.force, 0.0, false, style, forceText(u, name, item.force)});
     if (std::abs(item.couple) > coupleFloor) {
@@ -101,56 +101,6 @@ std::vector<Mark> marksFor(const FreeBodyItem& item, const RenderUnits& u, doubl
         out.push_back({item.at, Vec2::Zero(), item.couple, true, style, coupleText(u, coupleName, item.couple)});
     }
     return out;
-}
-
-// The points the body is joined at, where its outline is drawn round.
-struct BodyShape {
-    std::vector<Vec2> points;
-    std::vector<std::pair<Vec2, Vec2>> blocks;  // slider block: point, global axis
-    std::vector<std::pair<Vec2, Vec2>> guides;  // a guide or slot this body carries: point, axis
-    std::vector<Vec2> pins;
-};
-
-BodyShape shapeOf(const CompiledMechanism& m, const StepResult& s, int body)
-{
-    BodyShape shape;
-    for (const auto& j : m.joints)
-        for (int side = 0; side < 2; ++side) {
-            if (j.body[side] != body) continue;
-            const Vec2 p = pointPosition(s.q, j.point[side]);
-            const Vec2 axis = rotation(bodyAngle(s.q, j.body[0])) * j.axisLocal;
-            if (j.type == JointType::Pin || (j.type == JointType::PinInSlot && side == 1)) {
-                shape.points.push_back(p);
-                shape.pins.push_back(p);
-            }
-            else if (side == 1) {
-                shape.points.push_back(p);
-                shape.blocks.emplace_back(p, axis);
-            }
-            else {
-                shape.points.push_back(p);
-                shape.guides.emplace_back(pointPosition(s.q, j.point[1]), axis);
-            }
-        }
-    for (const auto& d : m.drivers)
-        if (d.joint < 0)
-            for (const auto& end : d.ends)
-                if (end.body == body) {
-                    shape.points.push_back(pointPosition(s.q, end));
-                    shape.pins.push_back(shape.points.back());
-                }
-    // Where loads are applied is part of the body too (a ram's die face, a
-    // spring's lug), and so is its centre of mass (a bed's load, a counterweight).
-    for (const auto& f : m.forces)
-        if (f.point.body == body) shape.points.push_back(pointPosition(s.q, f.point));
-    for (const auto& sd : m.springs)
-        for (const BodyPoint& end : {sd.a, sd.b})
-            if (end.body == body) shape.points.push_back(pointPosition(s.q, end));
-    for (const auto& sd : m.dampers)
-        for (const BodyPoint& end : {sd.a, sd.b})
-            if (end.body == body) shape.points.push_back(pointPosition(s.q, end));
-    shape.points.push_back(bodyOrigin(s.q, body));
-    return shape;
 }
 
 QPointF unit(QPointF v)
@@ -174,21 +124,25 @@ double niceBelow(double v)
 // Draws the body (outline, pins, centre of mass) and its marks inside `area`.
 class BodyPanel {
 public:
-    // `extra`: further points that must show, such as where loads act.
-    BodyPanel(const BodyShape& shape, const Vec2& cg, const std::vector<Vec2>& extra, const QRectF& area,
-              double pagePerNewton)
-        : shape_(shape), cg_(cg), area_(area), pagePerNewton_(pagePerNewton)
+    // `points`: the body's (bodyPointsAt); `extra`: further points that must show, such as where loads act.
+    BodyPanel(const std::vector<BodyPointOf>& points, const Vec2& cg, const std::vector<Vec2>& extra,
+              const QRectF& area, double pagePerNewton)
+        : points_(points), cg_(cg), area_(area), pagePerNewton_(pagePerNewton)
     {
-        std::vector<Vec2> fitPoints = shape.points;
+        std::vector<Vec2> fitPoints;
+        for (const auto& p : points) fitPoints.push_back(p.at);
         fitPoints.push_back(cg);
         fitPoints.insert(fitPoints.end(), extra.begin(), extra.end());
         // Room at the top for the heading and at the bottom for the scale bars.
         frame_ = WorldFrame::fit(fitPoints, area.adjusted(0, 16, 0, -30), kArrowRoom);
         std::vector<QPointF> page;
-        for (const Vec2& p : shape.points) page.push_back(frame_.map(p));
         std::vector<SlideBlock> blocks;
-        for (const auto& [p, axis] : shape.blocks) blocks.push_back({frame_.map(p), unit(frame_.mapDirection(axis, 1))});
-        outline_ = bodyOutline(page, kHalfWidth, blocks);
+        for (const auto& p : points) {
+            page.push_back(frame_.map(p.at));
+            if (p.kind == BodyPointKind::SlideBlock)
+                blocks.push_back({page.back(), unit(frame_.mapDirection(p.axis, 1))});
+        }
+        outline_ = bodyOutlinePath(page, kHalfWidth, blocks);
         centroid_ = outline_.boundingRect().center();
     }
 
@@ -202,12 +156,15 @@ public:
         p.drawPath(outline_);
         QPen centre(palette::groundHatch(), 0.8, Qt::DashDotLine);
         p.setPen(centre);
-        for (const auto& [at, axis] : shape_.guides) {
-            const QPointF c = frame_.map(at), u = unit(frame_.mapDirection(axis, 1));
+        for (const auto& guide : points_) {
+            if (guide.kind != BodyPointKind::SlideGuide) continue;
+            const QPointF c = frame_.map(guide.sliding), u = unit(frame_.mapDirection(guide.axis, 1));
             p.drawLine(c - u * 4 * kHalfWidth, c + u * 4 * kHalfWidth);
         }
         p.restore();
-        for (const Vec2& pin : shape_.pins) drawPin(p, frame_.map(pin), kPinRadius, palette::ink(), palette::paper());
+        for (const auto& pin : points_)
+            if (pin.kind == BodyPointKind::Pin || pin.kind == BodyPointKind::CylinderEnd)
+                drawPin(p, frame_.map(pin.at), kPinRadius, palette::ink(), palette::paper());
         drawCentreOfMass(p, frame_.map(cg_), 5.5, palette::ink(), palette::paper());
     }
 
@@ -252,7 +209,7 @@ public:
     }
 
 private:
-    const BodyShape& shape_;
+    const std::vector<BodyPointOf>& points_;
     Vec2 cg_;
     QRectF area_;
     double pagePerNewton_;
@@ -300,12 +257,12 @@ void FreeBodyPainter::paint(QPainter& p, const QRectF& target) const
     paintTitle(p);
 
     const StepResult& s = r_.steps[d_.step];
-    const BodyShape shape = shapeOf(m_, s, d_.body);
+    const std::vector<BodyPointOf> points = bodyPointsAt(m_, s, d_.body);
     double largest = d_.inertiaForce().norm();
     for (const auto& item : d_.items) largest = std::max(largest, item.force.norm());
     const double pagePerNewton = largest > 0 ? kMaxArrow / largest : 0.0;
     double bodySize = 0;
-    for (const Vec2& a : shape.points) bodySize = std::max(bodySize, (a - d_.cg).norm());
+    for (const auto& a : points) bodySize = std::max(bodySize, (a.at - d_.cg).norm());
     const double coupleFloor = kNegligibleCouple * std::max(1.0, largest * std::max(bodySize, 0.01));
 
     std::vector<Mark> marks;
@@ -324,7 +281,7 @@ void FreeBodyPainter::paint(QPainter& p, const QRectF& target) const
     panelHeading(p, bodyArea, o_.dAlembert ? "Free body with inertia loads (d'Alembert): every sum is zero" : "Free body");
     std::vector<Vec2> loadPoints;
     for (const auto& item : d_.items) loadPoints.push_back(item.at);
-    BodyPanel panel(shape, d_.cg, loadPoints, bodyArea, pagePerNewton);
+    BodyPanel panel(points, d_.cg, loadPoints, bodyArea, pagePerNewton);
     LabelPlacer labels(bodyArea.adjusted(0, 16, 0, -34), font(11));
     panel.paintBody(p);
     panel.paintMarks(p, marks, labels);
@@ -336,7 +293,7 @@ void FreeBodyPainter::paint(QPainter& p, const QRectF& target) const
         p.setPen(palette::ink());
         p.drawText(QRectF(kBodyPanelRight, kPanelTop, kKineticLeft - kBodyPanelRight, kPanelHeight), Qt::AlignCenter, "=");
         panelHeading(p, kineticArea, "Kinetic diagram");
-        BodyPanel kinetic(shape, d_.cg, {}, kineticArea, pagePerNewton);
+        BodyPanel kinetic(points, d_.cg, {}, kineticArea, pagePerNewton);
         std::vector<Mark> km;
         if (d_.inertiaForce().norm() > 1e-9)
             km.push_back({d_.cg, d_.inertiaForce(), 0, false, inertiaStyle(), forceText(o_.units, "m·a_G", d_.inertiaForce())});

@@ -1,6 +1,7 @@
 #include "render/mechanism_sketch.h"
 
 #include "render/body_outline.h"
+#include "core/results/body_points_at_step.h"
 #include "core/solver/body_state.h"
 #include "render/drawing_symbols.h"
 #include "render/label_placer.h"
@@ -66,21 +67,15 @@ void MechanismSketch::paint(QPainter& p, const QRectF& target) const
     for (std::size_t b = 0; b < m_.bodies.size(); ++b) {
         std::vector<QPointF> pts;
         std::vector<SlideBlock> blocks;
-        for (const auto& j : m_.joints)
-            for (int side = 0; side < 2; ++side) {
-                if (j.body[side] != int(b)) continue;
-                const QPointF at = frame.map(pointPosition(q, j.point[side]));
-                pts.push_back(at);
-                if (j.type == JointType::Slider && side == 1)
-                    blocks.push_back({at, unitOf(frame.mapDirection(rotation(bodyAngle(q, j.body[0])) * j.axisLocal, 1))});
-            }
-        for (const auto& d : m_.drivers)
-            for (const auto& end : d.ends)
-                if (d.joint < 0 && end.body == int(b)) pts.push_back(frame.map(pointPosition(q, end)));
-        pts.push_back(frame.map(bodyOrigin(q, int(b))));  // as in the free-body diagrams
+        for (const auto& point : bodyPointsAt(m_, step_, int(b))) {
+            if (point.kind == BodyPointKind::LoadPoint) continue;  // the sketch shows no loads
+            pts.push_back(frame.map(point.at));
+            if (point.kind == BodyPointKind::SlideBlock)
+                blocks.push_back({pts.back(), unitOf(frame.mapDirection(point.axis, 1))});
+        }
         p.setPen(QPen(palette::link(), 1.3));
         p.setBrush(palette::linkFill());
-        const QPainterPath outline = bodyOutline(pts, kHalfWidth, blocks);
+        const QPainterPath outline = bodyOutlinePath(pts, kHalfWidth, blocks);
         p.drawPath(outline);
         labels.addObstacle(outline);
         bodyNames.emplace_back(QString::fromStdString(m_.bodies[b].name), outline.boundingRect().center());
@@ -111,7 +106,7 @@ void MechanismSketch::paint(QPainter& p, const QRectF& target) const
     for (const auto& d : m_.drivers) {
         if (d.type != DriverType::Rotary) continue;
         const QPointF at = frame.map(pointPosition(q, m_.joints[d.joint].point[1]));
-        drawCoupleArrow(p, at, 14, true, {palette::driver(), 1.4, false});
+        drawCoupleArrow(p, at, 14, true, figureArrow(palette::driver(), 1.4));
     }
     labels.paint(p, palette::ink(), palette::paper());
     p.setPen(palette::ink());

@@ -4,6 +4,7 @@
 #include "core/solver/cycle_sweep.h"
 #include "tests/mechanism_builders.h"
 #include "core/results/posed_mechanism.h"
+#include "core/results/body_points_at_step.h"
 
 #include <gtest/gtest.h>
 
@@ -28,6 +29,31 @@ TEST(PosedMechanism, JointsFollowTheSliderCrank)
         EXPECT_NEAR(posed.joints[3].axisDeg, 0.0, 1e-12);  // the slide is fixed in ground
         EXPECT_EQ(posed.bodies[0].mass, drawn.bodies[0].mass);
     }
+}
+
+// The points the canvas draws a body round (from the document) and those the
+// figures draw it round (from the solved step) are the same points.
+TEST(BodyPoints, DocumentAndSolvedStepAgree)
+{
+    const Mechanism drawn = test::sliderCrank({});
+    const CompiledMechanism m = compile(drawn);
+    const CycleResult r = sweepCycle(m, {.steps = 12});
+    for (const auto& step : r.steps) {
+        const Mechanism posed = posedMechanism(drawn, m, step);
+        for (std::size_t b = 0; b < m.bodies.size(); ++b) {
+            const auto document = bodyPoints(posed, m.bodies[b].name);
+            const auto solved = bodyPointsAt(m, step, int(b));
+            ASSERT_EQ(document.size(), solved.size()) << m.bodies[b].name;
+            for (std::size_t i = 0; i < solved.size(); ++i) {
+                EXPECT_EQ(document[i].kind, solved[i].kind) << m.bodies[b].name << " point " << i;
+                EXPECT_NEAR((document[i].at - solved[i].at).norm(), 0.0, 1e-9) << m.bodies[b].name << " point " << i;
+            }
+        }
+    }
+    const auto piston = bodyPoints(drawn, "piston");
+    ASSERT_EQ(piston.size(), 3u);
+    EXPECT_EQ(piston[1].kind, BodyPointKind::SlideBlock);
+    EXPECT_EQ(bodyPins(drawn, "piston").size(), 2u);
 }
 
 }  // namespace

@@ -34,9 +34,7 @@ void paintDrivers(PaintContext& c);
 void paintLoads(PaintContext& c);
 void paintMasses(PaintContext& c);  // centres of mass and point masses
 
-// Shared strokes.
-void drawArcArrow(QPainter& p, const QPointF& centre, double radius, double startDeg, double spanDeg);
-void drawArrow(QPainter& p, const QPointF& tail, const QPointF& tip);
+// Canvas strokes; arrows and the centre-of-mass mark are render/drawing_symbols.h's.
 void drawZigZag(QPainter& p, const QPointF& a, const QPointF& b);
 void drawLabel(QPainter& p, const QPointF& at, const QString& text, const QColor& colour);
 

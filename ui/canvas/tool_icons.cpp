@@ -1,5 +1,6 @@
 #include "ui/canvas/tool_icons.h"
 
+#include "render/drawing_symbols.h"
 #include "render/palette.h"
 #include "ui/canvas/sketch_painter.h"
 
@@ -68,8 +69,7 @@ void drawIcon(QPainter& p, const QString& name)
         p.drawRoundedRect(QRectF(3, 8.5, 18, 7), 3.5, 3.5);
         drawRing(p, {15, 12});
     } else if (name == "Motor") {
-        p.setPen(QPen(palette::driver(), 1.8));
-        drawArcArrow(p, {12, 12}, 7.5, 120, 250);
+        drawArcArrow(p, {12, 12}, 7.5, 120, 250, sketchArrow(QPen(palette::driver(), 1.8)));
         drawRing(p, {12, 12});
     } else if (name == "Cylinder") {
         p.setPen(QPen(palette::driver(), 2.0));
@@ -78,11 +78,9 @@ void drawIcon(QPainter& p, const QString& name)
         p.setBrush(palette::paper());
         p.drawRoundedRect(QRectF(3, 8.5, 11, 7), 1.5, 1.5);
     } else if (name == "Force") {
-        p.setPen(QPen(palette::load(), 2.0));
-        drawArrow(p, {5, 19}, {19, 5});
+        drawArrow(p, {5, 19}, {19, 5}, sketchArrow(QPen(palette::load(), 2.0)));
     } else if (name == "Torque") {
-        p.setPen(QPen(palette::load(), 1.8));
-        drawArcArrow(p, {12, 12}, 7.5, -60, 250);
+        drawArcArrow(p, {12, 12}, 7.5, -60, 250, sketchArrow(QPen(palette::load(), 1.8)));
     } else if (name == "Spring") {
         p.setPen(QPen(palette::spring(), 1.5));
         drawZigZag(p, {3, 12}, {21, 12});

@@ -36,35 +36,16 @@ int indexByName(const List& list, const std::string& name)
 
 }  // namespace
 
-std::vector<Vec2> bodyPins(const Mechanism& m, const std::string& body)
-{
-    std::vector<Vec2> pins;
-    for (const auto& j : m.joints)
-        if (j.bodies[0] == body || j.bodies[1] == body) pins.push_back(j.at);
-    return pins;
-}
-
 std::vector<Vec2> bodyOutline(const Mechanism& m, const std::string& body)
 {
     // Everything fixed to the body spans it: a bed held by one hinge and a
     // cylinder is drawn between the two, round its load points and masses.
-    std::vector<Vec2> points = bodyPins(m, body);
-    const auto add = [&](const BodyPointRef& p) {
-        if (p.body == body) points.push_back(p.at);
-    };
-    for (const auto& d : m.drivers)
-        for (const auto& end : d.ends)
-            if (end) add(*end);
-    for (const auto& load : m.loads) {
-        if (const auto* f = std::get_if<ForceLoad>(&load)) add(f->point);
-        if (const auto* s = std::get_if<SpringLoad>(&load)) add(s->a), add(s->b);
-        if (const auto* d = std::get_if<DamperLoad>(&load)) add(d->a), add(d->b);
-    }
-    const int b = bodyIndex(m, body);
-    if (b >= 0) {
-        for (const auto& pm : m.bodies[b].pointMasses) points.push_back(pm.at);
-        if (points.size() < 2 && m.bodies[b].cg) points.push_back(*m.bodies[b].cg);
-    }
+    const std::vector<BodyPointOf> all = bodyPoints(m, body);
+    std::vector<Vec2> points;
+    for (const auto& p : all)
+        if (p.kind != BodyPointKind::Centre) points.push_back(p.at);
+    for (const auto& p : all)
+        if (p.kind == BodyPointKind::Centre && points.size() < 2) points.push_back(p.at);
     return convexHull(points);
 }
 

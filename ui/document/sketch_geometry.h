@@ -1,8 +1,10 @@
-// What the canvas draws, derived from the document alone: where each body's
-// pins are, its outline, and which joints share a point. Nothing here is
-// stored; it is recomputed from the mechanism whenever needed.
+// What the canvas draws, derived from the document alone: each body's
+// outline, which joints share a point, where loads attach. Nothing here is
+// stored; it is recomputed from the mechanism whenever needed. (A body's
+// joint points, bodyPins, come with core/model/body_points.h.)
 #pragma once
 
+#include "core/model/body_points.h"
 #include "core/model/mechanism.h"
 
 #include <QStringList>
@@ -11,9 +13,6 @@
 #include <vector>
 
 namespace clevis::ui {
-
-// Joint points on a body (every joint that names it), in document order.
-std::vector<Vec2> bodyPins(const Mechanism& m, const std::string& body);
 
 // The polygon a body is drawn as: two points for a bar, the convex hull of
 // the pins for a plate (three or more pins), one point for a lone block.

@@ -1,10 +1,10 @@
+#include "render/body_outline.h"
 #include "render/palette.h"
 #include "ui/document/sketch_geometry.h"
 #include "ui/canvas/sketch_painter.h"
 #include "ui/canvas/sketch_style.h"
 
 #include <QPainterPath>
-#include <QPainterPathStroker>
 
 namespace clevis::ui {
 namespace {
@@ -13,18 +13,9 @@ namespace {
 // is its pins' hull with the same rounded margin, so pins never sit on an edge.
 QPainterPath bodyShape(const std::vector<Vec2>& outline, const ViewTransform& view)
 {
-    QPainterPath spine;
-    spine.moveTo(view.toScreen(outline[0]));
-    for (std::size_t i = 1; i < outline.size(); ++i) spine.lineTo(view.toScreen(outline[i]));
-    if (outline.size() >= 3) spine.closeSubpath();
-    if (outline.size() == 1) spine.lineTo(spine.currentPosition() + QPointF(0.01, 0));
-    QPainterPathStroker stroker;
-    stroker.setWidth(style::kBarWidth);
-    stroker.setCapStyle(Qt::RoundCap);
-    stroker.setJoinStyle(Qt::RoundJoin);
-    const QPainterPath rim = stroker.createStroke(spine);
-    // The stroke alone is a ring round a plate; unite it with the polygon to fill it.
-    return outline.size() >= 3 ? rim.united(spine) : rim.simplified();
+    std::vector<QPointF> screen;
+    for (const Vec2& p : outline) screen.push_back(view.toScreen(p));
+    return bodyOutlinePath(screen, style::kBarWidth / 2);
 }
 
 QPointF labelPoint(const std::vector<Vec2>& outline, const ViewTransform& view)

@@ -1,4 +1,5 @@
 #include "ui/shell/display_units.h"
+#include "render/drawing_symbols.h"
 #include "render/palette.h"
 #include "ui/document/sketch_geometry.h"
 #include "ui/canvas/sketch_painter.h"
@@ -62,8 +63,8 @@ void paintDrivers(PaintContext& c)
                 p.setPen(halo);
                 p.drawEllipse(at, style::kMotorRadius, style::kMotorRadius);
             }
-            p.setPen(QPen(palette::driver(), 2.2, Qt::SolidLine, Qt::FlatCap));
-            drawArcArrow(p, at, style::kMotorRadius, 120, 250);
+            const ArrowStyle arrow = sketchArrow(QPen(palette::driver(), 2.2, Qt::SolidLine, Qt::FlatCap));
+            drawArcArrow(p, at, style::kMotorRadius, 120, 250, arrow);
         } else {
             // At a slider: a double-headed arrow along the slide.
             const double a = qDegreesToRadians(c.mechanism.joints[j].axisDeg);
@@ -71,9 +72,9 @@ void paintDrivers(PaintContext& c)
             const QPointF mid = at + n * (style::kBlockSize * 0.9);
             p.setPen(c.haloPen(Selection::Kind::Driver, d.name, 2.2));
             p.drawLine(mid - u * 22, mid + u * 22);
-            p.setPen(QPen(palette::driver(), 2.2));
-            drawArrow(p, mid, mid + u * 22);
-            drawArrow(p, mid, mid - u * 22);
+            const ArrowStyle arrow = sketchArrow(QPen(palette::driver(), 2.2));
+            drawArrow(p, mid, mid + u * 22, arrow);
+            drawArrow(p, mid, mid - u * 22, arrow);
         }
         drawLabel(p, at + QPointF(style::kMotorRadius + 4, -style::kMotorRadius), QString::fromStdString(d.name) + "  " + motionLabel(d),
                   palette::driver());

@@ -1,4 +1,5 @@
 #include "ui/shell/display_units.h"
+#include "render/drawing_symbols.h"
 #include "render/palette.h"
 #include "ui/document/sketch_geometry.h"
 #include "ui/canvas/sketch_painter.h"
@@ -41,8 +42,7 @@ public:
         const QPointF tip = c_.view.toScreen(f.point.at);
         const QPointF tail = tip - screenDir(f.force) * style::kArrowLength;
         halo(f.name, [&] { p_.drawLine(tail, tip); });
-        p_.setPen(QPen(palette::load(), 2.2));
-        drawArrow(p_, tail, tip);
+        drawArrow(p_, tail, tip, sketchArrow(QPen(palette::load(), 2.2)));
         label(tail, QString::fromStdString(f.name) + "  " + DisplayUnits::instance().formatForce(f.force.norm()));
     }
     void operator()(const TorqueLoad& t)
@@ -50,8 +50,8 @@ public:
         const QPointF at = c_.view.toScreen(loadAnchor(c_.mechanism, t));
         const double r = style::kMotorRadius * 1.5;
         halo(t.name, [&] { p_.drawEllipse(at, r, r); });
-        p_.setPen(QPen(palette::load(), 2.2));
-        drawArcArrow(p_, at, r, t.torque >= 0 ? -60 : 240, t.torque >= 0 ? 200 : -200);
+        const ArrowStyle arrow = sketchArrow(QPen(palette::load(), 2.2));
+        drawArcArrow(p_, at, r, t.torque >= 0 ? -60 : 240, t.torque >= 0 ? 200 : -200, arrow);
         label(at + QPointF(r, -r), QString::fromStdString(t.name) + "  " + DisplayUnits::instance().formatTorque(t.torque));
     }
     void operator()(const SpringLoad& s)

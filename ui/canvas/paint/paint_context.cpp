@@ -3,7 +3,6 @@
 
 #include <QFontMetricsF>
 #include <QPainterPath>
-#include <QtMath>
 
 #include <algorithm>
 #include <cmath>
@@ -32,36 +31,6 @@ void paintSketch(PaintContext& c)
     paintJoints(c);
     paintDrivers(c);
     paintMasses(c);
-}
-
-void drawArrow(QPainter& p, const QPointF& tail, const QPointF& tip)
-{
-    const QLineF shaft(tail, tip);
-    if (shaft.length() < 1) return;
-    const QPointF u = (tip - tail) / shaft.length();
-    const QPointF n(-u.y(), u.x());
-    const double head = 9.0;
-    const QPointF base = tip - u * head;
-    p.drawLine(tail, base);
-    QPolygonF arrow;
-    arrow << tip << base + n * head * 0.42 << base - n * head * 0.42;
-    p.save();
-    p.setBrush(p.pen().color());
-    p.setPen(QPen(p.pen().color(), 1.0));
-    p.drawPolygon(arrow);
-    p.restore();
-}
-
-void drawArcArrow(QPainter& p, const QPointF& centre, double radius, double startDeg, double spanDeg)
-{
-    const QRectF box(centre.x() - radius, centre.y() - radius, 2 * radius, 2 * radius);
-    // QPainter angles are counter-clockwise on screen in sixteenths of a degree.
-    p.drawArc(box, int(startDeg * 16), int(spanDeg * 16));
-    const double end = qDegreesToRadians(startDeg + spanDeg);
-    const QPointF tip = centre + QPointF(std::cos(end), -std::sin(end)) * radius;
-    const double sign = spanDeg >= 0 ? 1.0 : -1.0;
-    const QPointF tangent(-std::sin(end) * sign, -std::cos(end) * sign);
-    drawArrow(p, tip - tangent * 10.0, tip + tangent * 1.5);
 }
 
 void drawZigZag(QPainter& p, const QPointF& a, const QPointF& b)
