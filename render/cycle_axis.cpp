@@ -46,4 +46,12 @@ CycleAxis cycleAxis(const CompiledMechanism& m, const CycleResult& r)
     return axis;
 }
 
+double plannedEnd(const CycleAxis& axis, const CycleResult& r)
+{
+    if (axis.values.empty()) return 0;
+    const int solved = int(axis.values.size()) - 1;
+    if (r.complete || solved <= 0) return axis.values.back();
+    return axis.values.front() + (axis.values.back() - axis.values.front()) * r.plannedSteps / solved;
+}
+
 }  // namespace clevis::ui

@@ -23,4 +23,9 @@ struct CycleAxis {
 
 CycleAxis cycleAxis(const CompiledMechanism& m, const CycleResult& r);
 
+// Where the planned cycle ends on the axis: the last value when the cycle was
+// completed, else extrapolated past it at the solved spacing, so the part not
+// reached can be shown.
+double plannedEnd(const CycleAxis& axis, const CycleResult& r);
+
 }  // namespace clevis::ui

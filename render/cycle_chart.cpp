@@ -43,22 +43,12 @@ std::vector<double> niceTicks(double lo, double hi, int count)
     return ticks;
 }
 
-ChartLine chartLine(CycleSeries series, int index)
-{
-    const QColor colours[] = {palette::ink(), palette::link(), palette::driver(), palette::load(), palette::spring(),
-                              palette::weight()};
-    const Qt::PenStyle styles[] = {Qt::SolidLine, Qt::DashLine, Qt::DotLine, Qt::DashDotLine};
-    return {std::move(series), colours[index % 6], styles[index % 4]};
-}
-
-CycleChart::CycleChart(QString title, CycleAxis axis, std::vector<ChartLine> lines, const CycleResult& r, QSizeF size)
-    : title_(std::move(title)), axis_(std::move(axis)), lines_(std::move(lines)), singular_(nearSingularRuns(r)), size_(size)
+CycleChart::CycleChart(PlotPane pane, CycleAxis axis, const CycleResult& r, QSizeF size)
+    : pane_(std::move(pane)), axis_(std::move(axis)), singular_(nearSingularRuns(r)), size_(size)
 {
     if (!axis_.values.empty()) {
-        reachEnd_ = plannedEnd_ = axis_.values.back();
-        const int solved = int(axis_.values.size()) - 1;
-        if (!r.complete && solved > 0)
-            plannedEnd_ = axis_.values.front() + (axis_.values.back() - axis_.values.front()) * r.plannedSteps / solved;
+        reachEnd_ = axis_.values.back();
+        plannedEnd_ = plannedEnd(axis_, r);
     }
 }
 
@@ -70,16 +60,16 @@ void CycleChart::paint(QPainter& p, const QRectF& target) const
     p.fillRect(QRectF(QPointF(0, 0), size_), Qt::white);
     p.setPen(palette::ink());
     p.setFont(chartFont(12, true));
-    p.drawText(QPointF(4, 14), title_);
-    if (axis_.values.empty() || lines_.empty()) {
+    p.drawText(QPointF(4, 14), pane_.title);
+    if (axis_.values.empty() || pane_.curves.empty()) {
         p.restore();
         return;
     }
 
     double xlo = std::min(axis_.values.front(), plannedEnd_), xhi = std::max(axis_.values.back(), plannedEnd_);
     double ylo = 0, yhi = 0;
-    for (const auto& l : lines_)
-        for (const double v : l.series.values) {
+    for (const auto& c : pane_.curves)
+        for (const double v : c.series.values) {
             ylo = std::min(ylo, v);
             yhi = std::max(yhi, v);
         }
@@ -125,39 +115,42 @@ void CycleChart::paint(QPainter& p, const QRectF& target) const
     p.save();
     p.translate(10, plot.center().y());
     p.rotate(-90);
-    p.drawText(QRectF(-plot.height() / 2, -8, plot.height(), 14), Qt::AlignCenter, lines_.front().series.unit);
+    p.drawText(QRectF(-plot.height() / 2, -8, plot.height(), 14), Qt::AlignCenter, pane_.unit);
     p.restore();
 
     double legendX = plot.left();
     const double legendY = size_.height() - 10;
-    for (const auto& l : lines_) {
-        const auto& v = l.series.values;
+    for (const auto& c : pane_.curves) {
+        const QPen pen = curvePen(c.pen);
+        const auto& v = c.series.values;
         QPainterPath path;
         for (std::size_t i = 0; i < v.size() && i < axis_.values.size(); ++i) {
             const QPointF pt(X(axis_.values[i]), Y(v[i]));
             if (i == 0) path.moveTo(pt);
             else path.lineTo(pt);
         }
-        p.setPen(QPen(l.colour, 1.4, l.style));
+        QPen line = pen;
+        line.setWidthF(1.4);
+        p.setPen(line);
         p.drawPath(path);
         // Peak of |value|, marked and written beside the mark.
         const auto peak = std::max_element(v.begin(), v.end(), [](double a, double b) { return std::abs(a) < std::abs(b); });
         if (peak != v.end()) {
             const int i = int(peak - v.begin());
             const QPointF pt(X(axis_.values[i]), Y(*peak));
-            p.setPen(QPen(l.colour, 1.2));
+            p.setPen(QPen(pen.color(), 1.2));
             p.drawEllipse(pt, 3.2, 3.2);
-            const QString text = QString("%1 at %2 %3").arg(formatQuantity(*peak, l.series.unit)).arg(axis_.values[i], 0, 'f', 1).arg(axis_.unit);
+            const QString text = QString("%1 at %2 %3").arg(formatQuantity(*peak, c.series.unit)).arg(axis_.values[i], 0, 'f', 1).arg(axis_.unit);
             const bool left = pt.x() > plot.center().x();
             const QRectF box = left ? QRectF(pt.x() - 176, pt.y() - 15, 170, 12) : QRectF(pt.x() + 6, pt.y() - 15, 170, 12);
             p.setPen(palette::ink());
             p.drawText(box.translated(0, box.top() < plot.top() ? 16 : 0), left ? Qt::AlignRight : Qt::AlignLeft, text);
         }
-        p.setPen(QPen(l.colour, 1.6, l.style));
+        p.setPen(pen);
         p.drawLine(QPointF(legendX, legendY - 4), QPointF(legendX + 18, legendY - 4));
         p.setPen(palette::ink());
-        p.drawText(QPointF(legendX + 22, legendY), l.series.name);
-        legendX += 30 + p.fontMetrics().horizontalAdvance(l.series.name);
+        p.drawText(QPointF(legendX + 22, legendY), c.series.name);
+        legendX += 30 + p.fontMetrics().horizontalAdvance(c.series.name);
     }
     p.restore();
 }

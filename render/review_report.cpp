@@ -8,6 +8,7 @@
 #include "render/free_body_painter.h"
 #include "render/mechanism_sketch.h"
 #include "render/page_flow.h"
+#include "render/plot_panes.h"
 #include "render/palette.h"
 
 #include <QDateTime>
@@ -102,30 +103,8 @@ void inputsSection(PageFlow& f, const ReviewReportInput& in)
 
 void plotsSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis)
 {
-    const auto& m = in.mechanism;
-    const auto& r = in.result;
-    std::vector<ChartLine> reactions, efforts, powers, transmission;
-    for (std::size_t j = 0; j < m.joints.size(); ++j)
-        reactions.push_back(chartLine(jointReactionSeries(m, r, int(j), ReactionPart::Magnitude, in.units), int(j)));
-    for (std::size_t d = 0; d < m.drivers.size(); ++d) {
-        efforts.push_back(chartLine(driverEffortSeries(m, r, int(d), in.units), int(d) + 2));
-        powers.push_back(chartLine(driverPowerSeries(m, r, int(d)), int(d) + 2));
-    }
-    for (std::size_t k = 0; k < r.transmissionPins.size(); ++k)
-        transmission.push_back(chartLine(transmissionSeries(m, r, int(k)), int(k)));
-    const double w = f.width();
-    f.figure(CycleChart("Joint reactions |F|", axis, reactions, r), w);
-    // Rotary and linear efforts have different units: one chart per kind.
-    for (const DriverType type : {DriverType::Rotary, DriverType::Linear}) {
-        std::vector<ChartLine> kind;
-        for (std::size_t d = 0; d < m.drivers.size(); ++d)
-            if (m.drivers[d].type == type) kind.push_back(efforts[d]);
-        if (!kind.empty()) f.figure(CycleChart(type == DriverType::Rotary ? "Drive torque" : "Drive force", axis, kind, r), w);
-    }
-    f.figure(CycleChart("Driver power (positive: into the mechanism)", axis, powers, r), w);
-    f.figure(CycleChart("Shaking force on the frame", axis, {chartLine(shakingForceSeries(r, in.units), 0)}, r), w);
-    f.figure(CycleChart("Shaking moment on the frame", axis, {chartLine(shakingMomentSeries(r, in.units), 1)}, r), w);
-    if (!transmission.empty()) f.figure(CycleChart("Transmission angle", axis, transmission, r), w);
+    for (PlotPane& pane : plotPanes(in.mechanism, in.result, in.units))
+        f.figure(CycleChart(std::move(pane), axis, in.result), f.width());
 }
 
 void peakSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis)

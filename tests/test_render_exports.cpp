@@ -1,11 +1,13 @@
 // Headless exports: a free-body diagram written by `clevis-cli fbd` carries
 // the solver's numbers for that body and step, and the design-review report
-// renders page by page with its sections and the summary's peak table.
+// renders page by page with its sections and the summary's peak table; the
+// plot panes are described from the results alone and the report draws them.
 #include "app/cli_render_commands.h"
 #include "core/results/cycle_summary.h"
 #include "core/solver/cycle_sweep.h"
 #include "core/results/free_body.h"
 #include "core/file/mechanism_file.h"
+#include "render/plot_panes.h"
 #include "render/render_units.h"
 #include "render/review_report.h"
 
@@ -19,6 +21,7 @@
 
 #include <cmath>
 #include <map>
+#include <set>
 
 using namespace clevis;
 
@@ -228,6 +231,70 @@ TEST(ReviewReport, RendersEveryPageWithItsSectionsAndThePeakTable)
         EXPECT_TRUE(row.contains(u.torque(d.rms))) << d.name;
         EXPECT_TRUE(row.contains(u.torque(d.mean))) << d.name;
         EXPECT_TRUE(row.contains(ui::formatQuantity(d.work, "J"))) << d.name;
+    }
+}
+
+std::vector<QString> paneTitles(const std::vector<ui::PlotPane>& panes)
+{
+    std::vector<QString> titles;
+    for (const auto& p : panes) titles.push_back(p.title);
+    return titles;
+}
+
+TEST(PlotPanes, AreDescribedFromTheResultsAlone)
+{
+    const Solved solved = solveFile(kPress);
+    const auto panes = ui::plotPanes(solved.m, solved.r, ui::RenderUnits{});
+    EXPECT_EQ(paneTitles(panes), (std::vector<QString>{"Joint reactions |F|", "Drive torque",
+                                                       "Driver power (positive: into the mechanism)",
+                                                       "Shaking force on the frame", "Shaking moment on the frame",
+                                                       "Transmission angle"}));
+    std::vector<QString> units;
+    for (const auto& p : panes) units.push_back(p.unit);
+    EXPECT_EQ(units, (std::vector<QString>{"N", "N·m", "W", "N", "N·m", "°"}));
+    std::vector<QString> reactions;
+    for (const auto& c : panes[0].curves) reactions.push_back(c.series.name);
+    EXPECT_EQ(reactions, (std::vector<QString>{"main_bearing |F|", "crank_pin |F|", "wrist_pin |F|", "ram_guide |F|"}));
+    EXPECT_EQ(panes[1].curves.at(0).series.name, "main_motor torque");
+    EXPECT_EQ(panes[2].curves.at(0).series.name, "main_motor power");
+    for (const auto& p : panes)
+        for (const auto& c : p.curves) EXPECT_EQ(c.series.values.size(), solved.r.steps.size()) << c.series.name.toStdString();
+    EXPECT_DOUBLE_EQ(panes[0].curves[1].series.values[100], solved.r.steps[100].joints[1].force.norm());
+}
+
+TEST(PlotPanes, FollowTheChoiceOfJointsAndComponents)
+{
+    const Solved solved = solveFile(kPress);
+    const auto panes = ui::plotPanes(solved.m, solved.r, ui::RenderUnits{}, {{"main_bearing", "ram_guide"}, true});
+    ASSERT_FALSE(panes.empty());
+    EXPECT_EQ(panes[0].title, "Joint reactions |F|, Fx, Fy");
+    std::vector<QString> names;
+    std::set<int> pens;
+    for (const auto& c : panes[0].curves) {
+        names.push_back(c.series.name);
+        pens.insert(c.pen);
+    }
+    EXPECT_EQ(names, (std::vector<QString>{"crank_pin |F|", "crank_pin Fx", "crank_pin Fy", "wrist_pin |F|",
+                                           "wrist_pin Fx", "wrist_pin Fy"}));
+    EXPECT_EQ(pens.size(), names.size()) << "every curve of a pane has a pen of its own";
+    // No joint ticked: no reactions pane.
+    const auto none = ui::plotPanes(solved.m, solved.r, ui::RenderUnits{},
+                                    {{"main_bearing", "crank_pin", "wrist_pin", "ram_guide"}, false});
+    EXPECT_EQ(none.front().title, "Drive torque");
+}
+
+TEST(PlotPanes, TheReportDrawsEveryPaneUnderItsTitle)
+{
+    const Solved solved = solveFile(kPress);
+    QTemporaryDir dir;
+    const QString pdf = dir.filePath("review.pdf");
+    ASSERT_EQ(run(cli::runReportCommand, {kPress, "--out", pdf.toStdString()}), 0);
+    const QString text = tool("pdftotext", {pdf, "-"});
+    qsizetype at = text.indexOf(ui::reviewReportSections()[2]);
+    ASSERT_GE(at, 0);
+    for (const QString& title : paneTitles(ui::plotPanes(solved.m, solved.r, ui::RenderUnits{}))) {
+        at = text.indexOf(title, at);
+        ASSERT_GE(at, 0) << title.toStdString() << " missing or out of order";
     }
 }
 

@@ -1,6 +1,8 @@
 // The results views offscreen: the scrubber, the plot cursor and the current
 // step move together; a click on a plot moves the scrubber; selecting a body
-// shows its diagram; the peak table jumps to a peak.
+// shows its diagram; the peak table jumps to a peak; the plots draw the
+// report's panes and keep the joint choice in the view; the hover readout
+// leaves the window its size.
 #include "ui/analysis/analysis_state.h"
 #include "render/cycle_axis.h"
 #include "ui/results/drive_scrubber.h"
@@ -9,16 +11,22 @@
 #include "core/file/mechanism_file.h"
 #include "ui/results/peak_table.h"
 #include "ui/results/plot_stack.h"
+#include "ui/results/results_units.h"
+#include "ui/shell/display_units.h"
 
 #include <QApplication>
+#include <QCheckBox>
 #include <QSlider>
 #include <QDoubleSpinBox>
+#include <QListWidget>
 #include <QTest>
+#include <QVBoxLayout>
 #include <qcustomplot.h>
 
 #include <gtest/gtest.h>
 
 #include <memory>
+#include <set>
 
 using namespace clevis;
 using namespace clevis::ui;
@@ -127,6 +135,56 @@ TEST(ResultsWidgets, PeakTableRowJumpsToThePeak)
     ASSERT_GT(expected, 0);
     QTest::mouseClick(table.viewport(), Qt::LeftButton, Qt::NoModifier, table.visualRect(table.model()->index(row, 0)).center());
     EXPECT_EQ(s.analysis->currentStep(), expected);
+}
+
+TEST(ResultsWidgets, PlotsShowThePanesOfTheReportAndKeepTheChoice)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult());
+    PlotStack plots(s.analysis.get());
+    const auto panes = plotPanes(s.analysis->compiled(), s.analysis->result(), renderUnits(DisplayUnits::instance()));
+    ASSERT_EQ(plots.panes().size(), panes.size());
+    ASSERT_EQ(plots.plot()->axisRectCount(), int(panes.size()));
+    QStringList legends;
+    for (int i = 0; i < plots.plot()->itemCount(); ++i)
+        if (const auto* text = qobject_cast<QCPItemText*>(plots.plot()->item(i))) legends << text->text();
+    ASSERT_EQ(legends.size(), int(panes.size()));
+    for (std::size_t i = 0; i < panes.size(); ++i) {
+        EXPECT_EQ(plots.panes()[i].title, panes[i].title);
+        EXPECT_TRUE(legends[int(i)].startsWith(panes[i].title + ": ")) << legends[int(i)].toStdString();
+    }
+    // The choice is held by the view, and the joint list and box show it.
+    plots.setChoice({{"main_bearing"}, true});
+    const auto* joints = plots.findChild<QListWidget*>();
+    ASSERT_NE(joints, nullptr);
+    EXPECT_EQ(joints->item(0)->checkState(), Qt::Unchecked);
+    EXPECT_EQ(joints->item(1)->checkState(), Qt::Checked);
+    EXPECT_TRUE(plots.findChild<QCheckBox*>()->isChecked());
+    EXPECT_EQ(plots.panes().front().curves.size(), 9u);
+    // Unticking a joint in the list changes the choice.
+    plots.findChild<QListWidget*>()->item(1)->setCheckState(Qt::Unchecked);
+    EXPECT_EQ(plots.choice().hiddenJoints, (std::set<std::string>{"main_bearing", "crank_pin"}));
+    EXPECT_EQ(plots.panes().front().curves.size(), 6u);
+}
+
+TEST(ResultsWidgets, HoverReadoutNeverWidensTheWindow)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult());
+    QWidget window;
+    auto* plots = new PlotStack(s.analysis.get());
+    (new QVBoxLayout(&window))->addWidget(plots);
+    window.resize(900, 700);
+    window.show();
+    QCoreApplication::processEvents();
+    plots->findChild<QCheckBox*>()->setChecked(true);  // Fx, Fy too: the longest readout
+    plots->plot()->replot();
+    QTest::mouseMove(plots->plot(), plots->pixelForStep(100));
+    // Layout requests travel up one level per pass.
+    for (int pass = 0; pass < 8; ++pass) QCoreApplication::sendPostedEvents(nullptr, QEvent::LayoutRequest);
+    ASSERT_GT(plots->readoutText().size(), 300) << plots->readoutText().toStdString();
+    EXPECT_LT(plots->minimumSizeHint().width(), 400);
+    EXPECT_EQ(window.width(), 900);
 }
 
 }  // namespace

@@ -1,12 +1,12 @@
 #include "ui/results/plot_stack.h"
 
 #include "ui/analysis/analysis_state.h"
-#include "render/cycle_series.h"
 #include "ui/shell/display_units.h"
 #include "render/palette.h"
 #include "ui/results/results_units.h"
 
 #include <QCheckBox>
+#include <QEvent>
 #include <QHBoxLayout>
 #include <QLabel>
 #include <QListWidget>
@@ -22,17 +22,15 @@ namespace {
 
 constexpr int kPaneHeight = 130;  // px: room for three ticks and a legend line
 
-struct Pane {
-    QString title;
-    std::vector<CycleSeries> series;
-};
-
-QPen curvePen(int index)
+void addLegend(QCustomPlot* plot, QCPAxisRect* rect, const QString& text)
 {
-    const QColor colours[] = {palette::ink(), palette::link(), palette::driver(), palette::load(), palette::spring(),
-                              palette::weight()};
-    const Qt::PenStyle styles[] = {Qt::SolidLine, Qt::DashLine, Qt::DotLine, Qt::DashDotLine};
-    return QPen(colours[index % 6], 1.6, styles[index % 4]);
+    auto* legend = new QCPItemText(plot);
+    legend->setClipAxisRect(rect);
+    legend->position->setAxisRect(rect);
+    legend->position->setType(QCPItemPosition::ptAxisRectRatio);
+    legend->position->setCoords(0.005, 0.02);
+    legend->setPositionAlignment(Qt::AlignLeft | Qt::AlignTop);
+    legend->setText(text);
 }
 
 }  // namespace
@@ -54,6 +52,9 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     peaks_->setAlignment(Qt::AlignTop | Qt::AlignLeft);
     peaks_->setWordWrap(true);
     readout_->setTextInteractionFlags(Qt::TextSelectableByMouse);
+    // The readout is one line elided to the room there is: a long one must not widen the window.
+    readout_->setSizePolicy(QSizePolicy::Ignored, QSizePolicy::Preferred);
+    readout_->installEventFilter(this);
 
     auto* side = new QWidget(this);
     auto* sideLayout = new QVBoxLayout(side);
@@ -84,11 +85,53 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     connect(analysis_, &AnalysisState::resultChanged, this, &PlotStack::rebuild);
     connect(analysis_, &AnalysisState::currentStepChanged, this, &PlotStack::moveCursor);
     connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, &PlotStack::rebuild);
-    connect(joints_, &QListWidget::itemChanged, this, &PlotStack::rebuild);
-    connect(components_, &QCheckBox::toggled, this, &PlotStack::rebuild);
+    connect(joints_, &QListWidget::itemChanged, this, &PlotStack::jointTicked);
+    connect(components_, &QCheckBox::toggled, this, [this](bool on) {
+        choice_.components = on;
+        rebuild();
+    });
     connect(plot_, &QCustomPlot::mousePress, this, &PlotStack::pointerPressed);
     connect(plot_, &QCustomPlot::mouseMove, this, &PlotStack::pointerMoved);
     rebuild();
+}
+
+void PlotStack::setChoice(PaneChoice choice)
+{
+    choice_ = std::move(choice);
+    rebuild();
+}
+
+void PlotStack::jointTicked(QListWidgetItem* item)
+{
+    const std::string name = item->text().toStdString();
+    if (item->checkState() == Qt::Checked) choice_.hiddenJoints.erase(name);
+    else choice_.hiddenJoints.insert(name);
+    rebuild();
+}
+
+// The list shows the mechanism's joints; the choice keeps joint names, so a
+// joint stays hidden across edits that keep its name.
+void PlotStack::listJoints(const CompiledMechanism& m)
+{
+    bool same = joints_->count() == int(m.joints.size());
+    for (int j = 0; same && j < joints_->count(); ++j) same = joints_->item(j)->text().toStdString() == m.joints[j].name;
+    if (same) return;
+    const QSignalBlocker block(joints_);
+    joints_->clear();
+    for (const auto& j : m.joints) {
+        auto* item = new QListWidgetItem(QString::fromStdString(j.name), joints_);
+        item->setFlags(item->flags() | Qt::ItemIsUserCheckable);
+    }
+}
+
+void PlotStack::showChoice()
+{
+    const QSignalBlocker blockJoints(joints_), blockComponents(components_);
+    for (int j = 0; j < joints_->count(); ++j) {
+        const bool hidden = choice_.hiddenJoints.count(joints_->item(j)->text().toStdString()) > 0;
+        joints_->item(j)->setCheckState(hidden ? Qt::Unchecked : Qt::Checked);
+    }
+    components_->setChecked(choice_.components);
 }
 
 QCPAxisRect* PlotStack::addPane(const QString& unit, bool lastPane)
@@ -111,135 +154,96 @@ void PlotStack::rebuild()
     plot_->clearPlottables();
     plot_->plotLayout()->clear();
     cursors_.clear();
+    panes_.clear();
     peaks_->clear();
     if (!analysis_->hasResult()) {
-        readout_->setText(analysis_->errorText());
+        showReadout(analysis_->errorText());
         plot_->replot();
         return;
     }
     const auto& m = analysis_->compiled();
-    const auto& r = analysis_->result();
-    const RenderUnits u = renderUnits(DisplayUnits::instance());
-    axis_ = cycleAxis(m, r);
-
-    // Keep the ticks when the joints are the same, else tick them all.
-    if (joints_->count() != int(m.joints.size()) ||
-        (joints_->count() > 0 && joints_->item(0)->text() != QString::fromStdString(m.joints[0].name))) {
-        const QSignalBlocker block(joints_);
-        joints_->clear();
-        for (const auto& j : m.joints) {
-            auto* item = new QListWidgetItem(QString::fromStdString(j.name), joints_);
-            item->setFlags(item->flags() | Qt::ItemIsUserCheckable);
-            item->setCheckState(Qt::Checked);
-        }
-    }
-
-    std::vector<Pane> panes;
-    Pane reactions{tr("Joint reactions"), {}};
-    for (int j = 0; j < joints_->count(); ++j) {
-        if (joints_->item(j)->checkState() != Qt::Checked) continue;
-        reactions.series.push_back(jointReactionSeries(m, r, j, ReactionPart::Magnitude, u));
-        if (components_->isChecked()) {
-            reactions.series.push_back(jointReactionSeries(m, r, j, ReactionPart::X, u));
-            reactions.series.push_back(jointReactionSeries(m, r, j, ReactionPart::Y, u));
-        }
-    }
-    if (!reactions.series.empty()) panes.push_back(reactions);
-    for (const DriverType type : {DriverType::Rotary, DriverType::Linear}) {
-        Pane effort{type == DriverType::Rotary ? tr("Drive torque") : tr("Drive force"), {}};
-        for (std::size_t d = 0; d < m.drivers.size(); ++d)
-            if (m.drivers[d].type == type) effort.series.push_back(driverEffortSeries(m, r, int(d), u));
-        if (!effort.series.empty()) panes.push_back(effort);
-    }
-    Pane power{tr("Driver power"), {}};
-    for (std::size_t d = 0; d < m.drivers.size(); ++d) power.series.push_back(driverPowerSeries(m, r, int(d)));
-    if (!power.series.empty()) panes.push_back(power);
-    panes.push_back({tr("Shaking force"), {shakingForceSeries(r, u)}});
-    panes.push_back({tr("Shaking moment"), {shakingMomentSeries(r, u)}});
-    Pane transmission{tr("Transmission angle"), {}};
-    for (std::size_t k = 0; k < r.transmissionPins.size(); ++k) transmission.series.push_back(transmissionSeries(m, r, int(k)));
-    if (!transmission.series.empty()) panes.push_back(transmission);
-
-    const QVector<double> x(axis_.values.begin(), axis_.values.end());
-    double xlo = x.front(), xhi = x.back();
-    if (xlo > xhi) std::swap(xlo, xhi);
-    // The part of the cycle not reached, extrapolated at the solved spacing.
-    double unreachedEnd = xhi;
-    if (!r.complete && x.size() > 1) unreachedEnd = x.front() + (x.back() - x.front()) * r.plannedSteps / (x.size() - 1);
+    axis_ = cycleAxis(m, analysis_->result());
+    listJoints(m);
+    showChoice();
+    panes_ = plotPanes(m, analysis_->result(), renderUnits(DisplayUnits::instance()), choice_);
     auto* margins = new QCPMarginGroup(plot_);
     QStringList peakLines;
-    int curve = 0;
-    for (std::size_t i = 0; i < panes.size(); ++i) {
-        const Pane& pane = panes[i];
-        QCPAxisRect* rect = addPane(pane.series.front().unit, i + 1 == panes.size());
-        rect->setMarginGroup(QCP::msLeft | QCP::msRight, margins);
-        QCPAxis* xa = rect->axis(QCPAxis::atBottom);
-        QCPAxis* ya = rect->axis(QCPAxis::atLeft);
-        xa->setRange(std::min(xlo, unreachedEnd), std::max(xhi, unreachedEnd));
-        auto* legend = new QCPItemText(plot_);
-        legend->setClipAxisRect(rect);
-        legend->position->setAxisRect(rect);
-        legend->position->setType(QCPItemPosition::ptAxisRectRatio);
-        legend->position->setCoords(0.005, 0.02);
-        legend->setPositionAlignment(Qt::AlignLeft | Qt::AlignTop);
-        QStringList names;
-        double lo = 0, hi = 0;
-        for (const CycleSeries& s : pane.series) {
-            QCPGraph* g = plot_->addGraph(xa, ya);
-            g->setName(s.name);
-            g->setPen(curvePen(curve++));
-            g->setData(x, QVector<double>(s.values.begin(), s.values.end()), true);
-            names << s.name;
-            const auto peak = std::max_element(s.values.begin(), s.values.end(), [](double a, double b) { return std::abs(a) < std::abs(b); });
-            const int k = int(peak - s.values.begin());
-            auto* mark = new QCPItemTracer(plot_);
-            mark->setGraph(g);
-            mark->setGraphKey(x[k]);
-            mark->setStyle(QCPItemTracer::tsCircle);
-            mark->setSize(7);
-            mark->setPen(g->pen());
-            peakLines << tr("%1: %2 at %3 %4").arg(s.name, formatQuantity(*peak, s.unit)).arg(x[k], 0, 'f', axis_.byTime ? 4 : 1).arg(axis_.unit);
-            for (const double v : s.values) {
-                lo = std::min(lo, v);
-                hi = std::max(hi, v);
-            }
-        }
-        legend->setText(pane.title + ": " + names.join(", "));
-        const double pad = std::max(1e-9, 0.08 * (hi - lo));
-        ya->setRange(lo - (lo < 0 ? pad : 0), hi + pad + 0.12 * (hi - lo));
-        const auto shade = [&](double a, double b, QColor c) {
-            auto* box = new QCPItemRect(plot_);
-            box->setClipAxisRect(rect);
-            box->topLeft->setAxes(xa, ya);
-            box->bottomRight->setAxes(xa, ya);
-            box->topLeft->setTypeY(QCPItemPosition::ptAxisRectRatio);
-            box->bottomRight->setTypeY(QCPItemPosition::ptAxisRectRatio);
-            box->topLeft->setAxisRect(rect);
-            box->bottomRight->setAxisRect(rect);
-            box->topLeft->setCoords(a, 0);
-            box->bottomRight->setCoords(b, 1);
-            box->setPen(Qt::NoPen);
-            box->setBrush(c);
-            box->setLayer("background");
-        };
-        QColor flagged = palette::problem();
-        flagged.setAlphaF(0.15);
-        for (const auto& [a, b] : nearSingularRuns(r)) shade(x[std::max(a - 1, 0)], x[std::min<int>(b + 1, x.size() - 1)], flagged);
-        if (unreachedEnd != x.back()) {
-            QColor unreached = palette::groundHatch();
-            unreached.setAlphaF(0.2);
-            shade(x.back(), unreachedEnd, unreached);
-        }
-        auto* cursor = new QCPItemStraightLine(plot_);
-        cursor->setClipAxisRect(rect);
-        cursor->point1->setAxes(xa, ya);
-        cursor->point2->setAxes(xa, ya);
-        cursor->setPen(QPen(palette::driver(), 1.2));
-        cursors_.push_back(cursor);
-    }
-    plot_->setMinimumHeight(kPaneHeight * int(panes.size()) + 40);
+    for (std::size_t i = 0; i < panes_.size(); ++i) peakLines << drawPane(panes_[i], i + 1 == panes_.size(), margins);
+    plot_->setMinimumHeight(kPaneHeight * int(panes_.size()) + 40);
     peaks_->setText(peakLines.join("\n"));
     moveCursor(analysis_->currentStep());
+}
+
+// Draws one pane's curves with their peaks marked, the shading and the
+// cursor; returns the peak lines for the list beside the plots.
+QStringList PlotStack::drawPane(const PlotPane& pane, bool lastPane, QCPMarginGroup* margins)
+{
+    const CycleResult& r = analysis_->result();
+    const QVector<double> x(axis_.values.begin(), axis_.values.end());
+    const double end = plannedEnd(axis_, r);
+    QCPAxisRect* rect = addPane(pane.unit, lastPane);
+    rect->setMarginGroup(QCP::msLeft | QCP::msRight, margins);
+    QCPAxis* xa = rect->axis(QCPAxis::atBottom);
+    QCPAxis* ya = rect->axis(QCPAxis::atLeft);
+    xa->setRange(std::min({x.front(), x.back(), end}), std::max({x.front(), x.back(), end}));
+    QStringList names, peakLines;
+    double lo = 0, hi = 0;
+    for (const PlotCurve& c : pane.curves) {
+        const CycleSeries& s = c.series;
+        QCPGraph* g = plot_->addGraph(xa, ya);
+        g->setName(s.name);
+        g->setPen(curvePen(c.pen));
+        g->setData(x, QVector<double>(s.values.begin(), s.values.end()), true);
+        names << s.name;
+        const auto peak = std::max_element(s.values.begin(), s.values.end(), [](double a, double b) { return std::abs(a) < std::abs(b); });
+        const int k = int(peak - s.values.begin());
+        auto* mark = new QCPItemTracer(plot_);
+        mark->setGraph(g);
+        mark->setGraphKey(x[k]);
+        mark->setStyle(QCPItemTracer::tsCircle);
+        mark->setSize(7);
+        mark->setPen(g->pen());
+        peakLines << tr("%1: %2 at %3 %4").arg(s.name, formatQuantity(*peak, s.unit)).arg(x[k], 0, 'f', axis_.byTime ? 4 : 1).arg(axis_.unit);
+        for (const double v : s.values) {
+            lo = std::min(lo, v);
+            hi = std::max(hi, v);
+        }
+    }
+    addLegend(plot_, rect, pane.title + ": " + names.join(", "));
+    const double pad = std::max(1e-9, 0.08 * (hi - lo));
+    ya->setRange(lo - (lo < 0 ? pad : 0), hi + pad + 0.12 * (hi - lo));
+    QColor flagged = palette::problem();
+    flagged.setAlphaF(0.15);
+    for (const auto& [a, b] : nearSingularRuns(r)) shade(rect, x[std::max(a - 1, 0)], x[std::min<int>(b + 1, x.size() - 1)], flagged);
+    if (end != x.back()) {
+        QColor unreached = palette::groundHatch();
+        unreached.setAlphaF(0.2);
+        shade(rect, x.back(), end, unreached);
+    }
+    auto* cursor = new QCPItemStraightLine(plot_);
+    cursor->setClipAxisRect(rect);
+    cursor->point1->setAxes(xa, ya);
+    cursor->point2->setAxes(xa, ya);
+    cursor->setPen(QPen(palette::driver(), 1.2));
+    cursors_.push_back(cursor);
+    return peakLines;
+}
+
+// A band over the pane's full height between two axis values.
+void PlotStack::shade(QCPAxisRect* rect, double from, double to, QColor colour)
+{
+    auto* box = new QCPItemRect(plot_);
+    box->setClipAxisRect(rect);
+    for (QCPItemPosition* corner : {box->topLeft, box->bottomRight}) {
+        corner->setAxes(rect->axis(QCPAxis::atBottom), rect->axis(QCPAxis::atLeft));
+        corner->setTypeY(QCPItemPosition::ptAxisRectRatio);
+        corner->setAxisRect(rect);
+    }
+    box->topLeft->setCoords(from, 0);
+    box->bottomRight->setCoords(to, 1);
+    box->setPen(Qt::NoPen);
+    box->setBrush(colour);
+    box->setLayer("background");
 }
 
 void PlotStack::moveCursor(int step)
@@ -279,15 +283,26 @@ void PlotStack::pointerMoved(QMouseEvent* e)
     const int step = stepAtPixel(e->position().x());
     if (e->buttons() & Qt::LeftButton) analysis_->setCurrentStep(step);
     QStringList parts{tr("%1 = %2").arg(axis_.label).arg(axis_.values[step], 0, 'f', axis_.byTime ? 4 : 1)};
-    for (int g = 0; g < plot_->graphCount(); ++g) {
-        const QCPGraph* graph = plot_->graph(g);
-        const double v = (graph->data()->constBegin() + step)->value;
-        parts << tr("%1 %2").arg(graph->name(), formatQuantity(v, graph->valueAxis()->label()));
-    }
-    readout_->setText(parts.join("   "));
+    for (const PlotPane& pane : panes_)
+        for (const PlotCurve& c : pane.curves)
+            parts << tr("%1 %2").arg(c.series.name, formatQuantity(c.series.values[step], c.series.unit));
+    showReadout(parts.join("   "));
+}
+
+void PlotStack::showReadout(const QString& text)
+{
+    fullReadout_ = text;
+    readout_->setToolTip(text);
+    readout_->setText(readout_->fontMetrics().elidedText(text, Qt::ElideRight, readout_->width()));
+}
+
+bool PlotStack::eventFilter(QObject* watched, QEvent* event)
+{
+    if (watched == readout_ && event->type() == QEvent::Resize) showReadout(fullReadout_);
+    return QWidget::eventFilter(watched, event);
 }
 
 QString PlotStack::peakListText() const { return peaks_->text(); }
-QString PlotStack::readoutText() const { return readout_->text(); }
+QString PlotStack::readoutText() const { return fullReadout_; }
 
 }  // namespace clevis::ui

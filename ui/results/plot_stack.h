@@ -1,13 +1,15 @@
-// Panes of curves over the cycle stacked on one shared horizontal axis:
-// reactions at the ticked joints (magnitude, and components on request),
-// driver effort and power, shaking force and moment on the frame, and the
-// transmission angle. A vertical cursor follows AnalysisState::currentStep
-// and a click or drag on any pane moves it; hovering reads the values out
-// with units; each curve's peak is marked and listed; flagged steps and the
-// unreachable end of the cycle are shaded.
+// Panes of curves over the cycle stacked on one shared horizontal axis, as
+// plotPanes() describes them: reactions at the ticked joints (magnitude, and
+// components on request), driver effort and power, shaking force and moment
+// on the frame, and the transmission angle. A vertical cursor follows
+// AnalysisState::currentStep and a click or drag on any pane moves it;
+// hovering reads the values out with units on one elided line; each curve's
+// peak is marked and listed; flagged steps and the unreachable end of the
+// cycle are shaded.
 #pragma once
 
 #include "render/cycle_axis.h"
+#include "render/plot_panes.h"
 
 #include <QWidget>
 
@@ -15,8 +17,10 @@ class QCheckBox;
 class QCustomPlot;
 class QCPAxisRect;
 class QCPItemStraightLine;
+class QCPMarginGroup;
 class QLabel;
 class QListWidget;
+class QListWidgetItem;
 class QMouseEvent;
 
 namespace clevis::ui {
@@ -28,22 +32,39 @@ class PlotStack : public QWidget {
 public:
     explicit PlotStack(AnalysisState* analysis, QWidget* parent = nullptr);
 
+    // What is plotted; the joint list and the components box show it.
+    const PaneChoice& choice() const { return choice_; }
+    void setChoice(PaneChoice choice);
+    const std::vector<PlotPane>& panes() const { return panes_; }
+
     QCustomPlot* plot() const { return plot_; }
     double cursorX() const;                 // in the axis unit; NaN when nothing is shown
     QPoint pixelForStep(int step) const;    // a point inside the first pane at that step (for tests)
     QString peakListText() const;
-    QString readoutText() const;
+    QString readoutText() const;            // in full, however much the line shows
+
+protected:
+    bool eventFilter(QObject* watched, QEvent* event) override;
 
 private:
     void rebuild();
+    void listJoints(const CompiledMechanism& m);
+    void showChoice();
+    void jointTicked(QListWidgetItem* item);
+    QStringList drawPane(const PlotPane& pane, bool lastPane, QCPMarginGroup* margins);
+    QCPAxisRect* addPane(const QString& unit, bool lastPane);
+    void shade(QCPAxisRect* rect, double from, double to, QColor colour);
     void moveCursor(int step);
     void pointerPressed(QMouseEvent* e);
     void pointerMoved(QMouseEvent* e);
+    void showReadout(const QString& text);
     int stepAtPixel(double x) const;
-    QCPAxisRect* addPane(const QString& unit, bool lastPane);
 
     AnalysisState* analysis_;
+    PaneChoice choice_;
+    std::vector<PlotPane> panes_;
     CycleAxis axis_;
+    QString fullReadout_;
     QListWidget* joints_;
     QCheckBox* components_;
     QCustomPlot* plot_;

@@ -1,0 +1,71 @@
+#include "render/plot_panes.h"
+
+#include "render/palette.h"
+
+namespace clevis::ui {
+namespace {
+
+// Drivers keep one pen in every pane, after the two the frame panes use.
+constexpr int kFirstDriverPen = 2;
+
+void addPane(std::vector<PlotPane>& panes, const QString& title, std::vector<PlotCurve> curves)
+{
+    if (curves.empty()) return;
+    const QString unit = curves.front().series.unit;
+    panes.push_back({title, unit, std::move(curves)});
+}
+
+std::vector<PlotCurve> reactionCurves(const CompiledMechanism& m, const CycleResult& r, const RenderUnits& u,
+                                      const PaneChoice& choice)
+{
+    std::vector<PlotCurve> curves;
+    const auto add = [&](int joint, ReactionPart part) {
+        curves.push_back({jointReactionSeries(m, r, joint, part, u), int(curves.size())});
+    };
+    for (std::size_t j = 0; j < m.joints.size(); ++j) {
+        if (choice.hiddenJoints.count(m.joints[j].name)) continue;
+        add(int(j), ReactionPart::Magnitude);
+        if (choice.components) {
+            add(int(j), ReactionPart::X);
+            add(int(j), ReactionPart::Y);
+        }
+    }
+    return curves;
+}
+
+}  // namespace
+
+std::vector<PlotPane> plotPanes(const CompiledMechanism& m, const CycleResult& r, const RenderUnits& u,
+                                const PaneChoice& choice)
+{
+    std::vector<PlotPane> panes;
+    addPane(panes, choice.components ? "Joint reactions |F|, Fx, Fy" : "Joint reactions |F|",
+            reactionCurves(m, r, u, choice));
+    // Rotary and linear efforts have different units: one pane per kind.
+    for (const DriverType type : {DriverType::Rotary, DriverType::Linear}) {
+        std::vector<PlotCurve> efforts;
+        for (std::size_t d = 0; d < m.drivers.size(); ++d)
+            if (m.drivers[d].type == type) efforts.push_back({driverEffortSeries(m, r, int(d), u), int(d) + kFirstDriverPen});
+        addPane(panes, type == DriverType::Rotary ? "Drive torque" : "Drive force", std::move(efforts));
+    }
+    std::vector<PlotCurve> powers;
+    for (std::size_t d = 0; d < m.drivers.size(); ++d)
+        powers.push_back({driverPowerSeries(m, r, int(d)), int(d) + kFirstDriverPen});
+    addPane(panes, "Driver power (positive: into the mechanism)", std::move(powers));
+    addPane(panes, "Shaking force on the frame", {{shakingForceSeries(r, u), 0}});
+    addPane(panes, "Shaking moment on the frame", {{shakingMomentSeries(r, u), 1}});
+    std::vector<PlotCurve> transmission;
+    for (std::size_t k = 0; k < r.transmissionPins.size(); ++k) transmission.push_back({transmissionSeries(m, r, int(k)), int(k)});
+    addPane(panes, "Transmission angle", std::move(transmission));
+    return panes;
+}
+
+QPen curvePen(int index)
+{
+    const QColor colours[] = {palette::ink(), palette::link(), palette::driver(), palette::load(), palette::spring(),
+                              palette::weight()};
+    const Qt::PenStyle styles[] = {Qt::SolidLine, Qt::DashLine, Qt::DotLine, Qt::DashDotLine};
+    return QPen(colours[index % 6], 1.6, styles[index % 4]);
+}
+
+}  // namespace clevis::ui

@@ -1,0 +1,43 @@
+// The panes of curves over the cycle, as a plain description computed once
+// from the results: which curves each pane holds, its title and unit, and the
+// pen of each curve. The desktop plots and the review report both draw this
+// list, so they show the same panes under the same titles.
+#pragma once
+
+#include "render/cycle_series.h"
+
+#include <QPen>
+
+#include <set>
+#include <string>
+
+namespace clevis::ui {
+
+struct PlotCurve {
+    CycleSeries series;
+    int pen = 0;  // index for curvePen()
+};
+
+struct PlotPane {
+    QString title;  // e.g. "Drive torque"
+    QString unit;   // of every curve in the pane
+    std::vector<PlotCurve> curves;
+};
+
+// What the user chose to see of the joint reactions. The default shows every
+// joint, magnitudes only: what the report prints.
+struct PaneChoice {
+    std::set<std::string> hiddenJoints;  // joint names whose reaction is not plotted
+    bool components = false;             // Fx and Fy beside |F|
+};
+
+// Joint reactions, drive torque and force, driver power, shaking force and
+// moment on the frame, transmission angle; a pane with no curve is left out.
+std::vector<PlotPane> plotPanes(const CompiledMechanism& m, const CycleResult& r, const RenderUnits& u,
+                                const PaneChoice& choice = {});
+
+// The pen of the n-th curve: palette colours, then dash styles, so curves
+// differ by more than colour.
+QPen curvePen(int index);
+
+}  // namespace clevis::ui
