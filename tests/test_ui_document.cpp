@@ -132,6 +132,16 @@ TEST(MechanismDocument, AnEditThatChangesNothingIsNotRecorded)
     EXPECT_FALSE(doc.isModified());
 }
 
+TEST(MechanismDocument, AMergedRunThatEndsWhereItBeganLeavesNoStep)
+{
+    MechanismDocument doc;
+    doc.reset(drawnFourBar(), {});
+    const int p = jointIndex(doc.mechanism(), "P1");
+    for (double x : {0.04, 0.03}) doc.apply("Move pin P1", [=](Mechanism& m) { edits::moveJoint(m, p, {x, 0.04}); }, 1);
+    EXPECT_EQ(doc.undoStack()->count(), 0);
+    EXPECT_FALSE(doc.isModified());
+}
+
 TEST(MechanismDocument, ModifiedFollowsTheCleanState)
 {
     MechanismDocument doc;
