@@ -42,6 +42,12 @@ protected:
     void useTool(const char* name) { window.tools()->action(QString::fromUtf8(name))->trigger(); }
     void click(double x, double y) { QTest::mouseClick(window.canvas(), Qt::LeftButton, {}, at(x, y)); }
     const Mechanism& mechanism() const { return window.document()->mechanism(); }
+    // A pointer move with the left button held down.
+    void dragTo(double x, double y)
+    {
+        QMouseEvent move(QEvent::MouseMove, at(x, y), window.canvas()->mapToGlobal(at(x, y)), Qt::NoButton, Qt::LeftButton, {});
+        QApplication::sendEvent(window.canvas(), &move);
+    }
 
     template <typename W>
     W* field(const char* name)
@@ -135,10 +141,7 @@ TEST_F(CanvasTest, DraggingAPinIsOneUndoStepAndTheLinksFollow)
     useTool("Select");
     const int steps = window.document()->undoStack()->count();
     QTest::mousePress(window.canvas(), Qt::LeftButton, {}, at(0.17, 0.12));
-    for (double x : {0.172, 0.175, 0.18}) {
-        QMouseEvent move(QEvent::MouseMove, at(x, 0.13), window.canvas()->mapToGlobal(at(x, 0.13)), Qt::NoButton, Qt::LeftButton, {});
-        QApplication::sendEvent(window.canvas(), &move);
-    }
+    for (double x : {0.172, 0.175, 0.18}) dragTo(x, 0.13);
     QTest::mouseRelease(window.canvas(), Qt::LeftButton, {}, at(0.18, 0.13));
     EXPECT_EQ(window.document()->undoStack()->count(), steps + 1);
     const Joint& moved = mechanism().joints[jointIndex(mechanism(), "P2")];
@@ -148,6 +151,25 @@ TEST_F(CanvasTest, DraggingAPinIsOneUndoStepAndTheLinksFollow)
     EXPECT_NEAR(coupler[1].x(), 0.18, 1e-12);
     window.document()->undoStack()->undo();
     EXPECT_NEAR(mechanism().joints[jointIndex(mechanism(), "P2")].at.x(), 0.17, 1e-12);
+}
+
+// Esc puts the pin back and leaves no step behind: neither to undo nor to redo.
+TEST_F(CanvasTest, EscapeDuringADragLeavesNoUndoStep)
+{
+    drawFourBar();
+    useTool("Select");
+    const Mechanism before = mechanism();
+    QUndoStack* stack = window.document()->undoStack();
+    const int steps = stack->count();
+    QTest::mousePress(window.canvas(), Qt::LeftButton, {}, at(0.17, 0.12));
+    for (double x : {0.175, 0.18}) dragTo(x, 0.13);
+    ASSERT_NE(mechanism(), before);
+    QTest::keyClick(window.canvas(), Qt::Key_Escape);
+    QTest::mouseRelease(window.canvas(), Qt::LeftButton, {}, at(0.18, 0.13));
+    EXPECT_EQ(mechanism(), before);
+    EXPECT_FALSE(stack->canRedo()) << stack->redoText().toStdString();
+    EXPECT_EQ(stack->count(), steps);
+    EXPECT_EQ(stack->undoText().toStdString(), "Add motor motor1");
 }
 
 TEST_F(CanvasTest, EscapeCancelsALinkHalfDrawn)

@@ -132,6 +132,16 @@ TEST(MechanismDocument, AnEditThatChangesNothingIsNotRecorded)
     EXPECT_FALSE(doc.isModified());
 }
 
+TEST(MechanismDocument, AMergedRunThatEndsWhereItBeganLeavesNoStep)
+{
+    MechanismDocument doc;
+    doc.reset(drawnFourBar(), {});
+    const int p = jointIndex(doc.mechanism(), "P1");
+    for (double x : {0.04, 0.03}) doc.apply("Move pin P1", [=](Mechanism& m) { edits::moveJoint(m, p, {x, 0.04}); }, 1);
+    EXPECT_EQ(doc.undoStack()->count(), 0);
+    EXPECT_FALSE(doc.isModified());
+}
+
 TEST(MechanismDocument, ModifiedFollowsTheCleanState)
 {
     MechanismDocument doc;
@@ -199,6 +209,72 @@ TEST(MechanismEdits, RenamingABodyUpdatesEveryReference)
     EXPECT_EQ(m.joints[0].bodies[1], "crank");
     EXPECT_EQ(std::get<TorqueLoad>(m.loads[0]).body, "crank");
     EXPECT_EQ(compile(m).bodies.size(), 3u);  // still consistent for the solver
+}
+
+// The four-bar with one load of every kind on the coupler (link2) and at P1,
+// the force and torque scaled by profiles that follow the motor, and a
+// cylinder from the frame to P2.
+Mechanism withEveryLoadKind()
+{
+    Mechanism m = drawnFourBar();
+    const Vec2 p2{0.17, 0.12};
+    edits::addForce(m, {"link2", p2}, {0.0, -10.0});
+    edits::addTorque(m, "link2", 1.0);
+    edits::addSpring(m, {kGroundName, {0.1, 0.2}}, {"link2", p2});
+    edits::addDamper(m, {"link2", p2}, {kGroundName, {0.3, 0.2}});
+    m.loads.push_back(TorsionSpringLoad{"torsion1", "P1", 2.0, 0.0});
+    const LoadProfile byMotor{"motor1", {0.0, 1.0}, {1.0, 2.0}};
+    std::get<ForceLoad>(m.loads[0]).profile = byMotor;
+    std::get<TorqueLoad>(m.loads[1]).profile = byMotor;
+    edits::addCylinder(m, {kGroundName, {0.3, 0.0}}, {"link2", p2});
+    return m;
+}
+
+TEST(MechanismEdits, EveryLoadKindFollowsTheRenamedParts)
+{
+    Mechanism m = withEveryLoadKind();
+    edits::renameBody(m, "link2", "coupler");
+    edits::renameJoint(m, "P1", "B");
+    edits::renameDriver(m, "motor1", "gearmotor");
+    const auto& force = std::get<ForceLoad>(m.loads[0]);
+    const auto& torque = std::get<TorqueLoad>(m.loads[1]);
+    EXPECT_EQ(force.point.body, "coupler");
+    EXPECT_EQ(force.profile->driver, "gearmotor");
+    EXPECT_EQ(torque.body, "coupler");
+    EXPECT_EQ(torque.profile->driver, "gearmotor");
+    EXPECT_EQ(std::get<SpringLoad>(m.loads[2]).b.body, "coupler");
+    EXPECT_EQ(std::get<DamperLoad>(m.loads[3]).a.body, "coupler");
+    EXPECT_EQ(std::get<TorsionSpringLoad>(m.loads[4]).joint, "B");
+    EXPECT_EQ(m.drivers[0].joint, "O1");
+    EXPECT_EQ(m.drivers[1].ends[1]->body, "coupler");
+    EXPECT_EQ(compile(m).bodies.size(), 3u);  // still consistent for the solver
+}
+
+TEST(MechanismEdits, EveryPointFixedAtAMovedPinFollowsIt)
+{
+    Mechanism m = withEveryLoadKind();
+    const Vec2 to{0.16, 0.13};
+    edits::moveJoint(m, jointIndex(m, "P2"), to);
+    EXPECT_EQ(std::get<ForceLoad>(m.loads[0]).point.at, to);
+    EXPECT_EQ(std::get<SpringLoad>(m.loads[2]).b.at, to);
+    EXPECT_EQ(std::get<DamperLoad>(m.loads[3]).a.at, to);
+    EXPECT_EQ(std::get<DamperLoad>(m.loads[3]).b.at, Vec2(0.3, 0.2));
+    EXPECT_EQ(m.drivers[1].ends[1]->at, to);
+    EXPECT_EQ(m.drivers[1].ends[0]->at, Vec2(0.3, 0.0));
+}
+
+TEST(MechanismEdits, DeletingAPartDropsTheLoadsAndDriversOnIt)
+{
+    Mechanism m = withEveryLoadKind();
+    edits::remove(m, {Selection::Kind::Body, "link2", -1});
+    ASSERT_EQ(m.loads.size(), 1u);  // the torsion spring is at a pin, not on the body
+    EXPECT_TRUE(std::holds_alternative<TorsionSpringLoad>(m.loads[0]));
+    ASSERT_EQ(m.drivers.size(), 1u);
+    EXPECT_EQ(m.drivers[0].name, "motor1");
+    edits::remove(m, {Selection::Kind::Joint, "P1", -1});
+    EXPECT_TRUE(m.loads.empty());
+    edits::remove(m, {Selection::Kind::Joint, "O1", -1});
+    EXPECT_TRUE(m.drivers.empty());
 }
 
 TEST(MechanismEdits, DeletingABodyOpensItsPinsAndDropsItsLoads)

@@ -3,8 +3,10 @@
 #include "ui/canvas/canvas_view.h"
 #include "ui/canvas/tool_icons.h"
 #include "ui/canvas/tools/body_tool.h"
+#include "ui/canvas/tools/place_edits.h"
 #include "ui/canvas/tools/place_tool.h"
 #include "ui/canvas/tools/select_tool.h"
+#include "ui/canvas/tools/two_point_edits.h"
 #include "ui/canvas/tools/two_point_tool.h"
 
 #include <QAction>

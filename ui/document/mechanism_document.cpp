@@ -23,6 +23,9 @@ public:
         const auto* next = static_cast<const SnapshotCommand*>(other);
         if (next->mergeId_ != mergeId_) return false;
         after_ = next->after_;
+        // A run that ends where it began (a drag put back) changes nothing:
+        // marked so, the stack drops it instead of keeping a step to redo.
+        setObsolete(after_ == before_);
         return true;
     }
 

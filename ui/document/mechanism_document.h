@@ -33,7 +33,8 @@ public:
     // Every edit goes through here: pushes an undo command named `text` that
     // applies `edit` to a copy of the mechanism (undo restores the previous
     // copy). Commands with the same mergeId >= 0 pushed consecutively merge
-    // (a drag is one undo step). An edit that changes nothing is not recorded.
+    // (a drag is one undo step). An edit that changes nothing is not recorded,
+    // nor is a merged run that ends where it began.
     void apply(const QString& text, std::function<void(clevis::Mechanism&)> edit, int mergeId = -1);
     void reset(const clevis::Mechanism& m, const QString& filePath);  // new/open: clears the undo stack
     QString filePath() const;

@@ -1,9 +1,10 @@
 #include "ui/document/mechanism_edits.h"
 
 #include "core/file/file_units.h"
+#include "ui/document/part_references.h"
 #include "ui/document/sketch_geometry.h"
 
-#include <algorithm>
+#include <vector>
 
 namespace clevis::ui::edits {
 namespace {
@@ -54,9 +55,16 @@ void attach(Mechanism& m, const std::string& jointName, const std::string& body)
     addJoint(m, JointType::Pin, baseOf(j), body, at, 0.0, "pin");
 }
 
-bool onBody(const BodyPointRef& p, const std::string& body)
+template <class List>
+void renameAll(List& list, PartKind kind, const std::string& from, const std::string& to)
 {
-    return p.body == body;
+    for (auto& item : list) renameReferences(item, kind, from, to);
+}
+
+template <class List>
+void eraseReferring(List& list, PartKind kind, const std::string& name)
+{
+    std::erase_if(list, [&](const auto& item) { return refersTo(item, kind, name); });
 }
 
 }  // namespace
@@ -184,52 +192,37 @@ void moveJoint(Mechanism& m, int joint, const Vec2& to)
     const auto follow = [&](Vec2& p) {
         if ((p - from).norm() <= kSamePoint) p = to;
     };
+    const auto followPoint = [&](PartKind, std::string&, Vec2* at) {
+        if (at) follow(*at);
+    };
     for (auto& j : m.joints) follow(j.at);
-    for (auto& d : m.drivers)
-        for (auto& end : d.ends)
-            if (end) follow(end->at);
-    for (auto& load : m.loads) {
-        if (auto* f = std::get_if<ForceLoad>(&load)) follow(f->point.at);
-        if (auto* s = std::get_if<SpringLoad>(&load)) follow(s->a.at), follow(s->b.at);
-        if (auto* d = std::get_if<DamperLoad>(&load)) follow(d->a.at), follow(d->b.at);
-    }
+    for (auto& d : m.drivers) visitReferences(d, followPoint);
+    for (auto& load : m.loads) visitReferences(load, followPoint);
 }
 
 void remove(Mechanism& m, const Selection& s)
 {
     const std::string name = s.name.toStdString();
-    const auto eraseIf = [](auto& list, auto pred) { list.erase(std::remove_if(list.begin(), list.end(), pred), list.end()); };
     switch (s.kind) {
     case Selection::Kind::None: return;
     case Selection::Kind::Load:
         if (s.loadIndex >= 0 && s.loadIndex < int(m.loads.size())) m.loads.erase(m.loads.begin() + s.loadIndex);
         return;
-    case Selection::Kind::Driver: eraseIf(m.drivers, [&](const Driver& d) { return d.name == name; }); return;
+    case Selection::Kind::Driver: std::erase_if(m.drivers, [&](const Driver& d) { return d.name == name; }); return;
     case Selection::Kind::Joint:
-        eraseIf(m.joints, [&](const Joint& j) { return j.name == name; });
-        eraseIf(m.drivers, [&](const Driver& d) { return d.joint == name; });
-        eraseIf(m.loads, [&](const Load& l) {
-            const auto* t = std::get_if<TorsionSpringLoad>(&l);
-            return t && t->joint == name;
-        });
+        std::erase_if(m.joints, [&](const Joint& j) { return j.name == name; });
+        eraseReferring(m.drivers, PartKind::Joint, name);
+        eraseReferring(m.loads, PartKind::Joint, name);
         // A body left with nothing holding it is no longer part of the drawing.
-        eraseIf(m.bodies, [&](const Body& b) { return bodyPins(m, b.name).empty(); });
+        std::erase_if(m.bodies, [&](const Body& b) { return bodyPins(m, b.name).empty(); });
         return;
     case Selection::Kind::Body:
-        eraseIf(m.bodies, [&](const Body& b) { return b.name == name; });
+        std::erase_if(m.bodies, [&](const Body& b) { return b.name == name; });
         for (auto& j : m.joints)
             for (auto& b : j.bodies)
                 if (b == name) b.clear();
-        eraseIf(m.drivers, [&](const Driver& d) {
-            return (d.ends[0] && onBody(*d.ends[0], name)) || (d.ends[1] && onBody(*d.ends[1], name));
-        });
-        eraseIf(m.loads, [&](const Load& l) {
-            if (const auto* f = std::get_if<ForceLoad>(&l)) return onBody(f->point, name);
-            if (const auto* t = std::get_if<TorqueLoad>(&l)) return t->body == name;
-            if (const auto* sp = std::get_if<SpringLoad>(&l)) return onBody(sp->a, name) || onBody(sp->b, name);
-            if (const auto* d = std::get_if<DamperLoad>(&l)) return onBody(d->a, name) || onBody(d->b, name);
-            return false;
-        });
+        eraseReferring(m.drivers, PartKind::Body, name);
+        eraseReferring(m.loads, PartKind::Body, name);
         return;
     }
 }
@@ -241,37 +234,23 @@ void renameBody(Mechanism& m, const std::string& from, const std::string& to)
     };
     for (auto& b : m.bodies) swap(b.name);
     for (auto& j : m.joints) swap(j.bodies[0]), swap(j.bodies[1]);
-    for (auto& d : m.drivers)
-        for (auto& end : d.ends)
-            if (end) swap(end->body);
-    for (auto& load : m.loads) {
-        if (auto* f = std::get_if<ForceLoad>(&load)) swap(f->point.body);
-        if (auto* t = std::get_if<TorqueLoad>(&load)) swap(t->body);
-        if (auto* s = std::get_if<SpringLoad>(&load)) swap(s->a.body), swap(s->b.body);
-        if (auto* d = std::get_if<DamperLoad>(&load)) swap(d->a.body), swap(d->b.body);
-    }
+    renameAll(m.drivers, PartKind::Body, from, to);
+    renameAll(m.loads, PartKind::Body, from, to);
 }
 
 void renameJoint(Mechanism& m, const std::string& from, const std::string& to)
 {
     for (auto& j : m.joints)
         if (j.name == from) j.name = to;
-    for (auto& d : m.drivers)
-        if (d.joint == from) d.joint = to;
-    for (auto& load : m.loads)
-        if (auto* t = std::get_if<TorsionSpringLoad>(&load); t && t->joint == from) t->joint = to;
+    renameAll(m.drivers, PartKind::Joint, from, to);
+    renameAll(m.loads, PartKind::Joint, from, to);
 }
 
 void renameDriver(Mechanism& m, const std::string& from, const std::string& to)
 {
     for (auto& d : m.drivers)
         if (d.name == from) d.name = to;
-    for (auto& load : m.loads) {
-        std::optional<LoadProfile>* profile = nullptr;
-        if (auto* f = std::get_if<ForceLoad>(&load)) profile = &f->profile;
-        if (auto* t = std::get_if<TorqueLoad>(&load)) profile = &t->profile;
-        if (profile && *profile && (*profile)->driver == from) (*profile)->driver = to;
-    }
+    renameAll(m.loads, PartKind::Driver, from, to);
 }
 
 }  // namespace clevis::ui::edits

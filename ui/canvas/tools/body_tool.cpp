@@ -3,15 +3,17 @@
 #include "ui/document/mechanism_edits.h"
 #include "ui/canvas/tools/rubber_band.h"
 
+#include <QObject>
+
 namespace clevis::ui {
 
 QString BodyTool::hint() const
 {
     if (shape_ == Shape::Bar)
-        return points_.empty() ? QStringLiteral("Link: click the first pin (or an empty spot for a new pin).")
-                               : QStringLiteral("Link: click the second pin. Esc cancels.");
-    return points_.size() < 3 ? QStringLiteral("Plate: click its pins one after another (%1 so far).").arg(points_.size())
-                              : QStringLiteral("Plate: click more pins, or press Enter to close it.");
+        return points_.empty() ? QObject::tr("Link: click the first pin (or an empty spot for a new pin).")
+                               : QObject::tr("Link: click the second pin. Esc cancels.");
+    return points_.size() < 3 ? QObject::tr("Plate: click its pins one after another (%1 so far).").arg(points_.size())
+                              : QObject::tr("Plate: click more pins, or press Enter to close it.");
 }
 
 std::optional<Vec2> BodyTool::strokeStart() const
@@ -56,11 +58,12 @@ void BodyTool::commit()
 {
     const std::vector<SnapResult> points = std::move(points_);
     points_.clear();
-    doc().apply(shape_ == Shape::Bar ? QStringLiteral("Add link") : QStringLiteral("Add plate"), [points](Mechanism& m) {
+    tryEdit([&](Mechanism& m, QString&) {
         std::vector<std::string> joints;
         for (const auto& p : points)
             joints.push_back(p.kind == SnapResult::Kind::Pin ? m.joints[p.joint].name : edits::addPin(m, p.point));
         edits::addBody(m, joints);
+        return shape_ == Shape::Bar ? QObject::tr("Add link") : QObject::tr("Add plate");
     });
     host_.refresh();
 }

@@ -7,14 +7,8 @@ namespace clevis::ui {
 
 void PlaceTool::press(const Pointer& p)
 {
-    Mechanism trial = mechanism();
-    QString problem;
-    const QString text = edit_(trial, p.snap, bodyAt(mechanism(), host_.view(), p.screen), problem);
-    if (!problem.isEmpty()) {
-        host_.tell(problem);
-        return;
-    }
-    doc().apply(text, [trial](Mechanism& m) { m = trial; });
+    const std::string body = bodyAt(mechanism(), host_.view(), p.screen);
+    tryEdit([&](Mechanism& m, QString& problem) { return edit_(m, p.snap, body, problem); });
 }
 
 void PlaceTool::move(const Pointer& p)

@@ -1,6 +1,6 @@
-// Tools that act on one click: ground pin, pin, motor, torque, point mass.
-// Each is a function that edits a trial copy of the mechanism and returns the
-// undo text, or sets `problem` to say why the click does not fit.
+// A tool that acts on one click: ground pin, pin, motor, torque, point mass
+// (their edits are in place_edits.h). It hands its edit the snapped point and
+// the body under the pointer.
 #pragma once
 
 #include "ui/canvas/tools/tool.h"
@@ -24,12 +24,5 @@ private:
     PlaceEdit edit_;
     std::optional<Vec2> hover_;
 };
-
-// The one-click tools' edits.
-QString placeGroundPin(Mechanism& m, const SnapResult& at, const std::string& body, QString& problem);
-QString placePin(Mechanism& m, const SnapResult& at, const std::string& body, QString& problem);
-QString placeMotor(Mechanism& m, const SnapResult& at, const std::string& body, QString& problem);
-QString placeTorque(Mechanism& m, const SnapResult& at, const std::string& body, QString& problem);
-QString placePointMass(Mechanism& m, const SnapResult& at, const std::string& body, QString& problem);
 
 }  // namespace clevis::ui

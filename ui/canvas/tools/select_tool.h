@@ -1,5 +1,6 @@
 // Picks parts and drags pins; the links on a pin follow because they are
-// drawn between their pins. A whole drag is one undo step.
+// drawn between their pins. A whole drag is one undo step, and a drag
+// cancelled with Esc leaves none.
 #pragma once
 
 #include "ui/canvas/tools/tool.h"
@@ -16,8 +17,13 @@ public:
     bool cancel() override;
 
 private:
-    int dragging_ = -1;  // joint index while a pin is being dragged
-    bool moved_ = false;
+    struct Drag {
+        int joint;        // index of the pin being dragged
+        Mechanism start;  // as it was when the drag began, for Esc
+    };
+    void applyToDrag(const std::function<void(Mechanism&)>& edit);
+
+    std::optional<Drag> drag_;
 };
 
 }  // namespace clevis::ui

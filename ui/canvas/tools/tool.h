@@ -10,6 +10,7 @@
 #include <QPainter>
 #include <QString>
 
+#include <functional>
 #include <optional>
 
 namespace clevis::ui {
@@ -23,6 +24,10 @@ public:
     virtual void refresh() = 0;                      // repaint the preview
     virtual void tell(const QString& message) = 0;   // a short note in the status bar
 };
+
+// An edit a tool tries on a trial copy of the mechanism: returns the undo
+// text, or sets `problem` to say why the click does not fit.
+using TrialEdit = std::function<QString(Mechanism& m, QString& problem)>;
 
 struct Pointer {
     QPointF screen;
@@ -51,6 +56,8 @@ protected:
     ToolHost& host_;
     MechanismDocument& doc() { return *host_.document(); }
     const Mechanism& mechanism() { return host_.document()->mechanism(); }
+    // Applies the edit as one undo step, or tells the user its problem and changes nothing.
+    void tryEdit(const TrialEdit& edit);
 };
 
 }  // namespace clevis::ui

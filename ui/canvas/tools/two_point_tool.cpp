@@ -20,16 +20,10 @@ void TwoPointTool::press(const Pointer& p)
         return;
     }
     if ((here.snap.point - first_->snap.point).norm() < 1e-12) return;  // a second click needs a second point
-    Mechanism trial = mechanism();
-    QString problem;
-    const QString text = edit_(trial, *first_, here, problem);
+    const ClickedPoint first = *first_;
     first_.reset();
     host_.refresh();
-    if (!problem.isEmpty()) {
-        host_.tell(problem);
-        return;
-    }
-    doc().apply(text, [trial](Mechanism& m) { m = trial; });
+    tryEdit([&](Mechanism& m, QString& problem) { return edit_(m, first, here, problem); });
 }
 
 void TwoPointTool::move(const Pointer& p)

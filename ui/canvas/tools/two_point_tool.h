@@ -1,7 +1,5 @@
-// Tools drawn with two clicks: sliders and slots (a point, then the axis),
-// springs, dampers and cylinders (end to end), forces (the point, then the
-// direction it pushes). Each is a function editing a trial copy of the
-// mechanism, returning the undo text or setting `problem`.
+// A tool drawn with two clicks (its edits are in two_point_edits.h): the first
+// click is remembered, the second hands both points to the edit.
 #pragma once
 
 #include "ui/canvas/tools/tool.h"
@@ -36,12 +34,5 @@ private:
     std::optional<ClickedPoint> first_;
     std::optional<Vec2> hover_;
 };
-
-QString drawSlider(Mechanism& m, const ClickedPoint& a, const ClickedPoint& b, QString& problem);
-QString drawSlot(Mechanism& m, const ClickedPoint& a, const ClickedPoint& b, QString& problem);
-QString drawSpring(Mechanism& m, const ClickedPoint& a, const ClickedPoint& b, QString& problem);
-QString drawDamper(Mechanism& m, const ClickedPoint& a, const ClickedPoint& b, QString& problem);
-QString drawCylinder(Mechanism& m, const ClickedPoint& a, const ClickedPoint& b, QString& problem);
-QString drawForce(Mechanism& m, const ClickedPoint& a, const ClickedPoint& b, QString& problem);
 
 }  // namespace clevis::ui
