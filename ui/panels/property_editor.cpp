@@ -7,6 +7,7 @@
 
 #include <QFormLayout>
 #include <QLineEdit>
+#include <QScrollBar>
 #include <QTimer>
 
 namespace clevis::ui {
@@ -37,10 +38,13 @@ void PropertyEditor::rebuildNow()
     // Keep the keyboard in the field that had it, so Tab through a form still works.
     const QWidget* focused = widget() ? widget()->focusWidget() : nullptr;
     const QString focusKey = focused ? focused->objectName() : QString();
+    // ... and the form where it was scrolled to, so that editing a field far down does not jump back to the top.
+    const int scrolled = verticalScrollBar()->value();
 
     auto* page = new QWidget;
     auto* form = new QFormLayout(page);
     form->setFieldGrowthPolicy(QFormLayout::AllNonFixedFieldsGrow);
+    form->setRowWrapPolicy(QFormLayout::WrapLongRows);  // a narrow panel puts the field under its label
     FormBuilder f(form, doc_);
     const Mechanism& m = doc_->mechanism();
     const Selection s = doc_->selection();
@@ -52,6 +56,7 @@ void PropertyEditor::rebuildNow()
     else if (s.kind == Selection::Kind::Load && s.loadIndex >= 0 && s.loadIndex < int(m.loads.size())) loadForm(f, m, s.loadIndex);
     else mechanismForm(f, m);
     setWidget(page);  // deletes the previous page
+    verticalScrollBar()->setValue(scrolled);
     if (!focusKey.isEmpty())
         if (auto* w = page->findChild<QWidget*>(focusKey)) w->setFocus();
 }

@@ -1,6 +1,7 @@
 #include "ui/panels/status_line.h"
 
 #include "ui/analysis/analysis_state.h"
+#include "ui/panels/elided_label.h"
 #include "render/palette.h"
 
 #include <QHBoxLayout>
@@ -31,7 +32,7 @@ QString describeAnalysis(const AnalysisState& a)
 }
 
 StatusLine::StatusLine(AnalysisState* analysis, QWidget* parent)
-    : QWidget(parent), analysis_(analysis), mark_(new QLabel), state_(new QLabel), hint_(new QLabel)
+    : QWidget(parent), analysis_(analysis), mark_(new QLabel), state_(new ElidedLabel), hint_(new ElidedLabel)
 {
     setObjectName(QStringLiteral("statusLine"));
     auto* layout = new QHBoxLayout(this);
@@ -56,15 +57,14 @@ QString StatusLine::analysisText() const
 
 void StatusLine::showHint(const QString& hint)
 {
-    hint_->setText(hint);
+    hint_->setFullText(hint);
 }
 
 void StatusLine::refresh()
 {
     const bool solves = analysis_->errorText().isEmpty() && analysis_->hasResult() && analysis_->result().complete;
     const QString text = describeAnalysis(*analysis_);
-    state_->setText(analysis_->busy() ? text + tr("  (solving…)") : text);
-    state_->setToolTip(text);
+    state_->setFullText(analysis_->busy() ? text + tr("  (solving…)") : text);
     // The mark differs in shape as well as colour: a filled disc when it solves, a ring with a bar when not.
     const QColor c = solves ? palette::load() : palette::problem();
     mark_->setText(solves ? QStringLiteral("●") : QStringLiteral("⊘"));

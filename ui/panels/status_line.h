@@ -1,6 +1,7 @@
 // The status line: degrees of freedom, drivers and whether the mechanism
 // solves, in plain words, kept current as the worker re-solves; beside it
-// what the active tool expects next.
+// what the active tool expects next. Both are shortened to the window's
+// width (the whole text is in their tooltips).
 #pragma once
 
 #include <QWidget>
@@ -10,6 +11,7 @@ class QLabel;
 namespace clevis::ui {
 
 class AnalysisState;
+class ElidedLabel;
 
 class StatusLine : public QWidget {
     Q_OBJECT
@@ -23,8 +25,8 @@ private:
 
     AnalysisState* analysis_;
     QLabel* mark_;
-    QLabel* state_;
-    QLabel* hint_;
+    ElidedLabel* state_;
+    ElidedLabel* hint_;
 };
 
 // The sentence the status line shows for the analysis as it stands.

@@ -47,6 +47,7 @@ DriveScrubber::DriveScrubber(AnalysisState* analysis, QWidget* parent)
     speed_->setToolTip(tr("Playback speed relative to the machine's real cycle time"));
     loop_->setChecked(true);
     drivers_->setTextInteractionFlags(Qt::TextSelectableByMouse);
+    drivers_->setSizePolicy(QSizePolicy::Ignored, QSizePolicy::Preferred);  // clipped, never widening the window
 
     auto* row = new QHBoxLayout;
     row->addWidget(play_);

@@ -17,7 +17,7 @@ namespace clevis::ui {
 // Paints the current diagram scaled into the widget.
 class FreeBodyCanvas : public QWidget {
 public:
-    explicit FreeBodyCanvas(QWidget* parent) : QWidget(parent) { setMinimumSize(360, 260); }
+    explicit FreeBodyCanvas(QWidget* parent) : QWidget(parent) { setMinimumSize(200, 140); }
     std::unique_ptr<FreeBodyPainter> figure;
 
 protected:
@@ -36,12 +36,12 @@ FreeBodyView::FreeBodyView(MechanismDocument* doc, AnalysisState* analysis, QWid
     : QWidget(parent),
       doc_(doc),
       analysis_(analysis),
-      dAlembert_(new QCheckBox(tr("Inertia loads on the body (d'Alembert)"), this)),
+      dAlembert_(new QCheckBox(tr("Inertia loads on the body"), this)),
       message_(new QLabel(this)),
       canvas_(new FreeBodyCanvas(this))
 {
     setObjectName("freeBodyView");
-    dAlembert_->setToolTip(tr("Draw −m·a_G and −I_G·α on the body instead of a separate kinetic diagram"));
+    dAlembert_->setToolTip(tr("d'Alembert: draw −m·a_G and −I_G·α on the body instead of a separate kinetic diagram"));
     message_->setWordWrap(true);
     auto* layout = new QVBoxLayout(this);
     layout->setContentsMargins(2, 2, 2, 2);

@@ -1,6 +1,6 @@
-// Adds the results views to the main window: the cycle scrubber and the
-// stacked plots along the bottom, the free-body diagram on the right, the
-// peak-load table, and an Export menu.
+// Adds the results views to the main window as panels (the cycle scrubber,
+// the stacked plots, the peak-load table, the free-body diagram; where they
+// go is arrangePanels()'s) and an Export menu.
 #pragma once
 
 class QMainWindow;

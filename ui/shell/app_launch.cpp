@@ -9,6 +9,7 @@
 #include <QApplication>
 #include <QIcon>
 #include <QCommandLineParser>
+#include <QScreen>
 #include <QTextStream>
 
 namespace clevis::ui {
@@ -51,7 +52,8 @@ int runDesktopApp(int argc, char** argv)
         if (!problem.isEmpty()) err << "clevis: " << problem << "\n";
         return problem.isEmpty() ? 0 : 1;
     }
-    window.show();
+    if (window.placeOn(window.screen()->availableGeometry())) window.showMaximized();
+    else window.show();
     if (!files.isEmpty()) window.files()->open(files.front());  // tells the user in a dialog if it cannot
     offerRecoveryInDialogs(window);  // never reached by --screenshot, so headless runs do not wait on it
     return app.exec();

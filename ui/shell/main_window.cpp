@@ -6,6 +6,7 @@
 #include "ui/files/file_actions.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/document/mechanism_edits.h"
+#include "ui/shell/dock_layout.h"
 #include "ui/shell/menu_action.h"
 #include "ui/panels/parts_panel.h"
 #include "ui/panels/property_editor.h"
@@ -16,13 +17,29 @@
 #include "ui/results/results_views.h"
 
 #include <QCloseEvent>
+#include <QGuiApplication>
 #include <QDockWidget>
 #include <QMenuBar>
 #include <QMimeData>
+#include <QScreen>
 #include <QStatusBar>
 #include <QToolBar>
+#include <QWindow>
 
 namespace clevis::ui {
+namespace {
+
+// A key bound twice (the platform's standard keys often repeat ours) makes
+// Qt call the shortcut ambiguous and do nothing.
+QList<QKeySequence> withoutRepeats(const QList<QKeySequence>& keys)
+{
+    QList<QKeySequence> unique;
+    for (const QKeySequence& k : keys)
+        if (!k.isEmpty() && !unique.contains(k)) unique << k;
+    return unique;
+}
+
+}  // namespace
 
 MainWindow::MainWindow(const QString& recoveryFolder, QWidget* parent)
     : QMainWindow(parent),
@@ -42,10 +59,11 @@ MainWindow::MainWindow(const QString& recoveryFolder, QWidget* parent)
     connect(files_, &FileActions::note, status_, &StatusLine::showHint);
     connect(autosave_, &AutosaveTimer::note, status_, &StatusLine::showHint);
     buildDocks();
-    buildMenus();
+    QMenu* view = buildMenus();
     status_->showHint(canvas_->tool()->hint());
     installResultsViews(this, doc_, analysis_);
-    resize(1400, 900);
+    listPanels(view);
+    placeOn(QGuiApplication::primaryScreen()->availableGeometry());
 }
 
 MainWindow::~MainWindow()
@@ -56,20 +74,36 @@ MainWindow::~MainWindow()
     delete autosave_;
 }
 
-void MainWindow::buildDocks()
+bool MainWindow::placeOn(const QRect& available)
 {
-    auto* parts = new QDockWidget(tr("Parts"), this);
-    parts->setObjectName(QStringLiteral("partsDock"));
-    parts->setWidget(new PartsPanel(doc_, analysis_, parts));
-    addDockWidget(Qt::LeftDockWidgetArea, parts);
-    auto* props = new QDockWidget(tr("Properties"), this);
-    props->setObjectName(QStringLiteral("propertiesDock"));
-    props->setWidget(new PropertyEditor(doc_, props));
-    addDockWidget(Qt::RightDockWidgetArea, props);
-    resizeDocks({parts, props}, {240, 320}, Qt::Horizontal);
+    const bool small = available.width() < 1600 || available.height() < 960;
+    // The frame is known once the window has been shown; a window manager maximising the window allows for it.
+    QRect placed = available.marginsRemoved(windowHandle() ? windowHandle()->frameMargins() : QMargins());
+    if (!small) {
+        placed.setSize(available.size() * 0.9);
+        placed.moveCenter(available.center());
+    }
+    setGeometry(placed);
+    resetLayout();
+    return small;
 }
 
-void MainWindow::buildMenus()
+void MainWindow::resetLayout()
+{
+    for (QToolBar* bar : findChildren<QToolBar*>()) {
+        addToolBar(Qt::TopToolBarArea, bar);
+        bar->show();
+    }
+    arrangePanels(this);
+}
+
+void MainWindow::buildDocks()
+{
+    addPanel(this, tr("Parts"), QStringLiteral("partsDock"), new PartsPanel(doc_, analysis_), {180, 90});
+    addPanel(this, tr("Properties"), QStringLiteral("propertiesDock"), new PropertyEditor(doc_), {220, 140});
+}
+
+QMenu* MainWindow::buildMenus()
 {
     files_->fill(menuBar()->addMenu(tr("&File")));
 
@@ -77,12 +111,13 @@ void MainWindow::buildMenus()
     QAction* undo = doc_->undoStack()->createUndoAction(this, tr("Undo"));
     undo->setShortcut(QKeySequence::Undo);
     QAction* redo = doc_->undoStack()->createRedoAction(this, tr("Redo"));
-    redo->setShortcuts({QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_Z), QKeySequence::Redo});
+    const QList<QKeySequence> redoKeys{QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_Z), QKeySequence(Qt::CTRL | Qt::Key_Y)};
+    redo->setShortcuts(withoutRepeats(redoKeys + QKeySequence::keyBindings(QKeySequence::Redo)));
     edit->addAction(undo);
     edit->addAction(redo);
     edit->addSeparator();
     QAction* del = addMenuAction(edit, tr("&Delete selected part"), QKeySequence::Delete, this, [this] { deleteSelection(); });
-    del->setShortcuts({QKeySequence::Delete, QKeySequence(Qt::Key_Backspace)});
+    del->setShortcuts(withoutRepeats(QKeySequence::keyBindings(QKeySequence::Delete) << QKeySequence(Qt::Key_Backspace)));
 
     QMenu* draw = menuBar()->addMenu(tr("&Draw"));
     auto* bar = new QToolBar(tr("Drawing tools"), this);
@@ -96,9 +131,18 @@ void MainWindow::buildMenus()
     addMenuAction(view, tr("&Fit to window"), QKeySequence(Qt::Key_Home), canvas_, [this] { canvas_->fitToView(); });
     addMenuAction(view, tr("Zoom &in"), QKeySequence::ZoomIn, canvas_, [this] { canvas_->zoomBy(1.25); });
     addMenuAction(view, tr("Zoom &out"), QKeySequence::ZoomOut, canvas_, [this] { canvas_->zoomBy(0.8); });
+    menuBar()->addMenu(createUnitsMenu(this));
+    return view;
+}
+
+// After every panel exists, so that a closed one can always be found again here.
+void MainWindow::listPanels(QMenu* view)
+{
     view->addSeparator();
     for (QDockWidget* dock : findChildren<QDockWidget*>()) view->addAction(dock->toggleViewAction());
-    menuBar()->addMenu(createUnitsMenu(this));
+    for (QToolBar* bar : findChildren<QToolBar*>()) view->addAction(bar->toggleViewAction());
+    view->addSeparator();
+    addMenuAction(view, tr("&Reset layout"), QKeySequence(), this, [this] { resetLayout(); });
 }
 
 void MainWindow::deleteSelection()

@@ -1,10 +1,12 @@
-// The main window: canvas in the centre, "Parts" on the left, "Properties"
-// on the right, the status line below. It only creates and wires the pieces.
+// The main window: canvas in the centre, the panels around it (see
+// dock_layout.h), the status line below. It only creates and wires the pieces.
 #pragma once
 
 #include "ui/files/recovery_store.h"
 
 #include <QMainWindow>
+
+class QMenu;
 
 namespace clevis::ui {
 
@@ -31,6 +33,13 @@ public:
     ToolPalette* tools() const { return tools_; }
     StatusLine* statusLine() const { return status_; }
 
+    // Sizes the window for a screen's available area and arranges the panels
+    // for that size: all of a small screen (returns true: show it maximised,
+    // so its frame fits too), 90 % of a larger one, centred.
+    bool placeOn(const QRect& available);
+    // Every panel back in its default place, shown (View > Reset layout).
+    void resetLayout();
+
 protected:
     void closeEvent(QCloseEvent*) override;
     void dragEnterEvent(QDragEnterEvent*) override;
@@ -38,7 +47,8 @@ protected:
 
 private:
     void buildDocks();
-    void buildMenus();
+    QMenu* buildMenus();
+    void listPanels(QMenu* view);
     void deleteSelection();
 
     MechanismDocument* doc_;

@@ -12,6 +12,7 @@ namespace clevis::ui {
 QString saveScreenshot(MainWindow& window, const QString& outPath)
 {
     window.resize(kScreenshotSize);
+    window.resetLayout();
     window.show();
     QCoreApplication::processEvents();
     window.analysis()->waitForIdle();

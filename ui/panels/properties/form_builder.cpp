@@ -129,7 +129,11 @@ void FormBuilder::text(const QString& key, const QString& label, const QString& 
         Mechanism trial = doc->mechanism();
         const QString problem = set(trial, typed);
         if (!problem.isEmpty()) return refuse(edit, value, problem);
+        const Selection renamed = doc->selection();
         doc->apply(undo, [trial](Mechanism& m) { m = trial; });
+        // The selection names the part: follow it to its new name.
+        if (renamed.kind != Selection::Kind::None && renamed.name == value)
+            doc->setSelection({renamed.kind, typed, renamed.loadIndex});
     });
 }
 

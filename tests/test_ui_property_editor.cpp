@@ -1,0 +1,63 @@
+// The property editor across edits: the form is rebuilt after each one, but
+// it stays scrolled where the user was and a renamed part stays selected.
+#include "core/file/mechanism_file.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/panels/property_editor.h"
+
+#include <QLineEdit>
+#include <QScrollBar>
+#include <QTest>
+
+#include <gtest/gtest.h>
+
+using namespace clevis;
+using namespace clevis::ui;
+
+namespace {
+
+class PropertyEditorTest : public ::testing::Test {
+protected:
+    void SetUp() override
+    {
+        doc.reset(loadMechanismFile(CLEVIS_SAMPLES_DIR "/dwell_six_bar.json").mechanism, {});
+        doc.setSelection({Selection::Kind::Body, QStringLiteral("coupler_plate"), -1});
+        editor.resize(320, 160);
+        editor.show();
+        ASSERT_TRUE(QTest::qWaitForWindowExposed(&editor));
+        editor.rebuildNow();
+    }
+
+    void type(const char* field, const QString& text)
+    {
+        auto* edit = editor.findChild<QLineEdit*>(QString::fromUtf8(field));
+        ASSERT_NE(edit, nullptr) << field;
+        edit->setText(text);
+        emit edit->editingFinished();
+        QCoreApplication::processEvents();
+    }
+
+    MechanismDocument doc;
+    PropertyEditor editor{&doc};
+};
+
+TEST_F(PropertyEditorTest, AnEditKeepsTheScrollPosition)
+{
+    QScrollBar* bar = editor.verticalScrollBar();
+    ASSERT_GT(bar->maximum(), 0) << "the form must be taller than the editor for this test";
+    bar->setValue(bar->maximum());
+    const int scrolled = bar->value();
+    type("inertia", QStringLiteral("0.0003"));
+    EXPECT_EQ(doc.mechanism().bodies[1].inertia, 0.0003);
+    EXPECT_EQ(bar->value(), scrolled);
+}
+
+TEST_F(PropertyEditorTest, ARenamedPartStaysSelected)
+{
+    type("name", QStringLiteral("coupler"));
+    EXPECT_EQ(doc.selection().kind, Selection::Kind::Body);
+    EXPECT_EQ(doc.selection().name, QStringLiteral("coupler"));
+    ASSERT_NE(editor.findChild<QLineEdit*>(QStringLiteral("name")), nullptr);
+    EXPECT_EQ(editor.findChild<QLineEdit*>(QStringLiteral("name"))->text(), QStringLiteral("coupler"));
+}
+
+}  // namespace

@@ -1,0 +1,65 @@
+#include "ui/shell/dock_layout.h"
+
+#include <QDockWidget>
+#include <QMainWindow>
+
+#include <algorithm>
+
+namespace clevis::ui {
+namespace {
+
+int share(int total, double fraction, int least, int most)
+{
+    return std::clamp(int(total * fraction), least, most);
+}
+
+}  // namespace
+
+QDockWidget* addPanel(QMainWindow* window, const QString& title, const QString& name, QWidget* content, QSize minimum)
+{
+    auto* dock = new QDockWidget(title, window);
+    dock->setObjectName(name);
+    content->setMinimumSize(minimum);
+    dock->setWidget(content);
+    window->addDockWidget(Qt::LeftDockWidgetArea, dock);
+    return dock;
+}
+
+void arrangePanels(QMainWindow* window)
+{
+    const auto panel = [window](const char* name) { return window->findChild<QDockWidget*>(QString::fromLatin1(name)); };
+    QDockWidget* parts = panel("partsDock");
+    QDockWidget* properties = panel("propertiesDock");
+    QDockWidget* diagram = panel("freeBodyDock");
+    QDockWidget* cycle = panel("cycleDock");
+    QDockWidget* plots = panel("plotsDock");
+    QDockWidget* peaks = panel("peaksDock");
+    if (!parts || !properties || !diagram || !cycle || !plots || !peaks) return;  // not all installed yet
+
+    // The editing column runs the full height; the bottom results span the canvas and the diagram.
+    window->setCorner(Qt::TopLeftCorner, Qt::LeftDockWidgetArea);
+    window->setCorner(Qt::BottomLeftCorner, Qt::LeftDockWidgetArea);
+    window->setCorner(Qt::TopRightCorner, Qt::RightDockWidgetArea);
+    window->setCorner(Qt::BottomRightCorner, Qt::BottomDockWidgetArea);
+    for (QDockWidget* d : {parts, properties, diagram, cycle, plots, peaks}) {
+        d->setFloating(false);
+        window->removeDockWidget(d);
+    }
+    window->addDockWidget(Qt::LeftDockWidgetArea, parts);
+    window->splitDockWidget(parts, properties, Qt::Vertical);
+    window->addDockWidget(Qt::RightDockWidgetArea, diagram);
+    window->addDockWidget(Qt::BottomDockWidgetArea, cycle);
+    window->splitDockWidget(cycle, plots, Qt::Vertical);
+    window->tabifyDockWidget(plots, peaks);
+    for (QDockWidget* d : {parts, properties, diagram, cycle, plots, peaks}) d->show();
+    plots->raise();
+
+    const QSize size = window->size();
+    const int column = share(size.width(), 0.2, 240, 360), diagramWidth = share(size.width(), 0.34, 300, 640);
+    window->resizeDocks({parts, diagram}, {column, diagramWidth}, Qt::Horizontal);
+    window->resizeDocks({parts, properties}, {size.height() * 3 / 10, size.height()}, Qt::Vertical);
+    const int plotsHeight = share(size.height(), 0.33, 180, 420);
+    window->resizeDocks({cycle, plots}, {cycle->minimumSizeHint().height(), plotsHeight}, Qt::Vertical);
+}
+
+}  // namespace clevis::ui
