@@ -42,32 +42,33 @@ inline constexpr MotionLaw kMotionLaws[] = {
     {"table", LawKind::Table, CamLaw::Cycloidal},
 };
 
-// Rotary drivers write their coordinate in degrees and rpm, linear ones in
-// metres; the keys carry the unit.
-struct Quantity {
-    const char* key;
+// A file key and the unit its value is written in. Rotary drivers write
+// their coordinate in degrees and rpm, linear ones in metres; the keys carry
+// the unit.
+struct KeyWithUnit {
+    const char* name;
     FileUnit unit;
 };
-struct DriverQuantities {
-    Quantity offset;        // position at the drawn pose
-    Quantity speed, accel;  // constant speed
-    Quantity from, to;      // rise
-    Quantity position;      // table
-    Quantity profileAt;     // load profile over this driver's position
+struct DriverKeys {
+    KeyWithUnit offset;        // position at the drawn pose
+    KeyWithUnit speed, accel;  // constant speed
+    KeyWithUnit from, to;      // rise
+    KeyWithUnit position;      // table
+    KeyWithUnit profileAt;     // load profile over this driver's position
 };
-inline constexpr DriverQuantities kRotaryQuantities{
+inline constexpr DriverKeys kRotaryKeys{
     {"angle_deg", FileUnit::Degree}, {"speed_rpm", FileUnit::Rpm},     {"accel_deg_s2", FileUnit::Degree},
     {"from_deg", FileUnit::Degree},  {"to_deg", FileUnit::Degree},     {"position_deg", FileUnit::Degree},
     {"at_deg", FileUnit::Degree}};
-inline constexpr DriverQuantities kLinearQuantities{
+inline constexpr DriverKeys kLinearKeys{
     {"position", FileUnit::Si}, {"speed", FileUnit::Si},    {"accel", FileUnit::Si}, {"from", FileUnit::Si},
     {"to", FileUnit::Si},       {"position", FileUnit::Si}, {"at", FileUnit::Si}};
 
-inline constexpr Quantity kTorsionFreeAngle{"free_angle_deg", FileUnit::Degree};
+inline constexpr KeyWithUnit kTorsionFreeAngle{"free_angle_deg", FileUnit::Degree};
 
-inline const DriverQuantities& quantitiesOf(DriverType type)
+inline const DriverKeys& driverKeysOf(DriverType type)
 {
-    return type == DriverType::Rotary ? kRotaryQuantities : kLinearQuantities;
+    return type == DriverType::Rotary ? kRotaryKeys : kLinearKeys;
 }
 
 inline const Driver* findDriver(const std::vector<Driver>& drivers, const std::string& name)
