@@ -4,7 +4,6 @@
 #include "render/cycle_series.h"
 #include "ui/shell/display_units.h"
 #include "render/palette.h"
-#include "ui/results/results_units.h"
 
 #include <QCheckBox>
 #include <QHBoxLayout>
