@@ -1,46 +1,14 @@
-// Names and units shared by the mechanism file reader and writer.
+// The version, keys and units shared by the mechanism file reader and writer;
+// the words for joint and driver types and motion laws are the model's
+// (core/model/type_names.h).
 #pragma once
 
 #include "core/file/file_units.h"
-#include "core/model/mechanism.h"
+#include "core/model/type_names.h"
 
 namespace clevis {
 
 inline constexpr int kFileVersion = 1;
-
-template <class E>
-struct Named {
-    const char* name;
-    E value;
-};
-
-template <class E, std::size_t N>
-const char* nameOf(const Named<E> (&names)[N], E value)
-{
-    for (const auto& n : names)
-        if (n.value == value) return n.name;
-    return "";
-}
-
-inline constexpr Named<JointType> kJointTypes[] = {
-    {"pin", JointType::Pin}, {"slider", JointType::Slider}, {"pin_in_slot", JointType::PinInSlot}};
-
-inline constexpr Named<DriverType> kDriverTypes[] = {{"rotary", DriverType::Rotary}, {"linear", DriverType::Linear}};
-
-// A motion's "law" selects the Motion alternative and, for a rise, the CamLaw.
-enum class LawKind { ConstantSpeed, Rise, Table };
-struct MotionLaw {
-    const char* name;
-    LawKind kind;
-    CamLaw cam;  // for rises only
-};
-inline constexpr MotionLaw kMotionLaws[] = {
-    {"constant_speed", LawKind::ConstantSpeed, CamLaw::Cycloidal},
-    {"cycloidal", LawKind::Rise, CamLaw::Cycloidal},
-    {"polynomial_345", LawKind::Rise, CamLaw::Polynomial345},
-    {"modified_trapezoid", LawKind::Rise, CamLaw::ModifiedTrapezoid},
-    {"table", LawKind::Table, CamLaw::Cycloidal},
-};
 
 // A file key and the unit its value is written in. Rotary drivers write
 // their coordinate in degrees and rpm, linear ones in metres; the keys carry

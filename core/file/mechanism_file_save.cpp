@@ -67,18 +67,11 @@ Json bodyJson(const Body& b)
 Json jointJson(const Joint& j)
 {
     Json out{{"name", j.name},
-             {"type", nameOf(kJointTypes, j.type)},
+             {"type", jointTypeName(j.type)},
              {"bodies", Json::array({j.bodies[0], j.bodies[1]})},
              {"at", point(j.at)}};
     if (j.type != JointType::Pin) out["axis_deg"] = j.axisDeg;
     return out;
-}
-
-const char* riseLawName(CamLaw cam)
-{
-    for (const MotionLaw& law : kMotionLaws)
-        if (law.kind == LawKind::Rise && law.cam == cam) return law.name;
-    return "";
 }
 
 Json motionJson(const Motion& motion, const DriverKeys& keys)
@@ -89,7 +82,7 @@ Json motionJson(const Motion& motion, const DriverKeys& keys)
         put(out, keys.speed, c->speed);
         put(out, keys.accel, c->accel);
     } else if (const auto* r = std::get_if<Rise>(&motion)) {
-        out["law"] = riseLawName(r->law);
+        out["law"] = camLawName(r->law);
         put(out, keys.from, r->from);
         put(out, keys.to, r->to);
         out["start_s"] = r->start;
