@@ -2,6 +2,7 @@
 
 #include "core/solver/analysis_error.h"
 #include "core/results/drive_units.h"
+#include "core/solver/grashof_note.h"
 #include "core/solver/mobility_check.h"
 #include "core/model/model_limits.h"
 #include "core/solver/step_solver.h"
@@ -39,7 +40,10 @@ bool finiteStep(const StepResult& s)
 
 class Sweeper {
 public:
-    Sweeper(const CompiledMechanism& m, const SweepOptions& o) : mechanism_(m), options_(o), solver_(m) {}
+    Sweeper(const CompiledMechanism& m, const SweepOptions& o)
+        : mechanism_(m), options_(o), solver_(m), grashofNote_(grashofNote(m))
+    {
+    }
     CycleResult run();
 
 private:
@@ -50,13 +54,20 @@ private:
     void warnNearSingular();
     void warnUnreachable(double tFail);
     std::string drivePositions(const StepResult& s) const;
+    std::string withGrashofNote(const std::string& message) const;
 
     const CompiledMechanism& mechanism_;
     const SweepOptions& options_;
     StepSolver solver_;
     CycleResult result_;
     bool branchWarned_ = false;
+    const std::string grashofNote_;  // why a four-bar's drive cannot turn fully; empty otherwise
 };
+
+std::string Sweeper::withGrashofNote(const std::string& message) const
+{
+    return grashofNote_.empty() ? message : message + " " + grashofNote_;
+}
 
 std::string Sweeper::drivePositions(const StepResult& s) const
 {
@@ -81,9 +92,9 @@ void Sweeper::assembleDrawnPose(Eigen::VectorXd& q)
     const Constraint& c = *constraints[k];
     const std::string name = c.owner() == ConstraintOwner::Joint ? mechanism_.joints[c.ownerIndex()].name
                                                                   : mechanism_.drivers[c.ownerIndex()].name;
-    throw AnalysisError("The mechanism does not assemble at the start of the cycle: the links cannot all be joined "
-                        "near the drawn pose (largest gap at \"" + name +
-                            "\"). Check the link lengths and where the drivers start.",
+    throw AnalysisError(withGrashofNote("The mechanism does not assemble at the start of the cycle: the links cannot "
+                                        "all be joined near the drawn pose (largest gap at \"" + name +
+                                        "\"). Check the link lengths and where the drivers start."),
                         {name});
 }
 
@@ -162,7 +173,7 @@ void Sweeper::warnNearSingular()
         s << "Near a singular position (dead centre or toggle) from " << drivePositions(steps[i]) << " to "
           << drivePositions(steps[last]) << " (steps " << i << "–" << last
           << "): the linkage locks up or loses control there and the reactions are unreliable.";
-        result_.warnings.push_back({"near_singular", s.str(), int(i)});
+        result_.warnings.push_back({"near_singular", withGrashofNote(s.str()), int(i)});
         i = last;
     }
 }
@@ -174,7 +185,7 @@ void Sweeper::warnUnreachable(double tFail)
     s << "The cycle cannot be completed: the mechanism can be assembled only from " << drivePositions(result_.steps.front())
       << " to " << drivePositions(last) << " (t = " << last.t << " s of " << mechanism_.duration
       << " s); beyond, near t = " << tFail << " s, the links cannot be joined. Results stop there.";
-    result_.warnings.push_back({"out_of_reach", s.str(), int(result_.steps.size())});
+    result_.warnings.push_back({"out_of_reach", withGrashofNote(s.str()), int(result_.steps.size())});
 }
 
 CycleResult Sweeper::run()
