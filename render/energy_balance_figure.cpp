@@ -21,13 +21,13 @@ void EnergyBalanceFigure::paint(QPainter& p, const QRectF& target) const
         QColor colour;
     };
     // Signs as in W_drivers = ΔT + ΔV_g + ΔV_s + W_dampers − W_loads + residual.
-    const Bar bars[] = {{"driver work W_drivers", e_.driverWork, palette::driver()},
-                        {"kinetic energy change ΔT", e_.kineticChange, palette::inertia()},
-                        {"gravity potential change ΔV_g", e_.gravityChange, palette::weight()},
-                        {"spring energy change ΔV_s", e_.springChange, palette::spring()},
-                        {"damper work W_dampers", e_.damperWork, palette::spring()},
-                        {"work against loads −W_loads", -e_.loadWork, palette::load()},
-                        {"residual", e_.residual, palette::problem()}};
+    const Bar bars[] = {{"driver work W_drivers", balance_.driverWork, palette::driver()},
+                        {"kinetic energy change ΔT", balance_.kineticChange, palette::inertia()},
+                        {"gravity potential change ΔV_g", balance_.gravityChange, palette::weight()},
+                        {"spring energy change ΔV_s", balance_.springChange, palette::spring()},
+                        {"damper work W_dampers", balance_.damperWork, palette::spring()},
+                        {"work against loads −W_loads", -balance_.loadWork, palette::load()},
+                        {"residual", balance_.residual, palette::problem()}};
     double largest = 1e-12;
     for (const Bar& b : bars) largest = std::max(largest, std::abs(b.value));
     const double labelWidth = 190, zero = labelWidth + 150, half = 140;
@@ -47,8 +47,8 @@ void EnergyBalanceFigure::paint(QPainter& p, const QRectF& target) const
     p.drawLine(QPointF(zero, 4), QPointF(zero, y));
     p.drawText(QRectF(0, y + 2, size().width(), 16), Qt::AlignLeft,
                QString("Residual %1 of the %2 that passed through the mechanism (%3 %).")
-                   .arg(formatQuantity(e_.residual, "J"), formatQuantity(e_.gross, "J"))
-                   .arg(100.0 * e_.relativeResidual, 0, 'g', 2));
+                   .arg(formatQuantity(balance_.residual, "J"), formatQuantity(balance_.gross, "J"))
+                   .arg(100.0 * balance_.relativeResidual, 0, 'g', 2));
     p.restore();
 }
 

@@ -11,12 +11,12 @@ namespace clevis::ui {
 
 class EnergyBalanceFigure final : public Figure {
 public:
-    explicit EnergyBalanceFigure(const EnergyBalance& e) : e_(e) {}
+    explicit EnergyBalanceFigure(const EnergyBalance& e) : balance_(e) {}
     QSizeF size() const override { return {515, 190}; }
     void paint(QPainter& p, const QRectF& target) const override;
 
 private:
-    EnergyBalance e_;
+    EnergyBalance balance_;
 };
 
 }  // namespace clevis::ui

@@ -239,13 +239,13 @@ QString stepCaption(const CompiledMechanism& m, const CycleResult& r, int step)
 
 FreeBodyPainter::FreeBodyPainter(const CompiledMechanism& m, const CycleResult& r, FreeBodyDiagram d,
                                  FreeBodyPaintOptions options)
-    : m_(m), r_(r), d_(std::move(d)), o_(std::move(options))
+    : mechanism_(m), result_(r), diagram_(std::move(d)), options_(std::move(options))
 {
 }
 
 QSizeF FreeBodyPainter::size() const
 {
-    const int rows = o_.table ? int(d_.items.size()) + (o_.dAlembert ? 2 : 0) + 1 : 0;
+    const int rows = options_.table ? int(diagram_.items.size()) + (options_.dAlembert ? 2 : 0) + 1 : 0;
     return {kWidth, kPanelTop + kPanelHeight + kEquationHeight + rows * kRowHeight + 2 * kMargin};
 }
 
@@ -256,49 +256,49 @@ void FreeBodyPainter::paint(QPainter& p, const QRectF& target) const
     p.fillRect(QRectF(QPointF(0, 0), size()), palette::paper());
     paintTitle(p);
 
-    const StepResult& s = r_.steps[d_.step];
-    const std::vector<BodyPointOf> points = bodyPointsAt(m_, s, d_.body);
-    double largest = d_.inertiaForce().norm();
-    for (const auto& item : d_.items) largest = std::max(largest, item.force.norm());
+    const StepResult& s = result_.steps[diagram_.step];
+    const std::vector<BodyPointOf> points = bodyPointsAt(mechanism_, s, diagram_.body);
+    double largest = diagram_.inertiaForce().norm();
+    for (const auto& item : diagram_.items) largest = std::max(largest, item.force.norm());
     const double pagePerNewton = largest > 0 ? kMaxArrow / largest : 0.0;
     double bodySize = 0;
-    for (const auto& a : points) bodySize = std::max(bodySize, (a.at - d_.cg).norm());
+    for (const auto& a : points) bodySize = std::max(bodySize, (a.at - diagram_.cg).norm());
     const double coupleFloor = kNegligibleCouple * std::max(1.0, largest * std::max(bodySize, 0.01));
 
     std::vector<Mark> marks;
-    for (const auto& item : d_.items)
-        for (Mark& mark : marksFor(item, o_.units, coupleFloor)) marks.push_back(std::move(mark));
-    if (o_.dAlembert) {
-        if (d_.inertiaForce().norm() > 1e-9)
-            marks.push_back({d_.cg, -d_.inertiaForce(), 0, false, inertiaStyle(), forceText(o_.units, "−m·a_G", -d_.inertiaForce())});
-        if (std::abs(d_.inertiaCouple()) > coupleFloor)
-            marks.push_back({d_.cg, Vec2::Zero(), -d_.inertiaCouple(), true, inertiaStyle(),
-                             coupleText(o_.units, "−I_G·α", -d_.inertiaCouple())});
+    for (const auto& item : diagram_.items)
+        for (Mark& mark : marksFor(item, options_.units, coupleFloor)) marks.push_back(std::move(mark));
+    if (options_.dAlembert) {
+        if (diagram_.inertiaForce().norm() > 1e-9)
+            marks.push_back({diagram_.cg, -diagram_.inertiaForce(), 0, false, inertiaStyle(), forceText(options_.units, "−m·a_G", -diagram_.inertiaForce())});
+        if (std::abs(diagram_.inertiaCouple()) > coupleFloor)
+            marks.push_back({diagram_.cg, Vec2::Zero(), -diagram_.inertiaCouple(), true, inertiaStyle(),
+                             coupleText(options_.units, "−I_G·α", -diagram_.inertiaCouple())});
     }
 
-    const double right = o_.dAlembert ? kWidth - kMargin : kBodyPanelRight;
+    const double right = options_.dAlembert ? kWidth - kMargin : kBodyPanelRight;
     const QRectF bodyArea(kMargin, kPanelTop, right - kMargin, kPanelHeight);
-    panelHeading(p, bodyArea, o_.dAlembert ? "Free body with inertia loads (d'Alembert): every sum is zero" : "Free body");
+    panelHeading(p, bodyArea, options_.dAlembert ? "Free body with inertia loads (d'Alembert): every sum is zero" : "Free body");
     std::vector<Vec2> loadPoints;
-    for (const auto& item : d_.items) loadPoints.push_back(item.at);
-    BodyPanel panel(points, d_.cg, loadPoints, bodyArea, pagePerNewton);
+    for (const auto& item : diagram_.items) loadPoints.push_back(item.at);
+    BodyPanel panel(points, diagram_.cg, loadPoints, bodyArea, pagePerNewton);
     LabelPlacer labels(bodyArea.adjusted(0, 16, 0, -34), font(11));
     panel.paintBody(p);
     panel.paintMarks(p, marks, labels);
     labels.paint(p, palette::ink(), palette::paper());
 
-    if (!o_.dAlembert) {
+    if (!options_.dAlembert) {
         const QRectF kineticArea(kKineticLeft, kPanelTop, kWidth - kMargin - kKineticLeft, kPanelHeight);
         p.setFont(font(28));
         p.setPen(palette::ink());
         p.drawText(QRectF(kBodyPanelRight, kPanelTop, kKineticLeft - kBodyPanelRight, kPanelHeight), Qt::AlignCenter, "=");
         panelHeading(p, kineticArea, "Kinetic diagram");
-        BodyPanel kinetic(points, d_.cg, {}, kineticArea, pagePerNewton);
+        BodyPanel kinetic(points, diagram_.cg, {}, kineticArea, pagePerNewton);
         std::vector<Mark> km;
-        if (d_.inertiaForce().norm() > 1e-9)
-            km.push_back({d_.cg, d_.inertiaForce(), 0, false, inertiaStyle(), forceText(o_.units, "m·a_G", d_.inertiaForce())});
-        if (std::abs(d_.inertiaCouple()) > coupleFloor)
-            km.push_back({d_.cg, Vec2::Zero(), d_.inertiaCouple(), true, inertiaStyle(), coupleText(o_.units, "I_G·α", d_.inertiaCouple())});
+        if (diagram_.inertiaForce().norm() > 1e-9)
+            km.push_back({diagram_.cg, diagram_.inertiaForce(), 0, false, inertiaStyle(), forceText(options_.units, "m·a_G", diagram_.inertiaForce())});
+        if (std::abs(diagram_.inertiaCouple()) > coupleFloor)
+            km.push_back({diagram_.cg, Vec2::Zero(), diagram_.inertiaCouple(), true, inertiaStyle(), coupleText(options_.units, "I_G·α", diagram_.inertiaCouple())});
         LabelPlacer kineticLabels(kineticArea.adjusted(0, 16, 0, -34), font(11));
         p.save();
         p.setOpacity(0.55);  // the kinetic body is a reference shape, not a load carrier
@@ -322,17 +322,17 @@ void FreeBodyPainter::paint(QPainter& p, const QRectF& target) const
         p.drawLine(QPointF(kMargin, y), QPointF(kMargin + len, y));
         p.drawLine(QPointF(kMargin, y - 4), QPointF(kMargin, y + 4));
         p.drawLine(QPointF(kMargin + len, y - 4), QPointF(kMargin + len, y + 4));
-        p.drawText(QPointF(kMargin + len + 6, y + 4), "force scale " + o_.units.force(value));
+        p.drawText(QPointF(kMargin + len + 6, y + 4), "force scale " + options_.units.force(value));
     }
     const double metres = niceBelow(90 / panel.frame().scale);
     const double x0 = kMargin + 260, len = metres * panel.frame().scale;
     p.drawLine(QPointF(x0, y), QPointF(x0 + len, y));
     p.drawLine(QPointF(x0, y - 4), QPointF(x0, y + 4));
     p.drawLine(QPointF(x0 + len, y - 4), QPointF(x0 + len, y + 4));
-    p.drawText(QPointF(x0 + len + 6, y + 4), "drawing scale " + o_.units.length(metres));
+    p.drawText(QPointF(x0 + len + 6, y + 4), "drawing scale " + options_.units.length(metres));
 
     paintEquations(p, kPanelTop + kPanelHeight + 6);
-    if (o_.table) paintTable(p, kPanelTop + kPanelHeight + kEquationHeight);
+    if (options_.table) paintTable(p, kPanelTop + kPanelHeight + kEquationHeight);
     p.restore();
 }
 
@@ -340,13 +340,13 @@ void FreeBodyPainter::paintTitle(QPainter& p) const
 {
     p.setPen(palette::ink());
     p.setFont(font(17, true));
-    p.drawText(QPointF(kMargin, kMargin + 14), "Free-body diagram: " + QString::fromStdString(d_.bodyName));
+    p.drawText(QPointF(kMargin, kMargin + 14), "Free-body diagram: " + QString::fromStdString(diagram_.bodyName));
     p.setFont(font(11));
-    p.drawText(QPointF(kMargin, kMargin + 34), stepCaption(m_, r_, d_.step));
+    p.drawText(QPointF(kMargin, kMargin + 34), stepCaption(mechanism_, result_, diagram_.step));
     const QString mass = QString("m = %1, I_G = %2, G at %3")
-                             .arg(formatQuantity(d_.mass, "kg"), formatQuantity(d_.inertia, "kg·m²"), pointText(o_.units, d_.cg));
+                             .arg(formatQuantity(diagram_.mass, "kg"), formatQuantity(diagram_.inertia, "kg·m²"), pointText(options_.units, diagram_.cg));
     p.drawText(QPointF(kMargin, kMargin + 50), mass);
-    if (r_.steps[d_.step].nearSingular) {
+    if (result_.steps[diagram_.step].nearSingular) {
         p.setPen(palette::problem());
         p.drawText(QPointF(kWidth / 2, kMargin + 50), "Near a singular position: these loads are unreliable.");
     }
@@ -354,13 +354,13 @@ void FreeBodyPainter::paintTitle(QPainter& p) const
 
 void FreeBodyPainter::paintEquations(QPainter& p, double top) const
 {
-    const RenderUnits& u = o_.units;
+    const RenderUnits& u = options_.units;
     struct Row {
         QString sum, kinetic;
         const FreeBodyEquation& e;
         bool moment;
     };
-    const Row rows[] = {{"ΣFx", "m·aGx", d_.fx, false}, {"ΣFy", "m·aGy", d_.fy, false}, {"ΣM_G", "I_G·α", d_.moment, true}};
+    const Row rows[] = {{"ΣFx", "m·aGx", diagram_.fx, false}, {"ΣFy", "m·aGy", diagram_.fy, false}, {"ΣM_G", "I_G·α", diagram_.moment, true}};
     p.setPen(QPen(palette::gridMajor(), 1));
     p.drawLine(QPointF(kMargin, top), QPointF(kWidth - kMargin, top));
     p.setPen(palette::ink());
@@ -382,7 +382,7 @@ void FreeBodyPainter::paintEquations(QPainter& p, double top) const
 
 void FreeBodyPainter::paintTable(QPainter& p, double top) const
 {
-    const RenderUnits& u = o_.units;
+    const RenderUnits& u = options_.units;
     const double columns[] = {kMargin, 130, 225, 320, 420, 520, 620, 700, 800};
     const QString headings[] = {"Load", "Kind", "From", "Fx", "Fy", "|F|", "Direction", "Couple", "Acts at (x, y)"};
     p.setFont(font(11, true));
@@ -407,12 +407,12 @@ void FreeBodyPainter::paintTable(QPainter& p, double top) const
         for (int c = 0; c < 9; ++c) p.drawText(QPointF(columns[c], y), cells[c]);
         y += kRowHeight;
     };
-    for (const auto& item : d_.items)
+    for (const auto& item : diagram_.items)
         row(QString::fromStdString(item.name), freeBodyItemKindName(item.kind), QString::fromStdString(item.otherBody),
             item.force, item.couple, item.at);
-    if (o_.dAlembert) {
-        row("−m·a_G", "inertia", "", -d_.inertiaForce(), 0.0, d_.cg);
-        row("−I_G·α", "inertia", "", Vec2::Zero(), -d_.inertiaCouple(), d_.cg);
+    if (options_.dAlembert) {
+        row("−m·a_G", "inertia", "", -diagram_.inertiaForce(), 0.0, diagram_.cg);
+        row("−I_G·α", "inertia", "", Vec2::Zero(), -diagram_.inertiaCouple(), diagram_.cg);
     }
 }
 

@@ -26,17 +26,17 @@ public:
     QSizeF size() const override;
     void paint(QPainter& p, const QRectF& target) const override;
 
-    const FreeBodyDiagram& diagram() const { return d_; }
+    const FreeBodyDiagram& diagram() const { return diagram_; }
 
 private:
     void paintTitle(QPainter& p) const;
     void paintEquations(QPainter& p, double top) const;
     void paintTable(QPainter& p, double top) const;
 
-    const CompiledMechanism& m_;
-    const CycleResult& r_;
-    FreeBodyDiagram d_;
-    FreeBodyPaintOptions o_;
+    const CompiledMechanism& mechanism_;
+    const CycleResult& result_;
+    FreeBodyDiagram diagram_;
+    FreeBodyPaintOptions options_;
 };
 
 // "motor = 123.4°, t = 0.1234 s (step 34 of 360)": where in the cycle a step is.

@@ -33,7 +33,7 @@ QPointF unitOf(QPointF v)
 }  // namespace
 
 MechanismSketch::MechanismSketch(const CompiledMechanism& m, const StepResult& step, QString caption, QSizeF size)
-    : m_(m), step_(step), caption_(std::move(caption)), size_(size)
+    : mechanism_(m), step_(step), caption_(std::move(caption)), size_(size)
 {
 }
 
@@ -44,19 +44,19 @@ void MechanismSketch::paint(QPainter& p, const QRectF& target) const
     p.fillRect(QRectF(QPointF(0, 0), size_), palette::paper());
     const auto& q = step_.q;
     std::vector<Vec2> all;
-    for (const auto& j : m_.joints) all.push_back(pointPosition(q, j.point[1]));
-    for (std::size_t b = 0; b < m_.bodies.size(); ++b) all.push_back(bodyOrigin(q, int(b)));
-    for (const auto& d : m_.drivers)
+    for (const auto& j : mechanism_.joints) all.push_back(pointPosition(q, j.point[1]));
+    for (std::size_t b = 0; b < mechanism_.bodies.size(); ++b) all.push_back(bodyOrigin(q, int(b)));
+    for (const auto& d : mechanism_.drivers)
         if (d.joint < 0)
             for (const auto& end : d.ends) all.push_back(pointPosition(q, end));
-    for (const auto& sp : m_.springs)
+    for (const auto& sp : mechanism_.springs)
         for (const BodyPoint& end : {sp.a, sp.b}) all.push_back(pointPosition(q, end));
     p.setClipRect(QRectF(QPointF(0, 0), size_));
     const WorldFrame frame = WorldFrame::fit(all, QRectF(0, 0, size_.width(), size_.height() - 20), 40);
 
     // Guides first, under the bodies.
     p.setPen(QPen(palette::groundHatch(), 0.9, Qt::DashDotLine));
-    for (const auto& j : m_.joints) {
+    for (const auto& j : mechanism_.joints) {
         if (j.type == JointType::Pin) continue;
         const QPointF c = frame.map(pointPosition(q, j.point[1]));
         const QPointF u = unitOf(frame.mapDirection(rotation(bodyAngle(q, j.body[0])) * j.axisLocal, 1));
@@ -64,10 +64,10 @@ void MechanismSketch::paint(QPainter& p, const QRectF& target) const
     }
     LabelPlacer labels(QRectF(0, 0, size_.width(), size_.height() - 20), sketchFont(10));
     std::vector<std::pair<QString, QPointF>> bodyNames;
-    for (std::size_t b = 0; b < m_.bodies.size(); ++b) {
+    for (std::size_t b = 0; b < mechanism_.bodies.size(); ++b) {
         std::vector<QPointF> pts;
         std::vector<SlideBlock> blocks;
-        for (const auto& point : bodyPointsAt(m_, step_, int(b))) {
+        for (const auto& point : bodyPointsAt(mechanism_, step_, int(b))) {
             if (point.kind == BodyPointKind::LoadPoint) continue;  // the sketch shows no loads
             pts.push_back(frame.map(point.at));
             if (point.kind == BodyPointKind::SlideBlock)
@@ -78,10 +78,10 @@ void MechanismSketch::paint(QPainter& p, const QRectF& target) const
         const QPainterPath outline = bodyOutlinePath(pts, kHalfWidth, blocks);
         p.drawPath(outline);
         labels.addObstacle(outline);
-        bodyNames.emplace_back(QString::fromStdString(m_.bodies[b].name), outline.boundingRect().center());
+        bodyNames.emplace_back(QString::fromStdString(mechanism_.bodies[b].name), outline.boundingRect().center());
     }
     // Cylinders between two points: a straight rod over a wider barrel.
-    for (const auto& d : m_.drivers) {
+    for (const auto& d : mechanism_.drivers) {
         if (d.joint >= 0) continue;
         const QPointF a = frame.map(pointPosition(q, d.ends[0])), b = frame.map(pointPosition(q, d.ends[1]));
         p.setPen(QPen(palette::driver(), 5, Qt::SolidLine, Qt::FlatCap));
@@ -90,7 +90,7 @@ void MechanismSketch::paint(QPainter& p, const QRectF& target) const
         p.drawLine(a, b);
     }
     const QPointF middle = frame.map(frame.centre);
-    for (const auto& j : m_.joints) {
+    for (const auto& j : mechanism_.joints) {
         const QPointF at = frame.map(pointPosition(q, j.point[1]));
         const bool grounded = j.body[0] == kGround || j.body[1] == kGround;
         if (j.type != JointType::Slider) {
@@ -103,9 +103,9 @@ void MechanismSketch::paint(QPainter& p, const QRectF& target) const
         labels.add(QString::fromStdString(j.name), at, n > 1 ? away / n : QPointF(0.7, 0.7));
     }
     for (const auto& [name, centre] : bodyNames) labels.add(name, centre, QPointF(0, -1));
-    for (const auto& d : m_.drivers) {
+    for (const auto& d : mechanism_.drivers) {
         if (d.type != DriverType::Rotary) continue;
-        const QPointF at = frame.map(pointPosition(q, m_.joints[d.joint].point[1]));
+        const QPointF at = frame.map(pointPosition(q, mechanism_.joints[d.joint].point[1]));
         drawCoupleArrow(p, at, 14, true, figureArrow(palette::driver(), 1.4));
     }
     labels.paint(p, palette::ink(), palette::paper());

@@ -18,7 +18,7 @@ public:
     void paint(QPainter& p, const QRectF& target) const override;
 
 private:
-    const CompiledMechanism& m_;
+    const CompiledMechanism& mechanism_;
     const StepResult& step_;
     QString caption_;
     QSizeF size_;

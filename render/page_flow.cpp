@@ -24,21 +24,22 @@ QFont reportFont(int pixels, bool bold)
 }
 
 PageFlow::PageFlow(QPdfWriter& writer, QPainter& painter, QString footer)
-    : writer_(writer), p_(painter), footer_(std::move(footer)), y_(kMargin)
+    : writer_(writer), painter_(painter), footer_(std::move(footer)), y_(kMargin)
 {
-    p_.scale(writer_.resolution() / 72.0, writer_.resolution() / 72.0);
+    painter_.scale(writer_.resolution() / 72.0, writer_.resolution() / 72.0);
 }
 
 double PageFlow::width() const { return kPageWidth - 2 * kMargin; }
 
 void PageFlow::footer()
 {
-    p_.save();
-    p_.setFont(reportFont(8));
-    p_.setPen(palette::groundHatch());
-    p_.drawText(QRectF(kMargin, kPageHeight - kMargin - 10, width(), 12), Qt::AlignLeft, footer_);
-    p_.drawText(QRectF(kMargin, kPageHeight - kMargin - 10, width(), 12), Qt::AlignRight, QString("page %1").arg(page_));
-    p_.restore();
+    painter_.save();
+    painter_.setFont(reportFont(8));
+    painter_.setPen(palette::groundHatch());
+    painter_.drawText(QRectF(kMargin, kPageHeight - kMargin - 10, width(), 12), Qt::AlignLeft, footer_);
+    painter_.drawText(QRectF(kMargin, kPageHeight - kMargin - 10, width(), 12), Qt::AlignRight,
+                      QString("page %1").arg(page_));
+    painter_.restore();
 }
 
 void PageFlow::newPage()
@@ -58,20 +59,20 @@ void PageFlow::heading(const QString& text)
 {
     ensure(160);
     if (y_ > kMargin + 1) y_ += 10;
-    p_.setFont(reportFont(16, true));
-    p_.setPen(palette::ink());
-    p_.drawText(QPointF(kMargin, y_ + 16), text);
-    p_.setPen(QPen(palette::link(), 1.2));
-    p_.drawLine(QPointF(kMargin, y_ + 22), QPointF(kMargin + width(), y_ + 22));
+    painter_.setFont(reportFont(16, true));
+    painter_.setPen(palette::ink());
+    painter_.drawText(QPointF(kMargin, y_ + 16), text);
+    painter_.setPen(QPen(palette::link(), 1.2));
+    painter_.drawLine(QPointF(kMargin, y_ + 22), QPointF(kMargin + width(), y_ + 22));
     y_ += 34;
 }
 
 void PageFlow::subheading(const QString& text)
 {
     ensure(60);
-    p_.setFont(reportFont(11, true));
-    p_.setPen(palette::ink());
-    p_.drawText(QPointF(kMargin, y_ + 11), text);
+    painter_.setFont(reportFont(11, true));
+    painter_.setPen(palette::ink());
+    painter_.drawText(QPointF(kMargin, y_ + 11), text);
     y_ += 18;
 }
 
@@ -80,9 +81,9 @@ void PageFlow::paragraph(const QString& text, const QColor& colour, bool bold)
     const QFont f = reportFont(9, bold);
     const QRectF box = QFontMetricsF(f).boundingRect(QRectF(0, 0, width(), 10000), Qt::TextWordWrap, text);
     ensure(box.height() + 6);
-    p_.setFont(f);
-    p_.setPen(colour.isValid() ? colour : palette::ink());
-    p_.drawText(QRectF(kMargin, y_, width(), box.height() + 2), Qt::TextWordWrap, text);
+    painter_.setFont(f);
+    painter_.setPen(colour.isValid() ? colour : palette::ink());
+    painter_.drawText(QRectF(kMargin, y_, width(), box.height() + 2), Qt::TextWordWrap, text);
     y_ += box.height() + 6;
 }
 
@@ -90,16 +91,16 @@ void PageFlow::table(const std::vector<QStringList>& rows, const std::vector<dou
 {
     constexpr double kRow = 13.0;
     const auto drawRow = [&](const QStringList& row, bool head) {
-        p_.setFont(reportFont(8, head));
-        p_.setPen(palette::ink());
+        painter_.setFont(reportFont(8, head));
+        painter_.setPen(palette::ink());
         double x = kMargin;
         for (int c = 0; c < row.size() && c < int(columns.size()); ++c) {
-            p_.drawText(QRectF(x, y_, columns[c] * width() - 4, kRow), Qt::AlignLeft | Qt::AlignVCenter, row[c]);
+            painter_.drawText(QRectF(x, y_, columns[c] * width() - 4, kRow), Qt::AlignLeft | Qt::AlignVCenter, row[c]);
             x += columns[c] * width();
         }
         y_ += kRow;
-        p_.setPen(QPen(head ? palette::groundHatch() : palette::gridMinor(), head ? 0.8 : 0.5));
-        p_.drawLine(QPointF(kMargin, y_), QPointF(kMargin + width(), y_));
+        painter_.setPen(QPen(head ? palette::groundHatch() : palette::gridMinor(), head ? 0.8 : 0.5));
+        painter_.drawLine(QPointF(kMargin, y_), QPointF(kMargin + width(), y_));
     };
     if (rows.empty()) return;
     ensure(3 * kRow);
@@ -119,7 +120,7 @@ void PageFlow::figure(const Figure& f, double w)
     const QSizeF s = f.size();
     const double h = s.height() * w / s.width();
     ensure(h + 6);
-    f.paint(p_, QRectF(kMargin + (width() - w) / 2, y_, w, h));
+    f.paint(painter_, QRectF(kMargin + (width() - w) / 2, y_, w, h));
     y_ += h + 8;
 }
 

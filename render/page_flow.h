@@ -38,7 +38,7 @@ private:
     void footer();
 
     QPdfWriter& writer_;
-    QPainter& p_;
+    QPainter& painter_;
     QString footer_;
     double y_ = 0;
     int page_ = 1;

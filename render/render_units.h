@@ -1,7 +1,7 @@
-// The units a drawing or report is labelled in, as plain values, so the
-// renderers need no settings or widgets: the desktop app fills it from the
-// user's display units, the command line uses millimetres, newtons and
-// newton-metres.
+// The units a drawing or report is labelled in, and how its numbers are
+// written with them. Plain values, so the renderers need no settings or
+// widgets: the desktop app fills them from the user's display units, the
+// command line uses millimetres, newtons and newton-metres.
 #pragma once
 
 #include <QString>

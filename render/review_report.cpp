@@ -4,6 +4,7 @@
 #include "core/solver/body_state.h"
 #include "render/cycle_chart.h"
 #include "core/results/drive_units.h"
+#include "core/model/type_names.h"
 #include "render/energy_balance_figure.h"
 #include "render/free_body_painter.h"
 #include "render/mechanism_sketch.h"

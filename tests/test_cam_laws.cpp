@@ -2,6 +2,7 @@
 // factors of standard cam-design tables, and driver motions built on them.
 #include "core/solver/cam_law.h"
 #include "core/solver/driver_motion.h"
+#include "core/model/type_names.h"
 
 #include <gtest/gtest.h>
 

@@ -234,7 +234,13 @@ TEST_F(CliTest, NearSingularPositionsFailButStillWriteTheResults)
     const nlohmann::json j = nlohmann::json::parse(readFile(json));
     EXPECT_GT(j["summary"]["near_singular_steps"].get<int>(), 0);
     bool flagged = false;
-    for (const auto& w : j["warnings"]) flagged |= w["code"] == "near_singular";
+    for (const auto& w : j["warnings"])
+        if (w["code"] == "near_singular") {
+            flagged = true;
+            // s + l = p + q = 0.1 + 0.3: the change point explains the flag.
+            EXPECT_TRUE(contains(w["message"].get<std::string>(), "change-point four-bar (s + l = p + q = 0.4 m)"))
+                << w["message"];
+        }
     EXPECT_TRUE(flagged);
 }
 

@@ -130,7 +130,8 @@ TEST(Diagnostics, RedundantParallelogramNamesTheJoints)
 // once the driver asks for another start: here a non-Grashof four-bar
 // (s + l = 0.75 + 1.0 > p + q = 0.8 + 0.9) whose motion starts the crank at
 // 170°, beyond its toggle at cos⁻¹((a² + d² − (b + c)²)/(2ad)) ≈ 152°. The
-// error must name a joint where the links fail to meet.
+// error must name a joint where the links fail to meet, and say why by the
+// four-bar's Grashof class.
 TEST(Diagnostics, LinksThatCannotCloseNameAJoint)
 {
     test::FourBarSpec spec;
@@ -144,6 +145,8 @@ TEST(Diagnostics, LinksThatCannotCloseNameAJoint)
     const AnalysisError e = sweepError(mech);
     const std::string message = e.what();
     EXPECT_TRUE(contains(message, "does not assemble")) << message;
+    EXPECT_TRUE(contains(message, "non-Grashof four-bar (s + l = 1.75 m > p + q = 1.7 m): no link turns fully")) << message;
+    EXPECT_TRUE(contains(message, "the driver's motion must stay between them.")) << message;
     ASSERT_EQ(e.items().size(), 1u);
     const std::set<std::string> joints{"O2", "A", "B", "O4"};
     EXPECT_TRUE(joints.count(e.items()[0])) << "named \"" << e.items()[0] << "\", not a joint: " << message;

@@ -1,8 +1,10 @@
 // Four-bar linkage: rocker angle against Freudenstein's equation, transmission
 // angle against the law of cosines, and Grashof's classification, both on its
-// own and as the solver meets it (full cycle, or a stop at the toggle).
+// own and as the solver meets it (full cycle, or a stop at the toggle, which
+// the solver explains by the class).
 #include "core/solver/compiled_mechanism.h"
 #include "core/solver/cycle_sweep.h"
+#include "core/solver/grashof_note.h"
 #include "core/model/grashof.h"
 #include "tests/mechanism_builders.h"
 
@@ -223,6 +225,10 @@ TEST(FourBar, NonGrashofStopsAtToggle)
                                     [](const Warning& w) { return w.code == "out_of_reach"; });
     ASSERT_NE(reach, r.warnings.end());
     EXPECT_NE(reach->message.find("motor"), std::string::npos) << reach->message;
+    const std::string why = "It is a non-Grashof four-bar (s + l = 1.75 m > p + q = 1.7 m): no link turns fully, so "
+                            "the driven link \"crank\" only swings between two toggle positions: a crank driven at "
+                            "constant speed cannot complete the cycle.";
+    EXPECT_NE(reach->message.find(why), std::string::npos) << reach->message;
 
     const double lastCrank = spec.theta2 + r.steps.back().q[3 * kCrank + 2];
     EXPECT_LT(lastCrank, limit);
@@ -247,7 +253,49 @@ TEST(FourBar, NonGrashofStopsAtToggle)
                                        [](const Warning& w) { return w.code == "near_singular"; });
     ASSERT_NE(singular, r.warnings.end());
     EXPECT_GT(singular->step, 100);
+    EXPECT_NE(singular->message.find(why), std::string::npos) << singular->message;
     RecordProperty("last_reciprocal_condition", ::testing::PrintToString(r.steps.back().reciprocalCondition));
+}
+
+// Grashof's condition (F. Grashof, Theoretische Maschinenlehre, vol. 2, 1883):
+// with s, l the shortest and longest links and p, q the others, s + l < p + q
+// lets the shortest link turn fully against the others. Ground 0.4, input
+// 0.3, coupler 0.35, output 0.1: 0.1 + 0.4 < 0.3 + 0.35, and the shortest is
+// the output, so it is the crank and the driven input only rocks, within
+// |A − O4| ≤ b + c, i.e. cos θ2 ≥ (a² + d² − (b + c)²)/(2ad) (θ2 ≤ 78.6°). The
+// stop there is explained by the class; a driven crank has nothing to explain.
+TEST(Grashof, DiagnosisNamesTheClassAndTheFullyTurningLink)
+{
+    test::FourBarSpec spec;
+    spec.d = 0.4;
+    spec.a = 0.3;
+    spec.b = 0.35;
+    spec.c = 0.1;
+    spec.theta2 = 1.0;
+    ASSERT_EQ(classifyFourBar({spec.d, spec.a, spec.b, spec.c}).kind, GrashofClass::CrankRocker);
+    const CompiledMechanism m = compile(test::fourBar(spec));
+    const CycleResult r = sweepCycle(m, {.steps = 360});
+    EXPECT_FALSE(r.complete);
+    const auto reach = std::find_if(r.warnings.begin(), r.warnings.end(),
+                                    [](const Warning& w) { return w.code == "out_of_reach"; });
+    ASSERT_NE(reach, r.warnings.end());
+    EXPECT_NE(reach->message.find("It is a Grashof crank-rocker (s + l = 0.5 m < p + q = 0.65 m) whose fully turning "
+                                  "link is the output \"rocker\", so the driven link \"crank\" only swings between "
+                                  "two toggle positions: a crank driven at constant speed cannot complete the cycle."),
+              std::string::npos)
+        << reach->message;
+
+    spec.motion = Rise{CamLaw::Cycloidal, 1.0, 1.2, 0.0, 1.0};
+    EXPECT_NE(grashofNote(compile(test::fourBar(spec))).find("the driver's motion must stay between them."),
+              std::string::npos);
+
+    EXPECT_EQ(grashofNote(compile(test::fourBar(crankRocker()))), "");
+    test::FourBarSpec dragLink;
+    dragLink.d = 0.1;
+    dragLink.a = 0.3;
+    dragLink.b = 0.35;
+    dragLink.c = 0.4;
+    EXPECT_EQ(grashofNote(compile(test::fourBar(dragLink))), "");
 }
 
 }  // namespace

@@ -33,14 +33,14 @@ private:
     std::map<std::string, std::string> firstUse_;
 };
 
-double quantity(const JsonNode& node, const Quantity& q)
+double quantity(const JsonNode& node, const KeyWithUnit& key)
 {
-    return toSi(q.unit, node.at(q.key).number());
+    return toSi(key.unit, node.at(key.name).number());
 }
 
-double quantityOr(const JsonNode& node, const Quantity& q, double fallback)
+double quantityOr(const JsonNode& node, const KeyWithUnit& key, double fallback)
 {
-    return node.has(q.key) ? quantity(node, q) : fallback;
+    return node.has(key.name) ? quantity(node, key) : fallback;
 }
 
 std::vector<double> quantities(const JsonNode& values, FileUnit unit)
@@ -156,15 +156,15 @@ Joint readJoint(const JsonNode& node)
 
 // ---- drivers ----
 
-ConstantSpeed readConstantSpeed(const JsonNode& node, const DriverQuantities& q)
+ConstantSpeed readConstantSpeed(const JsonNode& node, const DriverKeys& keys)
 {
-    return {quantity(node, q.speed), quantityOr(node, q.accel, 0.0)};
+    return {quantity(node, keys.speed), quantityOr(node, keys.accel, 0.0)};
 }
 
-Rise readRise(const JsonNode& node, CamLaw law, const DriverQuantities& q)
+Rise readRise(const JsonNode& node, CamLaw law, const DriverKeys& keys)
 {
-    node.object({"law", q.from.key, q.to.key, "start_s", "end_s"});
-    Rise r{law, quantity(node, q.from), quantity(node, q.to), 0.0, std::nullopt};
+    node.object({"law", keys.from.name, keys.to.name, "start_s", "end_s"});
+    Rise r{law, quantity(node, keys.from), quantity(node, keys.to), 0.0, std::nullopt};
     if (const auto start = node.find("start_s")) r.start = start->number(Bound::NonNegative);
     if (const auto end = node.find("end_s")) {
         r.end = end->number();
@@ -173,34 +173,36 @@ Rise readRise(const JsonNode& node, CamLaw law, const DriverQuantities& q)
     return r;
 }
 
-MotionTable readMotionTable(const JsonNode& node, const DriverQuantities& q)
+MotionTable readMotionTable(const JsonNode& node, const DriverKeys& keys)
 {
-    node.object({"law", "time_s", q.position.key});
+    node.object({"law", "time_s", keys.position.name});
     MotionTable t;
     t.time = node.at("time_s").increasing();
-    t.position = pairedColumn(node, q.position.key, "time_s", t.time.size(), q.position.unit);
+    t.position = pairedColumn(node, keys.position.name, "time_s", t.time.size(), keys.position.unit);
     return t;
 }
 
-Motion readMotion(const JsonNode& node, const DriverQuantities& q)
+Motion readMotion(const JsonNode& node, const DriverKeys& keys)
 {
     const MotionLaw& law = node.at("law").choice(kMotionLaws);
     switch (law.kind) {
-    case LawKind::ConstantSpeed: node.object({"law", q.speed.key, q.accel.key}); return readConstantSpeed(node, q);
-    case LawKind::Rise: return readRise(node, law.cam, q);
+    case LawKind::ConstantSpeed:
+        node.object({"law", keys.speed.name, keys.accel.name});
+        return readConstantSpeed(node, keys);
+    case LawKind::Rise: return readRise(node, law.cam, keys);
     case LawKind::Table: break;
     }
-    return readMotionTable(node, q);
+    return readMotionTable(node, keys);
 }
 
 // Constant speed may be written straight into the driver instead of a motion.
-Motion readDriverMotion(const JsonNode& node, const DriverQuantities& q)
+Motion readDriverMotion(const JsonNode& node, const DriverKeys& keys)
 {
-    if (std::string(node.oneOf({q.speed.key, "motion"})) != "motion") return readConstantSpeed(node, q);
-    if (node.has(q.accel.key))
-        throw ModelError(node.keyPath(q.accel.key),
-                         std::string("only goes with ") + q.speed.key + "; with a motion, put it there");
-    return readMotion(node.at("motion"), q);
+    if (std::string(node.oneOf({keys.speed.name, "motion"})) != "motion") return readConstantSpeed(node, keys);
+    if (node.has(keys.accel.name))
+        throw ModelError(node.keyPath(keys.accel.name),
+                         std::string("only goes with ") + keys.speed.name + "; with a motion, put it there");
+    return readMotion(node.at("motion"), keys);
 }
 
 // A linear driver acts at a slider joint or between two body points.
@@ -208,13 +210,13 @@ void readLinearPlace(const JsonNode& node, Driver& d)
 {
     if (std::string(node.oneOf({"joint", "between"})) == "joint") {
         d.joint = node.at("joint").name();
-        d.offset = quantityOr(node, kLinearQuantities.offset, 0.0);
+        d.offset = quantityOr(node, kLinearKeys.offset, 0.0);
         return;
     }
     const std::vector<JsonNode> ends = node.at("between").elements(2);
     d.ends[0] = readPointRef(ends[0]);
     d.ends[1] = readPointRef(ends[1]);
-    if (const auto position = node.find(kLinearQuantities.offset.key))
+    if (const auto position = node.find(kLinearKeys.offset.name))
         position->warn("applies only to a linear driver at a slider joint (ignored)");
 }
 
@@ -222,19 +224,19 @@ Driver readDriver(const JsonNode& node)
 {
     Driver d;
     d.type = node.at("type").choice(kDriverTypes).value;
-    const DriverQuantities& q = quantitiesOf(d.type);
+    const DriverKeys& keys = driverKeysOf(d.type);
     const bool linear = d.type == DriverType::Linear;
     // "between" is known to linear drivers only; "joint" stands in for it otherwise.
-    node.object(
-        {"name", "type", "joint", linear ? "between" : "joint", "motion", q.offset.key, q.speed.key, q.accel.key});
+    node.object({"name", "type", "joint", linear ? "between" : "joint", "motion", keys.offset.name, keys.speed.name,
+                 keys.accel.name});
     d.name = node.at("name").name();
     if (linear) {
         readLinearPlace(node, d);
     } else {
         d.joint = node.at("joint").name();
-        d.offset = quantityOr(node, q.offset, 0.0);
+        d.offset = quantityOr(node, keys.offset, 0.0);
     }
-    d.motion = readDriverMotion(node, q);
+    d.motion = readDriverMotion(node, keys);
     return d;
 }
 
@@ -245,7 +247,7 @@ LoadProfile readProfile(const JsonNode& node, const std::vector<Driver>& drivers
 {
     node.object({"driver", "time_s", "at_deg", "at", "factor"});
     LoadProfile p;
-    const char* key = node.oneOf({"time_s", kRotaryQuantities.profileAt.key, kLinearQuantities.profileAt.key});
+    const char* key = node.oneOf({"time_s", kRotaryKeys.profileAt.name, kLinearKeys.profileAt.name});
     FileUnit unit = FileUnit::Si;
     if (std::string(key) == "time_s") {
         if (node.has("driver")) throw ModelError(node.keyPath("driver"), "a profile over time_s names no driver");
@@ -254,10 +256,10 @@ LoadProfile readProfile(const JsonNode& node, const std::vector<Driver>& drivers
         p.driver = driver.name();
         const Driver* d = findDriver(drivers, p.driver);
         if (!d) throw driver.error("no driver named \"" + p.driver + "\"");
-        const Quantity& at = quantitiesOf(d->type).profileAt;
-        if (at.key != std::string(key))
+        const KeyWithUnit& at = driverKeysOf(d->type).profileAt;
+        if (at.name != std::string(key))
             throw ModelError(node.keyPath(key), "driver \"" + p.driver + "\" is " + nameOf(kDriverTypes, d->type) +
-                                                    ": give its positions as \"" + at.key + "\"");
+                                                    ": give its positions as \"" + at.name + "\"");
         unit = at.unit;
     }
     p.at = increasingQuantities(node.at(key), unit);

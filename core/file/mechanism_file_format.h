@@ -1,73 +1,42 @@
-// Names and units shared by the mechanism file reader and writer.
+// The version, keys and units shared by the mechanism file reader and writer;
+// the words for joint and driver types and motion laws are the model's
+// (core/model/type_names.h).
 #pragma once
 
 #include "core/file/file_units.h"
-#include "core/model/mechanism.h"
+#include "core/model/type_names.h"
 
 namespace clevis {
 
 inline constexpr int kFileVersion = 1;
 
-template <class E>
-struct Named {
+// A file key and the unit its value is written in. Rotary drivers write
+// their coordinate in degrees and rpm, linear ones in metres; the keys carry
+// the unit.
+struct KeyWithUnit {
     const char* name;
-    E value;
-};
-
-template <class E, std::size_t N>
-const char* nameOf(const Named<E> (&names)[N], E value)
-{
-    for (const auto& n : names)
-        if (n.value == value) return n.name;
-    return "";
-}
-
-inline constexpr Named<JointType> kJointTypes[] = {
-    {"pin", JointType::Pin}, {"slider", JointType::Slider}, {"pin_in_slot", JointType::PinInSlot}};
-
-inline constexpr Named<DriverType> kDriverTypes[] = {{"rotary", DriverType::Rotary}, {"linear", DriverType::Linear}};
-
-// A motion's "law" selects the Motion alternative and, for a rise, the CamLaw.
-enum class LawKind { ConstantSpeed, Rise, Table };
-struct MotionLaw {
-    const char* name;
-    LawKind kind;
-    CamLaw cam;  // for rises only
-};
-inline constexpr MotionLaw kMotionLaws[] = {
-    {"constant_speed", LawKind::ConstantSpeed, CamLaw::Cycloidal},
-    {"cycloidal", LawKind::Rise, CamLaw::Cycloidal},
-    {"polynomial_345", LawKind::Rise, CamLaw::Polynomial345},
-    {"modified_trapezoid", LawKind::Rise, CamLaw::ModifiedTrapezoid},
-    {"table", LawKind::Table, CamLaw::Cycloidal},
-};
-
-// Rotary drivers write their coordinate in degrees and rpm, linear ones in
-// metres; the keys carry the unit.
-struct Quantity {
-    const char* key;
     FileUnit unit;
 };
-struct DriverQuantities {
-    Quantity offset;        // position at the drawn pose
-    Quantity speed, accel;  // constant speed
-    Quantity from, to;      // rise
-    Quantity position;      // table
-    Quantity profileAt;     // load profile over this driver's position
+struct DriverKeys {
+    KeyWithUnit offset;        // position at the drawn pose
+    KeyWithUnit speed, accel;  // constant speed
+    KeyWithUnit from, to;      // rise
+    KeyWithUnit position;      // table
+    KeyWithUnit profileAt;     // load profile over this driver's position
 };
-inline constexpr DriverQuantities kRotaryQuantities{
+inline constexpr DriverKeys kRotaryKeys{
     {"angle_deg", FileUnit::Degree}, {"speed_rpm", FileUnit::Rpm},     {"accel_deg_s2", FileUnit::Degree},
     {"from_deg", FileUnit::Degree},  {"to_deg", FileUnit::Degree},     {"position_deg", FileUnit::Degree},
     {"at_deg", FileUnit::Degree}};
-inline constexpr DriverQuantities kLinearQuantities{
+inline constexpr DriverKeys kLinearKeys{
     {"position", FileUnit::Si}, {"speed", FileUnit::Si},    {"accel", FileUnit::Si}, {"from", FileUnit::Si},
     {"to", FileUnit::Si},       {"position", FileUnit::Si}, {"at", FileUnit::Si}};
 
-inline constexpr Quantity kTorsionFreeAngle{"free_angle_deg", FileUnit::Degree};
+inline constexpr KeyWithUnit kTorsionFreeAngle{"free_angle_deg", FileUnit::Degree};
 
-inline const DriverQuantities& quantitiesOf(DriverType type)
+inline const DriverKeys& driverKeysOf(DriverType type)
 {
-    return type == DriverType::Rotary ? kRotaryQuantities : kLinearQuantities;
+    return type == DriverType::Rotary ? kRotaryKeys : kLinearKeys;
 }
 
 inline const Driver* findDriver(const std::vector<Driver>& drivers, const std::string& name)

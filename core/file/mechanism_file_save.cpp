@@ -24,9 +24,9 @@ Json values(const std::vector<double>& si, FileUnit unit)
     return out;
 }
 
-void put(Json& out, const Quantity& q, double si)
+void put(Json& out, const KeyWithUnit& key, double si)
 {
-    out[q.key] = fromSi(q.unit, si);
+    out[key.name] = fromSi(key.unit, si);
 }
 
 Json pointRef(const BodyPointRef& r)
@@ -67,53 +67,46 @@ Json bodyJson(const Body& b)
 Json jointJson(const Joint& j)
 {
     Json out{{"name", j.name},
-             {"type", nameOf(kJointTypes, j.type)},
+             {"type", jointTypeName(j.type)},
              {"bodies", Json::array({j.bodies[0], j.bodies[1]})},
              {"at", point(j.at)}};
     if (j.type != JointType::Pin) out["axis_deg"] = j.axisDeg;
     return out;
 }
 
-const char* riseLawName(CamLaw cam)
-{
-    for (const MotionLaw& law : kMotionLaws)
-        if (law.kind == LawKind::Rise && law.cam == cam) return law.name;
-    return "";
-}
-
-Json motionJson(const Motion& motion, const DriverQuantities& q)
+Json motionJson(const Motion& motion, const DriverKeys& keys)
 {
     Json out;
     if (const auto* c = std::get_if<ConstantSpeed>(&motion)) {
         out["law"] = "constant_speed";
-        put(out, q.speed, c->speed);
-        put(out, q.accel, c->accel);
+        put(out, keys.speed, c->speed);
+        put(out, keys.accel, c->accel);
     } else if (const auto* r = std::get_if<Rise>(&motion)) {
-        out["law"] = riseLawName(r->law);
-        put(out, q.from, r->from);
-        put(out, q.to, r->to);
+        out["law"] = camLawName(r->law);
+        put(out, keys.from, r->from);
+        put(out, keys.to, r->to);
         out["start_s"] = r->start;
         if (r->end) out["end_s"] = *r->end;
     } else {
         const auto& t = std::get<MotionTable>(motion);
         out["law"] = "table";
         out["time_s"] = t.time;
-        out[q.position.key] = values(t.position, q.position.unit);
+        out[keys.position.name] = values(t.position, keys.position.unit);
     }
     return out;
 }
 
 Json driverJson(const Driver& d)
 {
-    const DriverQuantities& q = quantitiesOf(d.type);
+    const DriverKeys& keys = driverKeysOf(d.type);
     Json out{{"name", d.name}, {"type", nameOf(kDriverTypes, d.type)}};
     if (d.ends[0] && d.ends[1]) {
         out["between"] = Json::array({pointRef(*d.ends[0]), pointRef(*d.ends[1])});
     } else {
         out["joint"] = d.joint;
-        put(out, q.offset, d.offset);
+        put(out, keys.offset, d.offset);
     }
-    out["motion"] = motionJson(d.motion, q);
+    out["motion"] = motionJson(d.motion, keys);
     return out;
 }
 
@@ -126,9 +119,9 @@ Json profileJson(const LoadProfile& p, const std::vector<Driver>& drivers)
         out["time_s"] = p.at;
     } else {
         const Driver* d = findDriver(drivers, p.driver);
-        const Quantity& at = quantitiesOf(d ? d->type : DriverType::Linear).profileAt;
+        const KeyWithUnit& at = driverKeysOf(d ? d->type : DriverType::Linear).profileAt;
         out["driver"] = p.driver;
-        out[at.key] = values(p.at, at.unit);
+        out[at.name] = values(p.at, at.unit);
     }
     out["factor"] = p.factor;
     return out;

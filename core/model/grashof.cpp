@@ -19,6 +19,11 @@ const char* grashofClassName(GrashofClass kind)
     return "?";
 }
 
+bool turnsFullyAgainstGround(const GrashofResult& g, FourBarLink sideLink)
+{
+    return g.kind != GrashofClass::TripleRocker && (g.shortest == FourBarLink::Ground || g.shortest == sideLink);
+}
+
 const char* fourBarLinkName(FourBarLink link)
 {
     switch (link) {

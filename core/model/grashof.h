@@ -31,6 +31,11 @@ struct GrashofResult {
 // at least as long as the other three together (the loop cannot close).
 GrashofResult classifyFourBar(const std::array<double, 4>& lengths, double relativeTolerance = 1e-9);
 
+// Whether the input or output link turns a full revolution against ground:
+// only when the four-bar is Grashof (or a change point) and the shortest link
+// is ground or that link itself.
+bool turnsFullyAgainstGround(const GrashofResult& g, FourBarLink sideLink);
+
 const char* grashofClassName(GrashofClass kind);
 const char* fourBarLinkName(FourBarLink link);
 

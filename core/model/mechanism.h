@@ -180,7 +180,4 @@ struct Mechanism {
     bool operator==(const Mechanism&) const = default;
 };
 
-const char* jointTypeName(JointType type);
-const char* camLawName(CamLaw law);
-
 }  // namespace clevis

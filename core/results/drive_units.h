@@ -1,5 +1,6 @@
-// How a driver's position is shown to people: degrees for rotary drivers,
-// metres for linear ones (the core keeps radians and metres).
+// How a driver's position and effort are shown to people: degrees and N·m
+// for rotary drivers, metres and N for linear ones (the core keeps radians
+// and metres).
 #pragma once
 
 #include "core/solver/compiled_mechanism.h"

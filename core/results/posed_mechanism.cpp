@@ -9,7 +9,7 @@ namespace {
 
 class Mover {
 public:
-    Mover(const CompiledMechanism& m, const StepResult& step) : m_(m), step_(step)
+    Mover(const CompiledMechanism& m, const StepResult& step) : mechanism_(m), step_(step)
     {
         for (std::size_t b = 0; b < m.bodies.size(); ++b) index_[m.bodies[b].name] = int(b);
     }
@@ -19,7 +19,7 @@ public:
     {
         const int b = find(body);
         if (b < 0) return drawn;
-        return bodyOrigin(step_.q, b) + rotation(angle(b)) * (drawn - m_.bodies[b].mass.cg);
+        return bodyOrigin(step_.q, b) + rotation(angle(b)) * (drawn - mechanism_.bodies[b].mass.cg);
     }
     double turnDeg(const std::string& body) const { return radToDeg(angle(find(body))); }
     bool moves(const std::string& body) const { return find(body) >= 0; }
@@ -32,7 +32,7 @@ private:
     }
     double angle(int b) const { return b < 0 ? 0.0 : bodyAngle(step_.q, b); }
 
-    const CompiledMechanism& m_;
+    const CompiledMechanism& mechanism_;
     const StepResult& step_;
     std::map<std::string, int> index_;
 };

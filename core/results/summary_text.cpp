@@ -1,5 +1,6 @@
 #include "core/results/summary_text.h"
 
+#include "core/model/type_names.h"
 #include "core/results/drive_units.h"
 #include "core/results/number_text.h"
 #include "core/results/text_table.h"

@@ -1,9 +1,9 @@
 #include "core/solver/compiled_mechanism.h"
 
 #include "core/model/mass_properties.h"
-#include "core/file/mechanism_file_format.h"
 #include "core/model/model_error.h"
 #include "core/model/model_limits.h"
+#include "core/model/type_names.h"
 
 #include <Eigen/Geometry>
 #include <algorithm>
@@ -11,15 +11,6 @@
 #include <map>
 
 namespace clevis {
-
-const char* jointTypeName(JointType type) { return nameOf(kJointTypes, type); }
-
-const char* camLawName(CamLaw law)
-{
-    for (const auto& l : kMotionLaws)
-        if (l.kind == LawKind::Rise && l.cam == law) return l.name;
-    return "";
-}
 
 namespace {
 

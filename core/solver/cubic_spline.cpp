@@ -5,10 +5,10 @@
 namespace clevis {
 
 // Second derivatives from the tridiagonal system
-// h₀m₀' ... : h_{i-1} m_{i-1} + 2(h_{i-1}+h_i) m_i + h_i m_{i+1} = 6(Δ_i − Δ_{i-1}),
+// h₀m₀' ... : h_{i-1} ddy_{i-1} + 2(h_{i-1}+h_i) m_i + h_i ddy_{i+1} = 6(Δ_i − Δ_{i-1}),
 // with m₀ = m_n = 0 (natural ends), solved by the Thomas algorithm.
 CubicSpline::CubicSpline(std::vector<double> x, std::vector<double> y)
-    : x_(std::move(x)), y_(std::move(y)), m_(x_.size(), 0.0)
+    : x_(std::move(x)), y_(std::move(y)), ddy_(x_.size(), 0.0)
 {
     const std::size_t n = x_.size();
     if (n < 3) return;
@@ -20,7 +20,7 @@ CubicSpline::CubicSpline(std::vector<double> x, std::vector<double> y)
         c[i] = h1 / diag;
         d[i] = (rhs - h0 * d[i - 1]) / diag;
     }
-    for (std::size_t i = n - 2; i >= 1; --i) m_[i] = d[i] - c[i] * m_[i + 1];
+    for (std::size_t i = n - 2; i >= 1; --i) ddy_[i] = d[i] - c[i] * ddy_[i + 1];
 }
 
 CubicSpline::Value CubicSpline::operator()(double x) const
@@ -31,9 +31,10 @@ CubicSpline::Value CubicSpline::operator()(double x) const
     const std::size_t i = std::upper_bound(x_.begin(), x_.end(), x) - x_.begin() - 1;
     const double h = x_[i + 1] - x_[i];
     const double a = (x_[i + 1] - x) / h, b = (x - x_[i]) / h;
-    const double y = a * y_[i] + b * y_[i + 1] + ((a * a * a - a) * m_[i] + (b * b * b - b) * m_[i + 1]) * h * h / 6.0;
-    const double dy = (y_[i + 1] - y_[i]) / h + ((1 - 3 * a * a) * m_[i] + (3 * b * b - 1) * m_[i + 1]) * h / 6.0;
-    const double ddy = a * m_[i] + b * m_[i + 1];
+    const double y =
+        a * y_[i] + b * y_[i + 1] + ((a * a * a - a) * ddy_[i] + (b * b * b - b) * ddy_[i + 1]) * h * h / 6.0;
+    const double dy = (y_[i + 1] - y_[i]) / h + ((1 - 3 * a * a) * ddy_[i] + (3 * b * b - 1) * ddy_[i + 1]) * h / 6.0;
+    const double ddy = a * ddy_[i] + b * ddy_[i + 1];
     return {y, dy, ddy};
 }
 

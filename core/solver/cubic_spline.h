@@ -16,7 +16,7 @@ public:
     Value operator()(double x) const;
 
 private:
-    std::vector<double> x_, y_, m_;  // m_: second derivatives at the knots
+    std::vector<double> x_, y_, ddy_;  // ddy_: second derivatives at the knots
 };
 
 }  // namespace clevis

@@ -2,6 +2,7 @@
 
 #include "core/solver/analysis_error.h"
 #include "core/results/drive_units.h"
+#include "core/solver/grashof_note.h"
 #include "core/solver/mobility_check.h"
 #include "core/model/model_limits.h"
 #include "core/solver/step_solver.h"
@@ -39,7 +40,10 @@ bool finiteStep(const StepResult& s)
 
 class Sweeper {
 public:
-    Sweeper(const CompiledMechanism& m, const SweepOptions& o) : m_(m), options_(o), solver_(m) {}
+    Sweeper(const CompiledMechanism& m, const SweepOptions& o)
+        : mechanism_(m), options_(o), solver_(m), grashofNote_(grashofNote(m))
+    {
+    }
     CycleResult run();
 
 private:
@@ -50,19 +54,26 @@ private:
     void warnNearSingular();
     void warnUnreachable(double tFail);
     std::string drivePositions(const StepResult& s) const;
+    std::string withGrashofNote(const std::string& message) const;
 
-    const CompiledMechanism& m_;
+    const CompiledMechanism& mechanism_;
     const SweepOptions& options_;
     StepSolver solver_;
     CycleResult result_;
     bool branchWarned_ = false;
+    const std::string grashofNote_;  // why a four-bar's drive cannot turn fully; empty otherwise
 };
+
+std::string Sweeper::withGrashofNote(const std::string& message) const
+{
+    return grashofNote_.empty() ? message : message + " " + grashofNote_;
+}
 
 std::string Sweeper::drivePositions(const StepResult& s) const
 {
     std::string text;
-    for (std::size_t d = 0; d < m_.drivers.size(); ++d)
-        text += (d ? ", " : "") + formatDrivePosition(m_.drivers[d], s.drivePosition[d]);
+    for (std::size_t d = 0; d < mechanism_.drivers.size(); ++d)
+        text += (d ? ", " : "") + formatDrivePosition(mechanism_.drivers[d], s.drivePosition[d]);
     return text;
 }
 
@@ -79,11 +90,11 @@ void Sweeper::assembleDrawnPose(Eigen::VectorXd& q)
     std::size_t k = constraints.size() - 1;
     while (k > 0 && solver_.system().firstRow(k) > row) --k;
     const Constraint& c = *constraints[k];
-    const std::string name =
-        c.owner() == ConstraintOwner::Joint ? m_.joints[c.ownerIndex()].name : m_.drivers[c.ownerIndex()].name;
-    throw AnalysisError("The mechanism does not assemble at the start of the cycle: the links cannot all be joined "
-                        "near the drawn pose (largest gap at \"" + name +
-                            "\"). Check the link lengths and where the drivers start.",
+    const std::string name = c.owner() == ConstraintOwner::Joint ? mechanism_.joints[c.ownerIndex()].name
+                                                                  : mechanism_.drivers[c.ownerIndex()].name;
+    throw AnalysisError(withGrashofNote("The mechanism does not assemble at the start of the cycle: the links cannot "
+                                        "all be joined near the drawn pose (largest gap at \"" + name +
+                                        "\"). Check the link lengths and where the drivers start."),
                         {name});
 }
 
@@ -162,7 +173,7 @@ void Sweeper::warnNearSingular()
         s << "Near a singular position (dead centre or toggle) from " << drivePositions(steps[i]) << " to "
           << drivePositions(steps[last]) << " (steps " << i << "–" << last
           << "): the linkage locks up or loses control there and the reactions are unreliable.";
-        result_.warnings.push_back({"near_singular", s.str(), int(i)});
+        result_.warnings.push_back({"near_singular", withGrashofNote(s.str()), int(i)});
         i = last;
     }
 }
@@ -172,24 +183,24 @@ void Sweeper::warnUnreachable(double tFail)
     const StepResult& last = result_.steps.back();
     std::ostringstream s;
     s << "The cycle cannot be completed: the mechanism can be assembled only from " << drivePositions(result_.steps.front())
-      << " to " << drivePositions(last) << " (t = " << last.t << " s of " << m_.duration
+      << " to " << drivePositions(last) << " (t = " << last.t << " s of " << mechanism_.duration
       << " s); beyond, near t = " << tFail << " s, the links cannot be joined. Results stop there.";
-    result_.warnings.push_back({"out_of_reach", s.str(), int(result_.steps.size())});
+    result_.warnings.push_back({"out_of_reach", withGrashofNote(s.str()), int(result_.steps.size())});
 }
 
 CycleResult Sweeper::run()
 {
-    if (m_.bodies.empty())
+    if (mechanism_.bodies.empty())
         throw AnalysisError("There is nothing to analyse: the mechanism has no moving bodies. Add a body and join it "
                             "to ground.", {});
-    const int steps = options_.steps > 0 ? options_.steps : m_.steps;
-    const ModelSize size{m_.bodies.size(), m_.joints.size(), m_.drivers.size(), 0, steps};
+    const int steps = options_.steps > 0 ? options_.steps : mechanism_.steps;
+    const ModelSize size{mechanism_.bodies.size(), mechanism_.joints.size(), mechanism_.drivers.size(), 0, steps};
     if (const auto exceeded = exceededLimit(size)) throw AnalysisError("Cannot analyse: " + exceeded->message + ".", {});
     result_.plannedSteps = steps;
-    result_.duration = m_.duration;
+    result_.duration = mechanism_.duration;
     result_.transmissionPins = solver_.transmissionPins();
     Eigen::VectorXd q = solver_.drawnPose();
-    const MobilityReport mobility = solver_.regularAt(q, 0.0) ? MobilityReport{} : checkMobility(m_, q);
+    const MobilityReport mobility = solver_.regularAt(q, 0.0) ? MobilityReport{} : checkMobility(mechanism_, q);
     if (!mobility.ok()) {
         std::vector<std::string> items = mobility.freeBodies;
         for (const auto& g : mobility.redundantGroups) items.insert(items.end(), g.begin(), g.end());
@@ -203,7 +214,7 @@ CycleResult Sweeper::run()
         throw AnalysisError("The mechanism is locked at the start of the cycle: its constraint equations are singular there.", {});
     result_.complete = true;
     for (int k = 1; k <= steps; ++k) {
-        const double t = m_.duration * double(k) / double(steps);
+        const double t = mechanism_.duration * double(k) / double(steps);
         StepResult next;
         if (!advance(result_.steps.back(), t, next, 0)) {
             result_.complete = false;

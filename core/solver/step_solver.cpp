@@ -38,7 +38,7 @@ std::array<ActionPoint, 2> actionPoints(const CompiledMechanism& m, const Constr
 }  // namespace
 
 StepSolver::StepSolver(const CompiledMechanism& mechanism)
-    : m_(mechanism),
+    : mechanism_(mechanism),
       system_(mechanism),
       factor_(system_.rowScale(), system_.columnScale()),
       transmission_(findTransmissionPins(mechanism)),
@@ -48,7 +48,7 @@ StepSolver::StepSolver(const CompiledMechanism& mechanism)
     const auto& constraints = system_.constraints();
     ownerOfRow_.resize(system_.rows());
     for (std::size_t k = 0; k < constraints.size(); ++k) {
-        actionPoints_.push_back(actionPoints(m_, *constraints[k]));
+        actionPoints_.push_back(actionPoints(mechanism_, *constraints[k]));
         for (int row = 0; row < constraints[k]->rows(); ++row) ownerOfRow_[system_.firstRow(k) + row] = int(k);
     }
 }
@@ -56,7 +56,7 @@ StepSolver::StepSolver(const CompiledMechanism& mechanism)
 VectorXd StepSolver::drawnPose() const
 {
     VectorXd q(system_.coordinates());
-    for (std::size_t b = 0; b < m_.bodies.size(); ++b) q.segment<3>(3 * b) << m_.bodies[b].mass.cg, 0.0;
+    for (std::size_t b = 0; b < mechanism_.bodies.size(); ++b) q.segment<3>(3 * b) << mechanism_.bodies[b].mass.cg, 0.0;
     return q;
 }
 
@@ -112,7 +112,7 @@ bool StepSolver::newton(double t, VectorXd& q)
     for (int iteration = 0; iteration < kMaxNewtonIterations; ++iteration) {
         evaluate(Pose(q, rotations_), t);
         const double r = phi_.cwiseProduct(system_.rowScale()).cwiseAbs().maxCoeff();
-        if (!std::isfinite(r) || r > 1e3 * m_.lengthScale) return false;
+        if (!std::isfinite(r) || r > 1e3 * mechanism_.lengthScale) return false;
         const bool converged = r <= tolerance_;
         if (converged && iteration > 0 && (!chord || r <= kWellInside * tolerance_)) return true;
         if (!keepFactor_ || (!converged && r > kChordContraction * previous)) {
@@ -155,10 +155,10 @@ StepResult StepSolver::analyse(double t, const VectorXd& q)
     system_.rates(pose, r.qd, t, nu_, gamma_);
     r.qdd = factor_.solve(gamma_);
 
-    const std::vector<AppliedLoad> loads = appliedLoads(m_, pose, r.qd, t, r.drivePosition);
-    VectorXd rhs = generalizedForces(m_, q, loads);
-    for (std::size_t b = 0; b < m_.bodies.size(); ++b) {
-        const auto& mp = m_.bodies[b].mass;
+    const std::vector<AppliedLoad> loads = appliedLoads(mechanism_, pose, r.qd, t, r.drivePosition);
+    VectorXd rhs = generalizedForces(mechanism_, q, loads);
+    for (std::size_t b = 0; b < mechanism_.bodies.size(); ++b) {
+        const auto& mp = mechanism_.bodies[b].mass;
         rhs.segment<2>(3 * b) -= mp.mass * r.qdd.segment<2>(3 * b);
         rhs[3 * b + 2] -= mp.inertia * r.qdd[3 * b + 2];
     }
@@ -168,13 +168,13 @@ StepResult StepSolver::analyse(double t, const VectorXd& q)
     fillReactionsAndEfforts(r);
     fillGroundLoad(loads, r);
 
-    r.kinetic = kineticEnergy(m_, r.qd);
-    const LoadEnergies e = loadEnergies(m_, pose, r.qd, t, r.drivePosition);
+    r.kinetic = kineticEnergy(mechanism_, r.qd);
+    const LoadEnergies e = loadEnergies(mechanism_, pose, r.qd, t, r.drivePosition);
     r.gravityPotential = e.gravityPotential;
     r.springPotential = e.springPotential;
     r.damperDissipation = e.damperDissipation;
     r.appliedPower = e.appliedPower;
-    for (const auto& pin : transmission_) r.transmissionDeg.push_back(transmissionAngleDeg(m_, pin, pose));
+    for (const auto& pin : transmission_) r.transmissionDeg.push_back(transmissionAngleDeg(mechanism_, pin, pose));
     return r;
 }
 
@@ -211,9 +211,9 @@ void StepSolver::fillActions(const Pose& q, StepResult& r) const
 void StepSolver::fillReactionsAndEfforts(StepResult& r) const
 {
     const auto& constraints = system_.constraints();
-    r.joints.reserve(m_.joints.size());
-    r.effort.reserve(m_.drivers.size());
-    r.power.reserve(m_.drivers.size());
+    r.joints.reserve(mechanism_.joints.size());
+    r.effort.reserve(mechanism_.drivers.size());
+    r.power.reserve(mechanism_.drivers.size());
     for (std::size_t k = 0; k < constraints.size(); ++k) {
         const Constraint& c = *constraints[k];
         if (c.owner() == ConstraintOwner::Joint) {

@@ -59,7 +59,7 @@ private:
     void fillReactionsAndEfforts(StepResult& r) const;
     void fillGroundLoad(const std::vector<AppliedLoad>& loads, StepResult& r) const;
 
-    const CompiledMechanism& m_;
+    const CompiledMechanism& mechanism_;
     ConstraintSystem system_;
     JacobianFactor factor_;
     std::vector<Eigen::Triplet<double>> entries_;

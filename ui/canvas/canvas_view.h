@@ -57,8 +57,8 @@ private:
     ViewTransform view_;
     std::unique_ptr<Tool> tool_;
     std::optional<QPointF> panFrom_;
-    bool fitPending_ = true;
-    bool told_ = false;  // fit once the widget has its real size
+    bool fitPending_ = true;  // fit once the widget has its real size
+    bool told_ = false;       // the tool left a note during this click: keep it instead of the hint
 };
 
 }  // namespace clevis::ui

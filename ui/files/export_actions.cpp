@@ -7,7 +7,6 @@
 #include "ui/document/mechanism_document.h"
 #include "ui/results/plot_stack.h"
 #include "core/results/results_csv.h"
-#include "ui/results/results_units.h"
 #include "render/review_report.h"
 
 #include <QDir>

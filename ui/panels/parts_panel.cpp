@@ -2,6 +2,7 @@
 
 #include "ui/analysis/analysis_state.h"
 #include "ui/document/mechanism_document.h"
+#include "core/model/type_names.h"
 #include "render/palette.h"
 #include "ui/document/sketch_geometry.h"
 

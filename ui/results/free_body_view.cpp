@@ -5,7 +5,6 @@
 #include "render/free_body_painter.h"
 #include "ui/document/mechanism_document.h"
 #include "render/palette.h"
-#include "ui/results/results_units.h"
 
 #include <QCheckBox>
 #include <QLabel>

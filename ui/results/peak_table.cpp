@@ -3,7 +3,6 @@
 #include "ui/analysis/analysis_state.h"
 #include "render/cycle_axis.h"
 #include "ui/shell/display_units.h"
-#include "ui/results/results_units.h"
 
 #include <QHeaderView>
 

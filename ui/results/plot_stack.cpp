@@ -3,7 +3,6 @@
 #include "ui/analysis/analysis_state.h"
 #include "ui/shell/display_units.h"
 #include "render/palette.h"
-#include "ui/results/results_units.h"
 
 #include <QCheckBox>
 #include <QEvent>

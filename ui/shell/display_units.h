@@ -1,7 +1,9 @@
 // The units numbers are shown and typed in, chosen by the user and
-// remembered between sessions. The file and the core stay SI; conversion
-// happens only here, at the edge.
+// remembered between sessions, and handed to the renderers as plain values.
+// The file and the core stay SI; conversion happens only here, at the edge.
 #pragma once
+
+#include "render/render_units.h"
 
 #include <QObject>
 #include <QString>
@@ -65,5 +67,8 @@ private:
 
 // `value` with four significant figures, in fixed notation, and `unit`.
 QString formatWithUnit(double value, const QString& unit);
+
+// The user's display units as the plain values the renderers take.
+RenderUnits renderUnits(const DisplayUnits& units);
 
 }  // namespace clevis::ui

@@ -35,57 +35,57 @@ void drawDashpot(QPainter& p, const QPointF& a, const QPointF& b)
 
 class LoadPainter {
 public:
-    LoadPainter(PaintContext& c, int index) : c_(c), p_(c.painter), index_(index) {}
+    LoadPainter(PaintContext& c, int index) : context_(c), painter_(c.painter), index_(index) {}
 
     void operator()(const ForceLoad& f)
     {
-        const QPointF tip = c_.view.toScreen(f.point.at);
+        const QPointF tip = context_.view.toScreen(f.point.at);
         const QPointF tail = tip - screenDir(f.force) * style::kArrowLength;
-        halo(f.name, [&] { p_.drawLine(tail, tip); });
-        drawArrow(p_, tail, tip, sketchArrow(QPen(palette::load(), 2.2)));
+        halo(f.name, [&] { painter_.drawLine(tail, tip); });
+        drawArrow(painter_, tail, tip, sketchArrow(QPen(palette::load(), 2.2)));
         label(tail, QString::fromStdString(f.name) + "  " + DisplayUnits::instance().formatForce(f.force.norm()));
     }
     void operator()(const TorqueLoad& t)
     {
-        const QPointF at = c_.view.toScreen(loadAnchor(c_.mechanism, t));
+        const QPointF at = context_.view.toScreen(loadAnchor(context_.mechanism, t));
         const double r = style::kMotorRadius * 1.5;
-        halo(t.name, [&] { p_.drawEllipse(at, r, r); });
+        halo(t.name, [&] { painter_.drawEllipse(at, r, r); });
         const ArrowStyle arrow = sketchArrow(QPen(palette::load(), 2.2));
-        drawArcArrow(p_, at, r, t.torque >= 0 ? -60 : 240, t.torque >= 0 ? 200 : -200, arrow);
+        drawArcArrow(painter_, at, r, t.torque >= 0 ? -60 : 240, t.torque >= 0 ? 200 : -200, arrow);
         label(at + QPointF(r, -r), QString::fromStdString(t.name) + "  " + DisplayUnits::instance().formatTorque(t.torque));
     }
     void operator()(const SpringLoad& s)
     {
-        const QPointF a = c_.view.toScreen(s.a.at), b = c_.view.toScreen(s.b.at);
-        halo(s.name, [&] { p_.drawLine(a, b); });
-        p_.setPen(QPen(palette::spring(), 1.8, Qt::SolidLine, Qt::RoundCap, Qt::RoundJoin));
-        drawZigZag(p_, a, b);
+        const QPointF a = context_.view.toScreen(s.a.at), b = context_.view.toScreen(s.b.at);
+        halo(s.name, [&] { painter_.drawLine(a, b); });
+        painter_.setPen(QPen(palette::spring(), 1.8, Qt::SolidLine, Qt::RoundCap, Qt::RoundJoin));
+        drawZigZag(painter_, a, b);
         endDots(a, b);
         label((a + b) / 2 + QPointF(8, -8), QString::fromStdString(s.name) + "  " + DisplayUnits::instance().formatStiffness(s.stiffness));
     }
     void operator()(const DamperLoad& d)
     {
-        const QPointF a = c_.view.toScreen(d.a.at), b = c_.view.toScreen(d.b.at);
-        halo(d.name, [&] { p_.drawLine(a, b); });
-        p_.setPen(QPen(palette::spring(), 1.8));
-        p_.setBrush(Qt::NoBrush);
-        drawDashpot(p_, a, b);
+        const QPointF a = context_.view.toScreen(d.a.at), b = context_.view.toScreen(d.b.at);
+        halo(d.name, [&] { painter_.drawLine(a, b); });
+        painter_.setPen(QPen(palette::spring(), 1.8));
+        painter_.setBrush(Qt::NoBrush);
+        drawDashpot(painter_, a, b);
         endDots(a, b);
         label((a + b) / 2 + QPointF(8, -10), QString::fromStdString(d.name) + QStringLiteral("  %1 N·s/m").arg(d.damping, 0, 'g', 4));
     }
     void operator()(const TorsionSpringLoad& t)
     {
-        const QPointF at = c_.view.toScreen(loadAnchor(c_.mechanism, t));
-        halo(t.name, [&] { p_.drawEllipse(at, style::kMotorRadius * 1.5, style::kMotorRadius * 1.5); });
-        p_.setPen(QPen(palette::spring(), 1.8));
-        p_.setBrush(Qt::NoBrush);
+        const QPointF at = context_.view.toScreen(loadAnchor(context_.mechanism, t));
+        halo(t.name, [&] { painter_.drawEllipse(at, style::kMotorRadius * 1.5, style::kMotorRadius * 1.5); });
+        painter_.setPen(QPen(palette::spring(), 1.8));
+        painter_.setBrush(Qt::NoBrush);
         // A coil: three turns of growing radius.
         QPolygonF coil;
         for (int i = 0; i <= 90; ++i) {
             const double a = qDegreesToRadians(i * 12.0), r = 8 + style::kMotorRadius * 0.6 * i / 90.0;
             coil << at + QPointF(std::cos(a) * r, -std::sin(a) * r);
         }
-        p_.drawPolyline(coil);
+        painter_.drawPolyline(coil);
         label(at + QPointF(16, 20), QString::fromStdString(t.name) + QStringLiteral("  %1 N·m/rad").arg(t.stiffness, 0, 'g', 4));
     }
 
@@ -93,22 +93,22 @@ private:
     template <typename Stroke>
     void halo(const std::string& name, Stroke stroke)
     {
-        const QPen pen = c_.haloPen(Selection::Kind::Load, name, 2.2, index_);
+        const QPen pen = context_.haloPen(Selection::Kind::Load, name, 2.2, index_);
         if (pen.style() == Qt::NoPen) return;
-        p_.setPen(pen);
-        p_.setBrush(Qt::NoBrush);
+        painter_.setPen(pen);
+        painter_.setBrush(Qt::NoBrush);
         stroke();
     }
     void endDots(const QPointF& a, const QPointF& b)
     {
-        p_.setBrush(palette::spring());
-        p_.drawEllipse(a, 2.5, 2.5);
-        p_.drawEllipse(b, 2.5, 2.5);
+        painter_.setBrush(palette::spring());
+        painter_.drawEllipse(a, 2.5, 2.5);
+        painter_.drawEllipse(b, 2.5, 2.5);
     }
-    void label(const QPointF& at, const QString& text) { drawLabel(p_, at, text, palette::ink()); }
+    void label(const QPointF& at, const QString& text) { drawLabel(painter_, at, text, palette::ink()); }
 
-    PaintContext& c_;
-    QPainter& p_;
+    PaintContext& context_;
+    QPainter& painter_;
     int index_;
 };
 

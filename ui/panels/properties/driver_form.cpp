@@ -36,7 +36,7 @@ Motion motionFor(Law law, const Driver& d)
     return ConstantSpeed{};
 }
 
-Quantity positionQuantity(const Driver& d)
+DisplayQuantity positionQuantity(const Driver& d)
 {
     return d.type == DriverType::Rotary ? angleQuantity() : lengthQuantity();
 }
@@ -63,7 +63,7 @@ void driverForm(FormBuilder& f, const Mechanism& m, const Driver& driver)
             pointFields(f, e ? "rodEnd" : "barrelEnd", e ? QObject::tr("Rod end") : QObject::tr("Barrel end"), driver.ends[e]->at,
                         QObject::tr("Move %1").arg(qname), [self, e](Mechanism& m) -> Vec2& { return self(m).ends[e]->at; });
         }
-    const Quantity pos = positionQuantity(driver);
+    const DisplayQuantity pos = positionQuantity(driver);
     if (!driver.joint.empty())
         f.number("offset", QObject::tr("Position as drawn"), driver.offset, pos, undo, [self](Mechanism& m, double v) { self(m).offset = v; });
     f.choice("law", QObject::tr("Motion law"),
@@ -73,7 +73,7 @@ void driverForm(FormBuilder& f, const Mechanism& m, const Driver& driver)
     if (const auto* c = std::get_if<ConstantSpeed>(&driver.motion)) {
         f.number("speed", QObject::tr("Speed"), c->speed, rotary ? rotarySpeedQuantity() : linearSpeedQuantity(), undo,
                  [self](Mechanism& m, double v) { std::get<ConstantSpeed>(self(m).motion).speed = v; });
-        Quantity accel = pos;
+        DisplayQuantity accel = pos;
         accel.unit += QStringLiteral("/s²");
         f.number("accel", QObject::tr("Acceleration"), c->accel, accel, undo,
                  [self](Mechanism& m, double v) { std::get<ConstantSpeed>(self(m).motion).accel = v; });

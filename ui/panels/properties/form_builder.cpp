@@ -17,7 +17,7 @@
 namespace clevis::ui {
 namespace {
 
-QString show(double si, const Quantity& q)
+QString show(double si, const DisplayQuantity& q)
 {
     double v = q.fromSi(si);
     if (std::abs(v) < 0.5 * std::pow(10.0, -q.decimals)) v = 0.0;  // never "-0.00"
@@ -67,7 +67,7 @@ std::optional<double> parseNumber(const QString& text)
     return v;
 }
 
-void FormBuilder::number(const QString& key, const QString& label, double si, const Quantity& q, const QString& undo, Setter set)
+void FormBuilder::number(const QString& key, const QString& label, double si, const DisplayQuantity& q, const QString& undo, Setter set)
 {
     const QString shown = show(si, q);
     QLineEdit* edit = withUnit(form_, key, label, shown, q.unit);
@@ -80,7 +80,7 @@ void FormBuilder::number(const QString& key, const QString& label, double si, co
     });
 }
 
-void FormBuilder::optionalNumber(const QString& key, const QString& label, std::optional<double> si, const Quantity& q,
+void FormBuilder::optionalNumber(const QString& key, const QString& label, std::optional<double> si, const DisplayQuantity& q,
                                  const QString& undo, std::function<void(Mechanism&, std::optional<double>)> set)
 {
     const QString shown = si ? show(*si, q) : QString();
@@ -98,7 +98,7 @@ void FormBuilder::optionalNumber(const QString& key, const QString& label, std::
     });
 }
 
-void FormBuilder::numberList(const QString& key, const QString& label, const std::vector<double>& si, const Quantity& q,
+void FormBuilder::numberList(const QString& key, const QString& label, const std::vector<double>& si, const DisplayQuantity& q,
                              const QString& undo, std::function<void(Mechanism&, std::vector<double>)> set)
 {
     QStringList parts;

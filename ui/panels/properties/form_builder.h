@@ -3,7 +3,7 @@
 #pragma once
 
 #include "core/model/mechanism.h"
-#include "ui/panels/properties/quantity.h"
+#include "ui/panels/properties/display_quantity.h"
 
 #include <QString>
 #include <QStringList>
@@ -26,12 +26,12 @@ public:
 
     // `undo` names the command, e.g. "Set crank mass". Object names (for
     // tests and accessibility) come from `key`.
-    void number(const QString& key, const QString& label, double si, const Quantity& q, const QString& undo, Setter set);
+    void number(const QString& key, const QString& label, double si, const DisplayQuantity& q, const QString& undo, Setter set);
     // An empty field means "not given" (nullopt).
-    void optionalNumber(const QString& key, const QString& label, std::optional<double> si, const Quantity& q, const QString& undo,
+    void optionalNumber(const QString& key, const QString& label, std::optional<double> si, const DisplayQuantity& q, const QString& undo,
                         std::function<void(Mechanism&, std::optional<double>)> set);
     // A list of numbers separated by commas or spaces.
-    void numberList(const QString& key, const QString& label, const std::vector<double>& si, const Quantity& q, const QString& undo,
+    void numberList(const QString& key, const QString& label, const std::vector<double>& si, const DisplayQuantity& q, const QString& undo,
                     std::function<void(Mechanism&, std::vector<double>)> set);
     void text(const QString& key, const QString& label, const QString& value, const QString& undo,
               std::function<QString(Mechanism&, const QString&)> set);  // returns a problem, or empty

@@ -1,0 +1,14 @@
+#include "core/model/type_names.h"
+
+namespace clevis {
+
+const char* jointTypeName(JointType type) { return nameOf(kJointTypes, type); }
+
+const char* camLawName(CamLaw law)
+{
+    for (const MotionLaw& l : kMotionLaws)
+        if (l.kind == LawKind::Rise && l.cam == law) return l.name;
+    return "";
+}
+
+}  // namespace clevis
