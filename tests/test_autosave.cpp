@@ -138,7 +138,7 @@ TEST_F(Autosave, AfterACrashAFreshStartRestoresTheEditedDocumentUnsaved)
 TEST_F(Autosave, AFileWhoseWriterDiedIsOfferedAndAnUntitledOneSaysSo)
 {
     Mechanism edited = sampleFourBar();
-    edits::addPin(edited, {0.3, 0.3});  // an open pin: the file cannot be saved yet, but is recovered
+    edits::addPin(edited, {0.3, 0.3});  // an open pin: a drawing in progress is recovered as it is
     const pid_t child = fork();
     ASSERT_GE(child, 0);
     if (child == 0) {

@@ -135,17 +135,27 @@ Body readBody(const JsonNode& node)
 
 // ---- joints ----
 
+// A joint still being drawn joins fewer than two bodies: an empty name, or a
+// list of one, leaves that side open. Such a file reads as it was saved;
+// analysing it says what is missing.
+void readJointBodies(const JsonNode& bodies, Joint& j)
+{
+    const std::vector<JsonNode> sides = bodies.elements();
+    if (sides.empty() || sides.size() > 2)
+        throw bodies.error("expected two body names (or one while the joint is being drawn), got " +
+                           std::to_string(sides.size()));
+    for (std::size_t side = 0; side < sides.size(); ++side) j.bodies[side] = sides[side].string();
+    if (!j.bodies[0].empty() && j.bodies[0] == j.bodies[1])
+        throw bodies.error("joins \"" + j.bodies[0] + "\" to itself");
+}
+
 Joint readJoint(const JsonNode& node)
 {
     node.object({"name", "type", "bodies", "at", "axis_deg"});
     Joint j;
     j.name = node.at("name").name();
     j.type = node.at("type").choice(kJointTypes).value;
-    const JsonNode bodies = node.at("bodies");
-    const std::vector<JsonNode> pair = bodies.elements(2);
-    j.bodies[0] = pair[0].name();
-    j.bodies[1] = pair[1].name();
-    if (j.bodies[0] == j.bodies[1]) throw bodies.error("joins \"" + j.bodies[0] + "\" to itself");
+    readJointBodies(node.at("bodies"), j);
     j.at = node.at("at").point();
     if (const auto axis = node.find("axis_deg")) {
         if (j.type == JointType::Pin) axis->warn("applies only to slider and pin_in_slot joints (ignored)");
@@ -469,6 +479,13 @@ LoadedMechanism parseMechanism(const std::string& jsonText)
 LoadedMechanism loadMechanismFile(const std::string& path)
 {
     return parseMechanism(readFileText(path));
+}
+
+// Through the text, as a saved file goes: the one way to be sure that what
+// passes here also opens.
+Mechanism validateMechanism(const Mechanism& m)
+{
+    return parseMechanism(saveMechanismText(m)).mechanism;
 }
 
 }  // namespace clevis

@@ -33,4 +33,10 @@ LoadedMechanism loadMechanismFile(const std::string& path);
 nlohmann::json mechanismToJson(const Mechanism& m);
 std::string saveMechanismText(const Mechanism& m);  // 2-space indent, ends with a newline
 
+// The file reader's rules applied to a mechanism held in memory, so that an
+// editor refuses what a file would: writes `m` and reads it back. Returns the
+// mechanism as its file reopens (equal to `m` but for the exceptions above);
+// throws the reader's ModelError, naming the path of the first refused value.
+Mechanism validateMechanism(const Mechanism& m);
+
 }  // namespace clevis

@@ -11,4 +11,14 @@ const char* camLawName(CamLaw law)
     return "";
 }
 
+const char* jointKindWord(JointType type)
+{
+    switch (type) {
+    case JointType::Slider: return "slider";
+    case JointType::PinInSlot: return "pin in slot";
+    case JointType::Pin: break;
+    }
+    return "pin";
+}
+
 }  // namespace clevis

@@ -46,5 +46,7 @@ inline constexpr MotionLaw kMotionLaws[] = {
 
 const char* jointTypeName(JointType type);
 const char* camLawName(CamLaw law);
+// "pin", "slider", "pin in slot": the word a message uses for a joint.
+const char* jointKindWord(JointType type);
 
 }  // namespace clevis

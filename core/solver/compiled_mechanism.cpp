@@ -125,6 +125,22 @@ MassProperties Compiler::massOf(std::size_t b) const
     return total;
 }
 
+// A joint still being drawn (an empty side, which the file keeps so that a
+// sketch saves as it is) cannot be analysed: say which and what it lacks.
+void checkJointsComplete(const Mechanism& m)
+{
+    for (std::size_t k = 0; k < m.joints.size(); ++k) {
+        const Joint& j = m.joints[k];
+        const bool open0 = j.bodies[0].empty(), open1 = j.bodies[1].empty();
+        if (!open0 && !open1) continue;
+        const std::string joint = std::string(jointKindWord(j.type)) + " \"" + j.name + "\"";
+        if (open0 && open1)
+            throw ModelError(at("joints", k), joint + " joins no part yet: connect it to two parts, or to a part and ground");
+        throw ModelError(at("joints", k), joint + " joins only \"" + j.bodies[open0 ? 1 : 0] +
+                                              "\": connect it to a second part or to ground");
+    }
+}
+
 // Bars find their ends from the joints that name them, so a misspelt body
 // name must be reported as such before any mass is worked out.
 void Compiler::checkAttachmentNames() const
@@ -318,6 +334,7 @@ CompiledMechanism Compiler::run()
         bodies_[in_.bodies[b].name] = int(b);
         out_.bodies.push_back({in_.bodies[b].name, {}});
     }
+    checkJointsComplete(in_);
     checkAttachmentNames();
     for (std::size_t b = 0; b < in_.bodies.size(); ++b) out_.bodies[b].mass = massOf(b);
     compileJoints();

@@ -2,8 +2,8 @@
 
 #include "core/solver/analysis_error.h"
 #include "core/solver/cycle_sweep.h"
+#include "core/file/part_description.h"
 #include "core/model/model_error.h"
-#include "ui/document/sketch_geometry.h"
 #include "core/solver/step_solver.h"
 
 namespace clevis::ui {
@@ -41,13 +41,6 @@ SolveOutcome solveMechanism(const Mechanism& m, const std::function<bool()>& sti
         out.error = QStringLiteral("Nothing to solve yet: draw a link between pins.");
         return out;
     }
-    if (const QStringList open = openPins(m); !open.isEmpty()) {
-        out.error = QStringLiteral("%1 %2 joined to only one part: draw a link to %3, or delete %3.")
-                        .arg(open.join(QStringLiteral(", ")), open.size() == 1 ? QStringLiteral("is") : QStringLiteral("are"),
-                             open.size() == 1 ? QStringLiteral("it") : QStringLiteral("them"));
-        out.offendingItems = open;
-        return out;
-    }
     try {
         // Degrees of freedom are counted even before a driver sets the cycle's length.
         Mechanism probe = m;
@@ -63,7 +56,7 @@ SolveOutcome solveMechanism(const Mechanism& m, const std::function<bool()>& sti
         if (!out.result.steps.empty()) out.summary = summarize(*out.compiled, out.result);
     } catch (const ModelError& e) {
         out.compiled.reset();
-        out.error = QString::fromStdString(e.what());
+        out.error = QString::fromStdString(describeModelError(m, e));
         out.offendingItems = itemsFromPath(m, e.path());
     } catch (const AnalysisError& e) {
         out.compiled.reset();

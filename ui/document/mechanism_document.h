@@ -35,7 +35,11 @@ public:
     // copy). Commands with the same mergeId >= 0 pushed consecutively merge
     // (a drag is one undo step). An edit that changes nothing is not recorded,
     // nor is a merged run that ends where it began.
-    void apply(const QString& text, std::function<void(clevis::Mechanism&)> edit, int mergeId = -1);
+    // The edited copy must pass the file reader's checks, so that the
+    // document can always be saved and opened again; if it does not, nothing
+    // changes and the reason, naming the part, is returned (and signalled).
+    // Returns an empty string otherwise.
+    QString apply(const QString& text, std::function<void(clevis::Mechanism&)> edit, int mergeId = -1);
     void reset(const clevis::Mechanism& m, const QString& filePath);  // new/open: clears the undo stack
     QString filePath() const;
     bool isModified() const;  // from the undo stack's clean state
@@ -54,6 +58,7 @@ signals:
     void modifiedChanged(bool);
     void filePathChanged(const QString&);
     void documentReset();  // after reset(): a different mechanism is open
+    void editRefused(const QString& why);
 
 private:
     friend class SnapshotCommand;

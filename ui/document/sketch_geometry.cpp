@@ -105,14 +105,6 @@ Vec2 loadAnchor(const Mechanism& m, const Load& load)
     return std::visit(Visitor{m}, load);
 }
 
-QStringList openPins(const Mechanism& m)
-{
-    QStringList names;
-    for (const auto& j : m.joints)
-        if (j.bodies[0].empty() || j.bodies[1].empty()) names << QString::fromStdString(j.name);
-    return names;
-}
-
 double angleDeg(const Vec2& a, const Vec2& b)
 {
     return radToDeg(std::atan2(b.y() - a.y(), b.x() - a.x()));

@@ -7,8 +7,6 @@
 #include "core/model/body_points.h"
 #include "core/model/mechanism.h"
 
-#include <QStringList>
-
 #include <string>
 #include <vector>
 
@@ -35,10 +33,6 @@ std::string loadName(const Load& load, int index);
 
 // A point a load or driver is attached at, for hit-testing and drawing.
 Vec2 loadAnchor(const Mechanism& m, const Load& load);
-
-// Joints still missing a body (drawn, not yet joined to two parts). The file
-// format needs two bodies on every joint, so these cannot be saved yet.
-QStringList openPins(const Mechanism& m);
 
 // Counter-clockwise angle of b − a in degrees, in (−180, 180].
 double angleDeg(const Vec2& a, const Vec2& b);

@@ -6,7 +6,6 @@
 #include "ui/shell/menu_action.h"
 #include "core/file/mechanism_file.h"
 #include "core/model/model_error.h"
-#include "ui/document/sketch_geometry.h"
 
 #include <QAction>
 #include <QFileDialog>
@@ -115,14 +114,6 @@ bool FileActions::saveAs()
 
 bool FileActions::saveTo(const QString& path, QString* error)
 {
-    const QStringList open = openPins(doc_->mechanism());
-    if (!open.isEmpty()) {
-        const QString why = tr("Cannot save yet: %1 %2 not joined to two parts. Draw their links, or delete them, first.")
-                                .arg(open.join(QStringLiteral(", ")), open.size() == 1 ? tr("is") : tr("are"));
-        if (error) *error = why;
-        else QMessageBox::warning(window_, tr("Cannot save"), why);
-        return false;
-    }
     try {
         // Atomic, keeping the previous file as NAME.bak; on failure the old
         // file is intact and the document stays unsaved.

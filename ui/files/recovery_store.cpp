@@ -2,7 +2,6 @@
 
 #include "core/file/atomic_file.h"
 #include "core/file/mechanism_file.h"
-#include "ui/files/recovery_reader.h"
 
 #include <QDir>
 #include <QFile>
@@ -110,7 +109,8 @@ std::vector<RecoveryClaim> RecoveryStore::claimLeftovers() const
 
 Mechanism RecoveryStore::read(const RecoveryClaim& claim)
 {
-    return readRecoveryFile(claim.file.path.toStdString());
+    // A drawing in progress reads like any saved file: the format keeps open pins.
+    return loadMechanismFile(claim.file.path.toStdString()).mechanism;
 }
 
 void RecoveryStore::discard(HeldRecoveryFile& file)

@@ -5,7 +5,10 @@
 #include "ui/panels/properties/forms.h"
 #include "ui/document/sketch_geometry.h"
 
+#include "render/palette.h"
+
 #include <QFormLayout>
+#include <QLabel>
 #include <QLineEdit>
 #include <QScrollBar>
 #include <QTimer>
@@ -45,7 +48,10 @@ void PropertyEditor::rebuildNow()
     auto* form = new QFormLayout(page);
     form->setFieldGrowthPolicy(QFormLayout::AllNonFixedFieldsGrow);
     form->setRowWrapPolicy(QFormLayout::WrapLongRows);  // a narrow panel puts the field under its label
-    FormBuilder f(form, doc_);
+        FormBuilder f(form, doc_, [this](const QString& why) {
+        refusal_ = why;
+        scheduleRebuild();
+    });
     const Mechanism& m = doc_->mechanism();
     const Selection s = doc_->selection();
     const std::string name = s.name.toStdString();
@@ -55,10 +61,25 @@ void PropertyEditor::rebuildNow()
     else if (s.kind == Selection::Kind::Driver && driver >= 0) driverForm(f, m, m.drivers[driver]);
     else if (s.kind == Selection::Kind::Load && s.loadIndex >= 0 && s.loadIndex < int(m.loads.size())) loadForm(f, m, s.loadIndex);
     else mechanismForm(f, m);
+    showRefusal(form);
     setWidget(page);  // deletes the previous page
     verticalScrollBar()->setValue(scrolled);
     if (!focusKey.isEmpty())
         if (auto* w = page->findChild<QWidget*>(focusKey)) w->setFocus();
+}
+
+// Under the form, until the next rebuild: the form shows the value the
+// document kept, this line why the typed one was not taken.
+void PropertyEditor::showRefusal(QFormLayout* form)
+{
+    if (refusal_.isEmpty()) return;
+    auto* line = new QLabel(refusal_);
+    line->setObjectName(QStringLiteral("editRefusal"));
+    line->setWordWrap(true);
+    line->setTextInteractionFlags(Qt::TextSelectableByMouse);
+    line->setStyleSheet(QStringLiteral("color: %1;").arg(palette::problem().name()));
+    form->addRow(line);
+    refusal_.clear();
 }
 
 }  // namespace clevis::ui

@@ -1,9 +1,13 @@
 // The "Properties" panel: exact values of the selected part (or of the whole
 // mechanism when nothing is selected) in display units. Every change is an
-// undo command; the form is rebuilt from the document after each one.
+// undo command; the form is rebuilt from the document after each one. A
+// value the document refuses is shown with the reason under the form.
 #pragma once
 
 #include <QScrollArea>
+#include <QString>
+
+class QFormLayout;
 
 namespace clevis::ui {
 
@@ -19,9 +23,11 @@ public:
 
 private:
     void scheduleRebuild();
+    void showRefusal(QFormLayout* form);
 
     MechanismDocument* doc_;
     bool pending_ = false;
+    QString refusal_;  // why the last typed value was not taken, shown by the next rebuild
 };
 
 }  // namespace clevis::ui

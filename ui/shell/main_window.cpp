@@ -58,6 +58,7 @@ MainWindow::MainWindow(const QString& recoveryFolder, QWidget* parent)
     connect(canvas_, &CanvasView::hintChanged, status_, &StatusLine::showHint);
     connect(files_, &FileActions::note, status_, &StatusLine::showHint);
     connect(autosave_, &AutosaveTimer::note, status_, &StatusLine::showHint);
+    connect(doc_, &MechanismDocument::editRefused, status_, &StatusLine::showHint);  // edits from the canvas and menus
     buildDocks();
     QMenu* view = buildMenus();
     status_->showHint(canvas_->tool()->hint());

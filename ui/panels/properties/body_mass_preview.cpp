@@ -1,5 +1,6 @@
 #include "ui/panels/properties/body_mass_preview.h"
 
+#include "core/file/part_description.h"
 #include "core/model/model_error.h"
 #include "ui/document/sketch_geometry.h"
 
@@ -25,7 +26,7 @@ std::optional<MassProperties> previewMass(const Mechanism& m, const std::string&
     try {
         return compile(alone).bodies[0].mass;
     } catch (const ModelError& e) {
-        problem = QString::fromStdString(e.what());
+        problem = QString::fromStdString(describeModelError(alone, e));
         return std::nullopt;
     }
 }

@@ -10,7 +10,6 @@
 #include <QLineEdit>
 #include <QLocale>
 #include <QRegularExpression>
-#include <QToolTip>
 
 #include <cmath>
 
@@ -41,18 +40,12 @@ QLineEdit* withUnit(QFormLayout* form, const QString& key, const QString& label,
     return edit;
 }
 
-// Applies `set` to a trial copy first, so a rejected value never reaches the undo stack.
-void commit(MechanismDocument* doc, const QString& undo, const std::function<void(Mechanism&)>& set)
+// The document checks the edited mechanism by the file's rules and says why
+// when it refuses; the form then shows the reason and the value it kept.
+void commit(MechanismDocument* doc, const QString& undo, const std::function<void(Mechanism&)>& set,
+            const FormBuilder::Refused& refused)
 {
-    Mechanism trial = doc->mechanism();
-    set(trial);
-    doc->apply(undo, [trial](Mechanism& m) { m = trial; });
-}
-
-void refuse(QLineEdit* edit, const QString& restore, const QString& why)
-{
-    edit->setText(restore);
-    QToolTip::showText(edit->mapToGlobal(QPoint(0, edit->height())), why, edit);
+    if (const QString why = doc->apply(undo, set); !why.isEmpty()) refused(why);
 }
 
 }  // namespace
@@ -71,12 +64,12 @@ void FormBuilder::number(const QString& key, const QString& label, double si, co
 {
     const QString shown = show(si, q);
     QLineEdit* edit = withUnit(form_, key, label, shown, q.unit);
-    QObject::connect(edit, &QLineEdit::editingFinished, edit, [=, doc = doc_] {
+    QObject::connect(edit, &QLineEdit::editingFinished, edit, [=, doc = doc_, refused = refused_] {
         if (edit->text() == shown) return;
         const auto v = parseNumber(edit->text());
-        if (!v) return refuse(edit, shown, QObject::tr("Type a number in %1.").arg(q.unit));
+        if (!v) return refused(QObject::tr("Type a number in %1.").arg(q.unit));
         const double value = q.toSi(*v);
-        commit(doc, undo, [&](Mechanism& m) { set(m, value); });
+        commit(doc, undo, [&](Mechanism& m) { set(m, value); }, refused);
     });
 }
 
@@ -86,15 +79,15 @@ void FormBuilder::optionalNumber(const QString& key, const QString& label, std::
     const QString shown = si ? show(*si, q) : QString();
     QLineEdit* edit = withUnit(form_, key, label, shown, q.unit);
     edit->setPlaceholderText(QObject::tr("default"));
-    QObject::connect(edit, &QLineEdit::editingFinished, edit, [=, doc = doc_] {
+    QObject::connect(edit, &QLineEdit::editingFinished, edit, [=, doc = doc_, refused = refused_] {
         if (edit->text() == shown) return;
         std::optional<double> value;
         if (!edit->text().trimmed().isEmpty()) {
             const auto v = parseNumber(edit->text());
-            if (!v) return refuse(edit, shown, QObject::tr("Type a number in %1, or leave it empty for the default.").arg(q.unit));
+            if (!v) return refused(QObject::tr("Type a number in %1, or leave it empty for the default.").arg(q.unit));
             value = q.toSi(*v);
         }
-        commit(doc, undo, [&](Mechanism& m) { set(m, value); });
+        commit(doc, undo, [&](Mechanism& m) { set(m, value); }, refused);
     });
 }
 
@@ -105,15 +98,15 @@ void FormBuilder::numberList(const QString& key, const QString& label, const std
     for (double v : si) parts << show(v, q);
     const QString shown = parts.join(QStringLiteral("  "));
     QLineEdit* edit = withUnit(form_, key, label, shown, q.unit);
-    QObject::connect(edit, &QLineEdit::editingFinished, edit, [=, doc = doc_] {
+    QObject::connect(edit, &QLineEdit::editingFinished, edit, [=, doc = doc_, refused = refused_] {
         if (edit->text() == shown) return;
         std::vector<double> values;
         for (const QString& token : edit->text().split(QRegularExpression(QStringLiteral("[\\s;]+")), Qt::SkipEmptyParts)) {
             const auto v = parseNumber(token);
-            if (!v) return refuse(edit, shown, QObject::tr("\"%1\" is not a number.").arg(token));
+            if (!v) return refused(QObject::tr("\"%1\" is not a number.").arg(token));
             values.push_back(q.toSi(*v));
         }
-        commit(doc, undo, [&](Mechanism& m) { set(m, values); });
+        commit(doc, undo, [&](Mechanism& m) { set(m, values); }, refused);
     });
 }
 
@@ -123,14 +116,15 @@ void FormBuilder::text(const QString& key, const QString& label, const QString& 
     auto* edit = new QLineEdit(value);
     edit->setObjectName(key);
     form_->addRow(label, edit);
-    QObject::connect(edit, &QLineEdit::editingFinished, edit, [=, doc = doc_] {
+    QObject::connect(edit, &QLineEdit::editingFinished, edit, [=, doc = doc_, refused = refused_] {
         const QString typed = edit->text().trimmed();
         if (typed == value) return;
         Mechanism trial = doc->mechanism();
         const QString problem = set(trial, typed);
-        if (!problem.isEmpty()) return refuse(edit, value, problem);
+        if (!problem.isEmpty()) return refused(problem);
         const Selection renamed = doc->selection();
-        doc->apply(undo, [trial](Mechanism& m) { m = trial; });
+        if (const QString why = doc->apply(undo, [&trial](Mechanism& m) { m = trial; }); !why.isEmpty())
+            return refused(why);
         // The selection names the part: follow it to its new name.
         if (renamed.kind != Selection::Kind::None && renamed.name == value)
             doc->setSelection({renamed.kind, typed, renamed.loadIndex});
@@ -145,9 +139,9 @@ void FormBuilder::choice(const QString& key, const QString& label, const QString
     box->addItems(options);
     box->setCurrentIndex(current);
     form_->addRow(label, box);
-    QObject::connect(box, &QComboBox::activated, box, [=, doc = doc_](int index) {
+    QObject::connect(box, &QComboBox::activated, box, [=, doc = doc_, refused = refused_](int index) {
         if (index == current) return;
-        commit(doc, undo, [&](Mechanism& m) { set(m, index); });
+        commit(doc, undo, [&](Mechanism& m) { set(m, index); }, refused);
     });
 }
 
@@ -158,7 +152,9 @@ void FormBuilder::check(const QString& key, const QString& label, bool value, co
     box->setObjectName(key);
     box->setChecked(value);
     form_->addRow(label, box);
-    QObject::connect(box, &QCheckBox::toggled, box, [=, doc = doc_](bool on) { commit(doc, undo, [&](Mechanism& m) { set(m, on); }); });
+    QObject::connect(box, &QCheckBox::toggled, box, [=, doc = doc_, refused = refused_](bool on) {
+        commit(doc, undo, [&](Mechanism& m) { set(m, on); }, refused);
+    });
 }
 
 void FormBuilder::info(const QString& label, const QString& value)

@@ -21,8 +21,12 @@ class MechanismDocument;
 class FormBuilder {
 public:
     using Setter = std::function<void(Mechanism&, double si)>;
+    // Told why a typed value was not taken (not a number, or refused by the
+    // document); the form is then rebuilt with the value the document kept.
+    using Refused = std::function<void(const QString& why)>;
 
-    FormBuilder(QFormLayout* form, MechanismDocument* doc) : form_(form), doc_(doc) {}
+    FormBuilder(QFormLayout* form, MechanismDocument* doc, Refused refused)
+        : form_(form), doc_(doc), refused_(std::move(refused)) {}
 
     // `undo` names the command, e.g. "Set crank mass". Object names (for
     // tests and accessibility) come from `key`.
@@ -46,6 +50,7 @@ public:
 private:
     QFormLayout* form_;
     MechanismDocument* doc_;
+    Refused refused_;
 };
 
 // Reads a number typed by a person ("12.5", "12,5", "1e3"); nullopt if it is none.
