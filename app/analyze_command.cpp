@@ -1,14 +1,14 @@
 #include "app/analyze_command.h"
 
-#include "core/solver/analysis_error.h"
 #include "core/file/atomic_file.h"
-#include "core/results/cycle_summary.h"
-#include "core/solver/cycle_sweep.h"
 #include "core/file/mechanism_file.h"
 #include "core/model/model_error.h"
+#include "core/results/cycle_summary.h"
 #include "core/results/results_csv.h"
 #include "core/results/results_json.h"
 #include "core/results/summary_text.h"
+#include "core/solver/analysis_error.h"
+#include "core/solver/cycle_sweep.h"
 
 #include <functional>
 #include <sstream>
@@ -37,9 +37,11 @@ bool writeOutputs(const AnalyzeOptions& options, const CompiledMechanism& m, con
 {
     bool ok = true;
     if (!options.jsonOut.empty())
-        ok &= writeOutput(options.jsonOut, [&](std::ostream& f) { f << resultsToJson(m, r, s).dump(2) << '\n'; }, err);
+        ok &= writeOutput(
+            options.jsonOut, [&](std::ostream& f) { f << resultsToJson(m, r, s).dump(2) << '\n'; }, err);
     if (!options.csvOut.empty())
-        ok &= writeOutput(options.csvOut, [&](std::ostream& f) { writeResultsCsv(f, m, r); }, err);
+        ok &= writeOutput(
+            options.csvOut, [&](std::ostream& f) { writeResultsCsv(f, m, r); }, err);
     return ok;
 }
 
@@ -70,11 +72,9 @@ int runAnalyze(const AnalyzeOptions& options, std::ostream& out, std::ostream& e
         const bool written = writeOutputs(options, m, r, s, err);
         const bool trusted = trustworthy(r, s, options.file, err);
         return written && trusted ? kExitOk : kExitFailed;
-    }
-    catch (const ModelError& e) {
+    } catch (const ModelError& e) {
         err << options.file << ": " << e.what() << '\n';
-    }
-    catch (const AnalysisError& e) {
+    } catch (const AnalysisError& e) {
         err << options.file << ": " << e.what() << '\n';
     }
     return kExitFailed;

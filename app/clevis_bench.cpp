@@ -6,12 +6,12 @@
 // LU path against the band path (jacobian_factor.h). The mobility check
 // that starts every cycle is also timed on its own, since its dense rank
 // tests grow with the cube of the size.
-#include "tests/chain_generator.h"
 #include "app/heap_reuse.h"
-#include "core/solver/cycle_sweep.h"
 #include "core/file/mechanism_file.h"
+#include "core/solver/cycle_sweep.h"
 #include "core/solver/mobility_check.h"
 #include "core/solver/step_solver.h"
+#include "tests/chain_generator.h"
 
 #include <benchmark/benchmark.h>
 
@@ -32,8 +32,8 @@ void timeCycle(benchmark::State& state, const clevis::CompiledMechanism& m)
         benchmark::DoNotOptimize(result);
     }
     // A rate counter is divided by the CPU time; inverted, it is time per step.
-    state.counters["time_per_step"] =
-        benchmark::Counter(double(state.iterations()) * kSteps, benchmark::Counter::kIsRate | benchmark::Counter::kInvert);
+    state.counters["time_per_step"] = benchmark::Counter(double(state.iterations()) * kSteps,
+                                                         benchmark::Counter::kIsRate | benchmark::Counter::kInvert);
 }
 
 void FlapFolderCycle(benchmark::State& state)

@@ -33,8 +33,7 @@ int main(int argc, char** argv)
 #endif
     try {
         return run(parseCommandLine({argv + 1, argv + argc}));
-    }
-    catch (const UsageError& e) {
+    } catch (const UsageError& e) {
         std::cerr << "clevis-cli: " << e.what() << "\nTry \"clevis-cli --help\".\n";
         return kExitUsage;
     }

@@ -1,6 +1,6 @@
 // The desktop app `clevis`; everything but main lives in ui/.
-#include "ui/shell/app_launch.h"
 #include "app/heap_reuse.h"
+#include "ui/shell/app_launch.h"
 
 int main(int argc, char** argv)
 {

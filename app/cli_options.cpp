@@ -8,7 +8,6 @@
 namespace clevis::cli {
 namespace {
 
-
 const char* const kOverview = R"(clevis-cli: the forces in a planar linkage over its whole cycle, without the GUI.
 
 Usage:
@@ -80,7 +79,8 @@ int parseSteps(const std::string& text)
     int value = 0;
     const auto [end, error] = std::from_chars(text.data(), text.data() + text.size(), value);
     if (error != std::errc() || end != text.data() + text.size() || value < 1 || value > kMaxSteps)
-        throw UsageError("--steps needs a whole number from 1 to " + std::to_string(kMaxSteps) + ", not \"" + text + "\"");
+        throw UsageError("--steps needs a whole number from 1 to " + std::to_string(kMaxSteps) + ", not \"" + text +
+                         "\"");
     return value;
 }
 
@@ -117,8 +117,7 @@ Command parseAnalyze(ArgumentReader& in)
             else if (name == "--json") options.jsonOut = in.valueOf(name, value);
             else if (name == "--csv") options.csvOut = in.valueOf(name, value);
             else throw UsageError("unknown option \"" + arg + "\" for analyze");
-        }
-        else if (options.file.empty()) options.file = arg;
+        } else if (options.file.empty()) options.file = arg;
         else throw UsageError("analyze takes one FILE; \"" + arg + "\" is a second one");
     }
     if (options.file.empty()) throw UsageError("analyze needs a mechanism FILE");

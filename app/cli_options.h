@@ -21,7 +21,7 @@ struct HelpRequest {
 struct VersionRequest {};
 struct AnalyzeOptions {
     std::string file;
-    int steps = 0;  // 0: the file's own setting
+    int steps = 0;                // 0: the file's own setting
     std::string jsonOut, csvOut;  // empty: not written
 };
 using Command = std::variant<HelpRequest, VersionRequest, AnalyzeOptions>;

@@ -1,12 +1,12 @@
 #include "app/cli_render_commands.h"
 
-#include "core/solver/analysis_error.h"
-#include "core/results/cycle_summary.h"
-#include "core/solver/cycle_sweep.h"
-#include "core/results/free_body.h"
-#include "render/free_body_painter.h"
 #include "core/file/mechanism_file.h"
 #include "core/model/model_error.h"
+#include "core/results/cycle_summary.h"
+#include "core/results/free_body.h"
+#include "core/solver/analysis_error.h"
+#include "core/solver/cycle_sweep.h"
+#include "render/free_body_painter.h"
 #include "render/review_report.h"
 
 #include <QGuiApplication>
@@ -46,13 +46,14 @@ Parsed parse(const std::vector<std::string>& args, const std::vector<std::string
     Parsed p;
     for (std::size_t i = 0; i < args.size(); ++i) {
         const std::string& a = args[i];
-        const auto known = [&](const std::vector<std::string>& list) { return std::find(list.begin(), list.end(), a) != list.end(); };
+        const auto known = [&](const std::vector<std::string>& list) {
+            return std::find(list.begin(), list.end(), a) != list.end();
+        };
         if (known(flags)) p.options[a] = "";
         else if (known(valued)) {
             if (i + 1 >= args.size()) throw Usage(a + " needs a value");
             p.options[a] = args[++i];
-        }
-        else if (a.rfind("--", 0) == 0) throw Usage("unknown option " + a);
+        } else if (a.rfind("--", 0) == 0) throw Usage("unknown option " + a);
         else if (p.file.empty()) p.file = a;
         else throw Usage("unexpected argument " + a + " (one FILE only)");
     }
@@ -68,9 +69,7 @@ double number(const Parsed& p, const std::string& option)
         std::size_t used = 0;
         const double v = std::stod(text, &used);
         if (used == text.size() && std::isfinite(v)) return v;
-    }
-    catch (const std::exception&) {
-    }
+    } catch (const std::exception&) {}
     throw Usage(option + ": \"" + text + "\" is not a number");
 }
 
@@ -132,7 +131,8 @@ int stepAtTime(const Solved& s, double t)
 {
     const auto& steps = s.r.steps;
     if (t < steps.front().t - 1e-12 || t > steps.back().t + 1e-12)
-        throw Usage("--at-t " + std::to_string(t) + " s is outside the solved cycle (0 to " + std::to_string(steps.back().t) + " s)");
+        throw Usage("--at-t " + std::to_string(t) + " s is outside the solved cycle (0 to " +
+                    std::to_string(steps.back().t) + " s)");
     int best = 0;
     for (std::size_t i = 1; i < steps.size(); ++i)
         if (std::abs(steps[i].t - t) < std::abs(steps[best].t - t)) best = int(i);
@@ -176,15 +176,12 @@ int guarded(const char* usage, const std::string& file, Work&& work)
 {
     try {
         return work();
-    }
-    catch (const Usage& e) {
+    } catch (const Usage& e) {
         std::cerr << "clevis-cli: " << e.what() << '\n' << usage;
         return kUsage;
-    }
-    catch (const ModelError& e) {
+    } catch (const ModelError& e) {
         std::cerr << file << ": " << e.what() << '\n';
-    }
-    catch (const AnalysisError& e) {
+    } catch (const AnalysisError& e) {
         std::cerr << file << ": " << e.what() << '\n';
     }
     return kFailed;
@@ -211,10 +208,12 @@ std::string fileOf(const std::vector<std::string>& args)
 int runFbdCommand(const std::vector<std::string>& args)
 {
     return guarded(kFbdUsage, fileOf(args), [&] {
-        const Parsed p = parse(args, {"--body", "--at-deg", "--at-t", "--at-peak", "--out", "--steps"}, {"--dalembert"});
+        const Parsed p =
+            parse(args, {"--body", "--at-deg", "--at-t", "--at-peak", "--out", "--steps"}, {"--dalembert"});
         const std::string& out = p.options.at("--out");
         const QString suffix = QString::fromStdString(out).section('.', -1).toLower();
-        if (suffix != "svg" && suffix != "pdf" && suffix != "png") throw Usage("--out " + out + ": use a .svg, .pdf or .png file");
+        if (suffix != "svg" && suffix != "pdf" && suffix != "png")
+            throw Usage("--out " + out + ": use a .svg, .pdf or .png file");
         const auto solved = solve(p);
         const int body = chooseBody(p, *solved);
         const int step = chooseStep(p, *solved);
@@ -236,11 +235,13 @@ int runReportCommand(const std::vector<std::string>& args)
     return guarded(kReportUsage, fileOf(args), [&] {
         const Parsed p = parse(args, {"--out", "--steps"}, {});
         const std::string& out = p.options.at("--out");
-        if (QString::fromStdString(out).section('.', -1).toLower() != "pdf") throw Usage("--out " + out + ": the report is a .pdf file");
+        if (QString::fromStdString(out).section('.', -1).toLower() != "pdf")
+            throw Usage("--out " + out + ": the report is a .pdf file");
         const auto solved = solve(p);
         ensureGuiApplication();
         QString error;
-        const ui::ReviewReportInput in{solved->m, solved->r, solved->s, QString::fromStdString(p.file), ui::RenderUnits{}};
+        const ui::ReviewReportInput in{solved->m, solved->r, solved->s, QString::fromStdString(p.file),
+                                       ui::RenderUnits{}};
         if (!ui::writeReviewReport(in, QString::fromStdString(out), &error)) {
             std::cerr << error.toStdString() << '\n';
             return kFailed;

@@ -9,12 +9,16 @@
 namespace clevis::ui {
 namespace {
 
-double crossZ(QPointF o, QPointF a, QPointF b) { return (a.x() - o.x()) * (b.y() - o.y()) - (a.y() - o.y()) * (b.x() - o.x()); }
+double crossZ(QPointF o, QPointF a, QPointF b)
+{
+    return (a.x() - o.x()) * (b.y() - o.y()) - (a.y() - o.y()) * (b.x() - o.x());
+}
 
 // Monotone-chain convex hull.
 QPolygonF convexHull(std::vector<QPointF> pts)
 {
-    std::sort(pts.begin(), pts.end(), [](QPointF a, QPointF b) { return a.x() < b.x() || (a.x() == b.x() && a.y() < b.y()); });
+    std::sort(pts.begin(), pts.end(),
+              [](QPointF a, QPointF b) { return a.x() < b.x() || (a.x() == b.x() && a.y() < b.y()); });
     pts.erase(std::unique(pts.begin(), pts.end()), pts.end());
     if (pts.size() < 3) return QPolygonF(QList<QPointF>(pts.begin(), pts.end()));
     std::vector<QPointF> hull(2 * pts.size());

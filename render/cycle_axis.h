@@ -12,8 +12,8 @@
 namespace clevis::ui {
 
 struct CycleAxis {
-    QString label;   // e.g. "motor (°)" or "time (s)"
-    QString unit;    // "°", "m" or "s"
+    QString label;  // e.g. "motor (°)" or "time (s)"
+    QString unit;   // "°", "m" or "s"
     bool byTime = true;
     std::vector<double> values;  // one per step, in `unit`
 

@@ -39,7 +39,8 @@ std::vector<double> niceTicks(double lo, double hi, int count)
             break;
         }
     std::vector<double> ticks;
-    for (double t = std::ceil(lo / spacing - 1e-9) * spacing; t <= hi + 1e-9 * spacing; t += spacing) ticks.push_back(t);
+    for (double t = std::ceil(lo / spacing - 1e-9) * spacing; t <= hi + 1e-9 * spacing; t += spacing)
+        ticks.push_back(t);
     return ticks;
 }
 
@@ -84,7 +85,8 @@ void CycleChart::paint(QPainter& p, const QRectF& target) const
     QColor shade = palette::problem();
     shade.setAlphaF(0.12);
     for (const auto& [a, b] : singular_) {
-        const double x0 = X(axis_.values[std::max(a - 1, 0)]), x1 = X(axis_.values[std::min<int>(b + 1, axis_.values.size() - 1)]);
+        const double x0 = X(axis_.values[std::max(a - 1, 0)]),
+                     x1 = X(axis_.values[std::min<int>(b + 1, axis_.values.size() - 1)]);
         p.fillRect(QRectF(x0, plot.top(), std::max(x1 - x0, 1.5), plot.height()), shade);
     }
     if (plannedEnd_ != reachEnd_) {
@@ -134,15 +136,20 @@ void CycleChart::paint(QPainter& p, const QRectF& target) const
         p.setPen(line);
         p.drawPath(path);
         // Peak of |value|, marked and written beside the mark.
-        const auto peak = std::max_element(v.begin(), v.end(), [](double a, double b) { return std::abs(a) < std::abs(b); });
+        const auto peak =
+            std::max_element(v.begin(), v.end(), [](double a, double b) { return std::abs(a) < std::abs(b); });
         if (peak != v.end()) {
             const int i = int(peak - v.begin());
             const QPointF pt(X(axis_.values[i]), Y(*peak));
             p.setPen(QPen(pen.color(), 1.2));
             p.drawEllipse(pt, 3.2, 3.2);
-            const QString text = QString("%1 at %2 %3").arg(formatQuantity(*peak, c.series.unit)).arg(axis_.values[i], 0, 'f', 1).arg(axis_.unit);
+            const QString text = QString("%1 at %2 %3")
+                                     .arg(formatQuantity(*peak, c.series.unit))
+                                     .arg(axis_.values[i], 0, 'f', 1)
+                                     .arg(axis_.unit);
             const bool left = pt.x() > plot.center().x();
-            const QRectF box = left ? QRectF(pt.x() - 176, pt.y() - 15, 170, 12) : QRectF(pt.x() + 6, pt.y() - 15, 170, 12);
+            const QRectF box =
+                left ? QRectF(pt.x() - 176, pt.y() - 15, 170, 12) : QRectF(pt.x() + 6, pt.y() - 15, 170, 12);
             p.setPen(palette::ink());
             p.drawText(box.translated(0, box.top() < plot.top() ? 16 : 0), left ? Qt::AlignRight : Qt::AlignLeft, text);
         }

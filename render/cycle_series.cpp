@@ -32,7 +32,8 @@ CycleSeries driverEffortSeries(const CompiledMechanism& m, const CycleResult& r,
     const bool rotary = m.drivers[driver].type == DriverType::Rotary;
     const double k = rotary ? u.torquePerNewtonMetre : u.forcePerNewton;
     return {QString::fromStdString(m.drivers[driver].name) + (rotary ? " torque" : " force"),
-            rotary ? u.torqueSymbol : u.forceSymbol, collect(r, [&](const StepResult& s) { return k * s.effort[driver]; })};
+            rotary ? u.torqueSymbol : u.forceSymbol,
+            collect(r, [&](const StepResult& s) { return k * s.effort[driver]; })};
 }
 
 CycleSeries driverPowerSeries(const CompiledMechanism& m, const CycleResult& r, int driver)

@@ -3,8 +3,8 @@
 // frame, transmission angles. Shared by the plot panes and the report.
 #pragma once
 
-#include "render/render_units.h"
 #include "core/results/results.h"
+#include "render/render_units.h"
 
 #include <QString>
 

@@ -39,10 +39,7 @@ ArrowStyle figureArrow(const QColor& colour, double width, bool dashed)
     return {pen, {length, 0.38 * length, 0.72, 0.0}, 0.7 * length};
 }
 
-ArrowStyle sketchArrow(const QPen& pen)
-{
-    return {pen, {9.0, 0.42 * 9.0, 1.0, 1.0}, 9.0};
-}
+ArrowStyle sketchArrow(const QPen& pen) { return {pen, {9.0, 0.42 * 9.0, 1.0, 1.0}, 9.0}; }
 
 void drawArrow(QPainter& p, QPointF tail, QPointF tip, const ArrowStyle& style)
 {

@@ -2,8 +2,8 @@
 
 #include <QFileInfo>
 #include <QImage>
-#include <QPainter>
 #include <QPageSize>
+#include <QPainter>
 #include <QPdfWriter>
 #include <QSvgGenerator>
 
@@ -49,8 +49,7 @@ bool exportFigure(const Figure& figure, const QString& path, const QString& titl
         svg.setViewBox(QRectF(QPointF(0, 0), size));
         svg.setResolution(72);  // one logical unit per point
         ok = paintTo(svg, figure, QRectF(QPointF(0, 0), size));
-    }
-    else if (suffix == "pdf") {
+    } else if (suffix == "pdf") {
         QPdfWriter pdf(path);
         pdf.setTitle(title);
         pdf.setCreator("Clevis");
@@ -58,13 +57,11 @@ bool exportFigure(const Figure& figure, const QString& path, const QString& titl
         pdf.setPageSize(QPageSize(size, QPageSize::Point, QString(), QPageSize::ExactMatch));
         pdf.setPageMargins(QMarginsF(0, 0, 0, 0));
         ok = paintTo(pdf, figure, QRectF(0, 0, pdf.width(), pdf.height()));
-    }
-    else if (suffix == "png") {
+    } else if (suffix == "png") {
         QImage image((size * kPngPixelsPerUnit).toSize(), QImage::Format_ARGB32_Premultiplied);
         image.fill(Qt::white);
         ok = paintTo(image, figure, QRectF(QPointF(0, 0), QSizeF(image.size()))) && image.save(path, "PNG");
-    }
-    else {
+    } else {
         if (error) *error = QString("%1: unknown export format \"%2\" (use .svg, .pdf or .png)").arg(path, suffix);
         return false;
     }

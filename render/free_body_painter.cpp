@@ -1,9 +1,9 @@
 #include "render/free_body_painter.h"
 
-#include "render/body_outline.h"
 #include "core/results/body_points_at_step.h"
-#include "render/drawing_symbols.h"
 #include "core/results/drive_units.h"
+#include "render/body_outline.h"
+#include "render/drawing_symbols.h"
 #include "render/label_placer.h"
 #include "render/palette.h"
 #include "render/world_frame.h"
@@ -22,12 +22,12 @@ constexpr double kWidth = 1000, kMargin = 20;
 constexpr double kPanelTop = 78, kPanelHeight = 420;
 constexpr double kBodyPanelRight = 620, kKineticLeft = 660;
 constexpr double kEquationHeight = 96, kRowHeight = 17;
-constexpr double kMaxArrow = 115;     // the largest force's arrow length
-constexpr double kMinArrow = 12;      // shorter forces are still drawn this long
-constexpr double kHalfWidth = 11;     // a link's drawn half width
+constexpr double kMaxArrow = 115;  // the largest force's arrow length
+constexpr double kMinArrow = 12;   // shorter forces are still drawn this long
+constexpr double kHalfWidth = 11;  // a link's drawn half width
 constexpr double kPinRadius = 5;
 constexpr double kCoupleRadius = 21;
-constexpr double kArrowRoom = 130;    // kept free around the body for arrows
+constexpr double kArrowRoom = 130;  // kept free around the body for arrows
 
 QFont font(int pixels, bool bold = false)
 {
@@ -95,7 +95,8 @@ std::vector<Mark> marksFor(const FreeBodyItem& item, const RenderUnits& u, doubl
     std::vector<Mark> out;
     const ArrowStyle style = styleFor(item.kind);
     const QString name = QString::fromStdString(item.name);
-    if (item.force.norm() > 1e-9) out.push_back({item.at, item.force, 0.0, false, style, forceText(u, name, item.force)});
+    if (item.force.norm() > 1e-9)
+        out.push_back({item.at, item.force, 0.0, false, style, forceText(u, name, item.force)});
     if (std::abs(item.couple) > coupleFloor) {
         const QString coupleName = item.kind == FreeBodyItemKind::JointReaction ? name + " moment" : name;
         out.push_back({item.at, Vec2::Zero(), item.couple, true, style, coupleText(u, coupleName, item.couple)});
@@ -178,7 +179,8 @@ public:
             const QPointF at = frame_.map(mark.at);
             if (mark.isCouple) {
                 int stacked = 0;  // couples at one point get growing radii
-                for (std::size_t k = 0; k < i; ++k) stacked += marks[k].isCouple && (marks[k].at - mark.at).norm() < 1e-9;
+                for (std::size_t k = 0; k < i; ++k)
+                    stacked += marks[k].isCouple && (marks[k].at - mark.at).norm() < 1e-9;
                 const double radius = kCoupleRadius + 9 * stacked;
                 drawCoupleArrow(p, at, radius, mark.couple > 0, mark.style);
                 labels.addObstacle(QRectF(at.x() - radius, at.y() - radius, 2 * radius, 2 * radius));
@@ -240,8 +242,7 @@ QString stepCaption(const CompiledMechanism& m, const CycleResult& r, int step)
 FreeBodyPainter::FreeBodyPainter(const CompiledMechanism& m, const CycleResult& r, FreeBodyDiagram d,
                                  FreeBodyPaintOptions options)
     : mechanism_(m), result_(r), diagram_(std::move(d)), options_(std::move(options))
-{
-}
+{}
 
 QSizeF FreeBodyPainter::size() const
 {
@@ -270,7 +271,8 @@ void FreeBodyPainter::paint(QPainter& p, const QRectF& target) const
         for (Mark& mark : marksFor(item, options_.units, coupleFloor)) marks.push_back(std::move(mark));
     if (options_.dAlembert) {
         if (diagram_.inertiaForce().norm() > 1e-9)
-            marks.push_back({diagram_.cg, -diagram_.inertiaForce(), 0, false, inertiaStyle(), forceText(options_.units, "−m·a_G", -diagram_.inertiaForce())});
+            marks.push_back({diagram_.cg, -diagram_.inertiaForce(), 0, false, inertiaStyle(),
+                             forceText(options_.units, "−m·a_G", -diagram_.inertiaForce())});
         if (std::abs(diagram_.inertiaCouple()) > coupleFloor)
             marks.push_back({diagram_.cg, Vec2::Zero(), -diagram_.inertiaCouple(), true, inertiaStyle(),
                              coupleText(options_.units, "−I_G·α", -diagram_.inertiaCouple())});
@@ -278,7 +280,8 @@ void FreeBodyPainter::paint(QPainter& p, const QRectF& target) const
 
     const double right = options_.dAlembert ? kWidth - kMargin : kBodyPanelRight;
     const QRectF bodyArea(kMargin, kPanelTop, right - kMargin, kPanelHeight);
-    panelHeading(p, bodyArea, options_.dAlembert ? "Free body with inertia loads (d'Alembert): every sum is zero" : "Free body");
+    panelHeading(p, bodyArea,
+                 options_.dAlembert ? "Free body with inertia loads (d'Alembert): every sum is zero" : "Free body");
     std::vector<Vec2> loadPoints;
     for (const auto& item : diagram_.items) loadPoints.push_back(item.at);
     BodyPanel panel(points, diagram_.cg, loadPoints, bodyArea, pagePerNewton);
@@ -291,14 +294,17 @@ void FreeBodyPainter::paint(QPainter& p, const QRectF& target) const
         const QRectF kineticArea(kKineticLeft, kPanelTop, kWidth - kMargin - kKineticLeft, kPanelHeight);
         p.setFont(font(28));
         p.setPen(palette::ink());
-        p.drawText(QRectF(kBodyPanelRight, kPanelTop, kKineticLeft - kBodyPanelRight, kPanelHeight), Qt::AlignCenter, "=");
+        p.drawText(QRectF(kBodyPanelRight, kPanelTop, kKineticLeft - kBodyPanelRight, kPanelHeight), Qt::AlignCenter,
+                   "=");
         panelHeading(p, kineticArea, "Kinetic diagram");
         BodyPanel kinetic(points, diagram_.cg, {}, kineticArea, pagePerNewton);
         std::vector<Mark> km;
         if (diagram_.inertiaForce().norm() > 1e-9)
-            km.push_back({diagram_.cg, diagram_.inertiaForce(), 0, false, inertiaStyle(), forceText(options_.units, "m·a_G", diagram_.inertiaForce())});
+            km.push_back({diagram_.cg, diagram_.inertiaForce(), 0, false, inertiaStyle(),
+                          forceText(options_.units, "m·a_G", diagram_.inertiaForce())});
         if (std::abs(diagram_.inertiaCouple()) > coupleFloor)
-            km.push_back({diagram_.cg, Vec2::Zero(), diagram_.inertiaCouple(), true, inertiaStyle(), coupleText(options_.units, "I_G·α", diagram_.inertiaCouple())});
+            km.push_back({diagram_.cg, Vec2::Zero(), diagram_.inertiaCouple(), true, inertiaStyle(),
+                          coupleText(options_.units, "I_G·α", diagram_.inertiaCouple())});
         LabelPlacer kineticLabels(kineticArea.adjusted(0, 16, 0, -34), font(11));
         p.save();
         p.setOpacity(0.55);  // the kinetic body is a reference shape, not a load carrier
@@ -308,7 +314,8 @@ void FreeBodyPainter::paint(QPainter& p, const QRectF& target) const
         kineticLabels.paint(p, palette::ink(), palette::paper());
         if (km.empty()) {
             p.setFont(font(11));
-            p.drawText(QPointF(kineticArea.left(), kineticArea.bottom() - 40), "m·a_G = 0 and I_G·α = 0 (at rest or massless)");
+            p.drawText(QPointF(kineticArea.left(), kineticArea.bottom() - 40),
+                       "m·a_G = 0 and I_G·α = 0 (at rest or massless)");
         }
     }
 
@@ -344,7 +351,8 @@ void FreeBodyPainter::paintTitle(QPainter& p) const
     p.setFont(font(11));
     p.drawText(QPointF(kMargin, kMargin + 34), stepCaption(mechanism_, result_, diagram_.step));
     const QString mass = QString("m = %1, I_G = %2, G at %3")
-                             .arg(formatQuantity(diagram_.mass, "kg"), formatQuantity(diagram_.inertia, "kg·m²"), pointText(options_.units, diagram_.cg));
+                             .arg(formatQuantity(diagram_.mass, "kg"), formatQuantity(diagram_.inertia, "kg·m²"),
+                                  pointText(options_.units, diagram_.cg));
     p.drawText(QPointF(kMargin, kMargin + 50), mass);
     if (result_.steps[diagram_.step].nearSingular) {
         p.setPen(palette::problem());
@@ -360,7 +368,9 @@ void FreeBodyPainter::paintEquations(QPainter& p, double top) const
         const FreeBodyEquation& e;
         bool moment;
     };
-    const Row rows[] = {{"ΣFx", "m·aGx", diagram_.fx, false}, {"ΣFy", "m·aGy", diagram_.fy, false}, {"ΣM_G", "I_G·α", diagram_.moment, true}};
+    const Row rows[] = {{"ΣFx", "m·aGx", diagram_.fx, false},
+                        {"ΣFy", "m·aGy", diagram_.fy, false},
+                        {"ΣM_G", "I_G·α", diagram_.moment, true}};
     p.setPen(QPen(palette::gridMajor(), 1));
     p.drawLine(QPointF(kMargin, top), QPointF(kWidth - kMargin, top));
     p.setPen(palette::ink());
@@ -372,7 +382,8 @@ void FreeBodyPainter::paintEquations(QPainter& p, double top) const
         const auto value = [&](double v) { return row.moment ? u.torque(v) : u.force(v); };
         const double residual = row.e.residual * (row.moment ? u.torquePerNewtonMetre : u.forcePerNewton);
         const QString residualText =
-            QString("residual = %1 %2").arg(QString::number(residual, 'g', 2), row.moment ? u.torqueSymbol : u.forceSymbol);
+            QString("residual = %1 %2")
+                .arg(QString::number(residual, 'g', 2), row.moment ? u.torqueSymbol : u.forceSymbol);
         p.drawText(QPointF(kMargin + 10, y), QString("%1 = %2").arg(row.sum, value(row.e.sum)));
         p.drawText(QPointF(kMargin + 300, y), QString("%1 = %2").arg(row.kinetic, value(row.e.kinetic)));
         p.drawText(QPointF(kMargin + 600, y), residualText);

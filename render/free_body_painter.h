@@ -6,8 +6,8 @@
 // and residuals, and a table of the loads.
 #pragma once
 
-#include "render/figure_export.h"
 #include "core/results/free_body.h"
+#include "render/figure_export.h"
 #include "render/render_units.h"
 
 namespace clevis::ui {

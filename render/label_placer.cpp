@@ -22,8 +22,10 @@ double overlapArea(const QRectF& a, const QRectF& b)
 bool crosses(const QLineF& line, const QRectF& box)
 {
     if (box.contains(line.p1()) || box.contains(line.p2())) return true;
-    const QLineF edges[] = {{box.topLeft(), box.topRight()}, {box.topRight(), box.bottomRight()},
-                            {box.bottomRight(), box.bottomLeft()}, {box.bottomLeft(), box.topLeft()}};
+    const QLineF edges[] = {{box.topLeft(), box.topRight()},
+                            {box.topRight(), box.bottomRight()},
+                            {box.bottomRight(), box.bottomLeft()},
+                            {box.bottomLeft(), box.topLeft()}};
     for (const QLineF& e : edges)
         if (line.intersects(e, nullptr) == QLineF::BoundedIntersection) return true;
     return false;
@@ -62,8 +64,8 @@ void LabelPlacer::add(const QString& text, QPointF anchor, QPointF push)
             const double a = pushAngle + step * kPi / 8;
             const QPointF dir(std::cos(a), std::sin(a));
             // The box edge nearest the anchor sits `distance` away along dir.
-            const QPointF centre = anchor + dir * distance +
-                                   QPointF(dir.x() * size.width() / 2, dir.y() * size.height() / 2);
+            const QPointF centre =
+                anchor + dir * distance + QPointF(dir.x() * size.width() / 2, dir.y() * size.height() / 2);
             const QRectF box(centre - QPointF(size.width() / 2, size.height() / 2), size);
             const double c = cost(box) + 0.8 * distance + 2.0 * std::abs(step);
             if (c < bestCost) {

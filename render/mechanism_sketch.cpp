@@ -1,8 +1,8 @@
 #include "render/mechanism_sketch.h"
 
-#include "render/body_outline.h"
 #include "core/results/body_points_at_step.h"
 #include "core/solver/body_state.h"
+#include "render/body_outline.h"
 #include "render/drawing_symbols.h"
 #include "render/label_placer.h"
 #include "render/palette.h"
@@ -34,8 +34,7 @@ QPointF unitOf(QPointF v)
 
 MechanismSketch::MechanismSketch(const CompiledMechanism& m, const StepResult& step, QString caption, QSizeF size)
     : mechanism_(m), step_(step), caption_(std::move(caption)), size_(size)
-{
-}
+{}
 
 void MechanismSketch::paint(QPainter& p, const QRectF& target) const
 {

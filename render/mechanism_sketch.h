@@ -3,8 +3,8 @@
 // slide guides, names beside bodies and joints.
 #pragma once
 
-#include "render/figure_export.h"
 #include "core/results/results.h"
+#include "render/figure_export.h"
 
 #include <QString>
 

@@ -19,8 +19,8 @@ class PageFlow {
 public:
     PageFlow(QPdfWriter& writer, QPainter& painter, QString footer);
 
-    double width() const;  // content width, pt
-    void heading(const QString& text);     // a numbered section starts a new page when little room is left
+    double width() const;               // content width, pt
+    void heading(const QString& text);  // a numbered section starts a new page when little room is left
     void subheading(const QString& text);
     void paragraph(const QString& text, const QColor& colour = QColor(), bool bold = false);
     // Columns as fractions of the content width; the first row is the heading.

@@ -9,12 +9,12 @@
 
 namespace clevis::ui::palette {
 
-inline QColor paper() { return {0xFB, 0xFA, 0xF7}; }      // canvas and diagram background
+inline QColor paper() { return {0xFB, 0xFA, 0xF7}; }  // canvas and diagram background
 inline QColor gridMinor() { return {0xEC, 0xEA, 0xE4}; }
 inline QColor gridMajor() { return {0xDA, 0xD7, 0xCE}; }
-inline QColor ink() { return {0x22, 0x22, 0x22}; }        // outlines, text, joint reactions
+inline QColor ink() { return {0x22, 0x22, 0x22}; }  // outlines, text, joint reactions
 inline QColor groundHatch() { return {0x6B, 0x6B, 0x6B}; }
-inline QColor link() { return {0x00, 0x72, 0xB2}; }       // blue: moving bodies
+inline QColor link() { return {0x00, 0x72, 0xB2}; }  // blue: moving bodies
 inline QColor linkFill() { return {0xD6, 0xE9, 0xF5}; }
 inline QColor driver() { return {0xD5, 0x5E, 0x00}; }     // vermillion: motors and cylinders, drive effort
 inline QColor load() { return {0x00, 0x9E, 0x73}; }       // bluish green: applied forces and torques

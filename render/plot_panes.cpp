@@ -45,7 +45,8 @@ std::vector<PlotPane> plotPanes(const CompiledMechanism& m, const CycleResult& r
     for (const DriverType type : {DriverType::Rotary, DriverType::Linear}) {
         std::vector<PlotCurve> efforts;
         for (std::size_t d = 0; d < m.drivers.size(); ++d)
-            if (m.drivers[d].type == type) efforts.push_back({driverEffortSeries(m, r, int(d), u), int(d) + kFirstDriverPen});
+            if (m.drivers[d].type == type)
+                efforts.push_back({driverEffortSeries(m, r, int(d), u), int(d) + kFirstDriverPen});
         addPane(panes, type == DriverType::Rotary ? "Drive torque" : "Drive force", std::move(efforts));
     }
     std::vector<PlotCurve> powers;
@@ -55,15 +56,16 @@ std::vector<PlotPane> plotPanes(const CompiledMechanism& m, const CycleResult& r
     addPane(panes, "Shaking force on the frame", {{shakingForceSeries(r, u), 0}});
     addPane(panes, "Shaking moment on the frame", {{shakingMomentSeries(r, u), 1}});
     std::vector<PlotCurve> transmission;
-    for (std::size_t k = 0; k < r.transmissionPins.size(); ++k) transmission.push_back({transmissionSeries(m, r, int(k)), int(k)});
+    for (std::size_t k = 0; k < r.transmissionPins.size(); ++k)
+        transmission.push_back({transmissionSeries(m, r, int(k)), int(k)});
     addPane(panes, "Transmission angle", std::move(transmission));
     return panes;
 }
 
 QPen curvePen(int index)
 {
-    const QColor colours[] = {palette::ink(), palette::link(), palette::driver(), palette::load(), palette::spring(),
-                              palette::weight()};
+    const QColor colours[] = {palette::ink(),  palette::link(),   palette::driver(),
+                              palette::load(), palette::spring(), palette::weight()};
     const Qt::PenStyle styles[] = {Qt::SolidLine, Qt::DashLine, Qt::DotLine, Qt::DashDotLine};
     return QPen(colours[index % 6], 1.6, styles[index % 4]);
 }

@@ -1,16 +1,16 @@
 #include "render/review_report.h"
 
-#include "render/cycle_axis.h"
-#include "core/solver/body_state.h"
-#include "render/cycle_chart.h"
-#include "core/results/drive_units.h"
 #include "core/model/type_names.h"
+#include "core/results/drive_units.h"
+#include "core/solver/body_state.h"
+#include "render/cycle_axis.h"
+#include "render/cycle_chart.h"
 #include "render/energy_balance_figure.h"
 #include "render/free_body_painter.h"
 #include "render/mechanism_sketch.h"
 #include "render/page_flow.h"
-#include "render/plot_panes.h"
 #include "render/palette.h"
+#include "render/plot_panes.h"
 
 #include <QDateTime>
 #include <QFileInfo>
@@ -27,7 +27,10 @@ QString qs(const std::string& s) { return QString::fromStdString(s); }
 
 QString point(const RenderUnits& u, const Vec2& p)
 {
-    return QString("(%1, %2) %3").arg(p.x() * u.lengthPerMetre, 0, 'f', 2).arg(p.y() * u.lengthPerMetre, 0, 'f', 2).arg(u.lengthSymbol);
+    return QString("(%1, %2) %3")
+        .arg(p.x() * u.lengthPerMetre, 0, 'f', 2)
+        .arg(p.y() * u.lengthPerMetre, 0, 'f', 2)
+        .arg(u.lengthSymbol);
 }
 
 QString at(const CycleAxis& axis, int step)
@@ -44,17 +47,26 @@ QString effort(const RenderUnits& u, DriverType type, double v)
 QString motionText(const CompiledDriver& d)
 {
     const bool rotary = d.type == DriverType::Rotary;
-    const auto pos = [&](double v) { return QString("%1 %2").arg(driveDisplayValue(d.type, v), 0, 'f', rotary ? 2 : 4).arg(driveDisplayUnit(d.type)); };
+    const auto pos = [&](double v) {
+        return QString("%1 %2").arg(driveDisplayValue(d.type, v), 0, 'f', rotary ? 2 : 4).arg(driveDisplayUnit(d.type));
+    };
     if (const auto* c = std::get_if<ConstantSpeed>(&d.motion)) {
         QString s = rotary ? QString("constant speed %1 rpm").arg(c->speed * 60 / (2 * kPi), 0, 'f', 2)
                            : QString("constant speed %1 m/s").arg(c->speed, 0, 'f', 4);
-        if (c->accel != 0) s += QString(", acceleration %1 %2/s²").arg(driveDisplayValue(d.type, c->accel), 0, 'g', 4).arg(driveDisplayUnit(d.type));
+        if (c->accel != 0)
+            s += QString(", acceleration %1 %2/s²")
+                     .arg(driveDisplayValue(d.type, c->accel), 0, 'g', 4)
+                     .arg(driveDisplayUnit(d.type));
         return s;
     }
     if (const auto* r = std::get_if<Rise>(&d.motion))
-        return QString("%1 from %2 to %3, starting %4 s").arg(camLawName(r->law), pos(r->from), pos(r->to)).arg(r->start, 0, 'f', 3);
+        return QString("%1 from %2 to %3, starting %4 s")
+            .arg(camLawName(r->law), pos(r->from), pos(r->to))
+            .arg(r->start, 0, 'f', 3);
     const auto& t = std::get<MotionTable>(d.motion);
-    return QString("table of %1 positions over %2 s").arg(t.time.size()).arg(t.time.empty() ? 0.0 : t.time.back(), 0, 'f', 3);
+    return QString("table of %1 positions over %2 s")
+        .arg(t.time.size())
+        .arg(t.time.empty() ? 0.0 : t.time.back(), 0, 'f', 3);
 }
 
 void inputsSection(PageFlow& f, const ReviewReportInput& in)
@@ -64,40 +76,58 @@ void inputsSection(PageFlow& f, const ReviewReportInput& in)
     f.subheading("Bodies");
     std::vector<QStringList> bodies{{"Body", "Mass", "Centre of mass (drawn)", "I_G"}};
     for (const auto& b : m.bodies)
-        bodies.push_back({qs(b.name), formatQuantity(b.mass.mass, "kg"), point(u, b.mass.cg), formatQuantity(b.mass.inertia, "kg·m²")});
+        bodies.push_back({qs(b.name), formatQuantity(b.mass.mass, "kg"), point(u, b.mass.cg),
+                          formatQuantity(b.mass.inertia, "kg·m²")});
     f.table(bodies, {0.22, 0.18, 0.36, 0.24});
     f.subheading("Joints");
     std::vector<QStringList> joints{{"Joint", "Type", "First body", "Second body", "At (drawn)", "Axis"}};
     for (const auto& j : m.joints) {
-        const Vec2 drawn = j.point[1].body == kGround ? j.point[1].local : Vec2(m.bodies[j.point[1].body].mass.cg + j.point[1].local);
-        joints.push_back({qs(j.name), jointTypeName(j.type), qs(m.bodyName(j.body[0])), qs(m.bodyName(j.body[1])), point(u, drawn),
-                          j.type == JointType::Pin ? QString("–") : formatDirection(radToDeg(std::atan2(j.axisLocal.y(), j.axisLocal.x())))});
+        const Vec2 drawn =
+            j.point[1].body == kGround ? j.point[1].local : Vec2(m.bodies[j.point[1].body].mass.cg + j.point[1].local);
+        joints.push_back(
+            {qs(j.name), jointTypeName(j.type), qs(m.bodyName(j.body[0])), qs(m.bodyName(j.body[1])), point(u, drawn),
+             j.type == JointType::Pin ? QString("–")
+                                      : formatDirection(radToDeg(std::atan2(j.axisLocal.y(), j.axisLocal.x())))});
     }
     f.table(joints, {0.12, 0.14, 0.16, 0.16, 0.28, 0.14});
     f.subheading("Drivers");
     std::vector<QStringList> drivers{{"Driver", "Type", "Acts at", "Motion"}};
     for (const auto& d : m.drivers)
         drivers.push_back({qs(d.name), d.type == DriverType::Rotary ? "rotary" : "linear",
-                           d.joint >= 0 ? qs(m.joints[d.joint].name) : QString("%1 – %2").arg(qs(m.bodyName(d.ends[0].body)), qs(m.bodyName(d.ends[1].body))),
+                           d.joint >= 0
+                               ? qs(m.joints[d.joint].name)
+                               : QString("%1 – %2").arg(qs(m.bodyName(d.ends[0].body)), qs(m.bodyName(d.ends[1].body))),
                            motionText(d)});
     f.table(drivers, {0.16, 0.1, 0.2, 0.54});
     f.subheading("Loads");
     std::vector<QStringList> loads{{"Load", "Kind", "On", "Value"}};
     for (const auto& l : m.forces)
-        loads.push_back({qs(l.name), "force", qs(m.bodyName(l.point.body)),
-                         QString("%1 ∠ %2%3%4").arg(u.force(l.force.norm()), formatDirection(radToDeg(std::atan2(l.force.y(), l.force.x()))),
-                                                   l.turnsWithBody ? ", turns with the body" : "", l.profile ? ", scaled by a profile" : "")});
-    for (const auto& l : m.torques) loads.push_back({qs(l.name), "torque", qs(m.bodyName(l.body)), u.torque(l.torque) + (l.profile ? ", scaled by a profile" : "")});
+        loads.push_back(
+            {qs(l.name), "force", qs(m.bodyName(l.point.body)),
+             QString("%1 ∠ %2%3%4")
+                 .arg(u.force(l.force.norm()), formatDirection(radToDeg(std::atan2(l.force.y(), l.force.x()))),
+                      l.turnsWithBody ? ", turns with the body" : "", l.profile ? ", scaled by a profile" : "")});
+    for (const auto& l : m.torques)
+        loads.push_back({qs(l.name), "torque", qs(m.bodyName(l.body)),
+                         u.torque(l.torque) + (l.profile ? ", scaled by a profile" : "")});
     for (const auto& l : m.springs)
-        loads.push_back({qs(l.name), "spring", QString("%1 – %2").arg(qs(m.bodyName(l.a.body)), qs(m.bodyName(l.b.body))),
-                         QString("k = %1, free length %2").arg(formatQuantity(l.stiffness, "N/m"), u.length(l.freeLength))});
+        loads.push_back(
+            {qs(l.name), "spring", QString("%1 – %2").arg(qs(m.bodyName(l.a.body)), qs(m.bodyName(l.b.body))),
+             QString("k = %1, free length %2").arg(formatQuantity(l.stiffness, "N/m"), u.length(l.freeLength))});
     for (const auto& l : m.dampers)
-        loads.push_back({qs(l.name), "damper", QString("%1 – %2").arg(qs(m.bodyName(l.a.body)), qs(m.bodyName(l.b.body))), QString("c = %1").arg(formatQuantity(l.damping, "N·s/m"))});
+        loads.push_back({qs(l.name), "damper",
+                         QString("%1 – %2").arg(qs(m.bodyName(l.a.body)), qs(m.bodyName(l.b.body))),
+                         QString("c = %1").arg(formatQuantity(l.damping, "N·s/m"))});
     for (const auto& l : m.torsionSprings)
         loads.push_back({qs(l.name), "torsion spring", qs(m.joints[l.joint].name),
-                         QString("k = %1, free angle %2").arg(formatQuantity(l.stiffness, "N·m/rad"), formatDirection(radToDeg(l.freeAngle)))});
+                         QString("k = %1, free angle %2")
+                             .arg(formatQuantity(l.stiffness, "N·m/rad"), formatDirection(radToDeg(l.freeAngle)))});
     const bool gravity = m.gravity.norm() > 0;
-    loads.push_back({"weight", "gravity", "every body", gravity ? QString("g = %1 ∠ %2").arg(formatQuantity(m.gravity.norm(), "m/s²"), formatDirection(radToDeg(std::atan2(m.gravity.y(), m.gravity.x())))) : QString("off")});
+    loads.push_back({"weight", "gravity", "every body",
+                     gravity ? QString("g = %1 ∠ %2")
+                                   .arg(formatQuantity(m.gravity.norm(), "m/s²"),
+                                        formatDirection(radToDeg(std::atan2(m.gravity.y(), m.gravity.x()))))
+                             : QString("off")});
     f.table(loads, {0.16, 0.14, 0.2, 0.5});
     f.paragraph(QString("Cycle: %1 s in %2 steps.").arg(m.duration, 0, 'g', 6).arg(m.steps));
 }
@@ -122,30 +152,42 @@ void peakSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis
     std::vector<QStringList> drivers{{"Driver", "Peak", "Where", "RMS", "Mean", "Peak power", "Regenerative", "Work"}};
     for (const auto& d : s.drivers)
         drivers.push_back({qs(d.name), effort(u, d.type, d.peak.value), at(axis, d.peak.step), effort(u, d.type, d.rms),
-                           effort(u, d.type, d.mean), d.peakPower.step >= 0 ? formatQuantity(d.peakPower.value, "W") : QString("–"),
-                           d.peakRegenerative.step >= 0 ? formatQuantity(d.peakRegenerative.value, "W") : QString("–"), formatQuantity(d.work, "J")});
+                           effort(u, d.type, d.mean),
+                           d.peakPower.step >= 0 ? formatQuantity(d.peakPower.value, "W") : QString("–"),
+                           d.peakRegenerative.step >= 0 ? formatQuantity(d.peakRegenerative.value, "W") : QString("–"),
+                           formatQuantity(d.work, "J")});
     f.table(drivers, {0.11, 0.12, 0.2, 0.11, 0.11, 0.12, 0.12, 0.11});
     f.subheading("Frame and transmission");
-    std::vector<QStringList> frame{{"Quantity", "Peak", "Where"},
-                                   {"shaking force", u.force(s.groundForce.value), at(axis, s.groundForce.step)},
-                                   {"shaking moment about the origin", u.torque(s.groundMoment.value), at(axis, s.groundMoment.step)}};
+    std::vector<QStringList> frame{
+        {"Quantity", "Peak", "Where"},
+        {"shaking force", u.force(s.groundForce.value), at(axis, s.groundForce.step)},
+        {"shaking moment about the origin", u.torque(s.groundMoment.value), at(axis, s.groundMoment.step)}};
     for (const auto& t : s.transmission) {
-        frame.push_back({QString("transmission angle at %1, least").arg(qs(t.joint)), formatDirection(t.minimum.value), at(axis, t.minimum.step)});
-        frame.push_back({QString("transmission angle at %1, greatest").arg(qs(t.joint)), formatDirection(t.maximum.value), at(axis, t.maximum.step)});
+        frame.push_back({QString("transmission angle at %1, least").arg(qs(t.joint)), formatDirection(t.minimum.value),
+                         at(axis, t.minimum.step)});
+        frame.push_back({QString("transmission angle at %1, greatest").arg(qs(t.joint)),
+                         formatDirection(t.maximum.value), at(axis, t.maximum.step)});
     }
     f.table(frame, {0.45, 0.2, 0.35});
     if (s.nearSingularSteps > 0)
-        f.paragraph(QString("%1 steps are near a singular position (shaded in the plots); the loads there are unreliable.").arg(s.nearSingularSteps),
-                    palette::problem(), true);
-    for (const auto& w : in.result.warnings) f.paragraph(QString("Warning (%1): %2").arg(qs(w.code), qs(w.message)), palette::problem());
+        f.paragraph(
+            QString("%1 steps are near a singular position (shaded in the plots); the loads there are unreliable.")
+                .arg(s.nearSingularSteps),
+            palette::problem(), true);
+    for (const auto& w : in.result.warnings)
+        f.paragraph(QString("Warning (%1): %2").arg(qs(w.code), qs(w.message)), palette::problem());
 }
 
 }  // namespace
 
 const std::vector<QString>& reviewReportSections()
 {
-    static const std::vector<QString> sections{"1 Mechanism", "2 Inputs", "3 Loads over the cycle", "4 Peak loads",
-                                               "5 Free-body diagrams at the critical positions", "6 Energy balance",
+    static const std::vector<QString> sections{"1 Mechanism",
+                                               "2 Inputs",
+                                               "3 Loads over the cycle",
+                                               "4 Peak loads",
+                                               "5 Free-body diagrams at the critical positions",
+                                               "6 Energy balance",
                                                "7 Cautions and assumptions"};
     return sections;
 }
@@ -191,28 +233,47 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
     int done = 0;
     const auto advance = [&] { return !progress || progress(++done, total); };
     const CycleAxis axis = cycleAxis(m, r);
-    PageFlow f(writer, painter, QString("Clevis design review: %1 (%2), %3").arg(qs(m.name), in.sourceName,
-                                                                                   QDateTime::currentDateTime().toString("yyyy-MM-dd")));
+    PageFlow f(writer, painter,
+               QString("Clevis design review: %1 (%2), %3")
+                   .arg(qs(m.name), in.sourceName, QDateTime::currentDateTime().toString("yyyy-MM-dd")));
 
     painter.setFont(reportFont(22, true));
     painter.setPen(palette::ink());
     painter.drawText(QPointF(40, 62), QString("Design review: %1").arg(qs(m.name.empty() ? "mechanism" : m.name)));
     f.space(36);
-    f.paragraph(QString("Source: %1. Units: lengths in %2, forces in %3, torques in %4; angles counter-clockwise from +x. "
-                        "Reactions are the forces the first-listed body of a joint exerts on the second.")
-                    .arg(in.sourceName, in.units.lengthSymbol, in.units.forceSymbol, in.units.torqueSymbol));
-    if (!r.complete) f.paragraph("The cycle could not be completed: results cover the reachable part only (shaded in the plots).", palette::problem(), true);
+    f.paragraph(
+        QString("Source: %1. Units: lengths in %2, forces in %3, torques in %4; angles counter-clockwise from +x. "
+                "Reactions are the forces the first-listed body of a joint exerts on the second.")
+            .arg(in.sourceName, in.units.lengthSymbol, in.units.forceSymbol, in.units.torqueSymbol));
+    if (!r.complete)
+        f.paragraph("The cycle could not be completed: results cover the reachable part only (shaded in the plots).",
+                    palette::problem(), true);
     f.heading(sections[0]);
     f.figure(MechanismSketch(m, r.steps.front(), "At the start of the cycle: " + stepCaption(m, r, 0)), f.width());
     bool ok = advance();
-    if (ok) { f.heading(sections[1]); inputsSection(f, in); ok = advance(); }
-    if (ok) { f.newPage(); f.heading(sections[2]); plotsSection(f, in, axis); ok = advance(); }
-    if (ok) { f.heading(sections[3]); peakSection(f, in, axis); ok = advance(); }
+    if (ok) {
+        f.heading(sections[1]);
+        inputsSection(f, in);
+        ok = advance();
+    }
+    if (ok) {
+        f.newPage();
+        f.heading(sections[2]);
+        plotsSection(f, in, axis);
+        ok = advance();
+    }
+    if (ok) {
+        f.heading(sections[3]);
+        peakSection(f, in, axis);
+        ok = advance();
+    }
     if (ok) {
         f.newPage();
         f.heading(sections[4]);
-        f.paragraph("Each body below is cut free at the position where one of its joints carries its peak load; "
-                    "the kinetic diagram beside it holds m·a_G and I_G·α, and the equations under it close to the residual shown.");
+        f.paragraph(
+            "Each body below is cut free at the position where one of its joints carries its peak load; "
+            "the kinetic diagram beside it holds m·a_G and I_G·α, and the equations under it close to the residual "
+            "shown.");
         for (const auto& c : critical) {
             if (!(ok = advance())) break;
             const FreeBodyPainter figure(m, r, freeBodyDiagram(m, r, c.body, c.step), {in.units, false});
@@ -223,21 +284,24 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
     }
     if (ok) {
         f.heading(sections[5]);
-        f.paragraph("W_drivers = ΔT + ΔV_gravity + ΔV_springs + W_dampers − W_loads + residual, over the solved span. "
-                    "A residual that is not small against the energy passing through means the step count is too coarse "
-                    "or the cycle passes a singular position.");
+        f.paragraph(
+            "W_drivers = ΔT + ΔV_gravity + ΔV_springs + W_dampers − W_loads + residual, over the solved span. "
+            "A residual that is not small against the energy passing through means the step count is too coarse "
+            "or the cycle passes a singular position.");
         f.figure(EnergyBalanceFigure(in.summary.energy), f.width());
         ok = advance();
     }
     if (ok) {
         f.heading(sections[6]);
-        for (const QString& c : {QString("Rigid bodies and ideal joints: no clearance, no elasticity, no friction unless it is modelled as a load; "
-                                         "the drivers follow their prescribed motion exactly."),
-                                 QString("These are loads, not a design check. Fatigue is not covered."),
-                                 QString("Apply the service and dynamic factors of the application (shock, start-up, misalignment) "
-                                         "before sizing a pin, bearing, link or motor."),
-                                 QString("Check the parts under the local codes and standards that apply."),
-                                 QString("Have the results reviewed by a licensed engineer before anything is built.")})
+        for (const QString& c :
+             {QString("Rigid bodies and ideal joints: no clearance, no elasticity, no friction unless it is modelled "
+                      "as a load; "
+                      "the drivers follow their prescribed motion exactly."),
+              QString("These are loads, not a design check. Fatigue is not covered."),
+              QString("Apply the service and dynamic factors of the application (shock, start-up, misalignment) "
+                      "before sizing a pin, bearing, link or motor."),
+              QString("Check the parts under the local codes and standards that apply."),
+              QString("Have the results reviewed by a licensed engineer before anything is built.")})
             f.paragraph("• " + c);
         ok = advance();
     }

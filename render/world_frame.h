@@ -21,7 +21,10 @@ struct WorldFrame {
         return {page.x() + (p.x() - centre.x()) * scale, page.y() - (p.y() - centre.y()) * scale};
     }
     // A direction (e.g. a force) as a page vector of the given page length per unit.
-    QPointF mapDirection(const Vec2& v, double pagePerUnit) const { return {v.x() * pagePerUnit, -v.y() * pagePerUnit}; }
+    QPointF mapDirection(const Vec2& v, double pagePerUnit) const
+    {
+        return {v.x() * pagePerUnit, -v.y() * pagePerUnit};
+    }
 
     // Fits `points` (with `margin` page units around them) into `area`.
     static WorldFrame fit(const std::vector<Vec2>& points, const QRectF& area, double margin);

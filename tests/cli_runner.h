@@ -35,8 +35,8 @@ inline CliRun runCli(const std::filesystem::path& scratch, const std::string& ar
                      const std::string& stdinFrom = "/dev/null")
 {
     const std::filesystem::path out = scratch / "stdout.txt", err = scratch / "stderr.txt";
-    const std::string command = std::string("'") + CLEVIS_CLI_PATH + "' " + args + " <" + stdinFrom + " >" +
-                                quoted(out) + " 2>" + quoted(err);
+    const std::string command =
+        std::string("'") + CLEVIS_CLI_PATH + "' " + args + " <" + stdinFrom + " >" + quoted(out) + " 2>" + quoted(err);
     const int status = std::system(command.c_str());
     CliRun r;
     r.exitCode = WIFEXITED(status) ? WEXITSTATUS(status) : -1;

@@ -50,8 +50,7 @@ inline Mechanism sliderCrank(const SliderCrankSpec& s)
     m.name = "slider-crank";
     m.gravity = Vec2::Zero();
     m.bodies = {pointBody("crank", s.crankMass, 0.5 * a, s.crankInertia),
-                pointBody("rod", s.rodMass, 0.5 * (a + b), s.rodInertia),
-                pointBody("piston", s.pistonMass, b, 0.0)};
+                pointBody("rod", s.rodMass, 0.5 * (a + b), s.rodInertia), pointBody("piston", s.pistonMass, b, 0.0)};
     m.joints = {pin("O", kGroundName, "crank", Vec2::Zero()), pin("A", "crank", "rod", a), pin("B", "rod", "piston", b),
                 Joint{"S", JointType::Slider, {kGroundName, "piston"}, b, 0.0}};
     m.drivers = {rotary("motor", "O", ConstantSpeed{s.omega, 0.0}, s.theta0)};
@@ -98,8 +97,8 @@ inline Driver cylinder(const std::string& name, BodyPointRef a, BodyPointRef b, 
 // Centres of mass at mid-link unless a mass is given with an offset.
 struct FourBarSpec {
     double a = 0.1, b = 0.35, c = 0.3, d = 0.4, theta2 = 0.3;
-    double mass[3] = {0, 0, 0};      // crank, coupler, rocker, kg
-    double inertia[3] = {0, 0, 0};   // about each centre of mass, kg·m²
+    double mass[3] = {0, 0, 0};                                     // crank, coupler, rocker, kg
+    double inertia[3] = {0, 0, 0};                                  // about each centre of mass, kg·m²
     Vec2 cgOffset[3] = {Vec2::Zero(), Vec2::Zero(), Vec2::Zero()};  // from mid-link, m
     Motion motion = ConstantSpeed{2 * kPi, 0.0};
 };

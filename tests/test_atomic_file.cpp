@@ -17,8 +17,8 @@
 
 #include <algorithm>
 #include <csignal>
-#include <cstring>
 #include <cstdlib>
+#include <cstring>
 #include <filesystem>
 #include <fstream>
 #include <sstream>
@@ -226,9 +226,8 @@ TEST_F(AtomicFileTest, KilledDuringTheSaveLeavesTheOldFileIntact)
 {
     writeFileAtomically(file_.string(), "old\n", true);
     std::string temporary;
-    const int status = inChild([&] {
-        writeFileAtomically(file_.string(), "new\n", true, [](const std::string&) { ::raise(SIGKILL); });
-    });
+    const int status = inChild(
+        [&] { writeFileAtomically(file_.string(), "new\n", true, [](const std::string&) { ::raise(SIGKILL); }); });
     ASSERT_TRUE(WIFSIGNALED(status));
     EXPECT_EQ(WTERMSIG(status), SIGKILL);
     EXPECT_EQ(readFile(file_), "old\n");

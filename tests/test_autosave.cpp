@@ -4,14 +4,14 @@
 // leaves no recovery file; a folder that cannot be written gives one quiet
 // note; and two instances never take each other's files.
 #include "core/file/atomic_file.h"
-#include "ui/files/autosave_timer.h"
-#include "ui/files/file_actions.h"
-#include "ui/shell/main_window.h"
+#include "core/file/mechanism_file.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/document/mechanism_edits.h"
-#include "core/file/mechanism_file.h"
+#include "ui/files/autosave_timer.h"
+#include "ui/files/file_actions.h"
 #include "ui/files/recovery_prompt.h"
 #include "ui/files/recovery_store.h"
+#include "ui/shell/main_window.h"
 
 #include <QApplication>
 #include <QDir>
@@ -38,10 +38,7 @@ using namespace clevis::ui;
 
 namespace {
 
-Mechanism sampleFourBar()
-{
-    return loadMechanismFile(CLEVIS_TEST_DATA "/drawn_four_bar.json").mechanism;
-}
+Mechanism sampleFourBar() { return loadMechanismFile(CLEVIS_TEST_DATA "/drawn_four_bar.json").mechanism; }
 
 // Two kinds of change at once: a moved pin and a new part.
 void editTheDrawing(MechanismDocument& doc, double pinX)
@@ -50,10 +47,7 @@ void editTheDrawing(MechanismDocument& doc, double pinX)
     doc.apply(QStringLiteral("Add torque"), [](Mechanism& m) { edits::addTorque(m, m.bodies.back().name, -3.5); });
 }
 
-QStringList filesIn(const QString& folder)
-{
-    return QDir(folder).entryList(QDir::Files | QDir::Hidden);
-}
+QStringList filesIn(const QString& folder) { return QDir(folder).entryList(QDir::Files | QDir::Hidden); }
 
 // Clicks `button` in the next message box that opens (e.g. the prompt about unsaved changes).
 void answerNextMessageBox(QMessageBox::StandardButton button)
@@ -117,11 +111,13 @@ TEST_F(Autosave, AfterACrashAFreshStartRestoresTheEditedDocumentUnsaved)
     });
     EXPECT_TRUE(problems.isEmpty()) << problems.join('\n').toStdString();
     ASSERT_EQ(asked.size(), 1);
-    EXPECT_TRUE(asked.front().startsWith(QStringLiteral("Unsaved changes to punch_press.json from "))) << asked.front().toStdString();
+    EXPECT_TRUE(asked.front().startsWith(QStringLiteral("Unsaved changes to punch_press.json from ")))
+        << asked.front().toStdString();
     EXPECT_EQ(fresh.document()->mechanism(), edited);
     EXPECT_TRUE(fresh.document()->isModified());
     EXPECT_EQ(fresh.document()->filePath(), QFileInfo(original).absoluteFilePath());
-    EXPECT_EQ(loadMechanismFile(original.toStdString()).mechanism, sampleFourBar()) << "restoring must not write the original";
+    EXPECT_EQ(loadMechanismFile(original.toStdString()).mechanism, sampleFourBar())
+        << "restoring must not write the original";
 
     // Until it is saved, the restored document keeps its recovery file.
     const QString kept = fresh.autosave()->recoveryPath();
@@ -154,21 +150,25 @@ TEST_F(Autosave, AFileWhoseWriterDiedIsOfferedAndAnUntitledOneSaysSo)
     int status = 0;
     ASSERT_EQ(waitpid(child, &status, 0), child);
     ASSERT_TRUE(WIFEXITED(status) && WEXITSTATUS(status) == 0);
-    ASSERT_EQ(QDir(recovery).entryList({QStringLiteral("*.lock")}).size(), 1) << "the dead writer's lock is still there";
+    ASSERT_EQ(QDir(recovery).entryList({QStringLiteral("*.lock")}).size(), 1)
+        << "the dead writer's lock is still there";
 
     std::vector<RecoveryClaim> claims = RecoveryStore(recovery).claimLeftovers();
     ASSERT_EQ(claims.size(), 1u);
     EXPECT_EQ(RecoveryStore::read(claims.front()), edited);
     EXPECT_TRUE(claims.front().originalPath.isEmpty());
-    EXPECT_TRUE(recoveryMessage(claims.front()).startsWith(QStringLiteral("Unsaved changes to an untitled mechanism from ")));
+    EXPECT_TRUE(
+        recoveryMessage(claims.front()).startsWith(QStringLiteral("Unsaved changes to an untitled mechanism from ")));
 }
 
 TEST_F(Autosave, TheMessageNamesTheFileAndTheTime)
 {
-    RecoveryClaim claim{{}, QStringLiteral("/work/shop/punch_press.json"), QDateTime(QDate::currentDate(), QTime(21, 43))};
+    RecoveryClaim claim{
+        {}, QStringLiteral("/work/shop/punch_press.json"), QDateTime(QDate::currentDate(), QTime(21, 43))};
     EXPECT_EQ(recoveryMessage(claim), QStringLiteral("Unsaved changes to punch_press.json from 21:43 were recovered."));
     claim.savedAt = QDateTime(QDate(2023, 11, 5), QTime(8, 5));
-    EXPECT_EQ(recoveryMessage(claim), QStringLiteral("Unsaved changes to punch_press.json from 2023-11-05 08:05 were recovered."));
+    EXPECT_EQ(recoveryMessage(claim),
+              QStringLiteral("Unsaved changes to punch_press.json from 2023-11-05 08:05 were recovered."));
 }
 
 TEST_F(Autosave, ACleanCloseRemovesTheRecoveryFile)
@@ -247,7 +247,8 @@ TEST_F(Autosave, TheTimerWritesByItselfAndNotesAFailureOnlyOnce)
     MechanismDocument doc;
     doc.reset(sampleFourBar(), {});
     AutosaveTimer good(&doc, RecoveryStore(recovery), nullptr, std::chrono::milliseconds(20));
-    AutosaveTimer bad(&doc, RecoveryStore(original + QStringLiteral("/recovery")), nullptr, std::chrono::milliseconds(20));
+    AutosaveTimer bad(&doc, RecoveryStore(original + QStringLiteral("/recovery")), nullptr,
+                      std::chrono::milliseconds(20));
     QSignalSpy notes(&bad, &AutosaveTimer::note);
     editTheDrawing(doc, 0.06);
     EXPECT_TRUE(QTest::qWaitFor([&] { return !good.recoveryPath().isEmpty(); }, 2000));
@@ -274,7 +275,8 @@ TEST_F(Autosave, TwoInstancesNeverTakeEachOthersFiles)
     EXPECT_TRUE(RecoveryStore(recovery).claimLeftovers().empty()) << "a claimed file is not offered twice";
 
     // The running instance keeps writing its own file, untouched by the claim.
-    second->document()->apply(QStringLiteral("Add torque"), [](Mechanism& m) { edits::addTorque(m, m.bodies.front().name, 1.0); });
+    second->document()->apply(QStringLiteral("Add torque"),
+                              [](Mechanism& m) { edits::addTorque(m, m.bodies.front().name, 1.0); });
     ASSERT_TRUE(second->autosave()->writeNow());
     EXPECT_EQ(second->autosave()->recoveryPath(), secondFile);
     EXPECT_EQ(loadMechanismFile(secondFile.toStdString()).mechanism, second->document()->mechanism());
@@ -307,8 +309,8 @@ TEST_F(Autosave, ADamagedRecoveryFileIsReportedAndKept)
 
     MainWindow fresh(recovery);
     fresh.document()->reset(sampleFourBar(), {});
-    const QStringList problems =
-        offerRecovery(*fresh.document(), *fresh.autosave(), [](const RecoveryClaim&) { return RecoveryChoice::Restore; });
+    const QStringList problems = offerRecovery(*fresh.document(), *fresh.autosave(),
+                                               [](const RecoveryClaim&) { return RecoveryChoice::Restore; });
     ASSERT_EQ(problems.size(), 1);
     EXPECT_TRUE(problems.front().contains(QFileInfo(path).fileName())) << problems.front().toStdString();
     EXPECT_EQ(fresh.document()->mechanism(), sampleFourBar());

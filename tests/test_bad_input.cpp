@@ -1,8 +1,8 @@
 // Malformed and oversized mechanism files through `clevis-cli analyze`, as a
 // user meets them: each must exit with 1 and say on stderr which file and
 // which place in it is wrong — never crash, hang or print results.
-#include "tests/cli_runner.h"
 #include "core/model/model_limits.h"
+#include "tests/cli_runner.h"
 
 #include <gtest/gtest.h>
 #include <nlohmann/json.hpp>
@@ -101,8 +101,11 @@ TEST_F(BadInputTest, TheBaseDocumentAnalyses)
 
 TEST_F(BadInputTest, BarWithCoincidentExplicitEnds)
 {
-    expectRejected([](json& d) { d["bodies"][1]["section"]["ends"] = {{0.1, 0}, {0.1, 0}}; },
-                   {"bodies[1].section: ", "zero length"});
+    expectRejected(
+        [](json& d) {
+            d["bodies"][1]["section"]["ends"] = {{0.1, 0}, {0.1, 0}};
+        },
+        {"bodies[1].section: ", "zero length"});
 }
 
 // With no explicit ends the bar runs between its joints: here both are at A.
@@ -115,9 +118,11 @@ TEST_F(BadInputTest, CylinderWithCoincidentEnds)
 {
     expectRejected(
         [](json& d) {
-            d["drivers"][0] = {{"name", "ram"}, {"type", "linear"}, {"speed", 0.1},
-                               {"between", {{{"body", "ground"}, {"at", {0.2, -0.1}}},
-                                            {{"body", "rocker"}, {"at", {0.2, -0.1}}}}}};
+            d["drivers"][0] = {
+                {"name", "ram"},
+                {"type", "linear"},
+                {"speed", 0.1},
+                {"between", {{{"body", "ground"}, {"at", {0.2, -0.1}}}, {{"body", "rocker"}, {"at", {0.2, -0.1}}}}}};
         },
         {"drivers[0].between: ", "ends coincide"});
 }
@@ -126,8 +131,12 @@ TEST_F(BadInputTest, CylinderWithCoincidentEnds)
 // bodies at the same point are one hinge typed twice.
 TEST_F(BadInputTest, CoincidentPinsBetweenTheSameBodies)
 {
-    expectRejected([](json& d) { d["joints"].push_back({{"name", "A2"}, {"type", "pin"}, {"bodies", {"coupler", "crank"}}, {"at", {0.1, 0}}}); },
-                   {"joints[4]: ", "\"A2\"", "same point as pin \"A\" (joints[1])", "delete one of them"});
+    expectRejected(
+        [](json& d) {
+            d["joints"].push_back(
+                {{"name", "A2"}, {"type", "pin"}, {"bodies", {"coupler", "crank"}}, {"at", {0.1, 0}}});
+        },
+        {"joints[4]: ", "\"A2\"", "same point as pin \"A\" (joints[1])", "delete one of them"});
 }
 
 TEST_F(BadInputTest, NonFiniteNumbersWrittenAsStrings)
@@ -201,7 +210,8 @@ TEST_F(BadInputTest, UnwritableResultFileIsNamedWithTheReason)
 
 void addUnconnectedBodies(json& d, std::size_t total)
 {
-    for (std::size_t k = d["bodies"].size(); k < total; ++k) d["bodies"].push_back({{"name", "extra" + std::to_string(k)}});
+    for (std::size_t k = d["bodies"].size(); k < total; ++k)
+        d["bodies"].push_back({{"name", "extra" + std::to_string(k)}});
 }
 
 // Refused by count before anything is computed for the bodies (here they are

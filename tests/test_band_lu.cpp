@@ -5,15 +5,15 @@
 // one at a time.
 #include "core/solver/band_lu.h"
 #include "core/solver/band_ordering.h"
-#include "tests/chain_generator.h"
 #include "core/solver/compiled_mechanism.h"
 #include "core/solver/constraint_system.h"
 #include "core/solver/cycle_sweep.h"
 #include "core/solver/jacobian_factor.h"
 #include "core/solver/step_solver.h"
+#include "tests/chain_generator.h"
 
-#include <Eigen/Dense>
 #include <gtest/gtest.h>
+#include <Eigen/Dense>
 
 #include <algorithm>
 #include <numeric>
@@ -63,8 +63,8 @@ TEST(BandLu, SolvesAndDeterminantSignMatchDenseLuThroughRowSwaps)
     const std::tuple<int, int, int> shapes[] = {{1, 0, 0}, {7, 2, 1}, {30, 3, 3}, {40, 1, 5}, {25, 6, 1}, {12, 11, 11}};
     for (const auto& [n, kl, ku] : shapes)
         for (unsigned seed = 1; seed <= 5; ++seed) {
-            SCOPED_TRACE("n = " + std::to_string(n) + ", kl = " + std::to_string(kl) + ", ku = " +
-                         std::to_string(ku) + ", seed " + std::to_string(seed));
+            SCOPED_TRACE("n = " + std::to_string(n) + ", kl = " + std::to_string(kl) + ", ku = " + std::to_string(ku) +
+                         ", seed " + std::to_string(seed));
             const Eigen::MatrixXd a = randomBand(n, kl, ku, seed);
             BandLu lu = bandOf(a, kl, ku);
             ASSERT_TRUE(lu.factor());

@@ -1,8 +1,8 @@
 // Normalised rise laws against their standard definitions and the peak
 // factors of standard cam-design tables, and driver motions built on them.
+#include "core/model/type_names.h"
 #include "core/solver/cam_law.h"
 #include "core/solver/driver_motion.h"
-#include "core/model/type_names.h"
 
 #include <gtest/gtest.h>
 
@@ -85,7 +85,8 @@ TEST(CamLaw, DerivativesMatchFiniteDifferences)
         double worst = 0.0;
         for (int i = 1; i < 400; ++i) {
             const double u = i / 400.0 + 1e-4;  // off the piece boundaries at multiples of 1/8
-            const CamValue lo = evaluateCamLaw(law, u - h), mid = evaluateCamLaw(law, u), hi = evaluateCamLaw(law, u + h);
+            const CamValue lo = evaluateCamLaw(law, u - h), mid = evaluateCamLaw(law, u),
+                           hi = evaluateCamLaw(law, u + h);
             worst = std::max(worst, std::abs((hi.s - lo.s) / (2 * h) - mid.ds));
             worst = std::max(worst, std::abs((hi.ds - lo.ds) / (2 * h) - mid.dds) / 10.0);
         }

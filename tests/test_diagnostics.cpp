@@ -4,9 +4,9 @@
 #include "core/solver/analysis_error.h"
 #include "core/solver/compiled_mechanism.h"
 #include "core/solver/cycle_sweep.h"
-#include "tests/mechanism_builders.h"
 #include "core/solver/mobility_check.h"
 #include "core/solver/step_solver.h"
+#include "tests/mechanism_builders.h"
 
 #include <gtest/gtest.h>
 
@@ -49,8 +49,9 @@ TEST(Diagnostics, UnderDrivenFiveBarNamesFreeBodies)
     Mechanism mech;
     mech.name = "five-bar";
     mech.gravity = Vec2::Zero();
-    mech.bodies = {test::pointBody("left crank", 0, 0.5 * (o1 + a), 0), test::pointBody("left link", 0, 0.5 * (a + c), 0),
-                   test::pointBody("right link", 0, 0.5 * (c + b), 0), test::pointBody("right crank", 0, 0.5 * (b + o5), 0)};
+    mech.bodies = {
+        test::pointBody("left crank", 0, 0.5 * (o1 + a), 0), test::pointBody("left link", 0, 0.5 * (a + c), 0),
+        test::pointBody("right link", 0, 0.5 * (c + b), 0), test::pointBody("right crank", 0, 0.5 * (b + o5), 0)};
     mech.joints = {test::pin("O1", kGroundName, "left crank", o1), test::pin("A", "left crank", "left link", a),
                    test::pin("C", "left link", "right link", c), test::pin("B", "right link", "right crank", b),
                    test::pin("O5", kGroundName, "right crank", o5)};
@@ -100,11 +101,13 @@ TEST(Diagnostics, RedundantParallelogramNamesTheJoints)
     Mechanism mech;
     mech.name = "parallelogram";
     mech.gravity = Vec2::Zero();
-    mech.bodies = {test::pointBody("crank", 0, o2 + 0.5 * crank, 0), test::pointBody("middle crank", 0, o6 + 0.5 * crank, 0),
+    mech.bodies = {test::pointBody("crank", 0, o2 + 0.5 * crank, 0),
+                   test::pointBody("middle crank", 0, o6 + 0.5 * crank, 0),
                    test::pointBody("rocker", 0, o4 + 0.5 * crank, 0), test::pointBody("coupler", 0, o6 + crank, 0)};
-    mech.joints = {test::pin("O2", kGroundName, "crank", o2),      test::pin("A", "crank", "coupler", o2 + crank),
-                   test::pin("O6", kGroundName, "middle crank", o6), test::pin("C", "middle crank", "coupler", o6 + crank),
-                   test::pin("O4", kGroundName, "rocker", o4),     test::pin("B", "rocker", "coupler", o4 + crank)};
+    mech.joints = {
+        test::pin("O2", kGroundName, "crank", o2),        test::pin("A", "crank", "coupler", o2 + crank),
+        test::pin("O6", kGroundName, "middle crank", o6), test::pin("C", "middle crank", "coupler", o6 + crank),
+        test::pin("O4", kGroundName, "rocker", o4),       test::pin("B", "rocker", "coupler", o4 + crank)};
     mech.drivers = {test::rotary("motor", "O2", ConstantSpeed{1.0, 0.0})};
 
     const MobilityReport report = mobilityAtDrawnPose(mech);
@@ -145,7 +148,8 @@ TEST(Diagnostics, LinksThatCannotCloseNameAJoint)
     const AnalysisError e = sweepError(mech);
     const std::string message = e.what();
     EXPECT_TRUE(contains(message, "does not assemble")) << message;
-    EXPECT_TRUE(contains(message, "non-Grashof four-bar (s + l = 1.75 m > p + q = 1.7 m): no link turns fully")) << message;
+    EXPECT_TRUE(contains(message, "non-Grashof four-bar (s + l = 1.75 m > p + q = 1.7 m): no link turns fully"))
+        << message;
     EXPECT_TRUE(contains(message, "the driver's motion must stay between them.")) << message;
     ASSERT_EQ(e.items().size(), 1u);
     const std::set<std::string> joints{"O2", "A", "B", "O4"};
@@ -194,8 +198,8 @@ TEST(Diagnostics, PistonDrivesThroughDeadCentre)
     EXPECT_FALSE(r.steps[0].nearSingular);
     EXPECT_FALSE(r.steps[40].nearSingular);
     EXPECT_NEAR(spec.theta0 + r.steps[20].q[2], 0.0, 1e-5);  // the crank is in line with the rod
-    const auto w = std::find_if(r.warnings.begin(), r.warnings.end(),
-                                [](const Warning& x) { return x.code == "near_singular"; });
+    const auto w =
+        std::find_if(r.warnings.begin(), r.warnings.end(), [](const Warning& x) { return x.code == "near_singular"; });
     ASSERT_NE(w, r.warnings.end());
     EXPECT_EQ(w->step, 20);
     EXPECT_TRUE(contains(w->message, "ram")) << w->message;

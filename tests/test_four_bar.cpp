@@ -2,10 +2,10 @@
 // angle against the law of cosines, and Grashof's classification, both on its
 // own and as the solver meets it (full cycle, or a stop at the toggle, which
 // the solver explains by the class).
+#include "core/model/grashof.h"
 #include "core/solver/compiled_mechanism.h"
 #include "core/solver/cycle_sweep.h"
 #include "core/solver/grashof_note.h"
-#include "core/model/grashof.h"
 #include "tests/mechanism_builders.h"
 
 #include <gtest/gtest.h>
@@ -35,8 +35,7 @@ struct Freudenstein {
     double k1, k2, k3;
     explicit Freudenstein(const test::FourBarSpec& s)
         : k1(s.d / s.a), k2(s.d / s.c), k3((s.a * s.a - s.b * s.b + s.c * s.c + s.d * s.d) / (2 * s.a * s.c))
-    {
-    }
+    {}
     double residual(double theta2, double theta4) const
     {
         return k1 * std::cos(theta4) - k2 * std::cos(theta2) + k3 - std::cos(theta2 - theta4);
@@ -94,8 +93,8 @@ TEST(FourBar, CrankRockerFollowsFreudenstein)
         worstRate = std::max(worstRate, std::abs(s.qd[3 * kRocker + 2] - omega4));
     }
     EXPECT_LT(worstResidual, 1e-10);
-    EXPECT_LT(worstAngle, 1e-10);           // rad
-    EXPECT_LT(worstRate, 1e-9);             // rad/s, with ω2 = 2π rad/s
+    EXPECT_LT(worstAngle, 1e-10);  // rad
+    EXPECT_LT(worstRate, 1e-9);    // rad/s, with ω2 = 2π rad/s
     RecordProperty("freudenstein_residual", ::testing::PrintToString(worstResidual));
     RecordProperty("rocker_angle_error_rad", ::testing::PrintToString(worstAngle));
     RecordProperty("rocker_rate_error_rad_s", ::testing::PrintToString(worstRate));
@@ -154,8 +153,8 @@ TEST(Grashof, ClassifiesEachKind)
         const double sorted[4] = {c.lengths[0], c.lengths[1], c.lengths[2], c.lengths[3]};
         const double s = *std::min_element(sorted, sorted + 4), l = *std::max_element(sorted, sorted + 4);
         const double sum = sorted[0] + sorted[1] + sorted[2] + sorted[3];
-        EXPECT_EQ(g.kind, c.kind) << grashofClassName(g.kind) << " for " << c.lengths[0] << ", " << c.lengths[1]
-                                  << ", " << c.lengths[2] << ", " << c.lengths[3];
+        EXPECT_EQ(g.kind, c.kind) << grashofClassName(g.kind) << " for " << c.lengths[0] << ", " << c.lengths[1] << ", "
+                                  << c.lengths[2] << ", " << c.lengths[3];
         EXPECT_EQ(g.shortest, c.shortest) << fourBarLinkName(g.shortest);
         EXPECT_EQ(g.longest, c.longest) << fourBarLinkName(g.longest);
         EXPECT_NEAR(g.margin, (sum - s - l) - (s + l), 1e-15);
@@ -221,13 +220,14 @@ TEST(FourBar, NonGrashofStopsAtToggle)
 
     EXPECT_FALSE(r.complete);
     ASSERT_EQ(r.steps.size(), 136u);
-    const auto reach = std::find_if(r.warnings.begin(), r.warnings.end(),
-                                    [](const Warning& w) { return w.code == "out_of_reach"; });
+    const auto reach =
+        std::find_if(r.warnings.begin(), r.warnings.end(), [](const Warning& w) { return w.code == "out_of_reach"; });
     ASSERT_NE(reach, r.warnings.end());
     EXPECT_NE(reach->message.find("motor"), std::string::npos) << reach->message;
-    const std::string why = "It is a non-Grashof four-bar (s + l = 1.75 m > p + q = 1.7 m): no link turns fully, so "
-                            "the driven link \"crank\" only swings between two toggle positions: a crank driven at "
-                            "constant speed cannot complete the cycle.";
+    const std::string why =
+        "It is a non-Grashof four-bar (s + l = 1.75 m > p + q = 1.7 m): no link turns fully, so "
+        "the driven link \"crank\" only swings between two toggle positions: a crank driven at "
+        "constant speed cannot complete the cycle.";
     EXPECT_NE(reach->message.find(why), std::string::npos) << reach->message;
 
     const double lastCrank = spec.theta2 + r.steps.back().q[3 * kCrank + 2];
@@ -249,8 +249,8 @@ TEST(FourBar, NonGrashofStopsAtToggle)
         EXPECT_GT(r.steps[k].reciprocalCondition, 10 * last.reciprocalCondition) << "step " << k;
     EXPECT_TRUE(r.steps.back().nearSingular) << "reciprocal condition " << r.steps.back().reciprocalCondition;
     EXPECT_FALSE(r.steps.front().nearSingular);  // 135° from the toggle
-    const auto singular = std::find_if(r.warnings.begin(), r.warnings.end(),
-                                       [](const Warning& w) { return w.code == "near_singular"; });
+    const auto singular =
+        std::find_if(r.warnings.begin(), r.warnings.end(), [](const Warning& w) { return w.code == "near_singular"; });
     ASSERT_NE(singular, r.warnings.end());
     EXPECT_GT(singular->step, 100);
     EXPECT_NE(singular->message.find(why), std::string::npos) << singular->message;
@@ -276,8 +276,8 @@ TEST(Grashof, DiagnosisNamesTheClassAndTheFullyTurningLink)
     const CompiledMechanism m = compile(test::fourBar(spec));
     const CycleResult r = sweepCycle(m, {.steps = 360});
     EXPECT_FALSE(r.complete);
-    const auto reach = std::find_if(r.warnings.begin(), r.warnings.end(),
-                                    [](const Warning& w) { return w.code == "out_of_reach"; });
+    const auto reach =
+        std::find_if(r.warnings.begin(), r.warnings.end(), [](const Warning& w) { return w.code == "out_of_reach"; });
     ASSERT_NE(reach, r.warnings.end());
     EXPECT_NE(reach->message.find("It is a Grashof crank-rocker (s + l = 0.5 m < p + q = 0.65 m) whose fully turning "
                                   "link is the output \"rocker\", so the driven link \"crank\" only swings between "

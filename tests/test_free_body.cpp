@@ -1,8 +1,8 @@
 // Free-body diagrams: each body's loads balance its m·a_G and I_G·α, and a
 // pin pushes its two bodies equally and oppositely.
+#include "core/results/free_body.h"
 #include "core/solver/compiled_mechanism.h"
 #include "core/solver/cycle_sweep.h"
-#include "core/results/free_body.h"
 #include "tests/mechanism_builders.h"
 
 #include <gtest/gtest.h>

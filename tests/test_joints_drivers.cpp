@@ -103,11 +103,11 @@ DerivativeErrors checkDerivatives(const Constraint& c, std::mt19937& random, con
         VectorXd nu(c.rows()), gamma(c.rows());
         c.rates(q, v, t, RowWriter(0, &nu, nullptr), RowWriter(0, &gamma, nullptr));
         const auto along = [&](double tau) { return phiAt(c, q + tau * v, t + tau); };
-        const VectorXd rate =
-            extrapolated([&](double d) { return VectorXd((along(d) - along(-d)) / (2 * d)); }, 2e-4);
-        const VectorXd second = extrapolated(
-            [&](double d) { return VectorXd((along(d) - 2 * along(0) + along(-d)) / (d * d)); }, 2e-4);
-        const DerivativeErrors e{0.0, (rate - (jac * v - nu)).cwiseAbs().maxCoeff(), (second + gamma).cwiseAbs().maxCoeff()};
+        const VectorXd rate = extrapolated([&](double d) { return VectorXd((along(d) - along(-d)) / (2 * d)); }, 2e-4);
+        const VectorXd second =
+            extrapolated([&](double d) { return VectorXd((along(d) - 2 * along(0) + along(-d)) / (d * d)); }, 2e-4);
+        const DerivativeErrors e{0.0, (rate - (jac * v - nu)).cwiseAbs().maxCoeff(),
+                                 (second + gamma).cwiseAbs().maxCoeff()};
         EXPECT_LT(e.nu, 1e-7) << "ν, trial " << trial;
         EXPECT_LT(e.gamma, 1e-5) << "γ, trial " << trial;
         worst.include(e);
@@ -124,7 +124,10 @@ BodyPoint somePoint(int body, std::mt19937& random)
 CompiledJoint someJoint(JointType type, int first, int second, std::mt19937& random)
 {
     std::uniform_real_distribution<double> angle(-kPi, kPi);
-    return CompiledJoint{"J", type, {first, second}, {somePoint(first, random), somePoint(second, random)},
+    return CompiledJoint{"J",
+                         type,
+                         {first, second},
+                         {somePoint(first, random), somePoint(second, random)},
                          unitFromDeg(radToDeg(angle(random)))};
 }
 
@@ -143,12 +146,12 @@ TEST(ConstraintDerivatives, Joints)
     for (const auto& pair : kPairs) {
         worst.include(checkDerivatives(*makePinJoint(someJoint(JointType::Pin, pair.first, pair.second, random), 0),
                                        random, pairName("pin", pair)));
-        worst.include(checkDerivatives(
-            *makeSliderJoint(someJoint(JointType::Slider, pair.first, pair.second, random), 0), random,
-            pairName("slider", pair)));
-        worst.include(checkDerivatives(
-            *makePinInSlotJoint(someJoint(JointType::PinInSlot, pair.first, pair.second, random), 0), random,
-            pairName("pin_in_slot", pair)));
+        worst.include(
+            checkDerivatives(*makeSliderJoint(someJoint(JointType::Slider, pair.first, pair.second, random), 0), random,
+                             pairName("slider", pair)));
+        worst.include(
+            checkDerivatives(*makePinInSlotJoint(someJoint(JointType::PinInSlot, pair.first, pair.second, random), 0),
+                             random, pairName("pin_in_slot", pair)));
     }
     worst.record();
 }
@@ -166,14 +169,17 @@ TEST(ConstraintDerivatives, Drivers)
         for (const auto& pair : kPairs) {
             CompiledDriver d{"D", DriverType::Rotary, 0, {}, 0.25, motion};
             const CompiledJoint pinJoint = someJoint(JointType::Pin, pair.first, pair.second, random);
-            worst.include(checkDerivatives(*makeRotaryDriver(d, pinJoint, 0, drive), random, pairName("rotary driver", pair)));
+            worst.include(
+                checkDerivatives(*makeRotaryDriver(d, pinJoint, 0, drive), random, pairName("rotary driver", pair)));
             d.type = DriverType::Linear;
             const CompiledJoint sliderJoint = someJoint(JointType::Slider, pair.first, pair.second, random);
-            worst.include(checkDerivatives(*makeSliderDriver(d, sliderJoint, 0, drive), random, pairName("slider driver", pair)));
+            worst.include(
+                checkDerivatives(*makeSliderDriver(d, sliderJoint, 0, drive), random, pairName("slider driver", pair)));
             d.joint = -1;
             d.ends[0] = somePoint(pair.first, random);
             d.ends[1] = somePoint(pair.second, random);
-            worst.include(checkDerivatives(*makeCylinderDriver(d, 0, drive), random, pairName("cylinder driver", pair)));
+            worst.include(
+                checkDerivatives(*makeCylinderDriver(d, 0, drive), random, pairName("cylinder driver", pair)));
         }
     }
     worst.record();
@@ -234,8 +240,7 @@ TEST_P(SliderMoment, ReactionMomentMatchesNewtonEuler)
             // On the block, about its own joint point P.
             EXPECT_NEAR((s.joints[0].force - normal).norm(), 0.0, 1e-9);
             worstMoment = std::max(worstMoment, std::abs(s.joints[0].moment - moment));
-        }
-        else {
+        } else {
             // On the ground, about the ground's joint point p0: the block's
             // push −R and couple −M, moved from P to p0.
             EXPECT_NEAR((s.joints[0].force + normal).norm(), 0.0, 1e-9);
@@ -317,7 +322,8 @@ TEST(CylinderDriver, LiftsBoomAsPrescribed)
         EXPECT_NEAR(s.q[2], angle - drawnAngle, 1e-10) << "t = " << s.t;
         const Vec2 tip = rotation(s.q[2]) * dPoint;
         EXPECT_NEAR((tip - c).norm(), drive.position, 1e-12);
-        if (std::abs(drive.rate) > 1e-3) EXPECT_NEAR(s.effort[0], -torque * s.qd[2] / drive.rate, 1e-7 * std::abs(torque));
+        if (std::abs(drive.rate) > 1e-3)
+            EXPECT_NEAR(s.effort[0], -torque * s.qd[2] / drive.rate, 1e-7 * std::abs(torque));
     }
 }
 
@@ -345,8 +351,10 @@ TEST(TwoDrivers, PlanarArmMatchesManipulatorDynamics)
     Mechanism mech;
     mech.name = "arm";
     mech.gravity = Vec2(0.0, -g);
-    mech.bodies = {test::pointBody("upper", m1, lc1 / l1 * elbow, i1), test::pointBody("fore", m2, elbow + lc2 * along2, i2)};
-    mech.joints = {test::pin("shoulder", kGroundName, "upper", Vec2::Zero()), test::pin("elbow", "upper", "fore", elbow)};
+    mech.bodies = {test::pointBody("upper", m1, lc1 / l1 * elbow, i1),
+                   test::pointBody("fore", m2, elbow + lc2 * along2, i2)};
+    mech.joints = {test::pin("shoulder", kGroundName, "upper", Vec2::Zero()),
+                   test::pin("elbow", "upper", "fore", elbow)};
     const ConstantSpeed shoulderMotion{1.1, 2.5};
     const Rise elbowMotion{CamLaw::Cycloidal, q20, q20 + 1.6, 0.2, 1.2};
     mech.drivers = {test::rotary("m1", "shoulder", shoulderMotion, q10), test::rotary("m2", "elbow", elbowMotion, q20)};

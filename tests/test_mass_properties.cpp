@@ -1,9 +1,9 @@
 // Mass properties of bars and point masses against handbook formulas, and a
 // body compiled from a bar section plus point masses.
-#include "core/solver/compiled_mechanism.h"
 #include "core/model/mass_properties.h"
-#include "tests/mechanism_builders.h"
 #include "core/model/model_error.h"
+#include "core/solver/compiled_mechanism.h"
+#include "tests/mechanism_builders.h"
 
 #include <gtest/gtest.h>
 
@@ -36,7 +36,8 @@ TEST(MassProperties, CombineHalvesGivesWholeBar)
     const Vec2 a(0.0, 0.0), mid(0.3, 0.4), b(0.6, 0.8);  // L = 1 m
     const double w = 0.05, t = 0.02;
     const MassProperties whole = barMassProperties(a, b, w, t, kSteel);
-    const MassProperties halves = combine({barMassProperties(a, mid, w, t, kSteel), barMassProperties(mid, b, w, t, kSteel)});
+    const MassProperties halves =
+        combine({barMassProperties(a, mid, w, t, kSteel), barMassProperties(mid, b, w, t, kSteel)});
     EXPECT_NEAR(halves.mass, whole.mass, 1e-12);
     EXPECT_NEAR((halves.cg - whole.cg).norm(), 0.0, 1e-15);
     EXPECT_NEAR(halves.inertia, whole.inertia, 1e-12 * whole.inertia);
@@ -73,7 +74,8 @@ TEST(MassProperties, CompiledBodyFromSectionAndPointMasses)
     Body crank;
     crank.name = "crank";
     crank.section = BarSection{w, t, kSteel, std::nullopt};
-    crank.pointMasses = {PointMass{"clamp", 0.35, Vec2(0.12, 0.05)}, PointMass{"counterweight", 0.8, Vec2(-0.04, -0.03)}};
+    crank.pointMasses = {PointMass{"clamp", 0.35, Vec2(0.12, 0.05)},
+                         PointMass{"counterweight", 0.8, Vec2(-0.04, -0.03)}};
     mech.bodies = {crank, test::pointBody("rod", 0.0, Vec2(0.3, 0.0), 0.0)};
     mech.joints = {test::pin("O", kGroundName, "crank", o), test::pin("A", "crank", "rod", a),
                    test::slider("S", kGroundName, "rod", Vec2(0.4, 0.0), 0.0)};

@@ -1,6 +1,6 @@
 #include "core/file/file_units.h"
-#include "core/model/materials.h"
 #include "core/file/mechanism_file.h"
+#include "core/model/materials.h"
 #include "core/model/model_error.h"
 
 #include <gtest/gtest.h>
@@ -79,8 +79,8 @@ Mechanism richMechanism()
 
     m.cycle = {720, 2.5};
 
-    const LoadProfile overAngle{"motor", {degToRad(150.0), degToRad(170.0), degToRad(190.0), degToRad(200.0)},
-                                {0.0, 1.0, 1.0, 0.0}};
+    const LoadProfile overAngle{
+        "motor", {degToRad(150.0), degToRad(170.0), degToRad(190.0), degToRad(200.0)}, {0.0, 1.0, 1.0, 0.0}};
     const LoadProfile overStroke{"ram_drive", {0.05, 0.1}, {1.0, 0.5}};
     const LoadProfile overTime{"", {0.0, 1.0}, {0.2, 1.0}};
     m.loads = {
@@ -310,19 +310,16 @@ TEST(MechanismFileTest, OverflowingNumberIsRejected)
     EXPECT_TRUE(contains(error, "1e999"));
 }
 
-TEST(MechanismFileTest, RootMustBeAnObject)
-{
-    EXPECT_EQ(errorForText("[1, 2]"), "expected an object, got an array");
-}
+TEST(MechanismFileTest, RootMustBeAnObject) { EXPECT_EQ(errorForText("[1, 2]"), "expected an object, got an array"); }
 
 TEST(MechanismFileTest, WrongTypeNamesThePath)
 {
     EXPECT_TRUE(contains(errorFor([](json& d) { d["joints"][2]["bodies"][1] = 5; }),
                          "joints[2].bodies[1]: expected a string, got a number"));
-    EXPECT_TRUE(contains(errorFor([](json& d) { d["bodies"] = json::object(); }),
-                         "bodies: expected an array, got an object"));
-    EXPECT_TRUE(contains(errorFor([](json& d) { d["joints"][0]["at"] = {1}; }),
-                         "joints[0].at: expected 2 values, got 1"));
+    EXPECT_TRUE(
+        contains(errorFor([](json& d) { d["bodies"] = json::object(); }), "bodies: expected an array, got an object"));
+    EXPECT_TRUE(
+        contains(errorFor([](json& d) { d["joints"][0]["at"] = {1}; }), "joints[0].at: expected 2 values, got 1"));
 }
 
 TEST(MechanismFileTest, MissingRequiredKeyNamesThePath)
@@ -360,7 +357,9 @@ TEST(MechanismFileTest, GroundCannotBeDeclared)
 
 TEST(MechanismFileTest, JointCannotJoinABodyToItself)
 {
-    EXPECT_TRUE(contains(errorFor([](json& d) { d["joints"][1]["bodies"] = {"crank", "crank"}; }),
+    EXPECT_TRUE(contains(errorFor([](json& d) {
+                             d["joints"][1]["bodies"] = {"crank", "crank"};
+                         }),
                          "joints[1].bodies: joins \"crank\" to itself"));
 }
 
@@ -370,11 +369,17 @@ TEST(MechanismFileTest, OutOfRangeNumbersAreRejected)
                          "bodies[0].mass: must be a finite number >= 0 (got -1)"));
     EXPECT_TRUE(contains(errorFor([](json& d) { d["bodies"][1]["section"]["width"] = 0; }),
                          "bodies[1].section.width: must be a finite number > 0 (got 0)"));
-    EXPECT_TRUE(contains(errorFor([](json& d) { d["cycle"] = {{"steps", 0}}; }),
+    EXPECT_TRUE(contains(errorFor([](json& d) {
+                             d["cycle"] = {{"steps", 0}};
+                         }),
                          "cycle.steps: must be a whole number from 1 to 100000 (got 0)"));
-    EXPECT_TRUE(contains(errorFor([](json& d) { d["cycle"] = {{"steps", 36.5}}; }),
+    EXPECT_TRUE(contains(errorFor([](json& d) {
+                             d["cycle"] = {{"steps", 36.5}};
+                         }),
                          "cycle.steps: must be a whole number"));
-    EXPECT_TRUE(contains(errorFor([](json& d) { d["cycle"] = {{"duration_s", 0}}; }),
+    EXPECT_TRUE(contains(errorFor([](json& d) {
+                             d["cycle"] = {{"duration_s", 0}};
+                         }),
                          "cycle.duration_s: must be a finite number > 0"));
 }
 
@@ -387,9 +392,13 @@ TEST(MechanismFileTest, UnsupportedVersionIsRefused)
 
 TEST(MechanismFileTest, TablesMustIncreaseAndPairUp)
 {
-    EXPECT_TRUE(contains(errorFor([](json& d) { d["drivers"][1]["motion"]["time_s"] = {0, 1, 1}; }),
+    EXPECT_TRUE(contains(errorFor([](json& d) {
+                             d["drivers"][1]["motion"]["time_s"] = {0, 1, 1};
+                         }),
                          "drivers[1].motion.time_s[2]: must be greater than the value before it (1)"));
-    EXPECT_TRUE(contains(errorFor([](json& d) { d["drivers"][1]["motion"]["position"] = {0, 1}; }),
+    EXPECT_TRUE(contains(errorFor([](json& d) {
+                             d["drivers"][1]["motion"]["position"] = {0, 1};
+                         }),
                          "drivers[1].motion.position: has 2 values but time_s has 3"));
     EXPECT_TRUE(contains(errorFor([](json& d) { d["loads"][0]["profile"]["at_deg"] = {0}; }),
                          "loads[0].profile.at_deg: needs at least 2 values, got 1"));

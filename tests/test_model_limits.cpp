@@ -1,12 +1,12 @@
 // The stated size limits: refused beyond them with a message naming the
 // limit and the figure asked for, at the point where the request is made
 // (compile for the file's own settings, sweepCycle for a step count passed in).
-#include "core/solver/analysis_error.h"
-#include "tests/chain_generator.h"
-#include "core/solver/compiled_mechanism.h"
-#include "core/solver/cycle_sweep.h"
 #include "core/model/model_error.h"
 #include "core/model/model_limits.h"
+#include "core/solver/analysis_error.h"
+#include "core/solver/compiled_mechanism.h"
+#include "core/solver/cycle_sweep.h"
+#include "tests/chain_generator.h"
 
 #include <gtest/gtest.h>
 

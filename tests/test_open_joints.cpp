@@ -1,10 +1,10 @@
 // A drawing in progress saves and reopens as it is: a joint with an open side
 // reads back unchanged, and analysing it (in the core and through
 // `clevis-cli analyze`) fails with a message naming the joint and what it lacks.
-#include "tests/cli_runner.h"
 #include "core/file/mechanism_file.h"
 #include "core/model/model_error.h"
 #include "core/solver/compiled_mechanism.h"
+#include "tests/cli_runner.h"
 
 #include <gtest/gtest.h>
 
@@ -63,7 +63,8 @@ TEST(OpenJoints, APinJoinedToNothingYetReadsBack)
     m.joints.push_back({"P4", JointType::Pin, {"", ""}, Vec2(0.1, 0.0), 0.0});
     EXPECT_EQ(parseMechanism(saveMechanismText(m)).mechanism, m);
     m.joints.erase(m.joints.begin() + 1);
-    EXPECT_EQ(compileError(m), "joints[1]: pin \"P4\" joins no part yet: connect it to two parts, or to a part and ground");
+    EXPECT_EQ(compileError(m),
+              "joints[1]: pin \"P4\" joins no part yet: connect it to two parts, or to a part and ground");
 }
 
 TEST(OpenJoints, ABodyJoinedToItselfOrAnEmptyListIsStillRefused)
@@ -79,8 +80,7 @@ TEST(OpenJoints, ABodyJoinedToItselfOrAnEmptyListIsStillRefused)
 TEST(OpenJoints, AnalysingSaysWhichPinIsOpenAndWhatToDo)
 {
     const Mechanism m = parseMechanism(kHalfDrawn).mechanism;
-    EXPECT_EQ(compileError(m),
-              "joints[1]: pin \"P3\" joins only \"crank\": connect it to a second part or to ground");
+    EXPECT_EQ(compileError(m), "joints[1]: pin \"P3\" joins only \"crank\": connect it to a second part or to ground");
 }
 
 TEST(OpenJoints, TheCommandLineExitsWithOneNamingThePin)

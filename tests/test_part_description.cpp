@@ -47,8 +47,10 @@ TEST(PartDescription, BodiesAndTheirFields)
     EXPECT_EQ(described("bodies[0].mass", "must be a finite number >= 0 (got -1)"),
               "Body “crank”, mass: must be a finite number >= 0 (got -1)");
     EXPECT_EQ(describePath(sample(), "bodies[0].cg[1]"), "Body “crank”, centre of mass, y");
-    EXPECT_EQ(describePath(sample(), "bodies[1].point_masses[0].mass"), "Body “rocker”, point mass “counterweight”, mass");
-    EXPECT_EQ(describePath(sample(), "bodies[1].point_masses[1].at"), "Body “rocker”, unnamed point mass (no. 2), position");
+    EXPECT_EQ(describePath(sample(), "bodies[1].point_masses[0].mass"),
+              "Body “rocker”, point mass “counterweight”, mass");
+    EXPECT_EQ(describePath(sample(), "bodies[1].point_masses[1].at"),
+              "Body “rocker”, unnamed point mass (no. 2), position");
     EXPECT_EQ(describePath(sample(), "bodies[1].section.ends[1][0]"), "Body “rocker”, section, second end, x");
 }
 

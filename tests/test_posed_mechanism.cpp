@@ -1,10 +1,10 @@
 // The mechanism drawn at a solved step: its joints sit where the closed-form
 // slider-crank kinematics put them.
+#include "core/results/body_points_at_step.h"
+#include "core/results/posed_mechanism.h"
 #include "core/solver/compiled_mechanism.h"
 #include "core/solver/cycle_sweep.h"
 #include "tests/mechanism_builders.h"
-#include "core/results/posed_mechanism.h"
-#include "core/results/body_points_at_step.h"
 
 #include <gtest/gtest.h>
 

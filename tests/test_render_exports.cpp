@@ -3,10 +3,10 @@
 // renders page by page with its sections and the summary's peak table; the
 // plot panes are described from the results alone and the report draws them.
 #include "app/cli_render_commands.h"
-#include "core/results/cycle_summary.h"
-#include "core/solver/cycle_sweep.h"
-#include "core/results/free_body.h"
 #include "core/file/mechanism_file.h"
+#include "core/results/cycle_summary.h"
+#include "core/results/free_body.h"
+#include "core/solver/cycle_sweep.h"
 #include "render/plot_panes.h"
 #include "render/render_units.h"
 #include "render/review_report.h"
@@ -119,7 +119,8 @@ TEST(FreeBodySvg, NumbersEqualTheSolversForEveryBody)
     QTemporaryDir dir;
     for (const auto& body : solved.m.bodies) {
         const QString out = dir.filePath(QString::fromStdString(body.name) + ".svg");
-        ASSERT_EQ(run(cli::runFbdCommand, {kPress, "--body", body.name, "--at-deg", "160", "--out", out.toStdString()}), 0);
+        ASSERT_EQ(run(cli::runFbdCommand, {kPress, "--body", body.name, "--at-deg", "160", "--out", out.toStdString()}),
+                  0);
         // 160° of a one-revolution cycle in 360 steps from 0°: step 160.
         const FreeBodyDiagram d = freeBodyDiagram(solved.m, solved.r, findBody(solved.m, body.name), 160);
         const SvgLines lines = svgLines(out);
@@ -145,8 +146,12 @@ TEST(FreeBodySvg, SharedPinArrowsAreEqualAndOpposite)
 {
     QTemporaryDir dir;
     const QString crank = dir.filePath("crank.svg"), rod = dir.filePath("rod.svg");
-    ASSERT_EQ(run(cli::runFbdCommand, {kPress, "--body", "crankshaft", "--at-peak", "crank_pin", "--out", crank.toStdString()}), 0);
-    ASSERT_EQ(run(cli::runFbdCommand, {kPress, "--body", "connecting_rod", "--at-peak", "crank_pin", "--out", rod.toStdString()}), 0);
+    ASSERT_EQ(run(cli::runFbdCommand,
+                  {kPress, "--body", "crankshaft", "--at-peak", "crank_pin", "--out", crank.toStdString()}),
+              0);
+    ASSERT_EQ(run(cli::runFbdCommand,
+                  {kPress, "--body", "connecting_rod", "--at-peak", "crank_pin", "--out", rod.toStdString()}),
+              0);
     const auto onCrank = tableRow(svgLines(crank), "crank_pin"), onRod = tableRow(svgLines(rod), "crank_pin");
     ASSERT_TRUE(onCrank.count("Fy") && onRod.count("Fy"));
     EXPECT_GT(std::abs(leadingNumber(onRod.at("Fy"))), 1000.0);  // the press stroke loads this pin
@@ -179,7 +184,8 @@ TEST(FbdCommand, NamesTheOffendingItem)
     EXPECT_EQ(run(cli::runFbdCommand, {kPress, "--body", "ram", "--out", "/tmp/x.svg"}), 2);
     testing::internal::GetCapturedStderr();
     testing::internal::CaptureStderr();
-    EXPECT_EQ(run(cli::runFbdCommand, {"/nonexistent/press.json", "--body", "ram", "--at-t", "0", "--out", "/tmp/x.svg"}), 1);
+    EXPECT_EQ(
+        run(cli::runFbdCommand, {"/nonexistent/press.json", "--body", "ram", "--at-t", "0", "--out", "/tmp/x.svg"}), 1);
     EXPECT_NE(testing::internal::GetCapturedStderr().find("press.json"), std::string::npos);
 }
 
@@ -206,9 +212,10 @@ TEST(ReviewReport, RendersEveryPageWithItsSectionsAndThePeakTable)
     EXPECT_EQ(QDir(dir.path()).entryList({"page-*.png"}).size(), pages);
 
     const QString text = tool("pdftotext", {"-layout", pdf, "-"});
-    for (const QString& section : ui::reviewReportSections()) EXPECT_TRUE(text.contains(section)) << section.toStdString();
-    for (const char* caution : {"ideal joints", "Fatigue is not covered", "service and dynamic factors", "local codes",
-                                "licensed engineer"})
+    for (const QString& section : ui::reviewReportSections())
+        EXPECT_TRUE(text.contains(section)) << section.toStdString();
+    for (const char* caution :
+         {"ideal joints", "Fatigue is not covered", "service and dynamic factors", "local codes", "licensed engineer"})
         EXPECT_TRUE(text.contains(caution)) << caution;
 
     // The peak table, row by row, has summarize()'s numbers.
@@ -245,10 +252,10 @@ TEST(PlotPanes, AreDescribedFromTheResultsAlone)
 {
     const Solved solved = solveFile(kPress);
     const auto panes = ui::plotPanes(solved.m, solved.r, ui::RenderUnits{});
-    EXPECT_EQ(paneTitles(panes), (std::vector<QString>{"Joint reactions |F|", "Drive torque",
-                                                       "Driver power (positive: into the mechanism)",
-                                                       "Shaking force on the frame", "Shaking moment on the frame",
-                                                       "Transmission angle"}));
+    EXPECT_EQ(
+        paneTitles(panes),
+        (std::vector<QString>{"Joint reactions |F|", "Drive torque", "Driver power (positive: into the mechanism)",
+                              "Shaking force on the frame", "Shaking moment on the frame", "Transmission angle"}));
     std::vector<QString> units;
     for (const auto& p : panes) units.push_back(p.unit);
     EXPECT_EQ(units, (std::vector<QString>{"N", "N·m", "W", "N", "N·m", "°"}));
@@ -258,7 +265,8 @@ TEST(PlotPanes, AreDescribedFromTheResultsAlone)
     EXPECT_EQ(panes[1].curves.at(0).series.name, "main_motor torque");
     EXPECT_EQ(panes[2].curves.at(0).series.name, "main_motor power");
     for (const auto& p : panes)
-        for (const auto& c : p.curves) EXPECT_EQ(c.series.values.size(), solved.r.steps.size()) << c.series.name.toStdString();
+        for (const auto& c : p.curves)
+            EXPECT_EQ(c.series.values.size(), solved.r.steps.size()) << c.series.name.toStdString();
     EXPECT_DOUBLE_EQ(panes[0].curves[1].series.values[100], solved.r.steps[100].joints[1].force.norm());
 }
 

@@ -1,11 +1,11 @@
 // The JSON and CSV result files: their shape, units and the bearing-frame
 // reactions, on a link whose pin load is known in closed form.
-#include "core/solver/compiled_mechanism.h"
 #include "core/results/cycle_summary.h"
-#include "core/solver/cycle_sweep.h"
-#include "tests/mechanism_builders.h"
 #include "core/results/results_csv.h"
 #include "core/results/results_json.h"
+#include "core/solver/compiled_mechanism.h"
+#include "core/solver/cycle_sweep.h"
+#include "tests/mechanism_builders.h"
 
 #include <gtest/gtest.h>
 
@@ -145,8 +145,8 @@ TEST(ResultsCsv, HeaderCarriesUnitsAndEveryRowMatchesIt)
     std::getline(in, line);
     EXPECT_EQ(line.rfind("t [s],motor [deg],\"arm, left.x [m]\",", 0), 0u) << line;
     const std::vector<std::string> header = csvFields(line);
-    for (const char* column : {"O.fx [N]", "O.moment [N·m]", "motor.effort [N·m]", "motor.power [W]",
-                               "ground.fx [N]", "ground.moment [N·m]", "kinetic [J]", "near_singular"})
+    for (const char* column : {"O.fx [N]", "O.moment [N·m]", "motor.effort [N·m]", "motor.power [W]", "ground.fx [N]",
+                               "ground.moment [N·m]", "kinetic [J]", "near_singular"})
         EXPECT_NE(std::find(header.begin(), header.end(), column), header.end()) << column;
     int rows = 0;
     while (std::getline(in, line)) {

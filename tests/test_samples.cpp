@@ -8,11 +8,11 @@
 //    drivers' power equals dT/dt + dV_gravity/dt + dV_springs/dt + the damper
 //    dissipation − the power of the applied forces and torques, every rate
 //    computed analytically from q, q̇ and q̈ at that step.
-#include "core/solver/applied_loads.h"
-#include "tests/chain_generator.h"
-#include "core/results/cycle_summary.h"
-#include "core/solver/cycle_sweep.h"
 #include "core/file/mechanism_file.h"
+#include "core/results/cycle_summary.h"
+#include "core/solver/applied_loads.h"
+#include "core/solver/cycle_sweep.h"
+#include "tests/chain_generator.h"
 
 #include <gtest/gtest.h>
 
@@ -121,15 +121,13 @@ void addDriverEfforts(const CompiledMechanism& m, const StepResult& s, BodyWrenc
             const Vec2 at = pointPosition(s.q, j.point[1]);
             out.add(j.body[1], at, Vec2::Zero(), effort);
             out.add(j.body[0], at, Vec2::Zero(), -effort);
-        }
-        else if (driver.joint >= 0) {
+        } else if (driver.joint >= 0) {
             const CompiledJoint& j = m.joints[driver.joint];
             const Vec2 at = pointPosition(s.q, j.point[1]);
             const Vec2 axis = rotation(bodyAngle(s.q, j.body[0])) * j.axisLocal;
             out.add(j.body[1], at, effort * axis, 0.0);
             out.add(j.body[0], at, -effort * axis, 0.0);
-        }
-        else {
+        } else {
             const Vec2 from = pointPosition(s.q, driver.ends[0]), to = pointPosition(s.q, driver.ends[1]);
             const Vec2 axis = (to - from).normalized();
             out.add(driver.ends[1].body, to, effort * axis, 0.0);
@@ -196,7 +194,7 @@ PowerTerms powerTerms(const CompiledMechanism& m, const StepResult& s)
         const MassProperties& mp = m.bodies[b].mass;
         const Vec2 v = bodyVelocity(s.qd, int(b)), a(s.qdd[3 * b], s.qdd[3 * b + 1]);
         p.kinetic += mp.mass * v.dot(a) + mp.inertia * s.qd[3 * b + 2] * s.qdd[3 * b + 2];  // dT/dt
-        p.gravity -= mp.mass * m.gravity.dot(v);                                             // dV/dt, V = −m g·r_G
+        p.gravity -= mp.mass * m.gravity.dot(v);                                            // dV/dt, V = −m g·r_G
     }
     for (const auto& spring : m.springs) {
         const LineState l = lineState(s, spring.a, spring.b);
@@ -207,7 +205,8 @@ PowerTerms powerTerms(const CompiledMechanism& m, const StepResult& s)
         const double rate = relativeRate(m, s, spring.joint, &angle);
         p.springs += spring.stiffness * (angle - spring.freeAngle) * rate;
     }
-    for (const auto& damper : m.dampers) p.dampers += damper.damping * std::pow(lineState(s, damper.a, damper.b).rate, 2);
+    for (const auto& damper : m.dampers)
+        p.dampers += damper.damping * std::pow(lineState(s, damper.a, damper.b).rate, 2);
     for (const auto& f : m.forces) {
         const double factor = f.profile ? f.profile->eval(s.t, s.drivePosition) : 1.0;
         const Vec2 force = f.turnsWithBody ? Vec2(rotation(bodyAngle(s.q, f.point.body)) * f.force) : f.force;
@@ -263,8 +262,10 @@ void expectPracticalTransmission(const Solved& solved)
     for (std::size_t p = 0; p < r.transmissionPins.size(); ++p) {
         const CompiledJoint& j = m.joints[r.transmissionPins[p].joint];
         for (std::size_t k = 0; k < r.steps.size(); ++k) {
-            EXPECT_GE(r.steps[k].transmissionDeg[p], 40.0) << stepLabel(m, k, r.steps[k]) << ", pin " << j.name << " (°)";
-            EXPECT_LE(r.steps[k].transmissionDeg[p], 140.0) << stepLabel(m, k, r.steps[k]) << ", pin " << j.name << " (°)";
+            EXPECT_GE(r.steps[k].transmissionDeg[p], 40.0)
+                << stepLabel(m, k, r.steps[k]) << ", pin " << j.name << " (°)";
+            EXPECT_LE(r.steps[k].transmissionDeg[p], 140.0)
+                << stepLabel(m, k, r.steps[k]) << ", pin " << j.name << " (°)";
         }
     }
 }
@@ -278,7 +279,8 @@ TEST(Samples, TheFiveBundledSamplesArePresent)
     std::vector<std::string> stems;
     for (const auto& path : samplePaths()) stems.push_back(std::filesystem::path(path).stem().string());
     for (const char* name : {"dwell_six_bar", "flap_folder", "punch_press", "tipping_bed", "tote_arm"})
-        EXPECT_NE(std::find(stems.begin(), stems.end(), name), stems.end()) << name << ".json missing from " << CLEVIS_SAMPLES_DIR;
+        EXPECT_NE(std::find(stems.begin(), stems.end(), name), stems.end())
+            << name << ".json missing from " << CLEVIS_SAMPLES_DIR;
 }
 
 TEST_P(Sample, LoadsWithoutWarningsAndSolvesTheWholeCycle)
@@ -309,10 +311,7 @@ TEST_P(Sample, EveryBodyObeysNewtonEulerAndDriverPowerBalancesTheEnergyRates)
     expectLawsAtEveryStep(solvedSample(GetParam()));
 }
 
-TEST_P(Sample, TransmissionAnglesStayWithinPracticalBounds)
-{
-    expectPracticalTransmission(solvedSample(GetParam()));
-}
+TEST_P(Sample, TransmissionAnglesStayWithinPracticalBounds) { expectPracticalTransmission(solvedSample(GetParam())); }
 
 INSTANTIATE_TEST_SUITE_P(Bundled, Sample, ::testing::ValuesIn(samplePaths()),
                          [](const auto& info) { return std::filesystem::path(info.param).stem().string(); });

@@ -92,13 +92,13 @@ TEST_P(SingleLink, PinReactionAndTorqueMatchNewtonEuler)
 
 const Vec2 kGravity(0.0, -9.80665);
 
-INSTANTIATE_TEST_SUITE_P(
-    Motions, SingleLink,
-    ::testing::Values(LinkCase{"ConstantSpeed", ConstantSpeed{5.0, 0.0}, Vec2::Zero(), true},
-                      LinkCase{"ConstantSpeedWithGravity", ConstantSpeed{5.0, 0.0}, kGravity, true},
-                      LinkCase{"Accelerating", ConstantSpeed{1.5, 7.0}, Vec2::Zero(), true},
-                      LinkCase{"ReversingWithGravity", ConstantSpeed{-2.0, 9.0}, kGravity, true},
-                      LinkCase{"PinListedLinkFirst", ConstantSpeed{1.5, 7.0}, kGravity, false}),
-    [](const auto& info) { return std::string(info.param.name); });
+INSTANTIATE_TEST_SUITE_P(Motions, SingleLink,
+                         ::testing::Values(LinkCase{"ConstantSpeed", ConstantSpeed{5.0, 0.0}, Vec2::Zero(), true},
+                                           LinkCase{"ConstantSpeedWithGravity", ConstantSpeed{5.0, 0.0}, kGravity,
+                                                    true},
+                                           LinkCase{"Accelerating", ConstantSpeed{1.5, 7.0}, Vec2::Zero(), true},
+                                           LinkCase{"ReversingWithGravity", ConstantSpeed{-2.0, 9.0}, kGravity, true},
+                                           LinkCase{"PinListedLinkFirst", ConstantSpeed{1.5, 7.0}, kGravity, false}),
+                         [](const auto& info) { return std::string(info.param.name); });
 
 }  // namespace

@@ -1,14 +1,14 @@
 // The cycle summary: trapezoid integrals, peaks, RMS and the energy balance
 // on mechanisms whose answers are known in closed form, and the readable
 // summary text built from them.
-#include "core/solver/compiled_mechanism.h"
 #include "core/results/cycle_summary.h"
-#include "core/solver/cycle_sweep.h"
-#include "tests/mechanism_builders.h"
 #include "core/results/number_text.h"
 #include "core/results/step_integral.h"
 #include "core/results/summary_text.h"
 #include "core/results/text_table.h"
+#include "core/solver/compiled_mechanism.h"
+#include "core/solver/cycle_sweep.h"
+#include "tests/mechanism_builders.h"
 
 #include <gtest/gtest.h>
 
@@ -75,10 +75,10 @@ TEST(StepIntegral, ASingleStepIsItsOwnMean)
 
 // One link on a ground pin at the origin, its centre of mass at distance d
 // along +x at the drawn pose, driven by a motor at the pin.
-constexpr double kMass = 1.8;      // kg
-constexpr double kInertiaG = 0.03; // kg·m² about G
-constexpr double kArm = 0.25;      // m, pin to G
-constexpr double kG = 9.80665;     // m/s²
+constexpr double kMass = 1.8;       // kg
+constexpr double kInertiaG = 0.03;  // kg·m² about G
+constexpr double kArm = 0.25;       // m, pin to G
+constexpr double kG = 9.80665;      // m/s²
 
 Mechanism link(Motion motion, Vec2 gravity, int steps)
 {
@@ -274,8 +274,7 @@ TEST(CycleSummary, SliderPeakMomentMatchesPistonInertia)
         if (m.joints[j].type == JointType::Slider) {
             EXPECT_NEAR(s.joints[j].peakMoment.value, expected, 1e-9 * expected);
             EXPECT_TRUE(s.joints[j].peakMoment.step == 0 || s.joints[j].peakMoment.step == 90);
-        }
-        else EXPECT_EQ(s.joints[j].peakMoment.step, -1) << s.joints[j].name;  // pins have no contact moment
+        } else EXPECT_EQ(s.joints[j].peakMoment.step, -1) << s.joints[j].name;  // pins have no contact moment
     }
 }
 

@@ -10,11 +10,11 @@
 #include <gtest/gtest.h>
 #include <nlohmann/json.hpp>
 
+#include <sys/wait.h>
+#include <unistd.h>
 #include <cstdio>
 #include <filesystem>
 #include <fstream>
-#include <sys/wait.h>
-#include <unistd.h>
 
 using namespace clevis;
 
@@ -51,8 +51,8 @@ test::FourBarSpec loadedSpec()
     return s;
 }
 
-const Vec2 kLoadAt(0.18, 0.26);     // m, on the coupler
-const Vec2 kLoad(35.0, -60.0);      // N
+const Vec2 kLoadAt(0.18, 0.26);         // m, on the coupler
+const Vec2 kLoad(35.0, -60.0);          // N
 constexpr double kRockerTorque = -4.5;  // N·m
 const Vec2 kGravity(0.0, -9.80665);
 
@@ -77,8 +77,8 @@ nlohmann::json scriptInput(const Mechanism& mech, const test::FourBarSpec& spec,
 // missing, since the check would then prove nothing.
 nlohmann::json runScript(const nlohmann::json& input)
 {
-    const auto path = std::filesystem::temp_directory_path() /
-                      ("clevis_sympy_four_bar_" + std::to_string(::getpid()) + ".json");
+    const auto path =
+        std::filesystem::temp_directory_path() / ("clevis_sympy_four_bar_" + std::to_string(::getpid()) + ".json");
     std::ofstream(path) << input.dump();
     const std::string command =
         std::string("'") + CLEVIS_PYTHON + "' '" + CLEVIS_SYMPY_SCRIPT + "' '" + path.string() + "'";

@@ -2,21 +2,21 @@
 // tools, a motor added, a mass typed in, saved, reopened and compared with the
 // expected file; the status line must report one degree of freedom and a
 // mechanism that solves.
+#include "core/file/mechanism_file.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/canvas/canvas_view.h"
-#include "ui/files/file_actions.h"
-#include "ui/shell/main_window.h"
-#include "ui/document/mechanism_document.h"
-#include "core/file/mechanism_file.h"
-#include "ui/panels/property_editor.h"
-#include "ui/document/sketch_geometry.h"
-#include "ui/panels/status_line.h"
 #include "ui/canvas/tool_palette.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/document/sketch_geometry.h"
+#include "ui/files/file_actions.h"
+#include "ui/panels/property_editor.h"
+#include "ui/panels/status_line.h"
+#include "ui/shell/main_window.h"
 
 #include <QAction>
+#include <QComboBox>
 #include <QDir>
 #include <QFileInfo>
-#include <QComboBox>
 #include <QLineEdit>
 #include <QTemporaryDir>
 #include <QTest>
@@ -45,7 +45,8 @@ protected:
     // A pointer move with the left button held down.
     void dragTo(double x, double y)
     {
-        QMouseEvent move(QEvent::MouseMove, at(x, y), window.canvas()->mapToGlobal(at(x, y)), Qt::NoButton, Qt::LeftButton, {});
+        QMouseEvent move(QEvent::MouseMove, at(x, y), window.canvas()->mapToGlobal(at(x, y)), Qt::NoButton,
+                         Qt::LeftButton, {});
         QApplication::sendEvent(window.canvas(), &move);
     }
 

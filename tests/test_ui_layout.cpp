@@ -30,14 +30,12 @@ namespace {
 
 const QString kLongText = QString(QStringLiteral("a very long text without end ")).repeated(40);
 
-QRect onScreen(const QWidget* w)
-{
-    return QRect(w->mapToGlobal(QPoint(0, 0)), w->size());
-}
+QRect onScreen(const QWidget* w) { return QRect(w->mapToGlobal(QPoint(0, 0)), w->size()); }
 
 std::string text(const QRect& r)
 {
-    return std::to_string(r.x()) + "," + std::to_string(r.y()) + " " + std::to_string(r.width()) + "×" + std::to_string(r.height());
+    return std::to_string(r.x()) + "," + std::to_string(r.y()) + " " + std::to_string(r.width()) + "×" +
+           std::to_string(r.height());
 }
 
 class ScreenLayout : public ::testing::TestWithParam<QSize> {
@@ -49,7 +47,8 @@ protected:
         ASSERT_TRUE(QTest::qWaitForWindowExposed(&window));
         window.placeOn(screen);
         QString error;
-        ASSERT_TRUE(window.files()->open(QStringLiteral(CLEVIS_SAMPLES_DIR "/dwell_six_bar.json"), &error)) << error.toStdString();
+        ASSERT_TRUE(window.files()->open(QStringLiteral(CLEVIS_SAMPLES_DIR "/dwell_six_bar.json"), &error))
+            << error.toStdString();
         window.analysis()->waitForIdle();
         window.document()->setSelection({Selection::Kind::Body, QStringLiteral("coupler_plate"), -1});
         auto* slider = window.findChild<DriveScrubber*>()->slider();
@@ -65,7 +64,8 @@ protected:
             if (!dock->isVisible()) continue;
             dock->raise();  // a dock behind another's tab is parked off the window until it is raised
             QCoreApplication::processEvents();
-            EXPECT_TRUE(screen.contains(onScreen(dock))) << dock->objectName().toStdString() << " " << text(onScreen(dock));
+            EXPECT_TRUE(screen.contains(onScreen(dock)))
+                << dock->objectName().toStdString() << " " << text(onScreen(dock));
         }
         ASSERT_TRUE(window.statusBar()->isVisible());
         EXPECT_TRUE(screen.contains(onScreen(window.statusBar()))) << text(onScreen(window.statusBar()));
@@ -75,10 +75,7 @@ protected:
     MainWindow window;
 };
 
-TEST_P(ScreenLayout, TheWindowAndEveryDockStayOnTheScreen)
-{
-    expectInsideScreen();
-}
+TEST_P(ScreenLayout, TheWindowAndEveryDockStayOnTheScreen) { expectInsideScreen(); }
 
 TEST_P(ScreenLayout, AMaximisedWindowKeepsEveryDockOnTheScreen)
 {
@@ -103,7 +100,9 @@ TEST_P(ScreenLayout, LongTextsNeverWidenTheWindow)
 }
 
 INSTANTIATE_TEST_SUITE_P(Screens, ScreenLayout, ::testing::Values(QSize(1366, 768), QSize(1920, 1080)),
-                         [](const auto& info) { return std::to_string(info.param.width()) + "x" + std::to_string(info.param.height()); });
+                         [](const auto& info) {
+                             return std::to_string(info.param.width()) + "x" + std::to_string(info.param.height());
+                         });
 
 TEST(MainWindowShortcuts, NoTwoActionsShareAShortcut)
 {

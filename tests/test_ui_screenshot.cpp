@@ -15,7 +15,8 @@ namespace {
 
 bool near(QRgb pixel, const QColor& c)
 {
-    return std::abs(qRed(pixel) - c.red()) <= 6 && std::abs(qGreen(pixel) - c.green()) <= 6 && std::abs(qBlue(pixel) - c.blue()) <= 6;
+    return std::abs(qRed(pixel) - c.red()) <= 6 && std::abs(qGreen(pixel) - c.green()) <= 6 &&
+           std::abs(qBlue(pixel) - c.blue()) <= 6;
 }
 
 }  // namespace
@@ -44,7 +45,8 @@ int main(int argc, char** argv)
     }
     const QSize expected = clevis::ui::kScreenshotSize;
     if (image.size() != expected) {
-        out << "size " << image.width() << "×" << image.height() << ", expected " << expected.width() << "×" << expected.height() << "\n";
+        out << "size " << image.width() << "×" << image.height() << ", expected " << expected.width() << "×"
+            << expected.height() << "\n";
         return 1;
     }
     long paper = 0, outline = 0;

@@ -14,8 +14,8 @@ namespace clevis {
 // reason. The old file, if any, is untouched.
 class FileWriteError : public std::runtime_error {
 public:
-    FileWriteError(std::string path, const std::string& message)
-        : std::runtime_error(message), path_(std::move(path)) {}
+    FileWriteError(std::string path, const std::string& message) : std::runtime_error(message), path_(std::move(path))
+    {}
     const std::string& path() const { return path_; }
 
 private:

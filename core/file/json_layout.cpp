@@ -13,10 +13,7 @@ std::string scalarText(const Json& value)
     return value.dump(-1, ' ', false, Json::error_handler_t::replace);
 }
 
-bool isStructured(const Json& value)
-{
-    return value.is_object() || value.is_array();
-}
+bool isStructured(const Json& value) { return value.is_object() || value.is_array(); }
 
 bool spansLines(const Json& value)
 {

@@ -107,12 +107,10 @@ std::size_t tooDeepAt(const std::string& text)
         if (inString) {
             if (c == '\\') ++i;
             else if (c == '"') inString = false;
-        }
-        else if (c == '"') inString = true;
+        } else if (c == '"') inString = true;
         else if (c == '[' || c == '{') {
             if (++depth > kMaxNesting) return i + 1;
-        }
-        else if ((c == ']' || c == '}') && --depth < 0) return 0;
+        } else if ((c == ']' || c == '}') && --depth < 0) return 0;
     }
     return 0;
 }
@@ -122,8 +120,8 @@ std::size_t tooDeepAt(const std::string& text)
 nlohmann::json parseJsonText(const std::string& text)
 {
     if (const std::size_t at = tooDeepAt(text))
-        throw ModelError(lineAndColumn(text, at), "arrays and objects nested more than " +
-                                                          std::to_string(kMaxNesting) + " levels deep");
+        throw ModelError(lineAndColumn(text, at),
+                         "arrays and objects nested more than " + std::to_string(kMaxNesting) + " levels deep");
     nlohmann::json result;
     LocatingParser parser(result);
     if (!nlohmann::json::sax_parse(text, &parser))
@@ -133,23 +131,16 @@ nlohmann::json parseJsonText(const std::string& text)
 
 JsonNode::JsonNode(const nlohmann::json& value, std::string path, std::vector<std::string>& warnings)
     : value_(&value), path_(std::move(path)), warnings_(&warnings)
-{
-}
+{}
 
-void JsonNode::warn(const std::string& message) const
-{
-    warnings_->push_back(path_ + ": " + message);
-}
+void JsonNode::warn(const std::string& message) const { warnings_->push_back(path_ + ": " + message); }
 
 JsonNode JsonNode::child(const nlohmann::json& value, std::string path) const
 {
     return JsonNode(value, std::move(path), *warnings_);
 }
 
-std::string JsonNode::keyPath(const std::string& key) const
-{
-    return path_.empty() ? key : path_ + "." + key;
-}
+std::string JsonNode::keyPath(const std::string& key) const { return path_.empty() ? key : path_ + "." + key; }
 
 void JsonNode::expect(bool matches, const char* expected) const
 {
@@ -232,10 +223,7 @@ std::string JsonNode::name() const
     return s;
 }
 
-bool JsonNode::isBoolean() const
-{
-    return value_->is_boolean();
-}
+bool JsonNode::isBoolean() const { return value_->is_boolean(); }
 
 bool JsonNode::boolean() const
 {

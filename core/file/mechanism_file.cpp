@@ -3,8 +3,8 @@
 #include "core/file/mechanism_file.h"
 
 #include "core/file/json_reader.h"
-#include "core/model/materials.h"
 #include "core/file/mechanism_file_format.h"
+#include "core/model/materials.h"
 #include "core/model/model_limits.h"
 
 #include <cerrno>
@@ -33,10 +33,7 @@ private:
     std::map<std::string, std::string> firstUse_;
 };
 
-double quantity(const JsonNode& node, const KeyWithUnit& key)
-{
-    return toSi(key.unit, node.at(key.name).number());
-}
+double quantity(const JsonNode& node, const KeyWithUnit& key) { return toSi(key.unit, node.at(key.name).number()); }
 
 double quantityOr(const JsonNode& node, const KeyWithUnit& key, double fallback)
 {
@@ -340,7 +337,10 @@ struct LoadType {
     Load (*read)(const JsonNode&, const std::vector<Driver>&);
 };
 constexpr LoadType kLoadTypes[] = {
-    {"force", readForce},   {"torque", readTorque}, {"spring", readSpring}, {"damper", readDamper},
+    {"force", readForce},
+    {"torque", readTorque},
+    {"spring", readSpring},
+    {"damper", readDamper},
     {"torsion_spring", readTorsionSpring},
 };
 
@@ -389,8 +389,8 @@ std::vector<Load> readLoads(const JsonNode& root, const std::vector<Driver>& dri
 void readVersion(const JsonNode& root)
 {
     if (!root.has("clevis"))
-        throw ModelError("clevis", "required key missing; a mechanism file starts with \"clevis\": " +
-                                       std::to_string(kFileVersion));
+        throw ModelError(
+            "clevis", "required key missing; a mechanism file starts with \"clevis\": " + std::to_string(kFileVersion));
     const JsonNode version = root.at("clevis");
     const double v = version.number();
     if (v != kFileVersion)
@@ -476,16 +476,10 @@ LoadedMechanism parseMechanism(const std::string& jsonText)
     return out;
 }
 
-LoadedMechanism loadMechanismFile(const std::string& path)
-{
-    return parseMechanism(readFileText(path));
-}
+LoadedMechanism loadMechanismFile(const std::string& path) { return parseMechanism(readFileText(path)); }
 
 // Through the text, as a saved file goes: the one way to be sure that what
 // passes here also opens.
-Mechanism validateMechanism(const Mechanism& m)
-{
-    return parseMechanism(saveMechanismText(m)).mechanism;
-}
+Mechanism validateMechanism(const Mechanism& m) { return parseMechanism(saveMechanismText(m)).mechanism; }
 
 }  // namespace clevis

@@ -24,13 +24,13 @@ struct DriverKeys {
     KeyWithUnit position;      // table
     KeyWithUnit profileAt;     // load profile over this driver's position
 };
-inline constexpr DriverKeys kRotaryKeys{
-    {"angle_deg", FileUnit::Degree}, {"speed_rpm", FileUnit::Rpm},     {"accel_deg_s2", FileUnit::Degree},
-    {"from_deg", FileUnit::Degree},  {"to_deg", FileUnit::Degree},     {"position_deg", FileUnit::Degree},
-    {"at_deg", FileUnit::Degree}};
-inline constexpr DriverKeys kLinearKeys{
-    {"position", FileUnit::Si}, {"speed", FileUnit::Si},    {"accel", FileUnit::Si}, {"from", FileUnit::Si},
-    {"to", FileUnit::Si},       {"position", FileUnit::Si}, {"at", FileUnit::Si}};
+inline constexpr DriverKeys kRotaryKeys{{"angle_deg", FileUnit::Degree},    {"speed_rpm", FileUnit::Rpm},
+                                        {"accel_deg_s2", FileUnit::Degree}, {"from_deg", FileUnit::Degree},
+                                        {"to_deg", FileUnit::Degree},       {"position_deg", FileUnit::Degree},
+                                        {"at_deg", FileUnit::Degree}};
+inline constexpr DriverKeys kLinearKeys{{"position", FileUnit::Si}, {"speed", FileUnit::Si}, {"accel", FileUnit::Si},
+                                        {"from", FileUnit::Si},     {"to", FileUnit::Si},    {"position", FileUnit::Si},
+                                        {"at", FileUnit::Si}};
 
 inline constexpr KeyWithUnit kTorsionFreeAngle{"free_angle_deg", FileUnit::Degree};
 

@@ -12,10 +12,7 @@ namespace {
 // Ordered, so that a saved file lists keys as a person would write them.
 using Json = nlohmann::ordered_json;
 
-Json point(const Vec2& v)
-{
-    return Json::array({v.x(), v.y()});
-}
+Json point(const Vec2& v) { return Json::array({v.x(), v.y()}); }
 
 Json values(const std::vector<double>& si, FileUnit unit)
 {
@@ -24,15 +21,9 @@ Json values(const std::vector<double>& si, FileUnit unit)
     return out;
 }
 
-void put(Json& out, const KeyWithUnit& key, double si)
-{
-    out[key.name] = fromSi(key.unit, si);
-}
+void put(Json& out, const KeyWithUnit& key, double si) { out[key.name] = fromSi(key.unit, si); }
 
-Json pointRef(const BodyPointRef& r)
-{
-    return {{"body", r.body}, {"at", point(r.at)}};
-}
+Json pointRef(const BodyPointRef& r) { return {{"body", r.body}, {"at", point(r.at)}}; }
 
 Json pointMassJson(const PointMass& p)
 {
@@ -215,14 +206,8 @@ Json document(const Mechanism& m)
 
 }  // namespace
 
-nlohmann::json mechanismToJson(const Mechanism& m)
-{
-    return nlohmann::json(document(m));
-}
+nlohmann::json mechanismToJson(const Mechanism& m) { return nlohmann::json(document(m)); }
 
-std::string saveMechanismText(const Mechanism& m)
-{
-    return layoutJson(document(m));
-}
+std::string saveMechanismText(const Mechanism& m) { return layoutJson(document(m)); }
 
 }  // namespace clevis

@@ -33,10 +33,7 @@ std::vector<Segment> segmentsOf(const std::string& path)
     return out;
 }
 
-std::string quoted(const std::string& name)
-{
-    return "“" + name + "”";
-}
+std::string quoted(const std::string& name) { return "“" + name + "”"; }
 
 std::string capitalised(std::string s)
 {
@@ -51,10 +48,7 @@ std::string named(const std::string& kind, const std::string& name, int index)
     return kind + " " + quoted(name);
 }
 
-const char* driverKindWord(DriverType type)
-{
-    return type == DriverType::Rotary ? "motor" : "linear drive";
-}
+const char* driverKindWord(DriverType type) { return type == DriverType::Rotary ? "motor" : "linear drive"; }
 
 const char* loadKindWord(const Load& load)
 {
@@ -112,14 +106,8 @@ std::string topLevelWords(const std::string& key)
 }
 
 // Keys holding two things told apart by order, and keys holding a point.
-bool isPair(const std::string& key)
-{
-    return key == "bodies" || key == "between" || key == "ends";
-}
-bool isPoint(const std::string& key)
-{
-    return key == "at" || key == "cg" || key == "force" || key == "gravity";
-}
+bool isPair(const std::string& key) { return key == "bodies" || key == "between" || key == "ends"; }
+bool isPoint(const std::string& key) { return key == "at" || key == "cg" || key == "force" || key == "gravity"; }
 
 // `point_masses[0]` of a body reads as the point mass's name when it has one.
 std::string pointMassWords(const Mechanism& m, const Segment& part, const Segment& s)

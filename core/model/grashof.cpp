@@ -40,7 +40,8 @@ GrashofResult classifyFourBar(const std::array<double, 4>& lengths, double relat
     for (int i = 0; i < 4; ++i)
         if (!(lengths[i] > 0.0) || !std::isfinite(lengths[i])) {
             std::ostringstream s;
-            s << "the " << fourBarLinkName(FourBarLink(i)) << " link's length (" << lengths[i] << " m) must be positive";
+            s << "the " << fourBarLinkName(FourBarLink(i)) << " link's length (" << lengths[i]
+              << " m) must be positive";
             throw std::invalid_argument(s.str());
         }
     const int shortest = int(std::min_element(lengths.begin(), lengths.end()) - lengths.begin());

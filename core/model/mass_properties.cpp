@@ -12,10 +12,7 @@ MassProperties barMassProperties(const Vec2& a, const Vec2& b, double width, dou
     return p;
 }
 
-MassProperties pointMassProperties(double mass, const Vec2& at)
-{
-    return {mass, at, 0.0};
-}
+MassProperties pointMassProperties(double mass, const Vec2& at) { return {mass, at, 0.0}; }
 
 MassProperties combine(const std::vector<MassProperties>& parts)
 {
@@ -30,8 +27,7 @@ MassProperties combine(const std::vector<MassProperties>& parts)
         return total;
     }
     total.cg = moment / total.mass;
-    for (const auto& part : parts)
-        total.inertia += part.inertia + part.mass * (part.cg - total.cg).squaredNorm();
+    for (const auto& part : parts) total.inertia += part.inertia + part.mass * (part.cg - total.cg).squaredNorm();
     return total;
 }
 

@@ -16,7 +16,7 @@ inline constexpr const char* kGroundName = "ground";
 
 struct PointMass {
     std::string name;
-    double mass = 0.0;  // kg
+    double mass = 0.0;       // kg
     Vec2 at = Vec2::Zero();  // global position at the drawn pose, m
 
     bool operator==(const PointMass&) const = default;
@@ -25,9 +25,9 @@ struct PointMass {
 // A straight bar of rectangular cross-section between two points (by default
 // the two farthest-apart joints on the body).
 struct BarSection {
-    double width = 0.0;      // m, in the plane of motion
-    double thickness = 0.0;  // m, out of plane
-    double density = 0.0;    // kg/m³
+    double width = 0.0;                         // m, in the plane of motion
+    double thickness = 0.0;                     // m, out of plane
+    double density = 0.0;                       // kg/m³
     std::optional<std::pair<Vec2, Vec2>> ends;  // m
 
     bool operator==(const BarSection&) const = default;
@@ -101,9 +101,9 @@ enum class DriverType { Rotary, Linear };
 struct Driver {
     std::string name;
     DriverType type = DriverType::Rotary;
-    std::string joint;                       // rotary, or linear at a slider
-    std::optional<BodyPointRef> ends[2];     // linear between two points
-    double offset = 0.0;                     // position at the drawn pose, rad (rotary) or m (slider)
+    std::string joint;                    // rotary, or linear at a slider
+    std::optional<BodyPointRef> ends[2];  // linear between two points
+    double offset = 0.0;                  // position at the drawn pose, rad (rotary) or m (slider)
     Motion motion = ConstantSpeed{};
 
     bool operator==(const Driver&) const = default;
@@ -112,8 +112,8 @@ struct Driver {
 // Scale factor applied to a load over the cycle, linearly interpolated and
 // held constant beyond the table ends.
 struct LoadProfile {
-    std::string driver;           // empty: over time
-    std::vector<double> at;       // s, or driver position in rad / m
+    std::string driver;      // empty: over time
+    std::vector<double> at;  // s, or driver position in rad / m
     std::vector<double> factor;
 
     bool operator==(const LoadProfile&) const = default;
@@ -153,9 +153,9 @@ struct DamperLoad {
 };
 struct TorsionSpringLoad {
     std::string name;
-    std::string joint;         // a pin
-    double stiffness = 0.0;    // N·m/rad
-    double freeAngle = 0.0;    // rad, relative rotation at which it is relaxed (0 = drawn pose)
+    std::string joint;       // a pin
+    double stiffness = 0.0;  // N·m/rad
+    double freeAngle = 0.0;  // rad, relative rotation at which it is relaxed (0 = drawn pose)
 
     bool operator==(const TorsionSpringLoad&) const = default;
 };

@@ -10,7 +10,8 @@ namespace clevis {
 class ModelError : public std::runtime_error {
 public:
     ModelError(std::string path, const std::string& message)
-        : std::runtime_error(path.empty() ? message : path + ": " + message), path_(std::move(path)) {}
+        : std::runtime_error(path.empty() ? message : path + ": " + message), path_(std::move(path))
+    {}
     const std::string& path() const { return path_; }
 
 private:

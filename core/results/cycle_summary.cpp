@@ -111,7 +111,8 @@ CycleSummary summarize(const CompiledMechanism& m, const CycleResult& r)
     for (std::size_t d = 0; d < m.drivers.size(); ++d) out.drivers.push_back(summarizeDriver(m, steps, d));
     out.groundForce = largest(steps, [](const StepResult& s) { return s.groundForce.norm(); });
     out.groundMoment = largest(steps, [](const StepResult& s) { return std::abs(s.groundMoment); });
-    for (std::size_t k = 0; k < r.transmissionPins.size(); ++k) out.transmission.push_back(summarizeTransmission(m, r, k));
+    for (std::size_t k = 0; k < r.transmissionPins.size(); ++k)
+        out.transmission.push_back(summarizeTransmission(m, r, k));
     out.energy = balanceEnergy(steps);
     for (const auto& s : steps) out.nearSingularSteps += s.nearSingular ? 1 : 0;
     return out;

@@ -17,19 +17,19 @@ struct PeakAt {
 
 struct JointSummary {
     std::string name;
-    PeakAt peak;     // N, peak reaction magnitude
-    double rms = 0;  // N, time-weighted over the solved part of the cycle
+    PeakAt peak;        // N, peak reaction magnitude
+    double rms = 0;     // N, time-weighted over the solved part of the cycle
     PeakAt peakMoment;  // N·m, sliders only (|moment|)
 };
 
 struct DriverSummary {
     std::string name;
     DriverType type;
-    PeakAt peak;            // N·m or N, signed effort of largest magnitude
+    PeakAt peak;  // N·m or N, signed effort of largest magnitude
     double rms = 0, mean = 0;
-    PeakAt peakPower;       // W, largest power delivered to the mechanism
-    PeakAt peakRegenerative;// W, most negative power (the mechanism drives the motor), ≤ 0
-    double work = 0;        // J, ∫ power dt over the solved part of the cycle
+    PeakAt peakPower;         // W, largest power delivered to the mechanism
+    PeakAt peakRegenerative;  // W, most negative power (the mechanism drives the motor), ≤ 0
+    double work = 0;          // J, ∫ power dt over the solved part of the cycle
 };
 
 struct TransmissionSummary {
@@ -45,9 +45,9 @@ inline constexpr double kNegligibleEnergy = 1e-9;
 //   W_drivers = ΔT + ΔV_gravity + ΔV_springs + W_dampers − W_loads + residual.
 struct EnergyBalance {
     double driverWork = 0, kineticChange = 0, gravityChange = 0, springChange = 0;  // J
-    double damperWork = 0, loadWork = 0, residual = 0;                             // J
-    double gross = 0;            // J, scale the residual is measured against
-    double relativeResidual = 0; // residual / gross
+    double damperWork = 0, loadWork = 0, residual = 0;                              // J
+    double gross = 0;             // J, scale the residual is measured against
+    double relativeResidual = 0;  // residual / gross
 };
 
 struct CycleSummary {

@@ -19,8 +19,7 @@ std::string formatDrivePosition(const CompiledDriver& d, double si)
         double deg = radToDeg(si);
         if (std::holds_alternative<ConstantSpeed>(d.motion)) deg -= 360.0 * std::floor(deg / 360.0);
         std::snprintf(text, sizeof text, "%s = %.2f°", d.name.c_str(), deg);
-    }
-    else std::snprintf(text, sizeof text, "%s = %.5f m", d.name.c_str(), si);
+    } else std::snprintf(text, sizeof text, "%s = %.5f m", d.name.c_str(), si);
     return text;
 }
 

@@ -66,8 +66,7 @@ void addDriverActions(const CompiledMechanism& m, const StepResult& s, int body,
                 item.jointType = j.type;
                 item.axis = axisOf(s, j);
                 other = j.body[1 - side];
-            }
-            else {
+            } else {
                 item.axis = (pointPosition(s.q, driver.ends[1]) - pointPosition(s.q, driver.ends[0])).normalized();
             }
             item.kind = FreeBodyItemKind::DriverAction;

@@ -17,13 +17,13 @@ enum class FreeBodyItemKind { JointReaction, DriverAction, Weight, Force, Torque
 // A force through a point plus a couple, acting on the body.
 struct FreeBodyItem {
     FreeBodyItemKind kind = FreeBodyItemKind::Force;
-    std::string name;        // joint, driver or load name; "weight" for gravity
-    std::string otherBody;   // joints and drivers: the body on the other side
+    std::string name;                      // joint, driver or load name; "weight" for gravity
+    std::string otherBody;                 // joints and drivers: the body on the other side
     JointType jointType = JointType::Pin;  // joint reactions (and drivers at a joint)
-    Vec2 axis = Vec2::Zero();  // sliders and slots: unit axis in global axes
-    Vec2 at = Vec2::Zero();    // m, global
-    Vec2 force = Vec2::Zero(); // N, global
-    double couple = 0.0;       // N·m, counter-clockwise
+    Vec2 axis = Vec2::Zero();              // sliders and slots: unit axis in global axes
+    Vec2 at = Vec2::Zero();                // m, global
+    Vec2 force = Vec2::Zero();             // N, global
+    double couple = 0.0;                   // N·m, counter-clockwise
 };
 
 // Σ (applied side) against the kinetic side; residual = sum − kinetic.
@@ -35,16 +35,16 @@ struct FreeBodyDiagram {
     int body = kGround;
     std::string bodyName;
     int step = -1;
-    double t = 0.0;       // s
-    Vec2 cg = Vec2::Zero();  // m, global
-    double angle = 0.0;   // rad since the drawn pose
+    double t = 0.0;                    // s
+    Vec2 cg = Vec2::Zero();            // m, global
+    double angle = 0.0;                // rad since the drawn pose
     double mass = 0.0, inertia = 0.0;  // kg, kg·m²
-    Vec2 accel = Vec2::Zero();  // m/s², a_G
-    double alpha = 0.0;         // rad/s²
+    Vec2 accel = Vec2::Zero();         // m/s², a_G
+    double alpha = 0.0;                // rad/s²
     std::vector<FreeBodyItem> items;
     FreeBodyEquation fx, fy, moment;  // N, N, N·m about G
 
-    Vec2 inertiaForce() const { return mass * accel; }  // m·a_G
+    Vec2 inertiaForce() const { return mass * accel; }        // m·a_G
     double inertiaCouple() const { return inertia * alpha; }  // I_G·α
 };
 

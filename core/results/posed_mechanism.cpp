@@ -63,8 +63,7 @@ void moveLoad(Load& load, const Mover& move)
             if constexpr (std::is_same_v<T, ForceLoad>) {
                 if (l.turnsWithBody) l.force = rotation(degToRad(move.turnDeg(l.point.body))) * l.force;
                 moveRef(l.point, move);
-            }
-            else if constexpr (std::is_same_v<T, SpringLoad> || std::is_same_v<T, DamperLoad>) {
+            } else if constexpr (std::is_same_v<T, SpringLoad> || std::is_same_v<T, DamperLoad>) {
                 moveRef(l.a, move);
                 moveRef(l.b, move);
             }

@@ -3,8 +3,8 @@
 // in a body turn with it. Mass properties and values are unchanged.
 #pragma once
 
-#include "core/solver/compiled_mechanism.h"
 #include "core/results/results.h"
+#include "core/solver/compiled_mechanism.h"
 
 namespace clevis {
 

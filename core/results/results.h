@@ -40,16 +40,16 @@ struct Reaction {
 struct StepResult {
     double t = 0.0;
     std::vector<double> drivePosition, driveRate;  // rad or m, per s
-    Eigen::VectorXd q, qd, qdd;                   // [x, y, φ] per body and their rates
-    Eigen::VectorXd lambda;                       // Lagrange multipliers, one per constraint row
+    Eigen::VectorXd q, qd, qdd;                    // [x, y, φ] per body and their rates
+    Eigen::VectorXd lambda;                        // Lagrange multipliers, one per constraint row
     std::vector<Reaction> joints;
-    std::vector<double> effort, power;             // per driver: N·m or N, W
-    std::vector<ConstraintAction> actions[2];      // per constraint (joints, then drivers): on body[0], body[1]
-    Vec2 groundForce = Vec2::Zero();               // N
-    double groundMoment = 0.0;                     // N·m about the origin
+    std::vector<double> effort, power;         // per driver: N·m or N, W
+    std::vector<ConstraintAction> actions[2];  // per constraint (joints, then drivers): on body[0], body[1]
+    Vec2 groundForce = Vec2::Zero();           // N
+    double groundMoment = 0.0;                 // N·m about the origin
     double kinetic = 0.0, gravityPotential = 0.0, springPotential = 0.0;  // J
     double damperDissipation = 0.0, appliedPower = 0.0;                   // W
-    std::vector<double> transmissionDeg;           // per transmission pin
+    std::vector<double> transmissionDeg;                                  // per transmission pin
     double reciprocalCondition = 1.0;
     int jacobianSign = 1;       // sign of det Φ_q; a change between steps means a singular position was crossed
     bool nearSingular = false;  // close to, or just past, a singular position
@@ -58,7 +58,7 @@ struct StepResult {
 struct Warning {
     std::string code;  // stable machine-readable tag, e.g. "near_singular"
     std::string message;
-    int step = -1;     // -1: about the whole analysis
+    int step = -1;  // -1: about the whole analysis
 };
 
 // A pin between two moving bodies whose transmission angle is reported. Each
@@ -72,9 +72,9 @@ struct TransmissionPin {
 };
 
 struct CycleResult {
-    int plannedSteps = 0;     // intervals in the full cycle
-    double duration = 0.0;    // s
-    bool complete = false;    // false: stopped where the mechanism could not be assembled
+    int plannedSteps = 0;   // intervals in the full cycle
+    double duration = 0.0;  // s
+    bool complete = false;  // false: stopped where the mechanism could not be assembled
     std::vector<StepResult> steps;
     std::vector<TransmissionPin> transmissionPins;
     std::vector<Warning> warnings;

@@ -30,9 +30,9 @@ std::vector<std::string> header(const CompiledMechanism& m, const CycleResult& r
 {
     std::vector<std::string> h{"t [s]"};
     for (const auto& d : m.drivers) h.push_back(d.name + " [" + driveHeaderUnit(d.type) + "]");
-    static const char* const bodyColumns[] = {".x [m]",       ".y [m]",       ".angle [deg]",
-                                              ".vx [m/s]",    ".vy [m/s]",    ".omega [rad/s]",
-                                              ".ax [m/s²]",   ".ay [m/s²]",   ".alpha [rad/s²]"};
+    static const char* const bodyColumns[] = {".x [m]",     ".y [m]",     ".angle [deg]",
+                                              ".vx [m/s]",  ".vy [m/s]",  ".omega [rad/s]",
+                                              ".ax [m/s²]", ".ay [m/s²]", ".alpha [rad/s²]"};
     for (const auto& b : m.bodies)
         for (const char* column : bodyColumns) h.push_back(b.name + column);
     for (const auto& j : m.joints)
@@ -41,8 +41,8 @@ std::vector<std::string> header(const CompiledMechanism& m, const CycleResult& r
         h.push_back(d.name + ".effort [" + effortUnit(d.type) + "]");
         h.push_back(d.name + ".power [W]");
     }
-    for (const char* column : {"ground.fx [N]", "ground.fy [N]", "ground.moment [N·m]", "kinetic [J]", "gravity [J]",
-                               "spring [J]"})
+    for (const char* column :
+         {"ground.fx [N]", "ground.fy [N]", "ground.moment [N·m]", "kinetic [J]", "gravity [J]", "spring [J]"})
         h.push_back(column);
     for (const auto& pin : r.transmissionPins) h.push_back(m.joints[pin.joint].name + ".transmission [deg]");
     h.push_back("near_singular");
@@ -58,7 +58,8 @@ void writeRow(std::ostream& out, const std::vector<double>& values, bool nearSin
 std::vector<double> rowValues(const CompiledMechanism& m, const StepResult& s)
 {
     std::vector<double> v{s.t};
-    for (std::size_t d = 0; d < m.drivers.size(); ++d) v.push_back(driveDisplayValue(m.drivers[d].type, s.drivePosition[d]));
+    for (std::size_t d = 0; d < m.drivers.size(); ++d)
+        v.push_back(driveDisplayValue(m.drivers[d].type, s.drivePosition[d]));
     for (Eigen::Index i = 0; i < s.q.size(); i += 3) {
         v.insert(v.end(), {s.q[i], s.q[i + 1], radToDeg(s.q[i + 2])});
         v.insert(v.end(), {s.qd[i], s.qd[i + 1], s.qd[i + 2]});
@@ -66,8 +67,8 @@ std::vector<double> rowValues(const CompiledMechanism& m, const StepResult& s)
     }
     for (const auto& j : s.joints) v.insert(v.end(), {j.force.x(), j.force.y(), j.moment});
     for (std::size_t d = 0; d < s.effort.size(); ++d) v.insert(v.end(), {s.effort[d], s.power[d]});
-    v.insert(v.end(), {s.groundForce.x(), s.groundForce.y(), s.groundMoment, s.kinetic, s.gravityPotential,
-                       s.springPotential});
+    v.insert(v.end(),
+             {s.groundForce.x(), s.groundForce.y(), s.groundMoment, s.kinetic, s.gravityPotential, s.springPotential});
     v.insert(v.end(), s.transmissionDeg.begin(), s.transmissionDeg.end());
     return v;
 }

@@ -1,7 +1,7 @@
 #include "core/results/results_json.h"
 
-#include "core/solver/body_state.h"
 #include "core/results/drive_units.h"
+#include "core/solver/body_state.h"
 
 namespace clevis {
 namespace {
@@ -24,9 +24,9 @@ json drivePositions(const CompiledMechanism& m, const StepResult& s)
 json bodyState(const StepResult& s, int b)
 {
     const int i = coordinateIndex(b, 0);
-    return {{"x", s.q[i]},     {"y", s.q[i + 1]},     {"angle_deg", radToDeg(s.q[i + 2])},
-            {"vx", s.qd[i]},   {"vy", s.qd[i + 1]},   {"omega", s.qd[i + 2]},
-            {"ax", s.qdd[i]},  {"ay", s.qdd[i + 1]},  {"alpha", s.qdd[i + 2]}};
+    return {{"x", s.q[i]},    {"y", s.q[i + 1]},    {"angle_deg", radToDeg(s.q[i + 2])},
+            {"vx", s.qd[i]},  {"vy", s.qd[i + 1]},  {"omega", s.qd[i + 2]},
+            {"ax", s.qdd[i]}, {"ay", s.qdd[i + 1]}, {"alpha", s.qdd[i + 2]}};
 }
 
 // The reaction as a bearing fixed in each body feels it: the force on the
@@ -34,9 +34,7 @@ json bodyState(const StepResult& s, int b)
 // first body's frame (ground's frame is the global one).
 json bearingForces(const CompiledJoint& j, const StepResult& s, const Reaction& reaction)
 {
-    const auto inFrame = [&](int body, const Vec2& global) -> Vec2 {
-        return rotation(-bodyAngle(s.q, body)) * global;
-    };
+    const auto inFrame = [&](int body, const Vec2& global) -> Vec2 { return rotation(-bodyAngle(s.q, body)) * global; };
     return {{"first", xy(inFrame(j.body[0], -reaction.force))}, {"second", xy(inFrame(j.body[1], reaction.force))}};
 }
 
@@ -98,10 +96,14 @@ json driverSummary(const DriverSummary& d)
 
 json energyBalance(const EnergyBalance& e)
 {
-    return {{"driver_work_j", e.driverWork},   {"kinetic_change_j", e.kineticChange},
-            {"gravity_change_j", e.gravityChange}, {"spring_change_j", e.springChange},
-            {"damper_work_j", e.damperWork},   {"load_work_j", e.loadWork},
-            {"residual_j", e.residual},        {"gross_j", e.gross},
+    return {{"driver_work_j", e.driverWork},
+            {"kinetic_change_j", e.kineticChange},
+            {"gravity_change_j", e.gravityChange},
+            {"spring_change_j", e.springChange},
+            {"damper_work_j", e.damperWork},
+            {"load_work_j", e.loadWork},
+            {"residual_j", e.residual},
+            {"gross_j", e.gross},
             {"relative_residual", e.relativeResidual}};
 }
 
@@ -137,12 +139,9 @@ json resultsToJson(const CompiledMechanism& m, const CycleResult& r, const Cycle
     json warnings = json::array();
     for (const auto& w : r.warnings)
         warnings.push_back({{"code", w.code}, {"message", w.message}, {"step", stepIndex(w.step)}});
-    return {{"steps", std::move(steps)},
-            {"summary", summaryToJson(m, r, summary)},
-            {"warnings", std::move(warnings)},
-            {"complete", r.complete},
-            {"duration_s", r.duration},
-            {"planned_steps", r.plannedSteps}};
+    return {{"steps", std::move(steps)},       {"summary", summaryToJson(m, r, summary)},
+            {"warnings", std::move(warnings)}, {"complete", r.complete},
+            {"duration_s", r.duration},        {"planned_steps", r.plannedSteps}};
 }
 
 }  // namespace clevis

@@ -37,7 +37,10 @@ double timeMean(const std::vector<StepResult>& steps, F&& f)
 template <class F>
 double timeRms(const std::vector<StepResult>& steps, F&& f)
 {
-    return std::sqrt(timeMean(steps, [&](const StepResult& s) { const double v = f(s); return v * v; }));
+    return std::sqrt(timeMean(steps, [&](const StepResult& s) {
+        const double v = f(s);
+        return v * v;
+    }));
 }
 
 }  // namespace clevis

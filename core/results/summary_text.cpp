@@ -67,8 +67,9 @@ std::string heading(const CompiledMechanism& m, const CycleResult& r, const Cycl
     if (r.complete)
         text += "  " + std::to_string(r.plannedSteps) + " steps over " + seconds(r.duration) + ", cycle complete.\n";
     else
-        text += "  THE CYCLE IS INCOMPLETE: solved " + std::to_string(solved) + " of " + std::to_string(r.plannedSteps) +
-                " steps (t = 0 to " + seconds(r.steps.empty() ? 0.0 : r.steps.back().t) + " of " + seconds(r.duration) +
+        text += "  THE CYCLE IS INCOMPLETE: solved " + std::to_string(solved) + " of " +
+                std::to_string(r.plannedSteps) + " steps (t = 0 to " +
+                seconds(r.steps.empty() ? 0.0 : r.steps.back().t) + " of " + seconds(r.duration) +
                 "). The figures below cover the solved part only.\n";
     if (s.nearSingularSteps > 0)
         text += "  " + std::to_string(s.nearSingularSteps) + " of " + std::to_string(r.steps.size()) +
@@ -107,8 +108,7 @@ std::string driverSection(const CompiledMechanism& m, const CycleResult& r, cons
         const char* unit = effortUnit(d.type);
         effort.addRow({d.name, quantity(d.peak.value, unit), at(m, r, d.peak), quantity(d.rms, unit),
                        quantity(d.mean, unit), quantity(d.work, "J")});
-        power.addRow({d.name, d.peakPower.step < 0 ? "none" : quantity(d.peakPower.value, "W"),
-                      at(m, r, d.peakPower),
+        power.addRow({d.name, d.peakPower.step < 0 ? "none" : quantity(d.peakPower.value, "W"), at(m, r, d.peakPower),
                       d.peakRegenerative.step < 0 ? "none" : quantity(d.peakRegenerative.value, "W"),
                       at(m, r, d.peakRegenerative)});
     }
@@ -120,8 +120,7 @@ std::string groundSection(const CompiledMechanism& m, const CycleResult& r, cons
 {
     TextTable t({Align::Left, Align::Right, Align::Left});
     t.addRow({"Peak shaking force", quantity(s.groundForce.value, "N"), at(m, r, s.groundForce)});
-    t.addRow({"Peak shaking moment about the origin", quantity(s.groundMoment.value, "N·m"),
-              at(m, r, s.groundMoment)});
+    t.addRow({"Peak shaking moment about the origin", quantity(s.groundMoment.value, "N·m"), at(m, r, s.groundMoment)});
     return "\nLoad on the frame\n" + t.render();
 }
 
@@ -159,11 +158,13 @@ std::string energySection(const CycleSummary& s)
     t.addRow({"Gross energy through the cycle", quantity(e.gross, "J")});
     std::string text = "\nEnergy over the cycle\n" + t.render();
     if (e.gross <= kNegligibleEnergy)
-        return text + "  No work passes through the mechanism over the cycle: the energy balance has nothing to check.\n";
+        return text +
+               "  No work passes through the mechanism over the cycle: the energy balance has nothing to check.\n";
     text += "  Energy balance closes to " + percent(e.relativeResidual) + " of the work through the cycle.\n";
     if (e.relativeResidual > kLargeResidual)
-        text += "  That is more than rounding: use more steps, and see the warnings (a near-singular position or a\n"
-                "  jump between assembly branches spoils the balance).\n";
+        text +=
+            "  That is more than rounding: use more steps, and see the warnings (a near-singular position or a\n"
+            "  jump between assembly branches spoils the balance).\n";
     return text;
 }
 

@@ -14,7 +14,8 @@ std::string TextTable::render(const std::string& indent) const
 {
     std::vector<std::size_t> width(align_.size(), 0);
     for (const auto& row : rows_)
-        for (std::size_t c = 0; c < row.size() && c < width.size(); ++c) width[c] = std::max(width[c], displayWidth(row[c]));
+        for (std::size_t c = 0; c < row.size() && c < width.size(); ++c)
+            width[c] = std::max(width[c], displayWidth(row[c]));
     std::string out;
     for (const auto& row : rows_) {
         std::string line = indent;

@@ -12,7 +12,8 @@ namespace clevis {
 class AnalysisError : public std::runtime_error {
 public:
     AnalysisError(const std::string& message, std::vector<std::string> items)
-        : std::runtime_error(message), items_(std::move(items)) {}
+        : std::runtime_error(message), items_(std::move(items))
+    {}
     const std::vector<std::string>& items() const { return items_; }
 
 private:

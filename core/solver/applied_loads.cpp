@@ -67,7 +67,8 @@ std::vector<AppliedLoad> appliedLoads(const CompiledMechanism& m, const Pose& q,
         if (m.bodies[b].mass.mass > 0.0)
             out.push_back({"weight", int(b), q.origin(int(b)), m.bodies[b].mass.mass * m.gravity, 0.0});
     for (const auto& f : m.forces)
-        out.push_back({f.name, f.point.body, q.point(f.point), forceDirection(q, f) * profileFactor(f.profile, t, drive), 0.0});
+        out.push_back(
+            {f.name, f.point.body, q.point(f.point), forceDirection(q, f) * profileFactor(f.profile, t, drive), 0.0});
     for (const auto& c : m.torques)
         out.push_back({c.name, c.body, q.origin(c.body), Vec2::Zero(), c.torque * profileFactor(c.profile, t, drive)});
     for (const auto& s : m.springs) {
@@ -122,7 +123,8 @@ LoadEnergies loadEnergies(const CompiledMechanism& m, const Pose& q, const Vecto
     for (const auto& d : m.dampers) e.damperDissipation += d.damping * std::pow(lineRate(q, qd, d.a, d.b), 2);
     for (const auto& f : m.forces)
         e.appliedPower += (forceDirection(q, f) * profileFactor(f.profile, t, drive)).dot(q.velocity(qd, f.point));
-    for (const auto& c : m.torques) e.appliedPower += c.torque * profileFactor(c.profile, t, drive) * bodyRate(qd, c.body);
+    for (const auto& c : m.torques)
+        e.appliedPower += c.torque * profileFactor(c.profile, t, drive) * bodyRate(qd, c.body);
     return e;
 }
 

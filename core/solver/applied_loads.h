@@ -21,10 +21,10 @@ struct AppliedLoad {
 };
 
 struct LoadEnergies {
-    double gravityPotential = 0.0;  // J, −Σ m g·r_G
-    double springPotential = 0.0;   // J, linear and torsion springs
-    double damperDissipation = 0.0; // W, Σ c·L̇², always ≥ 0
-    double appliedPower = 0.0;      // W, forces and torques (not weight, springs, dampers)
+    double gravityPotential = 0.0;   // J, −Σ m g·r_G
+    double springPotential = 0.0;    // J, linear and torsion springs
+    double damperDissipation = 0.0;  // W, Σ c·L̇², always ≥ 0
+    double appliedPower = 0.0;       // W, forces and torques (not weight, springs, dampers)
 };
 
 std::vector<AppliedLoad> appliedLoads(const CompiledMechanism& m, const Pose& q, const VectorXd& qd, double t,

@@ -44,7 +44,7 @@ private:
 
     int n_ = 0, kl_ = 0, ku_ = 0, ld_ = 1;
     std::vector<double> ab_;
-    std::vector<int> pivot_;                // row swapped with row k at step k
+    std::vector<int> pivot_;               // row swapped with row k at step k
     std::vector<double> inverseDiagonal_;  // 1/U_kk: the solves multiply
     double minPivot_ = 0.0, maxPivot_ = 0.0;
     int sign_ = 1;

@@ -13,10 +13,10 @@
 namespace clevis {
 
 struct BandOrdering {
-    std::vector<int> rowAt, columnAt;  // original row / column at each place
+    std::vector<int> rowAt, columnAt;        // original row / column at each place
     std::vector<int> rowPlace, columnPlace;  // place of each original row / column
-    int lower = 0, upper = 0;  // diagonals below / above the main one
-    int sign = 1;              // sign of det P_r · det P_c
+    int lower = 0, upper = 0;                // diagonals below / above the main one
+    int sign = 1;                            // sign of det P_r · det P_c
 };
 
 // `entries` are the (row, column) positions of the nonzeros of an n×n matrix;

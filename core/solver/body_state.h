@@ -47,8 +47,7 @@ class Pose {
 public:
     Pose(const VectorXd& q)  // implicit: any q can be read as a pose
         : q_(q), rotations_(fillRotations(q, own_))
-    {
-    }
+    {}
     // The same with the rotations kept in `storage`, which a solver keeps
     // between poses so that evaluating one allocates nothing.
     Pose(const VectorXd& q, std::vector<Eigen::Matrix2d>& storage) : q_(q), rotations_(fillRotations(q, storage)) {}
@@ -80,7 +79,7 @@ private:
     }
 
     const VectorXd& q_;
-    std::vector<Eigen::Matrix2d> own_;    // unless the caller keeps them
+    std::vector<Eigen::Matrix2d> own_;  // unless the caller keeps them
     const Eigen::Matrix2d* rotations_;
 };
 

@@ -29,16 +29,16 @@ struct Piece {
     double u0, p, q, r;
 };
 constexpr double kW = 4.0 * kPi;
-constexpr std::array<Piece, 5> kPieces{{{0.0, 0, 1, 0}, {0.125, 1, 0, 0}, {0.375, 0, 0, 1},
-                                        {0.625, -1, 0, 0}, {0.875, 0, 0, -1}}};
+constexpr std::array<Piece, 5> kPieces{
+    {{0.0, 0, 1, 0}, {0.125, 1, 0, 0}, {0.375, 0, 0, 1}, {0.625, -1, 0, 0}, {0.875, 0, 0, -1}}};
 
 CamValue integratePiece(const Piece& k, double v0, double s0, double tau)
 {
     const double st = std::sin(kW * tau), ct = std::cos(kW * tau);
     const double a = k.p + k.q * st + k.r * ct;
     const double v = v0 + k.p * tau + k.q * (1 - ct) / kW + k.r * st / kW;
-    const double s = s0 + v0 * tau + k.p * tau * tau / 2 + k.q * (tau / kW - st / (kW * kW)) +
-                     k.r * (1 - ct) / (kW * kW);
+    const double s =
+        s0 + v0 * tau + k.p * tau * tau / 2 + k.q * (tau / kW - st / (kW * kW)) + k.r * (1 - ct) / (kW * kW);
     return {s, v, a};
 }
 

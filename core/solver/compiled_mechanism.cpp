@@ -106,8 +106,7 @@ MassProperties Compiler::massOf(std::size_t b) const
             throw ModelError(path + ".section", "the bar has zero length (its ends coincide)");
         const BarSection& s = *body.section;
         parts.push_back(barMassProperties(ends.first, ends.second, s.width, s.thickness, s.density));
-    }
-    else if (body.mass) {
+    } else if (body.mass) {
         parts.push_back({*body.mass, body.cg.value_or(Vec2::Zero()), body.inertia.value_or(0.0)});
     }
     for (const auto& pm : body.pointMasses) parts.push_back(pointMassProperties(pm.mass, pm.at));
@@ -119,8 +118,7 @@ MassProperties Compiler::massOf(std::size_t b) const
         else if (!attachments.empty()) {
             total.cg = Vec2::Zero();
             for (const auto& p : attachments) total.cg += p / double(attachments.size());
-        }
-        else throw ModelError(path, "body \"" + body.name + "\" is not attached to anything");
+        } else throw ModelError(path, "body \"" + body.name + "\" is not attached to anything");
     }
     return total;
 }
@@ -135,7 +133,8 @@ void checkJointsComplete(const Mechanism& m)
         if (!open0 && !open1) continue;
         const std::string joint = std::string(jointKindWord(j.type)) + " \"" + j.name + "\"";
         if (open0 && open1)
-            throw ModelError(at("joints", k), joint + " joins no part yet: connect it to two parts, or to a part and ground");
+            throw ModelError(at("joints", k),
+                             joint + " joins no part yet: connect it to two parts, or to a part and ground");
         throw ModelError(at("joints", k), joint + " joins only \"" + j.bodies[open0 ? 1 : 0] +
                                               "\": connect it to a second part or to ground");
     }
@@ -170,7 +169,8 @@ void Compiler::checkNotADuplicatePin(std::size_t k) const
         if (o.type == JointType::Pin && samePair(o) && (o.at - j.at).norm() < 1e-9)
             throw ModelError(at("joints", k), "pin \"" + j.name + "\" joins \"" + j.bodies[0] + "\" and \"" +
                                                   j.bodies[1] + "\" at the same point as pin \"" + o.name + "\" (" +
-                                                  at("joints", i) + "): it is the same hinge twice; delete one of them");
+                                                  at("joints", i) +
+                                                  "): it is the same hinge twice; delete one of them");
     }
 }
 
@@ -206,8 +206,7 @@ void Compiler::compileDrivers()
                 throw ModelError(path + ".joint", std::string(d.type == DriverType::Rotary ? "a rotary" : "a linear") +
                                                       " driver needs a " + jointTypeName(needed) + " joint; \"" +
                                                       j.name + "\" is a " + jointTypeName(j.type));
-        }
-        else if (d.type == DriverType::Linear && d.ends[0] && d.ends[1]) {
+        } else if (d.type == DriverType::Linear && d.ends[0] && d.ends[1]) {
             for (int side = 0; side < 2; ++side) {
                 const std::string endPath = path + ".between[" + std::to_string(side) + "]";
                 c.ends[side] = point(bodyIndex(d.ends[side]->body, endPath + ".body"), d.ends[side]->at);
@@ -217,9 +216,9 @@ void Compiler::compileDrivers()
             const double length = (d.ends[1]->at - d.ends[0]->at).norm();
             if (length < 1e-9) throw ModelError(path + ".between", "the cylinder's ends coincide");
             c.offset = length;
-        }
-        else throw ModelError(path, d.type == DriverType::Rotary ? "a rotary driver needs \"joint\"" :
-                                                                   "a linear driver needs \"joint\" or \"between\"");
+        } else
+            throw ModelError(path, d.type == DriverType::Rotary ? "a rotary driver needs \"joint\""
+                                                                : "a linear driver needs \"joint\" or \"between\"");
         drivers_[d.name] = int(k);
         out_.drivers.push_back(c);
     }
@@ -249,24 +248,23 @@ void Compiler::compileLoads()
                 using T = std::decay_t<decltype(load)>;
                 if constexpr (std::is_same_v<T, ForceLoad>) {
                     const int b = bodyIndex(load.point.body, path + ".body");
-                    if (b == kGround) throw ModelError(path + ".body", "a force on ground does not act on the mechanism");
+                    if (b == kGround)
+                        throw ModelError(path + ".body", "a force on ground does not act on the mechanism");
                     out_.forces.push_back({load.name, point(b, load.point.at), load.force, load.turnsWithBody,
                                            profile(load.profile, path + ".profile")});
-                }
-                else if constexpr (std::is_same_v<T, TorqueLoad>) {
+                } else if constexpr (std::is_same_v<T, TorqueLoad>) {
                     const int b = bodyIndex(load.body, path + ".body");
-                    if (b == kGround) throw ModelError(path + ".body", "a torque on ground does not act on the mechanism");
+                    if (b == kGround)
+                        throw ModelError(path + ".body", "a torque on ground does not act on the mechanism");
                     out_.torques.push_back({load.name, b, load.torque, profile(load.profile, path + ".profile")});
-                }
-                else if constexpr (std::is_same_v<T, SpringLoad> || std::is_same_v<T, DamperLoad>) {
+                } else if constexpr (std::is_same_v<T, SpringLoad> || std::is_same_v<T, DamperLoad>) {
                     const BodyPoint a = point(bodyIndex(load.a.body, path + ".a.body"), load.a.at);
                     const BodyPoint b = point(bodyIndex(load.b.body, path + ".b.body"), load.b.at);
                     if (a.body == b.body) throw ModelError(path, "both ends are on body \"" + load.a.body + "\"");
                     if constexpr (std::is_same_v<T, SpringLoad>)
                         out_.springs.push_back({load.name, a, b, load.stiffness, load.freeLength});
                     else out_.dampers.push_back({load.name, a, b, load.damping});
-                }
-                else {
+                } else {
                     const int j = jointIndex(load.joint, path + ".joint");
                     if (out_.joints[j].type != JointType::Pin)
                         throw ModelError(path + ".joint", "a torsion spring needs a pin joint");
@@ -295,10 +293,12 @@ void Compiler::chooseDuration()
     double end = 0.0;
     for (const auto& d : in_.drivers) {
         if (const auto* r = std::get_if<Rise>(&d.motion); r && r->end) end = std::max(end, *r->end);
-        if (const auto* t = std::get_if<MotionTable>(&d.motion); t && !t->time.empty()) end = std::max(end, t->time.back());
+        if (const auto* t = std::get_if<MotionTable>(&d.motion); t && !t->time.empty())
+            end = std::max(end, t->time.back());
     }
     if (end <= 0.0)
-        throw ModelError("cycle.duration_s", "needed: no constant-speed rotary driver or timed motion sets the cycle's length");
+        throw ModelError("cycle.duration_s",
+                         "needed: no constant-speed rotary driver or timed motion sets the cycle's length");
     out_.duration = end;
 }
 
@@ -316,7 +316,7 @@ void checkSize(const Mechanism& m)
 {
     const ModelSize size{m.bodies.size(), m.joints.size(), m.drivers.size(), m.loads.size(), m.cycle.steps};
     if (const auto exceeded = exceededLimit(size)) {
-        const char* path = exceeded->kind == LimitKind::Bodies ? "bodies"
+        const char* path = exceeded->kind == LimitKind::Bodies   ? "bodies"
                            : exceeded->kind == LimitKind::Joints ? "joints"
                            : exceeded->kind == LimitKind::Loads  ? "loads"
                                                                  : "cycle.steps";
@@ -347,9 +347,6 @@ CompiledMechanism Compiler::run()
 
 }  // namespace
 
-CompiledMechanism compile(const Mechanism& mechanism)
-{
-    return Compiler(mechanism).run();
-}
+CompiledMechanism compile(const Mechanism& mechanism) { return Compiler(mechanism).run(); }
 
 }  // namespace clevis

@@ -109,7 +109,8 @@ void ConstraintSystem::rates(const Pose& q, const VectorXd& qd, double t, Vector
     nu.resize(rows_);
     gamma.resize(rows_);
     for (std::size_t k = 0; k < constraints_.size(); ++k)
-        constraints_[k]->rates(q, qd, t, RowWriter(firstRow_[k], &nu, nullptr), RowWriter(firstRow_[k], &gamma, nullptr));
+        constraints_[k]->rates(q, qd, t, RowWriter(firstRow_[k], &nu, nullptr),
+                               RowWriter(firstRow_[k], &gamma, nullptr));
 }
 
 }  // namespace clevis

@@ -1,10 +1,10 @@
 #include "core/solver/cycle_sweep.h"
 
-#include "core/solver/analysis_error.h"
+#include "core/model/model_limits.h"
 #include "core/results/drive_units.h"
+#include "core/solver/analysis_error.h"
 #include "core/solver/grashof_note.h"
 #include "core/solver/mobility_check.h"
-#include "core/model/model_limits.h"
 #include "core/solver/step_solver.h"
 
 #include <algorithm>
@@ -27,7 +27,8 @@ double largestRelativeMove(const Eigen::VectorXd& from, const Eigen::VectorXd& t
     for (Eigen::Index b = 0; 3 * b < to.size(); ++b) {
         const double inverseSize = columnScale[3 * b + 2];
         largest = std::max({largest, std::abs(to[3 * b] - from[3 * b]) * inverseSize,
-                            std::abs(to[3 * b + 1] - from[3 * b + 1]) * inverseSize, std::abs(to[3 * b + 2] - from[3 * b + 2])});
+                            std::abs(to[3 * b + 1] - from[3 * b + 1]) * inverseSize,
+                            std::abs(to[3 * b + 2] - from[3 * b + 2])});
     }
     return largest;
 }
@@ -42,8 +43,7 @@ class Sweeper {
 public:
     Sweeper(const CompiledMechanism& m, const SweepOptions& o)
         : mechanism_(m), options_(o), solver_(m), grashofNote_(grashofNote(m))
-    {
-    }
+    {}
     CycleResult run();
 
 private:
@@ -91,10 +91,10 @@ void Sweeper::assembleDrawnPose(Eigen::VectorXd& q)
     while (k > 0 && solver_.system().firstRow(k) > row) --k;
     const Constraint& c = *constraints[k];
     const std::string name = c.owner() == ConstraintOwner::Joint ? mechanism_.joints[c.ownerIndex()].name
-                                                                  : mechanism_.drivers[c.ownerIndex()].name;
+                                                                 : mechanism_.drivers[c.ownerIndex()].name;
     throw AnalysisError(withGrashofNote("The mechanism does not assemble at the start of the cycle: the links cannot "
-                                        "all be joined near the drawn pose (largest gap at \"" + name +
-                                        "\"). Check the link lengths and where the drivers start."),
+                                        "all be joined near the drawn pose (largest gap at \"" +
+                                        name + "\"). Check the link lengths and where the drivers start."),
                         {name});
 }
 
@@ -133,10 +133,11 @@ bool Sweeper::advance(const StepResult& from, double t, StepResult& to, int dept
         to = solver_.analyse(t, q);
         if (suspicious && !branchWarned_) {
             branchWarned_ = true;
-            result_.warnings.push_back({"branch_jump",
-                                        "The pose changed abruptly near " + drivePositions(to) +
-                                            ": the mechanism may have snapped to another assembly branch. Use more steps.",
-                                        int(result_.steps.size())});
+            result_.warnings.push_back(
+                {"branch_jump",
+                 "The pose changed abruptly near " + drivePositions(to) +
+                     ": the mechanism may have snapped to another assembly branch. Use more steps.",
+                 int(result_.steps.size())});
         }
         return finiteStep(to);
     }
@@ -182,20 +183,24 @@ void Sweeper::warnUnreachable(double tFail)
 {
     const StepResult& last = result_.steps.back();
     std::ostringstream s;
-    s << "The cycle cannot be completed: the mechanism can be assembled only from " << drivePositions(result_.steps.front())
-      << " to " << drivePositions(last) << " (t = " << last.t << " s of " << mechanism_.duration
-      << " s); beyond, near t = " << tFail << " s, the links cannot be joined. Results stop there.";
+    s << "The cycle cannot be completed: the mechanism can be assembled only from "
+      << drivePositions(result_.steps.front()) << " to " << drivePositions(last) << " (t = " << last.t << " s of "
+      << mechanism_.duration << " s); beyond, near t = " << tFail
+      << " s, the links cannot be joined. Results stop there.";
     result_.warnings.push_back({"out_of_reach", withGrashofNote(s.str()), int(result_.steps.size())});
 }
 
 CycleResult Sweeper::run()
 {
     if (mechanism_.bodies.empty())
-        throw AnalysisError("There is nothing to analyse: the mechanism has no moving bodies. Add a body and join it "
-                            "to ground.", {});
+        throw AnalysisError(
+            "There is nothing to analyse: the mechanism has no moving bodies. Add a body and join it "
+            "to ground.",
+            {});
     const int steps = options_.steps > 0 ? options_.steps : mechanism_.steps;
     const ModelSize size{mechanism_.bodies.size(), mechanism_.joints.size(), mechanism_.drivers.size(), 0, steps};
-    if (const auto exceeded = exceededLimit(size)) throw AnalysisError("Cannot analyse: " + exceeded->message + ".", {});
+    if (const auto exceeded = exceededLimit(size))
+        throw AnalysisError("Cannot analyse: " + exceeded->message + ".", {});
     result_.plannedSteps = steps;
     result_.duration = mechanism_.duration;
     result_.transmissionPins = solver_.transmissionPins();
@@ -211,7 +216,8 @@ CycleResult Sweeper::run()
     result_.steps.reserve(steps + 1);
     result_.steps.push_back(solver_.analyse(0.0, q));
     if (!finiteStep(result_.steps.back()))
-        throw AnalysisError("The mechanism is locked at the start of the cycle: its constraint equations are singular there.", {});
+        throw AnalysisError(
+            "The mechanism is locked at the start of the cycle: its constraint equations are singular there.", {});
     result_.complete = true;
     for (int k = 1; k <= steps; ++k) {
         const double t = mechanism_.duration * double(k) / double(steps);
@@ -234,9 +240,6 @@ CycleResult Sweeper::run()
 
 }  // namespace
 
-CycleResult sweepCycle(const CompiledMechanism& m, const SweepOptions& options)
-{
-    return Sweeper(m, options).run();
-}
+CycleResult sweepCycle(const CompiledMechanism& m, const SweepOptions& options) { return Sweeper(m, options).run(); }
 
 }  // namespace clevis

@@ -37,9 +37,11 @@ std::optional<FourBar> findFourBar(const CompiledMechanism& m)
     for (int output = 0; output < 3; ++output) {
         if (output == input) continue;
         const int coupler = 3 - input - output;  // the bodies are 0, 1 and 2
-        const FourBar bar{{&driven, pinBetween(m, input, coupler), pinBetween(m, coupler, output),
-                           pinBetween(m, output, kGround)},
-                          input, coupler, output};
+        const FourBar bar{
+            {&driven, pinBetween(m, input, coupler), pinBetween(m, coupler, output), pinBetween(m, output, kGround)},
+            input,
+            coupler,
+            output};
         if (bar.pins[1] && bar.pins[2] && bar.pins[3]) return bar;
     }
     return std::nullopt;

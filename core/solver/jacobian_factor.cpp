@@ -7,8 +7,7 @@ namespace clevis {
 
 JacobianFactor::JacobianFactor(const Eigen::VectorXd& rowScale, const Eigen::VectorXd& columnScale)
     : rowScale_(rowScale), columnScale_(columnScale)
-{
-}
+{}
 
 bool JacobianFactor::factor(int size, const std::vector<Eigen::Triplet<double>>& entries)
 {
@@ -72,7 +71,8 @@ void JacobianFactor::learnPattern(int size, const std::vector<Eigen::Triplet<dou
     for (const auto& e : entries) {
         const int* begin = sparseMatrix_.innerIndexPtr() + sparseMatrix_.outerIndexPtr()[e.col()];
         const int* end = sparseMatrix_.innerIndexPtr() + sparseMatrix_.outerIndexPtr()[e.col() + 1];
-        pattern_.push_back({e.row(), e.col(), int(std::lower_bound(begin, end, e.row()) - sparseMatrix_.innerIndexPtr())});
+        pattern_.push_back(
+            {e.row(), e.col(), int(std::lower_bound(begin, end, e.row()) - sparseMatrix_.innerIndexPtr())});
     }
     sparseLu_.analyzePattern(sparseMatrix_);
 }

@@ -65,7 +65,7 @@ private:
     Eigen::VectorXd rowScale_, columnScale_;
     Method method_ = Method::Band;
     double norm1_ = 0.0;
-    Eigen::Index worstColumn_ = -1;          // of the last condition estimate
+    Eigen::Index worstColumn_ = -1;           // of the last condition estimate
     Eigen::VectorXd columnSums_, x_, y_, z_;  // scratch, kept to avoid allocations
     int patternSize_ = -1;
     std::vector<EntrySlot> pattern_;

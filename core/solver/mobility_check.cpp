@@ -138,8 +138,10 @@ std::string MobilityReport::describe() const
         return s.str();
     }
     if (!freeBodies.empty())
-        s << "\n" << (mobility - drivers > 0 ? mobility - drivers : 1) << " degree(s) of freedom not driven: with every driver held, "
-          << joinNames(freeBodies) << " can still move. Add a driver or a joint.";
+        s << "\n"
+          << (mobility - drivers > 0 ? mobility - drivers : 1)
+          << " degree(s) of freedom not driven: with every driver held, " << joinNames(freeBodies)
+          << " can still move. Add a driver or a joint.";
     if (!conflictingDrivers.empty())
         s << "\nDrivers " << joinNames(conflictingDrivers)
           << " over-constrain the mechanism: they prescribe motion the joints already fix or that another driver sets."

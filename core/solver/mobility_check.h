@@ -13,8 +13,8 @@
 namespace clevis {
 
 struct MobilityReport {
-    int gruebler = 0;       // degrees of freedom by counting
-    int mobility = 0;       // degrees of freedom from the joints' Jacobian rank
+    int gruebler = 0;  // degrees of freedom by counting
+    int mobility = 0;  // degrees of freedom from the joints' Jacobian rank
     int drivers = 0;
     int redundantEquations = 0;
     std::vector<std::vector<std::string>> redundantGroups;  // joints whose reactions are indeterminate together
@@ -24,7 +24,10 @@ struct MobilityReport {
     // drivers (their square Jacobian is singular there): `freeBodies` and
     // `conflictingDrivers` then name what it locks or leaves loose.
     bool singularPose = false;
-    bool ok() const { return redundantGroups.empty() && freeBodies.empty() && conflictingDrivers.empty() && mobility == drivers; }
+    bool ok() const
+    {
+        return redundantGroups.empty() && freeBodies.empty() && conflictingDrivers.empty() && mobility == drivers;
+    }
     std::string describe() const;  // plain-words statement, naming the items
 };
 

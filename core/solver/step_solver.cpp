@@ -38,12 +38,12 @@ std::array<ActionPoint, 2> actionPoints(const CompiledMechanism& m, const Constr
 }  // namespace
 
 StepSolver::StepSolver(const CompiledMechanism& mechanism)
-    : mechanism_(mechanism),
-      system_(mechanism),
-      factor_(system_.rowScale(), system_.columnScale()),
-      transmission_(findTransmissionPins(mechanism)),
-      tolerance_(1e-11 * mechanism.lengthScale),
-      nearSingular_(1e-3 * std::min(1.0, 10.0 / double(std::max<std::size_t>(mechanism.bodies.size(), 1))))
+    : mechanism_(mechanism)
+    , system_(mechanism)
+    , factor_(system_.rowScale(), system_.columnScale())
+    , transmission_(findTransmissionPins(mechanism))
+    , tolerance_(1e-11 * mechanism.lengthScale)
+    , nearSingular_(1e-3 * std::min(1.0, 10.0 / double(std::max<std::size_t>(mechanism.bodies.size(), 1))))
 {
     const auto& constraints = system_.constraints();
     ownerOfRow_.resize(system_.rows());
@@ -221,8 +221,7 @@ void StepSolver::fillReactionsAndEfforts(StepResult& r) const
             const ConstraintAction& a = secondMoves ? r.actions[1][k] : r.actions[0][k];
             const double sign = secondMoves ? 1.0 : -1.0;
             r.joints.push_back({sign * a.force, sign * a.couple});
-        }
-        else {
+        } else {
             // Φ = coordinate − s(t): the driver's push on its second body is −λ.
             const double effort = -r.lambda[system_.firstRow(k)];
             const int d = c.ownerIndex();

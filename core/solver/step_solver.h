@@ -3,10 +3,10 @@
 // M q̈ + Φ_qᵀ λ = Q, from which every reaction and driver effort follows.
 #pragma once
 
+#include "core/results/results.h"
 #include "core/solver/applied_loads.h"
 #include "core/solver/constraint_system.h"
 #include "core/solver/jacobian_factor.h"
-#include "core/results/results.h"
 
 #include <array>
 #include <limits>
@@ -63,14 +63,14 @@ private:
     ConstraintSystem system_;
     JacobianFactor factor_;
     std::vector<Eigen::Triplet<double>> entries_;
-    VectorXd phi_, nu_, gamma_, zeroRates_;  // scratch, kept to avoid allocations
+    VectorXd phi_, nu_, gamma_, zeroRates_;   // scratch, kept to avoid allocations
     std::vector<Eigen::Matrix2d> rotations_;  // of the one Pose alive at a time (evaluate, analyse)
     VectorXd entriesPose_;                    // where entries_ were taken
     double entriesTime_ = std::numeric_limits<double>::quiet_NaN();
     bool keepFactor_ = false;  // the held factorisation may start the next assembly
     std::vector<TransmissionPin> transmission_;
     std::vector<std::array<ActionPoint, 2>> actionPoints_;  // per constraint
-    std::vector<int> ownerOfRow_;                         // constraint of each row
+    std::vector<int> ownerOfRow_;                           // constraint of each row
     double tolerance_;
     double nearSingular_;
 };

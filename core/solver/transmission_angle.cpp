@@ -33,9 +33,7 @@ bool chooseLine(const CompiledMechanism& m, int body, const CompiledJoint& pin, 
             best = arm;
             far = p;
             found = true;
-        }
-        else if (!found && axisJoint < 0 && m.joints[joint].type != JointType::Pin)
-            axisJoint = joint;
+        } else if (!found && axisJoint < 0 && m.joints[joint].type != JointType::Pin) axisJoint = joint;
     }
     if (found) axisJoint = -1;
     return found || axisJoint >= 0;
@@ -60,7 +58,8 @@ bool isDriven(const CompiledMechanism& m, int joint, int body)
         if (d.joint == joint) return true;
         if (d.joint < 0) continue;
         const CompiledJoint& driven = m.joints[d.joint];
-        if ((driven.body[0] == kGround && driven.body[1] == body) || (driven.body[1] == kGround && driven.body[0] == body))
+        if ((driven.body[0] == kGround && driven.body[1] == body) ||
+            (driven.body[1] == kGround && driven.body[0] == body))
             return true;
     }
     return false;

@@ -4,8 +4,8 @@
 // common rule of practice is to keep μ within 40°–140°.
 #pragma once
 
-#include "core/solver/body_state.h"
 #include "core/results/results.h"
+#include "core/solver/body_state.h"
 
 namespace clevis {
 

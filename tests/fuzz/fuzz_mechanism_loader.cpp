@@ -2,11 +2,11 @@
 // what parses goes on to compile() and a short sweepCycle. The only
 // acceptable failures are the core's own ModelError and AnalysisError; any
 // other exception, a crash, a hang or a sanitizer report is a bug.
+#include "core/file/mechanism_file.h"
+#include "core/model/model_error.h"
 #include "core/solver/analysis_error.h"
 #include "core/solver/compiled_mechanism.h"
 #include "core/solver/cycle_sweep.h"
-#include "core/file/mechanism_file.h"
-#include "core/model/model_error.h"
 
 #include <algorithm>
 #include <cstddef>
@@ -37,7 +37,6 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
     try {
         analyse(std::string(reinterpret_cast<const char*>(data), size));
     } catch (const clevis::ModelError&) {
-    } catch (const clevis::AnalysisError&) {
-    }
+    } catch (const clevis::AnalysisError&) {}
     return 0;
 }

@@ -1,7 +1,7 @@
 #include "ui/analysis/analysis_state.h"
 
-#include "ui/document/mechanism_document.h"
 #include "ui/analysis/solve_worker.h"
+#include "ui/document/mechanism_document.h"
 
 #include <QCoreApplication>
 #include <QThread>
@@ -11,11 +11,11 @@
 namespace clevis::ui {
 
 AnalysisState::AnalysisState(MechanismDocument* doc, QObject* parent)
-    : QObject(parent),
-      doc_(doc),
-      thread_(new QThread(this)),
-      newest_(std::make_shared<std::atomic<quint64>>(0)),
-      outcome_(std::make_shared<SolveOutcome>())
+    : QObject(parent)
+    , doc_(doc)
+    , thread_(new QThread(this))
+    , newest_(std::make_shared<std::atomic<quint64>>(0))
+    , outcome_(std::make_shared<SolveOutcome>())
 {
     qRegisterMetaType<std::shared_ptr<const SolveOutcome>>();
     worker_ = new SolveWorker(newest_);
@@ -59,50 +59,23 @@ void AnalysisState::publish(std::shared_ptr<const SolveOutcome> outcome)
     }
 }
 
-bool AnalysisState::hasResult() const
-{
-    return outcome_->compiled && !outcome_->result.steps.empty();
-}
+bool AnalysisState::hasResult() const { return outcome_->compiled && !outcome_->result.steps.empty(); }
 
-const CompiledMechanism& AnalysisState::compiled() const
-{
-    return *outcome_->compiled;
-}
+const CompiledMechanism& AnalysisState::compiled() const { return *outcome_->compiled; }
 
-const CycleResult& AnalysisState::result() const
-{
-    return outcome_->result;
-}
+const CycleResult& AnalysisState::result() const { return outcome_->result; }
 
-const CycleSummary& AnalysisState::summary() const
-{
-    return outcome_->summary;
-}
+const CycleSummary& AnalysisState::summary() const { return outcome_->summary; }
 
-QString AnalysisState::errorText() const
-{
-    return outcome_->error;
-}
+QString AnalysisState::errorText() const { return outcome_->error; }
 
-QStringList AnalysisState::offendingItems() const
-{
-    return outcome_->offendingItems;
-}
+QStringList AnalysisState::offendingItems() const { return outcome_->offendingItems; }
 
-const std::optional<MobilityReport>& AnalysisState::mobility() const
-{
-    return outcome_->mobility;
-}
+const std::optional<MobilityReport>& AnalysisState::mobility() const { return outcome_->mobility; }
 
-bool AnalysisState::busy() const
-{
-    return outcome_->generation != requested_;
-}
+bool AnalysisState::busy() const { return outcome_->generation != requested_; }
 
-int AnalysisState::currentStep() const
-{
-    return currentStep_;
-}
+int AnalysisState::currentStep() const { return currentStep_; }
 
 void AnalysisState::setCurrentStep(int step)
 {

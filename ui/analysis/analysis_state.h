@@ -3,10 +3,10 @@
 // views always show the mechanism as it is now.
 #pragma once
 
-#include "core/solver/compiled_mechanism.h"
 #include "core/results/cycle_summary.h"
-#include "core/solver/mobility_check.h"
 #include "core/results/results.h"
+#include "core/solver/compiled_mechanism.h"
+#include "core/solver/mobility_check.h"
 
 #include <QObject>
 #include <QStringList>
@@ -26,7 +26,8 @@ struct SolveOutcome;
 class AnalysisState : public QObject {
     Q_OBJECT
 public:
-    explicit AnalysisState(MechanismDocument* doc, QObject* parent = nullptr);  // watches doc->mechanismChanged and re-solves
+    explicit AnalysisState(MechanismDocument* doc,
+                           QObject* parent = nullptr);  // watches doc->mechanismChanged and re-solves
     ~AnalysisState() override;
 
     bool hasResult() const;                             // a CycleResult with at least one step

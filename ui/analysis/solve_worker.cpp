@@ -1,9 +1,9 @@
 #include "ui/analysis/solve_worker.h"
 
-#include "core/solver/analysis_error.h"
-#include "core/solver/cycle_sweep.h"
 #include "core/file/part_description.h"
 #include "core/model/model_error.h"
+#include "core/solver/analysis_error.h"
+#include "core/solver/cycle_sweep.h"
 #include "core/solver/step_solver.h"
 
 namespace clevis::ui {

@@ -3,9 +3,9 @@
 // a sweep in progress stops as soon as a newer request arrives.
 #pragma once
 
-#include "core/solver/compiled_mechanism.h"
-#include "core/results/cycle_summary.h"
 #include "core/model/mechanism.h"
+#include "core/results/cycle_summary.h"
+#include "core/solver/compiled_mechanism.h"
 #include "core/solver/mobility_check.h"
 
 #include <QObject>

@@ -1,12 +1,12 @@
 #include "ui/canvas/canvas_view.h"
 
-#include "ui/analysis/analysis_state.h"
-#include "ui/shell/display_units.h"
-#include "ui/document/mechanism_document.h"
 #include "core/results/posed_mechanism.h"
-#include "ui/document/sketch_geometry.h"
+#include "ui/analysis/analysis_state.h"
 #include "ui/canvas/sketch_painter.h"
 #include "ui/canvas/tools/select_tool.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/document/sketch_geometry.h"
+#include "ui/shell/display_units.h"
 
 #include <QKeyEvent>
 #include <QMouseEvent>
@@ -59,10 +59,7 @@ void CanvasView::setTool(std::unique_ptr<Tool> tool)
     update();
 }
 
-void CanvasView::announce()
-{
-    emit hintChanged(tool_->hint());
-}
+void CanvasView::announce() { emit hintChanged(tool_->hint()); }
 
 void CanvasView::tell(const QString& message)
 {
@@ -104,9 +101,9 @@ void CanvasView::paintEvent(QPaintEvent*)
     // Away from the start of the cycle the mechanism is shown where the
     // scrubber has it; edits are made on the drawn pose (see mousePressEvent).
     const bool scrubbed = analysis_->hasResult() && analysis_->currentStep() > 0;
-    const Mechanism posed =
-        scrubbed ? posedMechanism(doc_->mechanism(), analysis_->compiled(), analysis_->result().steps[analysis_->currentStep()])
-                 : Mechanism{};
+    const Mechanism posed = scrubbed ? posedMechanism(doc_->mechanism(), analysis_->compiled(),
+                                                      analysis_->result().steps[analysis_->currentStep()])
+                                     : Mechanism{};
     PaintContext c{p, view_, scrubbed ? posed : doc_->mechanism(), doc_->selection(), analysis_->offendingItems()};
     paintSketch(c);
     tool_->paintPreview(p);

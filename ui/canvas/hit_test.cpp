@@ -1,7 +1,7 @@
 #include "ui/canvas/hit_test.h"
 
-#include "ui/document/sketch_geometry.h"
 #include "ui/canvas/sketch_style.h"
+#include "ui/document/sketch_geometry.h"
 
 #include <QLineF>
 #include <QPolygonF>
@@ -79,7 +79,8 @@ Selection partAt(const Mechanism& m, const ViewTransform& view, const QPointF& s
     for (int i = int(m.loads.size()) - 1; i >= 0; --i)
         if (nearLoad(m, view, m.loads[i], s)) return {Selection::Kind::Load, {}, i};
     for (int i = int(m.bodies.size()) - 1; i >= 0; --i)
-        if (nearBody(m, view, m.bodies[i].name, s)) return {Selection::Kind::Body, QString::fromStdString(m.bodies[i].name), -1};
+        if (nearBody(m, view, m.bodies[i].name, s))
+            return {Selection::Kind::Body, QString::fromStdString(m.bodies[i].name), -1};
     return {};
 }
 

@@ -3,8 +3,8 @@
 #pragma once
 
 #include "core/model/mechanism.h"
-#include "ui/document/mechanism_document.h"
 #include "ui/canvas/view_transform.h"
+#include "ui/document/mechanism_document.h"
 
 #include <string>
 

@@ -42,10 +42,7 @@ GridStep gridStep(const ViewTransform& view)
 
 }  // namespace
 
-double gridSpacing(const ViewTransform& view)
-{
-    return gridStep(view).value();
-}
+double gridSpacing(const ViewTransform& view) { return gridStep(view).value(); }
 
 Vec2 snapToGrid(const ViewTransform& view, const Vec2& p)
 {

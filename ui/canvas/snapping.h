@@ -14,7 +14,7 @@ namespace clevis::ui {
 struct SnapResult {
     Vec2 point;
     enum class Kind { Free, Grid, Pin, Horizontal, Vertical } kind = Kind::Free;
-    int joint = -1;  // the pin snapped to
+    int joint = -1;            // the pin snapped to
     QString describe() const;  // e.g. "on pin B", "horizontal"
 };
 

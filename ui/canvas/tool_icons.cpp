@@ -30,7 +30,8 @@ void drawIcon(QPainter& p, const QString& name)
     p.setBrush(Qt::NoBrush);
     if (name == "Select") {
         QPolygonF cursor;
-        cursor << QPointF(7, 4) << QPointF(7, 19) << QPointF(11, 15) << QPointF(14, 21) << QPointF(16, 20) << QPointF(13, 14) << QPointF(18, 14);
+        cursor << QPointF(7, 4) << QPointF(7, 19) << QPointF(11, 15) << QPointF(14, 21) << QPointF(16, 20)
+               << QPointF(13, 14) << QPointF(18, 14);
         p.setPen(QPen(palette::ink(), 1.3));
         p.setBrush(palette::paper());
         p.drawPolygon(cursor);

@@ -62,8 +62,7 @@ class SnapshotCommand : public QUndoCommand {
 public:
     SnapshotCommand(MechanismDocument* doc, const QString& text, Mechanism before, Mechanism after, int mergeId)
         : QUndoCommand(text), doc_(doc), before_(std::move(before)), after_(std::move(after)), mergeId_(mergeId)
-    {
-    }
+    {}
     void redo() override { doc_->setMechanism(after_); }
     void undo() override { doc_->setMechanism(before_); }
     int id() const override { return mergeId_; }
@@ -89,15 +88,9 @@ MechanismDocument::MechanismDocument(QObject* parent) : QObject(parent)
     connect(&undoStack_, &QUndoStack::cleanChanged, this, [this](bool clean) { emit modifiedChanged(!clean); });
 }
 
-const Mechanism& MechanismDocument::mechanism() const
-{
-    return mechanism_;
-}
+const Mechanism& MechanismDocument::mechanism() const { return mechanism_; }
 
-QUndoStack* MechanismDocument::undoStack()
-{
-    return &undoStack_;
-}
+QUndoStack* MechanismDocument::undoStack() { return &undoStack_; }
 
 QString MechanismDocument::apply(const QString& text, std::function<void(Mechanism&)> edit, int mergeId)
 {
@@ -122,10 +115,7 @@ QString MechanismDocument::apply(const QString& text, std::function<void(Mechani
     return {};
 }
 
-void MechanismDocument::closeMergeRun()
-{
-    ++mergeRun_;
-}
+void MechanismDocument::closeMergeRun() { ++mergeRun_; }
 
 void MechanismDocument::reset(const Mechanism& m, const QString& filePath)
 {
@@ -140,15 +130,9 @@ void MechanismDocument::reset(const Mechanism& m, const QString& filePath)
     emit documentReset();
 }
 
-QString MechanismDocument::filePath() const
-{
-    return filePath_;
-}
+QString MechanismDocument::filePath() const { return filePath_; }
 
-bool MechanismDocument::isModified() const
-{
-    return !undoStack_.isClean();
-}
+bool MechanismDocument::isModified() const { return !undoStack_.isClean(); }
 
 void MechanismDocument::markSaved(const QString& filePath)
 {
@@ -159,10 +143,7 @@ void MechanismDocument::markSaved(const QString& filePath)
     emit modifiedChanged(false);
 }
 
-Selection MechanismDocument::selection() const
-{
-    return selection_;
-}
+Selection MechanismDocument::selection() const { return selection_; }
 
 void MechanismDocument::setSelection(const Selection& s)
 {

@@ -12,8 +12,8 @@ namespace {
 // Two points closer than this are the same place on the drawing.
 constexpr double kSamePoint = 1e-9;
 
-std::string addJoint(Mechanism& m, JointType type, const std::string& first, const std::string& second,
-                     const Vec2& at, double axisDeg, const std::string& stem)
+std::string addJoint(Mechanism& m, JointType type, const std::string& first, const std::string& second, const Vec2& at,
+                     double axisDeg, const std::string& stem)
 {
     Joint j;
     j.name = freshName(m, stem);
@@ -26,17 +26,11 @@ std::string addJoint(Mechanism& m, JointType type, const std::string& first, con
     return j.name;
 }
 
-bool hasBody(const Joint& j, const std::string& body)
-{
-    return j.bodies[0] == body || j.bodies[1] == body;
-}
+bool hasBody(const Joint& j, const std::string& body) { return j.bodies[0] == body || j.bodies[1] == body; }
 
 // The body a new pin at an occupied joint hangs from: the frame for a ground
 // pin, the pin's own body for a slot, the block for a slider.
-std::string baseOf(const Joint& j)
-{
-    return j.type == JointType::Pin ? j.bodies[0] : j.bodies[1];
-}
+std::string baseOf(const Joint& j) { return j.type == JointType::Pin ? j.bodies[0] : j.bodies[1]; }
 
 // Fills the joint's open slot with `body`, or adds a pin beside it.
 void attach(Mechanism& m, const std::string& jointName, const std::string& body)
@@ -48,8 +42,14 @@ void attach(Mechanism& m, const std::string& jointName, const std::string& body)
     for (int i : here) {
         Joint& j = m.joints[i];
         if (j.type == JointType::Slider) continue;  // a link rides on the block's pin, not the guide
-        if (j.bodies[0].empty() && j.type == JointType::Pin) { j.bodies[0] = body; return; }
-        if (j.bodies[1].empty() && !j.bodies[0].empty()) { j.bodies[1] = body; return; }
+        if (j.bodies[0].empty() && j.type == JointType::Pin) {
+            j.bodies[0] = body;
+            return;
+        }
+        if (j.bodies[1].empty() && !j.bodies[0].empty()) {
+            j.bodies[1] = body;
+            return;
+        }
     }
     const Joint& j = m.joints[jointIndex(m, jointName)];
     addJoint(m, JointType::Pin, baseOf(j), body, at, 0.0, "pin");
@@ -74,10 +74,7 @@ std::string addGroundPin(Mechanism& m, const Vec2& at)
     return addJoint(m, JointType::Pin, kGroundName, "", at, 0.0, "O");
 }
 
-std::string addPin(Mechanism& m, const Vec2& at)
-{
-    return addJoint(m, JointType::Pin, "", "", at, 0.0, "P");
-}
+std::string addPin(Mechanism& m, const Vec2& at) { return addJoint(m, JointType::Pin, "", "", at, 0.0, "P"); }
 
 std::string addBody(Mechanism& m, const std::vector<std::string>& joints)
 {

@@ -19,7 +19,7 @@ enum class PartKind { Body, Joint, Driver };
 // and null for a reference by name alone (a torque's body, a torsion spring's
 // pin, the driver a profile follows). AnyLoad is Load or const Load.
 template <class AnyLoad, class Visitor>
-    requires std::is_same_v<std::remove_const_t<AnyLoad>, Load>
+requires std::is_same_v<std::remove_const_t<AnyLoad>, Load>
 void visitReferences(AnyLoad& load, Visitor&& visit)
 {
     std::visit(
@@ -44,7 +44,7 @@ void visitReferences(AnyLoad& load, Visitor&& visit)
 
 // The same for a driver: the joint it acts at, or the two points a cylinder joins.
 template <class AnyDriver, class Visitor>
-    requires std::is_same_v<std::remove_const_t<AnyDriver>, Driver>
+requires std::is_same_v<std::remove_const_t<AnyDriver>, Driver>
 void visitReferences(AnyDriver& driver, Visitor&& visit)
 {
     visit(PartKind::Joint, driver.joint, nullptr);
@@ -57,7 +57,8 @@ template <class Item>
 bool refersTo(const Item& item, PartKind kind, const std::string& name)
 {
     bool found = false;
-    visitReferences(item, [&](PartKind k, const std::string& n, const Vec2*) { found = found || (k == kind && n == name); });
+    visitReferences(item,
+                    [&](PartKind k, const std::string& n, const Vec2*) { found = found || (k == kind && n == name); });
     return found;
 }
 

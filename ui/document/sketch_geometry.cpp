@@ -9,8 +9,10 @@ namespace {
 // Andrew's monotone chain; returns the hull counter-clockwise.
 std::vector<Vec2> convexHull(std::vector<Vec2> p)
 {
-    std::sort(p.begin(), p.end(), [](const Vec2& a, const Vec2& b) { return a.x() < b.x() || (a.x() == b.x() && a.y() < b.y()); });
-    p.erase(std::unique(p.begin(), p.end(), [](const Vec2& a, const Vec2& b) { return (a - b).norm() < 1e-12; }), p.end());
+    std::sort(p.begin(), p.end(),
+              [](const Vec2& a, const Vec2& b) { return a.x() < b.x() || (a.x() == b.x() && a.y() < b.y()); });
+    p.erase(std::unique(p.begin(), p.end(), [](const Vec2& a, const Vec2& b) { return (a - b).norm() < 1e-12; }),
+            p.end());
     if (p.size() < 3) return p;
     std::vector<Vec2> hull(2 * p.size());
     std::size_t k = 0;
@@ -105,9 +107,6 @@ Vec2 loadAnchor(const Mechanism& m, const Load& load)
     return std::visit(Visitor{m}, load);
 }
 
-double angleDeg(const Vec2& a, const Vec2& b)
-{
-    return radToDeg(std::atan2(b.y() - a.y(), b.x() - a.x()));
-}
+double angleDeg(const Vec2& a, const Vec2& b) { return radToDeg(std::atan2(b.y() - a.y(), b.x() - a.x())); }
 
 }  // namespace clevis::ui

@@ -5,7 +5,8 @@
 
 namespace clevis::ui {
 
-AutosaveTimer::AutosaveTimer(MechanismDocument* doc, RecoveryStore store, QObject* parent, std::chrono::milliseconds interval)
+AutosaveTimer::AutosaveTimer(MechanismDocument* doc, RecoveryStore store, QObject* parent,
+                             std::chrono::milliseconds interval)
     : QObject(parent), doc_(doc), store_(std::move(store))
 {
     // Saving, New, Open and undoing back to the saved state all end in a clean document.
@@ -35,7 +36,9 @@ bool AutosaveTimer::writeNow()
 void AutosaveTimer::reportFailure(const QString& reason)
 {
     // Once per run of failures: a note every minute would only be noise.
-    if (!failing_) emit note(tr("Autosave could not write a recovery copy (%1). Your drawing is unchanged; save it to keep it.").arg(reason));
+    if (!failing_)
+        emit note(tr("Autosave could not write a recovery copy (%1). Your drawing is unchanged; save it to keep it.")
+                      .arg(reason));
     failing_ = true;
 }
 

@@ -1,14 +1,15 @@
 #include "ui/files/export_actions.h"
 
-#include "ui/analysis/analysis_state.h"
-#include "ui/shell/display_units.h"
-#include "render/free_body_painter.h"
-#include "ui/results/free_body_view.h"
-#include "ui/document/mechanism_document.h"
-#include "ui/results/plot_stack.h"
 #include "core/results/results_csv.h"
+#include "render/free_body_painter.h"
 #include "render/review_report.h"
+#include "ui/analysis/analysis_state.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/results/free_body_view.h"
+#include "ui/results/plot_stack.h"
+#include "ui/shell/display_units.h"
 
+#include <qcustomplot.h>
 #include <QDir>
 #include <QFileDialog>
 #include <QFileInfo>
@@ -17,7 +18,6 @@
 #include <QMenu>
 #include <QMessageBox>
 #include <QProgressDialog>
-#include <qcustomplot.h>
 
 #include <fstream>
 #include <set>
@@ -45,18 +45,18 @@ QStringList exportBodyDiagrams(const CompiledMechanism& m, const CycleResult& r,
         const QString path = QDir(directory).filePath(
             QString("%1_step%2.%3").arg(QString::fromStdString(m.bodies[body].name)).arg(at).arg(suffix));
         const FreeBodyPainter figure(m, r, freeBodyDiagram(m, r, body, at), {units, false, true});
-        if (!exportFigure(figure, path, QString::fromStdString("Free-body diagram: " + m.bodies[body].name), error)) return written;
+        if (!exportFigure(figure, path, QString::fromStdString("Free-body diagram: " + m.bodies[body].name), error))
+            return written;
         written << path;
     }
     if (progress) progress(done, int(jobs.size()));
     return written;
 }
 
-ExportActions::ExportActions(QMainWindow* window, MechanismDocument* doc, AnalysisState* analysis, FreeBodyView* diagram,
-                             PlotStack* plots)
+ExportActions::ExportActions(QMainWindow* window, MechanismDocument* doc, AnalysisState* analysis,
+                             FreeBodyView* diagram, PlotStack* plots)
     : QObject(window), window_(window), doc_(doc), analysis_(analysis), diagram_(diagram), plots_(plots)
-{
-}
+{}
 
 void ExportActions::fill(QMenu* menu)
 {
@@ -88,7 +88,9 @@ void ExportActions::exportDiagram()
     const FreeBodyPainter figure(analysis_->compiled(), analysis_->result(), *diagram_->diagram(),
                                  {renderUnits(DisplayUnits::instance()), diagram_->dAlembert(), true});
     QString error;
-    if (!exportFigure(figure, path, QString::fromStdString("Free-body diagram: " + diagram_->diagram()->bodyName), &error)) failed(error);
+    if (!exportFigure(figure, path, QString::fromStdString("Free-body diagram: " + diagram_->diagram()->bodyName),
+                      &error))
+        failed(error);
 }
 
 void ExportActions::exportAllDiagrams()
@@ -96,9 +98,11 @@ void ExportActions::exportAllDiagrams()
     if (!ready()) return;
     bool ok = false;
     const QStringList where{tr("At the current position"), tr("At each joint's peak")};
-    const QString choice = QInputDialog::getItem(window_, tr("Export all diagrams"), tr("Position:"), where, 0, false, &ok);
+    const QString choice =
+        QInputDialog::getItem(window_, tr("Export all diagrams"), tr("Position:"), where, 0, false, &ok);
     if (!ok) return;
-    const QString suffix = QInputDialog::getItem(window_, tr("Export all diagrams"), tr("Format:"), {"svg", "pdf", "png"}, 0, false, &ok);
+    const QString suffix =
+        QInputDialog::getItem(window_, tr("Export all diagrams"), tr("Format:"), {"svg", "pdf", "png"}, 0, false, &ok);
     if (!ok) return;
     const QString dir = QFileDialog::getExistingDirectory(window_, tr("Folder for the diagrams"));
     if (dir.isEmpty()) return;
@@ -106,21 +110,23 @@ void ExportActions::exportAllDiagrams()
     progress.setWindowModality(Qt::WindowModal);
     progress.setMinimumDuration(300);
     QString error;
-    exportBodyDiagrams(analysis_->compiled(), analysis_->result(), analysis_->summary(), choice == where[1],
-                       analysis_->currentStep(), dir, suffix, renderUnits(DisplayUnits::instance()),
-                       [&](int done, int total) {
-                           progress.setMaximum(total);
-                           progress.setValue(done);
-                           return !progress.wasCanceled();
-                       },
-                       &error);
+    exportBodyDiagrams(
+        analysis_->compiled(), analysis_->result(), analysis_->summary(), choice == where[1], analysis_->currentStep(),
+        dir, suffix, renderUnits(DisplayUnits::instance()),
+        [&](int done, int total) {
+            progress.setMaximum(total);
+            progress.setValue(done);
+            return !progress.wasCanceled();
+        },
+        &error);
     if (!error.isEmpty()) failed(error);
 }
 
 void ExportActions::exportPlots()
 {
     if (!ready()) return;
-    const QString path = QFileDialog::getSaveFileName(window_, tr("Export plots"), "loads.png", tr("PNG image (*.png);;PDF (*.pdf)"));
+    const QString path =
+        QFileDialog::getSaveFileName(window_, tr("Export plots"), "loads.png", tr("PNG image (*.png);;PDF (*.pdf)"));
     if (path.isEmpty()) return;
     QCustomPlot* plot = plots_->plot();
     const bool pdf = QFileInfo(path).suffix().compare("pdf", Qt::CaseInsensitive) == 0;
@@ -142,12 +148,14 @@ void ExportActions::exportCsv()
 void ExportActions::exportReport()
 {
     if (!ready()) return;
-    const QString path = QFileDialog::getSaveFileName(window_, tr("Design-review report"), "review.pdf", tr("PDF (*.pdf)"));
+    const QString path =
+        QFileDialog::getSaveFileName(window_, tr("Design-review report"), "review.pdf", tr("PDF (*.pdf)"));
     if (path.isEmpty()) return;
     QProgressDialog progress(tr("Writing the design-review report…"), tr("Cancel"), 0, 1, window_);
     progress.setWindowModality(Qt::WindowModal);
     progress.setMinimumDuration(300);
-    const QString source = doc_->filePath().isEmpty() ? tr("unsaved mechanism") : QFileInfo(doc_->filePath()).fileName();
+    const QString source =
+        doc_->filePath().isEmpty() ? tr("unsaved mechanism") : QFileInfo(doc_->filePath()).fileName();
     const ReviewReportInput in{analysis_->compiled(), analysis_->result(), analysis_->summary(), source,
                                renderUnits(DisplayUnits::instance())};
     QString error;

@@ -2,10 +2,10 @@
 
 #include "core/file/atomic_file.h"
 
-#include "ui/document/mechanism_document.h"
-#include "ui/shell/menu_action.h"
 #include "core/file/mechanism_file.h"
 #include "core/model/model_error.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/shell/menu_action.h"
 
 #include <QAction>
 #include <QFileDialog>
@@ -55,9 +55,9 @@ void FileActions::updateTitle()
 bool FileActions::maybeSave()
 {
     if (!doc_->isModified()) return true;
-    const auto answer = QMessageBox::question(window_, tr("Unsaved changes"),
-                                              tr("The mechanism has changes that are not saved. Save them first?"),
-                                              QMessageBox::Save | QMessageBox::Discard | QMessageBox::Cancel, QMessageBox::Save);
+    const auto answer = QMessageBox::question(
+        window_, tr("Unsaved changes"), tr("The mechanism has changes that are not saved. Save them first?"),
+        QMessageBox::Save | QMessageBox::Discard | QMessageBox::Cancel, QMessageBox::Save);
     if (answer == QMessageBox::Save) return save();
     return answer == QMessageBox::Discard;
 }
@@ -74,10 +74,7 @@ void FileActions::openDialog()
     if (!path.isEmpty()) open(path);
 }
 
-bool FileActions::openWithPrompt(const QString& path)
-{
-    return maybeSave() && open(path);
-}
+bool FileActions::openWithPrompt(const QString& path) { return maybeSave() && open(path); }
 
 bool FileActions::open(const QString& path, QString* error)
 {
@@ -99,10 +96,7 @@ bool FileActions::open(const QString& path, QString* error)
     }
 }
 
-bool FileActions::save()
-{
-    return doc_->filePath().isEmpty() ? saveAs() : saveTo(doc_->filePath());
-}
+bool FileActions::save() { return doc_->filePath().isEmpty() ? saveAs() : saveTo(doc_->filePath()); }
 
 bool FileActions::saveAs()
 {
@@ -118,8 +112,7 @@ bool FileActions::saveTo(const QString& path, QString* error)
         // Atomic, keeping the previous file as NAME.bak; on failure the old
         // file is intact and the document stays unsaved.
         writeFileAtomically(path.toStdString(), saveMechanismText(doc_->mechanism()), true);
-    }
-    catch (const FileWriteError& e) {
+    } catch (const FileWriteError& e) {
         const QString why = QString::fromStdString(e.what());
         if (error) *error = why;
         else QMessageBox::warning(window_, tr("Cannot save"), why);
@@ -130,10 +123,7 @@ bool FileActions::saveTo(const QString& path, QString* error)
     return true;
 }
 
-QStringList FileActions::recentFiles()
-{
-    return QSettings().value(kRecentKey).toStringList();
-}
+QStringList FileActions::recentFiles() { return QSettings().value(kRecentKey).toStringList(); }
 
 void FileActions::remember(const QString& path)
 {
@@ -150,7 +140,9 @@ void FileActions::fillRecent()
     const QStringList list = recentFiles();
     if (list.isEmpty()) recent_->addAction(tr("(none yet)"))->setEnabled(false);
     for (const QString& path : list)
-        addMenuAction(recent_, QFileInfo(path).fileName(), {}, this, [this, path] { openWithPrompt(path); })->setToolTip(path);
+        addMenuAction(recent_, QFileInfo(path).fileName(), {}, this, [this, path] {
+            openWithPrompt(path);
+        })->setToolTip(path);
 }
 
 }  // namespace clevis::ui

@@ -2,8 +2,8 @@
 
 #include "ui/files/autosave_timer.h"
 #include "ui/files/file_actions.h"
-#include "ui/shell/main_window.h"
 #include "ui/files/recovery_restore.h"
+#include "ui/shell/main_window.h"
 
 #include <QFileInfo>
 #include <QMessageBox>
@@ -14,14 +14,17 @@ namespace {
 
 QString whenText(const QDateTime& at)
 {
-    return at.toString(at.date() == QDate::currentDate() ? QStringLiteral("HH:mm") : QStringLiteral("yyyy-MM-dd HH:mm"));
+    return at.toString(at.date() == QDate::currentDate() ? QStringLiteral("HH:mm")
+                                                         : QStringLiteral("yyyy-MM-dd HH:mm"));
 }
 
 RecoveryChoice askInDialog(QWidget* parent, const RecoveryClaim& claim)
 {
-    QMessageBox box(QMessageBox::Question, QObject::tr("Recovered changes"), recoveryMessage(claim), QMessageBox::NoButton, parent);
-    box.setInformativeText(QObject::tr("Clevis ended before they were saved. Restore them as an unsaved document, "
-                                       "discard them for good, or decide at the next start?"));
+    QMessageBox box(QMessageBox::Question, QObject::tr("Recovered changes"), recoveryMessage(claim),
+                    QMessageBox::NoButton, parent);
+    box.setInformativeText(
+        QObject::tr("Clevis ended before they were saved. Restore them as an unsaved document, "
+                    "discard them for good, or decide at the next start?"));
     box.setDetailedText(QObject::tr("Recovered copy: %1").arg(claim.file.path));
     QPushButton* restore = box.addButton(QObject::tr("Restore"), QMessageBox::AcceptRole);
     QPushButton* discard = box.addButton(QObject::tr("Discard"), QMessageBox::DestructiveRole);
@@ -37,7 +40,8 @@ RecoveryChoice askInDialog(QWidget* parent, const RecoveryClaim& claim)
 
 QString recoveryMessage(const RecoveryClaim& claim)
 {
-    const QString what = claim.originalPath.isEmpty() ? QObject::tr("an untitled mechanism") : QFileInfo(claim.originalPath).fileName();
+    const QString what =
+        claim.originalPath.isEmpty() ? QObject::tr("an untitled mechanism") : QFileInfo(claim.originalPath).fileName();
     return QObject::tr("Unsaved changes to %1 from %2 were recovered.").arg(what, whenText(claim.savedAt));
 }
 
@@ -58,9 +62,11 @@ QStringList offerRecovery(MechanismDocument& doc, AutosaveTimer& autosave, const
 void offerRecoveryInDialogs(MainWindow& window)
 {
     if (!window.files()->maybeSave()) return;
-    const QStringList problems = offerRecovery(*window.document(), *window.autosave(),
-                                               [&window](const RecoveryClaim& claim) { return askInDialog(&window, claim); });
-    if (!problems.isEmpty()) QMessageBox::warning(&window, QObject::tr("Cannot restore"), problems.join(QLatin1Char('\n')));
+    const QStringList problems =
+        offerRecovery(*window.document(), *window.autosave(),
+                      [&window](const RecoveryClaim& claim) { return askInDialog(&window, claim); });
+    if (!problems.isEmpty())
+        QMessageBox::warning(&window, QObject::tr("Cannot restore"), problems.join(QLatin1Char('\n')));
 }
 
 }  // namespace clevis::ui

@@ -1,9 +1,9 @@
 #include "ui/files/recovery_restore.h"
 
-#include "ui/files/autosave_timer.h"
-#include "ui/document/mechanism_document.h"
 #include "core/file/mechanism_file.h"
 #include "core/model/model_error.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/files/autosave_timer.h"
 
 #include <QObject>
 
@@ -30,7 +30,8 @@ QString restoreRecovered(MechanismDocument& doc, AutosaveTimer& autosave, Recove
     try {
         recovered = RecoveryStore::read(claim);
     } catch (const ModelError& e) {
-        return QObject::tr("Cannot read the recovered copy %1: %2").arg(claim.file.path, QString::fromStdString(e.what()));
+        return QObject::tr("Cannot read the recovered copy %1: %2")
+            .arg(claim.file.path, QString::fromStdString(e.what()));
     }
     doc.reset(lastSaved(claim.originalPath), claim.originalPath);
     doc.apply(QObject::tr("Recovered changes"), [&recovered](Mechanism& m) { m = recovered; });

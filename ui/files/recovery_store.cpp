@@ -19,10 +19,7 @@ namespace {
 const char* kOriginalKey = "original_path";
 const char* kSavedAtKey = "saved_at";
 
-QString infoPath(const QString& recoveryPath)
-{
-    return recoveryPath + QStringLiteral(".info");
-}
+QString infoPath(const QString& recoveryPath) { return recoveryPath + QStringLiteral(".info"); }
 
 // Stale only by its process having ended, never by age: an instance left
 // open over the weekend still owns its file on Monday.
@@ -35,7 +32,8 @@ std::unique_ptr<QLockFile> lockFor(const QString& recoveryPath)
 
 QString randomName(const QString& originalPath)
 {
-    const QString stem = originalPath.isEmpty() ? QStringLiteral("untitled") : QFileInfo(originalPath).completeBaseName();
+    const QString stem =
+        originalPath.isEmpty() ? QStringLiteral("untitled") : QFileInfo(originalPath).completeBaseName();
     return QStringLiteral("%1-%2.json").arg(stem).arg(QRandomGenerator::global()->generate(), 8, 16, QLatin1Char('0'));
 }
 
@@ -101,9 +99,11 @@ std::vector<RecoveryClaim> RecoveryStore::claimLeftovers() const
     for (const QFileInfo& file : QDir(folder_).entryInfoList({QStringLiteral("*.json")}, QDir::Files)) {
         auto lock = lockFor(file.absoluteFilePath());
         // Its owner may have removed it on a clean exit since the listing.
-        if (lock->tryLock(0) && QFileInfo::exists(file.absoluteFilePath())) claims.push_back(claimOf(file, std::move(lock)));
+        if (lock->tryLock(0) && QFileInfo::exists(file.absoluteFilePath()))
+            claims.push_back(claimOf(file, std::move(lock)));
     }
-    std::sort(claims.begin(), claims.end(), [](const RecoveryClaim& a, const RecoveryClaim& b) { return a.savedAt > b.savedAt; });
+    std::sort(claims.begin(), claims.end(),
+              [](const RecoveryClaim& a, const RecoveryClaim& b) { return a.savedAt > b.savedAt; });
     return claims;
 }
 

@@ -26,7 +26,8 @@ void ElidedLabel::paintEvent(QPaintEvent*)
     QPainter p(this);
     const QRect r = contentsRect();
     const QString shown = fontMetrics().elidedText(text(), Qt::ElideRight, r.width());
-    style()->drawItemText(&p, r, int(alignment()) | Qt::TextSingleLine, palette(), isEnabled(), shown, foregroundRole());
+    style()->drawItemText(&p, r, int(alignment()) | Qt::TextSingleLine, palette(), isEnabled(), shown,
+                          foregroundRole());
 }
 
 }  // namespace clevis::ui

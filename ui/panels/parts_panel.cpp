@@ -1,9 +1,9 @@
 #include "ui/panels/parts_panel.h"
 
-#include "ui/analysis/analysis_state.h"
-#include "ui/document/mechanism_document.h"
 #include "core/model/type_names.h"
 #include "render/palette.h"
+#include "ui/analysis/analysis_state.h"
+#include "ui/document/mechanism_document.h"
 #include "ui/document/sketch_geometry.h"
 
 #include <QHeaderView>
@@ -18,8 +18,11 @@ constexpr int kLoadRole = Qt::UserRole + 2;
 
 QString jointDescription(const Joint& j)
 {
-    const auto body = [](const std::string& b) { return b.empty() ? QStringLiteral("(open)") : QString::fromStdString(b); };
-    return QStringLiteral("%1 · %2–%3").arg(QString::fromUtf8(jointTypeName(j.type)), body(j.bodies[0]), body(j.bodies[1]));
+    const auto body = [](const std::string& b) {
+        return b.empty() ? QStringLiteral("(open)") : QString::fromStdString(b);
+    };
+    return QStringLiteral("%1 · %2–%3")
+        .arg(QString::fromUtf8(jointTypeName(j.type)), body(j.bodies[0]), body(j.bodies[1]));
 }
 
 QString loadKind(const Load& l)
@@ -31,7 +34,8 @@ QString loadKind(const Load& l)
 Selection selectionOf(const QTreeWidgetItem* item)
 {
     if (!item || item->data(0, kKindRole).isNull()) return {};
-    return {Selection::Kind(item->data(0, kKindRole).toInt()), item->data(0, kNameRole).toString(), item->data(0, kLoadRole).toInt()};
+    return {Selection::Kind(item->data(0, kKindRole).toInt()), item->data(0, kNameRole).toString(),
+            item->data(0, kLoadRole).toInt()};
 }
 
 }  // namespace
@@ -63,7 +67,8 @@ void PartsPanel::rebuild()
         g->setExpanded(true);
         return g;
     };
-    const auto row = [&](QTreeWidgetItem* parent, Selection::Kind kind, const std::string& name, const QString& what, int load = -1) {
+    const auto row = [&](QTreeWidgetItem* parent, Selection::Kind kind, const std::string& name, const QString& what,
+                         int load = -1) {
         auto* item = new QTreeWidgetItem(parent, {QString::fromStdString(name), what});
         item->setData(0, kKindRole, int(kind));
         item->setData(0, kNameRole, QString::fromStdString(name));
@@ -81,8 +86,9 @@ void PartsPanel::rebuild()
     QTreeWidgetItem* drivers = group(tr("Drivers"), m.drivers.size());
     for (const auto& d : m.drivers)
         row(drivers, Selection::Kind::Driver, d.name,
-            d.type == DriverType::Rotary ? tr("motor at %1").arg(QString::fromStdString(d.joint))
-                                         : (d.joint.empty() ? tr("cylinder") : tr("drive at %1").arg(QString::fromStdString(d.joint))));
+            d.type == DriverType::Rotary
+                ? tr("motor at %1").arg(QString::fromStdString(d.joint))
+                : (d.joint.empty() ? tr("cylinder") : tr("drive at %1").arg(QString::fromStdString(d.joint))));
     QTreeWidgetItem* loads = group(tr("Loads"), m.loads.size());
     for (std::size_t i = 0; i < m.loads.size(); ++i)
         row(loads, Selection::Kind::Load, loadName(m.loads[i], int(i)), loadKind(m.loads[i]), int(i));

@@ -1,9 +1,9 @@
 #include "ui/panels/property_editor.h"
 
-#include "ui/shell/display_units.h"
 #include "ui/document/mechanism_document.h"
-#include "ui/panels/properties/forms.h"
 #include "ui/document/sketch_geometry.h"
+#include "ui/panels/properties/forms.h"
+#include "ui/shell/display_units.h"
 
 #include "render/palette.h"
 
@@ -48,7 +48,7 @@ void PropertyEditor::rebuildNow()
     auto* form = new QFormLayout(page);
     form->setFieldGrowthPolicy(QFormLayout::AllNonFixedFieldsGrow);
     form->setRowWrapPolicy(QFormLayout::WrapLongRows);  // a narrow panel puts the field under its label
-        FormBuilder f(form, doc_, [this](const QString& why) {
+    FormBuilder f(form, doc_, [this](const QString& why) {
         refusal_ = why;
         scheduleRebuild();
     });
@@ -59,7 +59,8 @@ void PropertyEditor::rebuildNow()
     if (s.kind == Selection::Kind::Body && body >= 0) bodyForm(f, m, m.bodies[body]);
     else if (s.kind == Selection::Kind::Joint && joint >= 0) jointForm(f, m, m.joints[joint]);
     else if (s.kind == Selection::Kind::Driver && driver >= 0) driverForm(f, m, m.drivers[driver]);
-    else if (s.kind == Selection::Kind::Load && s.loadIndex >= 0 && s.loadIndex < int(m.loads.size())) loadForm(f, m, s.loadIndex);
+    else if (s.kind == Selection::Kind::Load && s.loadIndex >= 0 && s.loadIndex < int(m.loads.size()))
+        loadForm(f, m, s.loadIndex);
     else mechanismForm(f, m);
     showRefusal(form);
     setWidget(page);  // deletes the previous page

@@ -1,8 +1,8 @@
 #include "ui/panels/status_line.h"
 
+#include "render/palette.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/panels/elided_label.h"
-#include "render/palette.h"
 
 #include <QHBoxLayout>
 #include <QLabel>
@@ -21,14 +21,18 @@ QString describeAnalysis(const AnalysisState& a)
 {
     QString counts;
     if (const auto& mob = a.mobility())
-        counts = QObject::tr("%1, %2. ").arg(plural(mob->mobility, QObject::tr("degree of freedom"), QObject::tr("degrees of freedom")),
-                                             plural(mob->drivers, QObject::tr("driver"), QObject::tr("drivers")));
+        counts = QObject::tr("%1, %2. ")
+                     .arg(plural(mob->mobility, QObject::tr("degree of freedom"), QObject::tr("degrees of freedom")),
+                          plural(mob->drivers, QObject::tr("driver"), QObject::tr("drivers")));
     if (!a.errorText().isEmpty()) return counts + QObject::tr("Does not solve: %1").arg(a.errorText());
     if (!a.hasResult()) return counts + QObject::tr("Not solved yet.");
     const CycleResult& r = a.result();
     if (!r.complete)
-        return counts + QObject::tr("Solves for part of the cycle only (%1 of %2 steps).").arg(r.steps.size() - 1).arg(r.plannedSteps);
-    return counts + QObject::tr("Solves over the whole cycle (%1 steps, %2 s).").arg(r.plannedSteps).arg(r.duration, 0, 'g', 4);
+        return counts + QObject::tr("Solves for part of the cycle only (%1 of %2 steps).")
+                            .arg(r.steps.size() - 1)
+                            .arg(r.plannedSteps);
+    return counts +
+           QObject::tr("Solves over the whole cycle (%1 steps, %2 s).").arg(r.plannedSteps).arg(r.duration, 0, 'g', 4);
 }
 
 StatusLine::StatusLine(AnalysisState* analysis, QWidget* parent)
@@ -50,15 +54,9 @@ StatusLine::StatusLine(AnalysisState* analysis, QWidget* parent)
     refresh();
 }
 
-QString StatusLine::analysisText() const
-{
-    return state_->text();
-}
+QString StatusLine::analysisText() const { return state_->text(); }
 
-void StatusLine::showHint(const QString& hint)
-{
-    hint_->setFullText(hint);
-}
+void StatusLine::showHint(const QString& hint) { hint_->setFullText(hint); }
 
 void StatusLine::refresh()
 {

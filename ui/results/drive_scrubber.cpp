@@ -1,7 +1,7 @@
 #include "ui/results/drive_scrubber.h"
 
-#include "ui/analysis/analysis_state.h"
 #include "core/results/drive_units.h"
+#include "ui/analysis/analysis_state.h"
 
 #include <QCheckBox>
 #include <QComboBox>
@@ -25,15 +25,15 @@ constexpr int kFrameMs = 30;
 }  // namespace
 
 DriveScrubber::DriveScrubber(AnalysisState* analysis, QWidget* parent)
-    : QWidget(parent),
-      analysis_(analysis),
-      slider_(new QSlider(Qt::Horizontal, this)),
-      position_(new QDoubleSpinBox(this)),
-      play_(new QToolButton(this)),
-      speed_(new QComboBox(this)),
-      loop_(new QCheckBox(tr("Loop"), this)),
-      drivers_(new QLabel(this)),
-      timer_(new QTimer(this))
+    : QWidget(parent)
+    , analysis_(analysis)
+    , slider_(new QSlider(Qt::Horizontal, this))
+    , position_(new QDoubleSpinBox(this))
+    , play_(new QToolButton(this))
+    , speed_(new QComboBox(this))
+    , loop_(new QCheckBox(tr("Loop"), this))
+    , drivers_(new QLabel(this))
+    , timer_(new QTimer(this))
 {
     setObjectName("driveScrubber");
     slider_->setObjectName("scrubSlider");
@@ -81,8 +81,7 @@ void DriveScrubber::setPlaying(bool play)
         playTime_ = analysis_->result().steps[analysis_->currentStep()].t;
         clock_.start();
         timer_->start();
-    }
-    else timer_->stop();
+    } else timer_->stop();
     const QSignalBlocker block(play_);
     play_->setChecked(playing());
     play_->setText(playing() ? tr("Pause") : tr("Play"));
@@ -104,8 +103,10 @@ void DriveScrubber::rebuild()
     slider_->setPageStep(std::max(1, int(r.steps.size()) / 10));
     position_->setSuffix(" " + axis_.unit);
     position_->setDecimals(axis_.byTime ? 4 : (axis_.unit == "m" ? 5 : 2));
-    position_->setRange(std::min(axis_.values.front(), axis_.values.back()), std::max(axis_.values.front(), axis_.values.back()));
-    position_->setSingleStep(std::abs(axis_.values.back() - axis_.values.front()) / std::max<int>(1, int(r.steps.size()) - 1));
+    position_->setRange(std::min(axis_.values.front(), axis_.values.back()),
+                        std::max(axis_.values.front(), axis_.values.back()));
+    position_->setSingleStep(std::abs(axis_.values.back() - axis_.values.front()) /
+                             std::max<int>(1, int(r.steps.size()) - 1));
     position_->setToolTip(axis_.label);
     showStep(analysis_->currentStep());
 }

@@ -1,10 +1,10 @@
 #include "ui/results/free_body_view.h"
 
-#include "ui/analysis/analysis_state.h"
-#include "ui/shell/display_units.h"
 #include "render/free_body_painter.h"
-#include "ui/document/mechanism_document.h"
 #include "render/palette.h"
+#include "ui/analysis/analysis_state.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/shell/display_units.h"
 
 #include <QCheckBox>
 #include <QLabel>
@@ -32,12 +32,12 @@ protected:
 };
 
 FreeBodyView::FreeBodyView(MechanismDocument* doc, AnalysisState* analysis, QWidget* parent)
-    : QWidget(parent),
-      doc_(doc),
-      analysis_(analysis),
-      dAlembert_(new QCheckBox(tr("Inertia loads on the body"), this)),
-      message_(new QLabel(this)),
-      canvas_(new FreeBodyCanvas(this))
+    : QWidget(parent)
+    , doc_(doc)
+    , analysis_(analysis)
+    , dAlembert_(new QCheckBox(tr("Inertia loads on the body"), this))
+    , message_(new QLabel(this))
+    , canvas_(new FreeBodyCanvas(this))
 {
     setObjectName("freeBodyView");
     dAlembert_->setToolTip(tr("d'Alembert: draw −m·a_G and −I_G·α on the body instead of a separate kinetic diagram"));
@@ -72,8 +72,9 @@ void FreeBodyView::refresh()
         if (body < 0) note = tr("%1 is the frame: its loads are the shaking force and moment.").arg(s.name);
         else {
             diagram_ = freeBodyDiagram(m, analysis_->result(), body, analysis_->currentStep());
-            canvas_->figure = std::make_unique<FreeBodyPainter>(m, analysis_->result(), *diagram_,
-                                                                FreeBodyPaintOptions{renderUnits(DisplayUnits::instance()), dAlembert(), false});
+            canvas_->figure = std::make_unique<FreeBodyPainter>(
+                m, analysis_->result(), *diagram_,
+                FreeBodyPaintOptions{renderUnits(DisplayUnits::instance()), dAlembert(), false});
         }
     }
     message_->setText(note);

@@ -1,7 +1,7 @@
 #include "ui/results/peak_table.h"
 
-#include "ui/analysis/analysis_state.h"
 #include "render/cycle_axis.h"
+#include "ui/analysis/analysis_state.h"
 #include "ui/shell/display_units.h"
 
 #include <QHeaderView>
@@ -17,7 +17,8 @@ PeakTable::PeakTable(AnalysisState* analysis, QWidget* parent) : QTableWidget(pa
 {
     setObjectName("peakTable");
     setColumnCount(7);
-    setHorizontalHeaderLabels({tr("Part"), tr("Peak"), tr("Where"), tr("RMS"), tr("Mean"), tr("Peak power"), tr("Work per cycle")});
+    setHorizontalHeaderLabels(
+        {tr("Part"), tr("Peak"), tr("Where"), tr("RMS"), tr("Mean"), tr("Peak power"), tr("Work per cycle")});
     setEditTriggers(NoEditTriggers);
     setSelectionBehavior(SelectRows);
     setSelectionMode(SingleSelection);
@@ -46,7 +47,8 @@ void PeakTable::rebuild()
     const RenderUnits u = renderUnits(DisplayUnits::instance());
     const CycleAxis axis = cycleAxis(m, analysis_->result());
     const auto where = [&](int step) {
-        return step < 0 ? QString("–") : QString("%1 %2").arg(axis.values[step], 0, 'f', axis.byTime ? 4 : 1).arg(axis.unit);
+        return step < 0 ? QString("–")
+                        : QString("%1 %2").arg(axis.values[step], 0, 'f', axis.byTime ? 4 : 1).arg(axis.unit);
     };
     const auto addRow = [&](const QString& part, int step, const QStringList& cells) {
         const int row = rowCount();
@@ -64,10 +66,13 @@ void PeakTable::rebuild()
         const auto effort = [&](double v) { return d.type == DriverType::Rotary ? u.torque(v) : u.force(v); };
         addRow(tr("driver %1").arg(QString::fromStdString(d.name)), d.peak.step,
                {effort(d.peak.value), where(d.peak.step), effort(d.rms), effort(d.mean),
-                d.peakPower.step >= 0 ? formatQuantity(d.peakPower.value, "W") : QString("–"), formatQuantity(d.work, "J")});
+                d.peakPower.step >= 0 ? formatQuantity(d.peakPower.value, "W") : QString("–"),
+                formatQuantity(d.work, "J")});
     }
-    addRow(tr("shaking force"), s.groundForce.step, {u.force(s.groundForce.value), where(s.groundForce.step), "", "", "", ""});
-    addRow(tr("shaking moment"), s.groundMoment.step, {u.torque(s.groundMoment.value), where(s.groundMoment.step), "", "", "", ""});
+    addRow(tr("shaking force"), s.groundForce.step,
+           {u.force(s.groundForce.value), where(s.groundForce.step), "", "", "", ""});
+    addRow(tr("shaking moment"), s.groundMoment.step,
+           {u.torque(s.groundMoment.value), where(s.groundMoment.step), "", "", "", ""});
 }
 
 }  // namespace clevis::ui

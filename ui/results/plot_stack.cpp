@@ -1,9 +1,10 @@
 #include "ui/results/plot_stack.h"
 
+#include "render/palette.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/shell/display_units.h"
-#include "render/palette.h"
 
+#include <qcustomplot.h>
 #include <QCheckBox>
 #include <QEvent>
 #include <QHBoxLayout>
@@ -12,7 +13,6 @@
 #include <QScrollArea>
 #include <QSplitter>
 #include <QVBoxLayout>
-#include <qcustomplot.h>
 
 #include <cmath>
 
@@ -35,13 +35,13 @@ void addLegend(QCustomPlot* plot, QCPAxisRect* rect, const QString& text)
 }  // namespace
 
 PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
-    : QWidget(parent),
-      analysis_(analysis),
-      joints_(new QListWidget(this)),
-      components_(new QCheckBox(tr("Components Fx, Fy"), this)),
-      plot_(new QCustomPlot(this)),
-      readout_(new QLabel(this)),
-      peaks_(new QLabel(this))
+    : QWidget(parent)
+    , analysis_(analysis)
+    , joints_(new QListWidget(this))
+    , components_(new QCheckBox(tr("Components Fx, Fy"), this))
+    , plot_(new QCustomPlot(this))
+    , readout_(new QLabel(this))
+    , peaks_(new QLabel(this))
 {
     setObjectName("plotStack");
     plot_->setObjectName("cyclePlots");
@@ -113,7 +113,8 @@ void PlotStack::jointTicked(QListWidgetItem* item)
 void PlotStack::listJoints(const CompiledMechanism& m)
 {
     bool same = joints_->count() == int(m.joints.size());
-    for (int j = 0; same && j < joints_->count(); ++j) same = joints_->item(j)->text().toStdString() == m.joints[j].name;
+    for (int j = 0; same && j < joints_->count(); ++j)
+        same = joints_->item(j)->text().toStdString() == m.joints[j].name;
     if (same) return;
     const QSignalBlocker block(joints_);
     joints_->clear();
@@ -194,7 +195,8 @@ QStringList PlotStack::drawPane(const PlotPane& pane, bool lastPane, QCPMarginGr
         g->setPen(curvePen(c.pen));
         g->setData(x, QVector<double>(s.values.begin(), s.values.end()), true);
         names << s.name;
-        const auto peak = std::max_element(s.values.begin(), s.values.end(), [](double a, double b) { return std::abs(a) < std::abs(b); });
+        const auto peak = std::max_element(s.values.begin(), s.values.end(),
+                                           [](double a, double b) { return std::abs(a) < std::abs(b); });
         const int k = int(peak - s.values.begin());
         auto* mark = new QCPItemTracer(plot_);
         mark->setGraph(g);
@@ -202,7 +204,10 @@ QStringList PlotStack::drawPane(const PlotPane& pane, bool lastPane, QCPMarginGr
         mark->setStyle(QCPItemTracer::tsCircle);
         mark->setSize(7);
         mark->setPen(g->pen());
-        peakLines << tr("%1: %2 at %3 %4").arg(s.name, formatQuantity(*peak, s.unit)).arg(x[k], 0, 'f', axis_.byTime ? 4 : 1).arg(axis_.unit);
+        peakLines << tr("%1: %2 at %3 %4")
+                         .arg(s.name, formatQuantity(*peak, s.unit))
+                         .arg(x[k], 0, 'f', axis_.byTime ? 4 : 1)
+                         .arg(axis_.unit);
         for (const double v : s.values) {
             lo = std::min(lo, v);
             hi = std::max(hi, v);
@@ -213,7 +218,8 @@ QStringList PlotStack::drawPane(const PlotPane& pane, bool lastPane, QCPMarginGr
     ya->setRange(lo - (lo < 0 ? pad : 0), hi + pad + 0.12 * (hi - lo));
     QColor flagged = palette::problem();
     flagged.setAlphaF(0.15);
-    for (const auto& [a, b] : nearSingularRuns(r)) shade(rect, x[std::max(a - 1, 0)], x[std::min<int>(b + 1, x.size() - 1)], flagged);
+    for (const auto& [a, b] : nearSingularRuns(r))
+        shade(rect, x[std::max(a - 1, 0)], x[std::min<int>(b + 1, x.size() - 1)], flagged);
     if (end != x.back()) {
         QColor unreached = palette::groundHatch();
         unreached.setAlphaF(0.2);

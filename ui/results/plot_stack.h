@@ -38,10 +38,10 @@ public:
     const std::vector<PlotPane>& panes() const { return panes_; }
 
     QCustomPlot* plot() const { return plot_; }
-    double cursorX() const;                 // in the axis unit; NaN when nothing is shown
-    QPoint pixelForStep(int step) const;    // a point inside the first pane at that step (for tests)
+    double cursorX() const;               // in the axis unit; NaN when nothing is shown
+    QPoint pixelForStep(int step) const;  // a point inside the first pane at that step (for tests)
     QString peakListText() const;
-    QString readoutText() const;            // in full, however much the line shows
+    QString readoutText() const;  // in full, however much the line shows
 
 protected:
     bool eventFilter(QObject* watched, QEvent* event) override;

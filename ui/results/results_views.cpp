@@ -1,7 +1,7 @@
 #include "ui/results/results_views.h"
 
-#include "ui/results/drive_scrubber.h"
 #include "ui/files/export_actions.h"
+#include "ui/results/drive_scrubber.h"
 #include "ui/results/free_body_view.h"
 #include "ui/results/peak_table.h"
 #include "ui/results/plot_stack.h"

@@ -1,14 +1,14 @@
 #include "ui/shell/app_launch.h"
 
 #include "ui/files/file_actions.h"
-#include "ui/shell/main_window.h"
 #include "ui/files/recovery_prompt.h"
 #include "ui/files/recovery_store.h"
+#include "ui/shell/main_window.h"
 #include "ui/shell/screenshot.h"
 
 #include <QApplication>
-#include <QIcon>
 #include <QCommandLineParser>
+#include <QIcon>
 #include <QScreen>
 #include <QTextStream>
 
@@ -23,20 +23,23 @@ int runDesktopApp(int argc, char** argv)
     QApplication::setWindowIcon(QIcon(QStringLiteral(":/clevis/clevis.svg")));  // resources/clevis.qrc
 
     QCommandLineParser parser;
-    parser.setApplicationDescription(QObject::tr(
-        "Clevis: sketch a planar linkage, edit it, and see the loads in every pin over the cycle.\n"
-        "Without a display, use --screenshot (e.g. with QT_QPA_PLATFORM=offscreen) or clevis-cli.\n"
-        "Unsaved changes are autosaved every minute to %1 and offered back at the next start if Clevis "
-        "ends without closing; set CLEVIS_RECOVERY_DIR to use another folder.").arg(RecoveryStore::defaultFolder()));
+    parser.setApplicationDescription(
+        QObject::tr("Clevis: sketch a planar linkage, edit it, and see the loads in every pin over the cycle.\n"
+                    "Without a display, use --screenshot (e.g. with QT_QPA_PLATFORM=offscreen) or clevis-cli.\n"
+                    "Unsaved changes are autosaved every minute to %1 and offered back at the next start if Clevis "
+                    "ends without closing; set CLEVIS_RECOVERY_DIR to use another folder.")
+            .arg(RecoveryStore::defaultFolder()));
     parser.addHelpOption();
     parser.addVersionOption();
-    const QCommandLineOption screenshot(QStringLiteral("screenshot"),
-                                        QObject::tr("Render the main window with FILE open to a PNG of %1 × %2 px and exit.")
-                                            .arg(kScreenshotSize.width())
-                                            .arg(kScreenshotSize.height()),
-                                        QObject::tr("OUT.png"));
+    const QCommandLineOption screenshot(
+        QStringLiteral("screenshot"),
+        QObject::tr("Render the main window with FILE open to a PNG of %1 × %2 px and exit.")
+            .arg(kScreenshotSize.width())
+            .arg(kScreenshotSize.height()),
+        QObject::tr("OUT.png"));
     parser.addOption(screenshot);
-    parser.addPositionalArgument(QStringLiteral("FILE"), QObject::tr("A mechanism file (.json) to open."), QStringLiteral("[FILE]"));
+    parser.addPositionalArgument(QStringLiteral("FILE"), QObject::tr("A mechanism file (.json) to open."),
+                                 QStringLiteral("[FILE]"));
     parser.process(app);
 
     MainWindow window;

@@ -32,11 +32,10 @@ DisplayUnits& DisplayUnits::instance()
 }
 
 DisplayUnits::DisplayUnits()
-    : length_(readSetting(kLengthKey, Length::Millimetre, 3)),
-      force_(readSetting(kForceKey, Force::Newton, 3)),
-      torque_(readSetting(kTorqueKey, Torque::NewtonMetre, 2))
-{
-}
+    : length_(readSetting(kLengthKey, Length::Millimetre, 3))
+    , force_(readSetting(kForceKey, Force::Newton, 3))
+    , torque_(readSetting(kTorqueKey, Torque::NewtonMetre, 2))
+{}
 
 DisplayUnits::Length DisplayUnits::length() const { return length_; }
 DisplayUnits::Force DisplayUnits::force() const { return force_; }
@@ -97,8 +96,14 @@ double DisplayUnits::torqueFactor() const
 
 // Millimetres divide by 1000 rather than multiply by 0.001, so that a typed
 // "30" is exactly the double nearest 0.03 m, as a file would hold it.
-double DisplayUnits::lengthFromSi(double m) const { return length_ == Length::Millimetre ? m * 1000.0 : m / lengthFactor(); }
-double DisplayUnits::lengthToSi(double v) const { return length_ == Length::Millimetre ? v / 1000.0 : v * lengthFactor(); }
+double DisplayUnits::lengthFromSi(double m) const
+{
+    return length_ == Length::Millimetre ? m * 1000.0 : m / lengthFactor();
+}
+double DisplayUnits::lengthToSi(double v) const
+{
+    return length_ == Length::Millimetre ? v / 1000.0 : v * lengthFactor();
+}
 double DisplayUnits::forceFromSi(double n) const { return n / forceFactor(); }
 double DisplayUnits::forceToSi(double v) const { return v * forceFactor(); }
 double DisplayUnits::torqueFromSi(double nm) const { return nm / torqueFactor(); }
@@ -148,20 +153,17 @@ QString DisplayUnits::formatLength(double si) const
     return QString::number(lengthFromSi(si), 'f', lengthDecimals()) + QChar(' ') + lengthSymbol();
 }
 
-QString DisplayUnits::formatForce(double si) const
-{
-    return formatWithUnit(forceFromSi(si), forceSymbol());
-}
+QString DisplayUnits::formatForce(double si) const { return formatWithUnit(forceFromSi(si), forceSymbol()); }
 
-QString DisplayUnits::formatTorque(double si) const
-{
-    return formatWithUnit(torqueFromSi(si), torqueSymbol());
-}
+QString DisplayUnits::formatTorque(double si) const { return formatWithUnit(torqueFromSi(si), torqueSymbol()); }
 
 double DisplayUnits::stiffnessFromSi(double nPerM) const { return nPerM * lengthFactor() / forceFactor(); }
 double DisplayUnits::stiffnessToSi(double v) const { return v * forceFactor() / lengthFactor(); }
 QString DisplayUnits::stiffnessSymbol() const { return forceSymbol() + QChar('/') + lengthSymbol(); }
-QString DisplayUnits::formatStiffness(double si) const { return formatWithUnit(stiffnessFromSi(si), stiffnessSymbol()); }
+QString DisplayUnits::formatStiffness(double si) const
+{
+    return formatWithUnit(stiffnessFromSi(si), stiffnessSymbol());
+}
 
 QString formatWithUnit(double value, const QString& unit)
 {
@@ -176,8 +178,8 @@ QString formatWithUnit(double value, const QString& unit)
 RenderUnits renderUnits(const DisplayUnits& units)
 {
     // Every unit choice is a pure scale of SI, so one factor each describes it.
-    return {units.lengthFromSi(1.0), units.lengthSymbol(), units.forceFromSi(1.0), units.forceSymbol(),
-            units.torqueFromSi(1.0), units.torqueSymbol()};
+    return {units.lengthFromSi(1.0), units.lengthSymbol(),    units.forceFromSi(1.0),
+            units.forceSymbol(),     units.torqueFromSi(1.0), units.torqueSymbol()};
 }
 
 }  // namespace clevis::ui

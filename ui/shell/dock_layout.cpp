@@ -8,10 +8,7 @@
 namespace clevis::ui {
 namespace {
 
-int share(int total, double fraction, int least, int most)
-{
-    return std::clamp(int(total * fraction), least, most);
-}
+int share(int total, double fraction, int least, int most) { return std::clamp(int(total * fraction), least, most); }
 
 }  // namespace
 
@@ -27,7 +24,9 @@ QDockWidget* addPanel(QMainWindow* window, const QString& title, const QString& 
 
 void arrangePanels(QMainWindow* window)
 {
-    const auto panel = [window](const char* name) { return window->findChild<QDockWidget*>(QString::fromLatin1(name)); };
+    const auto panel = [window](const char* name) {
+        return window->findChild<QDockWidget*>(QString::fromLatin1(name));
+    };
     QDockWidget* parts = panel("partsDock");
     QDockWidget* properties = panel("propertiesDock");
     QDockWidget* diagram = panel("freeBodyDock");

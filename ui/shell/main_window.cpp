@@ -1,24 +1,24 @@
 #include "ui/shell/main_window.h"
 
 #include "ui/analysis/analysis_state.h"
-#include "ui/files/autosave_timer.h"
 #include "ui/canvas/canvas_view.h"
-#include "ui/files/file_actions.h"
+#include "ui/canvas/tool_palette.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/document/mechanism_edits.h"
-#include "ui/shell/dock_layout.h"
-#include "ui/shell/menu_action.h"
+#include "ui/files/autosave_timer.h"
+#include "ui/files/file_actions.h"
 #include "ui/panels/parts_panel.h"
 #include "ui/panels/property_editor.h"
 #include "ui/panels/status_line.h"
-#include "ui/canvas/tool_palette.h"
+#include "ui/shell/dock_layout.h"
+#include "ui/shell/menu_action.h"
 #include "ui/shell/units_menu.h"
 
 #include "ui/results/results_views.h"
 
 #include <QCloseEvent>
-#include <QGuiApplication>
 #include <QDockWidget>
+#include <QGuiApplication>
 #include <QMenuBar>
 #include <QMimeData>
 #include <QScreen>
@@ -42,14 +42,14 @@ QList<QKeySequence> withoutRepeats(const QList<QKeySequence>& keys)
 }  // namespace
 
 MainWindow::MainWindow(const QString& recoveryFolder, QWidget* parent)
-    : QMainWindow(parent),
-      doc_(new MechanismDocument(this)),
-      analysis_(new AnalysisState(doc_, this)),
-      canvas_(new CanvasView(doc_, analysis_, this)),
-      files_(new FileActions(this, doc_)),
-      autosave_(new AutosaveTimer(doc_, RecoveryStore(recoveryFolder), this)),
-      tools_(new ToolPalette(canvas_, this)),
-      status_(new StatusLine(analysis_, this))
+    : QMainWindow(parent)
+    , doc_(new MechanismDocument(this))
+    , analysis_(new AnalysisState(doc_, this))
+    , canvas_(new CanvasView(doc_, analysis_, this))
+    , files_(new FileActions(this, doc_))
+    , autosave_(new AutosaveTimer(doc_, RecoveryStore(recoveryFolder), this))
+    , tools_(new ToolPalette(canvas_, this))
+    , status_(new StatusLine(analysis_, this))
 {
     setObjectName(QStringLiteral("mainWindow"));
     setCentralWidget(canvas_);
@@ -112,13 +112,16 @@ QMenu* MainWindow::buildMenus()
     QAction* undo = doc_->undoStack()->createUndoAction(this, tr("Undo"));
     undo->setShortcut(QKeySequence::Undo);
     QAction* redo = doc_->undoStack()->createRedoAction(this, tr("Redo"));
-    const QList<QKeySequence> redoKeys{QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_Z), QKeySequence(Qt::CTRL | Qt::Key_Y)};
+    const QList<QKeySequence> redoKeys{QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_Z),
+                                       QKeySequence(Qt::CTRL | Qt::Key_Y)};
     redo->setShortcuts(withoutRepeats(redoKeys + QKeySequence::keyBindings(QKeySequence::Redo)));
     edit->addAction(undo);
     edit->addAction(redo);
     edit->addSeparator();
-    QAction* del = addMenuAction(edit, tr("&Delete selected part"), QKeySequence::Delete, this, [this] { deleteSelection(); });
-    del->setShortcuts(withoutRepeats(QKeySequence::keyBindings(QKeySequence::Delete) << QKeySequence(Qt::Key_Backspace)));
+    QAction* del =
+        addMenuAction(edit, tr("&Delete selected part"), QKeySequence::Delete, this, [this] { deleteSelection(); });
+    del->setShortcuts(
+        withoutRepeats(QKeySequence::keyBindings(QKeySequence::Delete) << QKeySequence(Qt::Key_Backspace)));
 
     QMenu* draw = menuBar()->addMenu(tr("&Draw"));
     auto* bar = new QToolBar(tr("Drawing tools"), this);

@@ -20,7 +20,10 @@ QString saveScreenshot(MainWindow& window, const QString& outPath)
     QCoreApplication::processEvents();
     if (window.size() != kScreenshotSize)
         return QStringLiteral("the window's panels need %1 × %2 px, more than the screenshot's %3 × %4")
-            .arg(window.width()).arg(window.height()).arg(kScreenshotSize.width()).arg(kScreenshotSize.height());
+            .arg(window.width())
+            .arg(window.height())
+            .arg(kScreenshotSize.width())
+            .arg(kScreenshotSize.height());
     const QPixmap shot = window.grab();
     if (!shot.save(outPath, "PNG")) return QStringLiteral("cannot write %1").arg(outPath);
     return {};

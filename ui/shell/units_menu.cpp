@@ -21,7 +21,8 @@ void addGroup(QMenu* menu, const QString& title, const std::vector<std::pair<QSt
         a->setCheckable(true);
         a->setChecked(value == current);
         group->addAction(a);
-        QObject::connect(a, &QAction::triggered, menu, [set, value = value] { (DisplayUnits::instance().*set)(value); });
+        QObject::connect(a, &QAction::triggered, menu,
+                         [set, value = value] { (DisplayUnits::instance().*set)(value); });
     }
 }
 
@@ -35,10 +36,13 @@ QMenu* createUnitsMenu(QWidget* parent)
     using L = DisplayUnits::Length;
     using F = DisplayUnits::Force;
     using T = DisplayUnits::Torque;
-    addGroup<L>(menu, QObject::tr("Length"), {{"mm", L::Millimetre}, {"m", L::Metre}, {"in", L::Inch}}, u.length(), &DisplayUnits::setLength);
-    addGroup<F>(menu, QObject::tr("Force"), {{"N", F::Newton}, {"kN", F::Kilonewton}, {"lbf", F::PoundForce}}, u.force(), &DisplayUnits::setForce);
-    addGroup<T>(menu, QObject::tr("Torque"), {{QStringLiteral("N·m"), T::NewtonMetre}, {QStringLiteral("lbf·in"), T::PoundForceInch}},
-                u.torque(), &DisplayUnits::setTorque);
+    addGroup<L>(menu, QObject::tr("Length"), {{"mm", L::Millimetre}, {"m", L::Metre}, {"in", L::Inch}}, u.length(),
+                &DisplayUnits::setLength);
+    addGroup<F>(menu, QObject::tr("Force"), {{"N", F::Newton}, {"kN", F::Kilonewton}, {"lbf", F::PoundForce}},
+                u.force(), &DisplayUnits::setForce);
+    addGroup<T>(menu, QObject::tr("Torque"),
+                {{QStringLiteral("N·m"), T::NewtonMetre}, {QStringLiteral("lbf·in"), T::PoundForceInch}}, u.torque(),
+                &DisplayUnits::setTorque);
     return menu;
 }
 

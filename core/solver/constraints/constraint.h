@@ -18,7 +18,8 @@ class DriverMotion;
 class RowWriter {
 public:
     RowWriter(int firstRow, VectorXd* values, std::vector<Eigen::Triplet<double>>* jacobian)
-        : first_(firstRow), values_(values), jacobian_(jacobian) {}
+        : first_(firstRow), values_(values), jacobian_(jacobian)
+    {}
     void value(int row, double v) const { (*values_)[first_ + row] = v; }
     // ∂Φ_row/∂q for one body's x (0), y (1) or φ (2); ground columns are dropped.
     void partial(int row, int body, int component, double v) const

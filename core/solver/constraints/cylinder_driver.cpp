@@ -15,8 +15,7 @@ class CylinderDriver final : public Constraint {
 public:
     CylinderDriver(const CompiledDriver& d, int index, const DriverMotion& motion)
         : Constraint(ConstraintOwner::Driver, index), i_(d.ends[0]), j_(d.ends[1]), motion_(motion)
-    {
-    }
+    {}
 
     int rows() const override { return 1; }
     bool angularRow(int) const override { return false; }
@@ -33,8 +32,7 @@ public:
         out.partial(0, j_.body, 2, u.dot(perp(q.arm(j_))));
     }
 
-    void rates(const Pose& q, const VectorXd& qd, double t, const RowWriter& nu,
-               const RowWriter& gamma) const override
+    void rates(const Pose& q, const VectorXd& qd, double t, const RowWriter& nu, const RowWriter& gamma) const override
     {
         const Vec2 d = q.point(j_) - q.point(i_);
         const double length = d.norm();
@@ -42,8 +40,8 @@ public:
         const Vec2 dd = q.velocity(qd, j_) - q.velocity(qd, i_);
         const double wi = bodyRate(qd, i_.body), wj = bodyRate(qd, j_.body);
         const double along = u.dot(dd);
-        const double quadratic = (dd.squaredNorm() - along * along) / length +
-                                 u.dot(q.arm(i_) * wi * wi - q.arm(j_) * wj * wj);
+        const double quadratic =
+            (dd.squaredNorm() - along * along) / length + u.dot(q.arm(i_) * wi * wi - q.arm(j_) * wj * wj);
         const DriveState s = motion_(t);
         nu.value(0, s.rate);
         gamma.value(0, s.accel - quadratic);

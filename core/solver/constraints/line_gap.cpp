@@ -25,8 +25,7 @@ double LineGap::quadratic(const Pose& q, const VectorXd& qd) const
     const Vec2 d = q.point(onJ) - q.point(onI);
     const Vec2 dd = q.velocity(qd, onJ) - q.velocity(qd, onI);
     const double wi = bodyRate(qd, onI.body), wj = bodyRate(qd, onJ.body);
-    return -wi * wi * e.dot(d) + 2.0 * wi * perp(e).dot(dd) +
-           e.dot(q.arm(onI) * wi * wi - q.arm(onJ) * wj * wj);
+    return -wi * wi * e.dot(d) + 2.0 * wi * perp(e).dot(dd) + e.dot(q.arm(onI) * wi * wi - q.arm(onJ) * wj * wj);
 }
 
 }  // namespace clevis

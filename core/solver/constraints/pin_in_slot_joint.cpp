@@ -13,8 +13,7 @@ class PinInSlotJoint final : public Constraint {
 public:
     PinInSlotJoint(const CompiledJoint& j, int index)
         : Constraint(ConstraintOwner::Joint, index), gap_{j.point[0], j.point[1], perp(j.axisLocal)}
-    {
-    }
+    {}
 
     int rows() const override { return 1; }
     bool angularRow(int) const override { return false; }
@@ -25,8 +24,7 @@ public:
         gap_.partials(q, 0, out);
     }
 
-    void rates(const Pose& q, const VectorXd& qd, double, const RowWriter& nu,
-               const RowWriter& gamma) const override
+    void rates(const Pose& q, const VectorXd& qd, double, const RowWriter& nu, const RowWriter& gamma) const override
     {
         nu.value(0, 0.0);
         gamma.value(0, -gap_.quadratic(q, qd));

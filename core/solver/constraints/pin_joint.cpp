@@ -11,7 +11,9 @@ namespace {
 
 class PinJoint final : public Constraint {
 public:
-    PinJoint(const CompiledJoint& j, int index) : Constraint(ConstraintOwner::Joint, index), i_(j.point[0]), j_(j.point[1]) {}
+    PinJoint(const CompiledJoint& j, int index)
+        : Constraint(ConstraintOwner::Joint, index), i_(j.point[0]), j_(j.point[1])
+    {}
 
     int rows() const override { return 2; }
     bool angularRow(int) const override { return false; }
@@ -30,8 +32,7 @@ public:
         }
     }
 
-    void rates(const Pose& q, const VectorXd& qd, double, const RowWriter& nu,
-               const RowWriter& gamma) const override
+    void rates(const Pose& q, const VectorXd& qd, double, const RowWriter& nu, const RowWriter& gamma) const override
     {
         const double wi = bodyRate(qd, i_.body), wj = bodyRate(qd, j_.body);
         const Vec2 g = q.arm(j_) * wj * wj - q.arm(i_) * wi * wi;

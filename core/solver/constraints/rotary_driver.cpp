@@ -13,9 +13,12 @@ namespace {
 class RotaryDriver final : public Constraint {
 public:
     RotaryDriver(const CompiledDriver& d, const CompiledJoint& pin, int index, const DriverMotion& motion)
-        : Constraint(ConstraintOwner::Driver, index), i_(pin.body[0]), j_(pin.body[1]), offset_(d.offset), motion_(motion)
-    {
-    }
+        : Constraint(ConstraintOwner::Driver, index)
+        , i_(pin.body[0])
+        , j_(pin.body[1])
+        , offset_(d.offset)
+        , motion_(motion)
+    {}
 
     int rows() const override { return 1; }
     bool angularRow(int) const override { return true; }

@@ -6,8 +6,8 @@
 //   ν   = ṡ(t)
 //   γ   = s̈(t) − quadratic (line_gap.h)
 #include "core/solver/constraints/constraint.h"
-#include "core/solver/driver_motion.h"
 #include "core/solver/constraints/line_gap.h"
+#include "core/solver/driver_motion.h"
 
 namespace clevis {
 namespace {
@@ -15,12 +15,11 @@ namespace {
 class SliderDriver final : public Constraint {
 public:
     SliderDriver(const CompiledDriver& d, const CompiledJoint& slider, int index, const DriverMotion& motion)
-        : Constraint(ConstraintOwner::Driver, index),
-          gap_{slider.point[0], slider.point[1], slider.axisLocal},
-          offset_(d.offset),
-          motion_(motion)
-    {
-    }
+        : Constraint(ConstraintOwner::Driver, index)
+        , gap_{slider.point[0], slider.point[1], slider.axisLocal}
+        , offset_(d.offset)
+        , motion_(motion)
+    {}
 
     int rows() const override { return 1; }
     bool angularRow(int) const override { return false; }
@@ -31,8 +30,7 @@ public:
         gap_.partials(q, 0, out);
     }
 
-    void rates(const Pose& q, const VectorXd& qd, double t, const RowWriter& nu,
-               const RowWriter& gamma) const override
+    void rates(const Pose& q, const VectorXd& qd, double t, const RowWriter& nu, const RowWriter& gamma) const override
     {
         const DriveState s = motion_(t);
         nu.value(0, s.rate);

@@ -14,8 +14,7 @@ class SliderJoint final : public Constraint {
 public:
     SliderJoint(const CompiledJoint& j, int index)
         : Constraint(ConstraintOwner::Joint, index), gap_{j.point[0], j.point[1], perp(j.axisLocal)}
-    {
-    }
+    {}
 
     int rows() const override { return 2; }
     bool angularRow(int row) const override { return row == 0; }
@@ -30,8 +29,7 @@ public:
         gap_.partials(q, 1, out);
     }
 
-    void rates(const Pose& q, const VectorXd& qd, double, const RowWriter& nu,
-               const RowWriter& gamma) const override
+    void rates(const Pose& q, const VectorXd& qd, double, const RowWriter& nu, const RowWriter& gamma) const override
     {
         nu.value(0, 0.0);
         nu.value(1, 0.0);

@@ -1,8 +1,8 @@
 #include "render/body_outline.h"
 #include "render/palette.h"
-#include "ui/document/sketch_geometry.h"
 #include "ui/canvas/sketch_painter.h"
 #include "ui/canvas/sketch_style.h"
+#include "ui/document/sketch_geometry.h"
 
 #include <QPainterPath>
 

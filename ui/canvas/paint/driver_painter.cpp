@@ -1,9 +1,9 @@
-#include "ui/shell/display_units.h"
 #include "render/drawing_symbols.h"
 #include "render/palette.h"
-#include "ui/document/sketch_geometry.h"
 #include "ui/canvas/sketch_painter.h"
 #include "ui/canvas/sketch_style.h"
+#include "ui/document/sketch_geometry.h"
+#include "ui/shell/display_units.h"
 
 #include <QtMath>
 
@@ -50,7 +50,8 @@ void paintDrivers(PaintContext& c)
             p.setPen(c.haloPen(Selection::Kind::Driver, d.name, 12));
             p.drawLine(a, b);
             drawCylinder(p, a, b);
-            drawLabel(p, a + QPointF(10, 18), QString::fromStdString(d.name) + "  " + motionLabel(d), palette::driver());
+            drawLabel(p, a + QPointF(10, 18), QString::fromStdString(d.name) + "  " + motionLabel(d),
+                      palette::driver());
             continue;
         }
         const int j = jointIndex(c.mechanism, d.joint);
@@ -76,8 +77,8 @@ void paintDrivers(PaintContext& c)
             drawArrow(p, mid, mid + u * 22, arrow);
             drawArrow(p, mid, mid - u * 22, arrow);
         }
-        drawLabel(p, at + QPointF(style::kMotorRadius + 4, -style::kMotorRadius), QString::fromStdString(d.name) + "  " + motionLabel(d),
-                  palette::driver());
+        drawLabel(p, at + QPointF(style::kMotorRadius + 4, -style::kMotorRadius),
+                  QString::fromStdString(d.name) + "  " + motionLabel(d), palette::driver());
     }
     p.restore();
 }

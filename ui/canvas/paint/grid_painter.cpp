@@ -1,14 +1,15 @@
-#include "ui/shell/display_units.h"
 #include "render/palette.h"
 #include "ui/canvas/sketch_painter.h"
 #include "ui/canvas/snapping.h"
+#include "ui/shell/display_units.h"
 
 #include <cmath>
 
 namespace clevis::ui {
 namespace {
 
-void drawLines(QPainter& p, const ViewTransform& view, const QRectF& area, double step, const QColor& colour, double width)
+void drawLines(QPainter& p, const ViewTransform& view, const QRectF& area, double step, const QColor& colour,
+               double width)
 {
     p.setPen(QPen(colour, width));
     const Vec2 lo = view.toWorld(area.bottomLeft()), hi = view.toWorld(area.topRight());

@@ -8,10 +8,7 @@
 namespace clevis::ui {
 namespace {
 
-bool open(const Joint& j)
-{
-    return j.bodies[0].empty() || j.bodies[1].empty();
-}
+bool open(const Joint& j) { return j.bodies[0].empty() || j.bodies[1].empty(); }
 
 // Ground under a pin: a clevis bracket (two cheeks around the pin) standing
 // on a hatched base.

@@ -1,9 +1,9 @@
-#include "ui/shell/display_units.h"
 #include "render/drawing_symbols.h"
 #include "render/palette.h"
-#include "ui/document/sketch_geometry.h"
 #include "ui/canvas/sketch_painter.h"
 #include "ui/canvas/sketch_style.h"
+#include "ui/document/sketch_geometry.h"
+#include "ui/shell/display_units.h"
 
 #include <QtMath>
 
@@ -27,7 +27,8 @@ void drawDashpot(QPainter& p, const QPointF& a, const QPointF& b)
     p.rotate(-line.angle());
     const double mid = len / 2;
     p.drawLine(QPointF(0, 0), QPointF(mid - 8, 0));
-    p.drawPolyline(QPolygonF() << QPointF(mid + 8, -7) << QPointF(mid - 8, -7) << QPointF(mid - 8, 7) << QPointF(mid + 8, 7));
+    p.drawPolyline(QPolygonF() << QPointF(mid + 8, -7) << QPointF(mid - 8, -7) << QPointF(mid - 8, 7)
+                               << QPointF(mid + 8, 7));
     p.drawLine(QPointF(mid, -5), QPointF(mid, 5));
     p.drawLine(QPointF(mid, 0), QPointF(len, 0));
     p.restore();
@@ -52,7 +53,8 @@ public:
         halo(t.name, [&] { painter_.drawEllipse(at, r, r); });
         const ArrowStyle arrow = sketchArrow(QPen(palette::load(), 2.2));
         drawArcArrow(painter_, at, r, t.torque >= 0 ? -60 : 240, t.torque >= 0 ? 200 : -200, arrow);
-        label(at + QPointF(r, -r), QString::fromStdString(t.name) + "  " + DisplayUnits::instance().formatTorque(t.torque));
+        label(at + QPointF(r, -r),
+              QString::fromStdString(t.name) + "  " + DisplayUnits::instance().formatTorque(t.torque));
     }
     void operator()(const SpringLoad& s)
     {
@@ -61,7 +63,8 @@ public:
         painter_.setPen(QPen(palette::spring(), 1.8, Qt::SolidLine, Qt::RoundCap, Qt::RoundJoin));
         drawZigZag(painter_, a, b);
         endDots(a, b);
-        label((a + b) / 2 + QPointF(8, -8), QString::fromStdString(s.name) + "  " + DisplayUnits::instance().formatStiffness(s.stiffness));
+        label((a + b) / 2 + QPointF(8, -8),
+              QString::fromStdString(s.name) + "  " + DisplayUnits::instance().formatStiffness(s.stiffness));
     }
     void operator()(const DamperLoad& d)
     {
@@ -71,7 +74,8 @@ public:
         painter_.setBrush(Qt::NoBrush);
         drawDashpot(painter_, a, b);
         endDots(a, b);
-        label((a + b) / 2 + QPointF(8, -10), QString::fromStdString(d.name) + QStringLiteral("  %1 N·s/m").arg(d.damping, 0, 'g', 4));
+        label((a + b) / 2 + QPointF(8, -10),
+              QString::fromStdString(d.name) + QStringLiteral("  %1 N·s/m").arg(d.damping, 0, 'g', 4));
     }
     void operator()(const TorsionSpringLoad& t)
     {
@@ -86,7 +90,8 @@ public:
             coil << at + QPointF(std::cos(a) * r, -std::sin(a) * r);
         }
         painter_.drawPolyline(coil);
-        label(at + QPointF(16, 20), QString::fromStdString(t.name) + QStringLiteral("  %1 N·m/rad").arg(t.stiffness, 0, 'g', 4));
+        label(at + QPointF(16, 20),
+              QString::fromStdString(t.name) + QStringLiteral("  %1 N·m/rad").arg(t.stiffness, 0, 'g', 4));
     }
 
 private:

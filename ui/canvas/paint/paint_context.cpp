@@ -19,7 +19,8 @@ QPen PaintContext::haloPen(Selection::Kind kind, const std::string& name, double
     const QString qname = QString::fromStdString(name);
     const bool isSelected = selected.kind == kind &&
                             (kind == Selection::Kind::Load ? selected.loadIndex == loadIndex : selected.name == qname);
-    if (problems.contains(qname)) return QPen(palette::problem(), width + 4, Qt::SolidLine, Qt::RoundCap, Qt::RoundJoin);
+    if (problems.contains(qname))
+        return QPen(palette::problem(), width + 4, Qt::SolidLine, Qt::RoundCap, Qt::RoundJoin);
     if (isSelected) return QPen(palette::selection(), width + 8, Qt::SolidLine, Qt::RoundCap, Qt::RoundJoin);
     return QPen(Qt::NoPen);
 }

@@ -1,7 +1,7 @@
 #include "ui/canvas/tools/body_tool.h"
 
-#include "ui/document/mechanism_edits.h"
 #include "ui/canvas/tools/rubber_band.h"
+#include "ui/document/mechanism_edits.h"
 
 #include <QObject>
 

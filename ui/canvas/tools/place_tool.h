@@ -9,11 +9,13 @@
 
 namespace clevis::ui {
 
-using PlaceEdit = std::function<QString(Mechanism& m, const SnapResult& at, const std::string& bodyUnder, QString& problem)>;
+using PlaceEdit =
+    std::function<QString(Mechanism& m, const SnapResult& at, const std::string& bodyUnder, QString& problem)>;
 
 class PlaceTool : public Tool {
 public:
-    PlaceTool(ToolHost& host, QString hint, PlaceEdit edit) : Tool(host), hint_(std::move(hint)), edit_(std::move(edit)) {}
+    PlaceTool(ToolHost& host, QString hint, PlaceEdit edit) : Tool(host), hint_(std::move(hint)), edit_(std::move(edit))
+    {}
     QString hint() const override { return hint_; }
     void press(const Pointer& p) override;
     void move(const Pointer& p) override;

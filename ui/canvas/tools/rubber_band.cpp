@@ -1,9 +1,9 @@
 #include "ui/canvas/tools/rubber_band.h"
 
-#include "ui/shell/display_units.h"
 #include "render/palette.h"
-#include "ui/document/sketch_geometry.h"
 #include "ui/canvas/sketch_painter.h"
+#include "ui/document/sketch_geometry.h"
+#include "ui/shell/display_units.h"
 
 namespace clevis::ui {
 

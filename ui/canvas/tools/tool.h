@@ -3,9 +3,9 @@
 // document (one undo step each) and draws its own preview meanwhile.
 #pragma once
 
-#include "ui/document/mechanism_document.h"
 #include "ui/canvas/snapping.h"
 #include "ui/canvas/view_transform.h"
+#include "ui/document/mechanism_document.h"
 
 #include <QPainter>
 #include <QString>
@@ -21,8 +21,8 @@ public:
     virtual ~ToolHost() = default;
     virtual MechanismDocument* document() = 0;
     virtual const ViewTransform& view() const = 0;
-    virtual void refresh() = 0;                      // repaint the preview
-    virtual void tell(const QString& message) = 0;   // a short note in the status bar
+    virtual void refresh() = 0;                     // repaint the preview
+    virtual void tell(const QString& message) = 0;  // a short note in the status bar
 };
 
 // An edit a tool tries on a trial copy of the mechanism: returns the undo

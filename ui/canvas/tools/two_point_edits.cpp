@@ -17,10 +17,7 @@ bool betweenTwoParts(const ClickedPoint& a, const ClickedPoint& b, const QString
     return false;
 }
 
-BodyPointRef ref(const ClickedPoint& p)
-{
-    return {p.body, p.snap.point};
-}
+BodyPointRef ref(const ClickedPoint& p) { return {p.body, p.snap.point}; }
 
 }  // namespace
 

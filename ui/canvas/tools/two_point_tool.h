@@ -13,14 +13,14 @@ struct ClickedPoint {
     std::string body;  // the body drawn under the click, or "ground"
 };
 
-using TwoPointEdit = std::function<QString(Mechanism& m, const ClickedPoint& a, const ClickedPoint& b, QString& problem)>;
+using TwoPointEdit =
+    std::function<QString(Mechanism& m, const ClickedPoint& a, const ClickedPoint& b, QString& problem)>;
 
 class TwoPointTool : public Tool {
 public:
     TwoPointTool(ToolHost& host, QString firstHint, QString secondHint, TwoPointEdit edit)
         : Tool(host), hints_{std::move(firstHint), std::move(secondHint)}, edit_(std::move(edit))
-    {
-    }
+    {}
     QString hint() const override { return first_ ? hints_[1] : hints_[0]; }
     std::optional<Vec2> strokeStart() const override;
     void press(const Pointer& p) override;

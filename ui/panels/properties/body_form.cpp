@@ -1,9 +1,9 @@
-#include "ui/panels/properties/body_mass_preview.h"
-#include "ui/shell/display_units.h"
-#include "ui/panels/properties/forms.h"
 #include "core/model/materials.h"
 #include "ui/document/mechanism_edits.h"
 #include "ui/document/sketch_geometry.h"
+#include "ui/panels/properties/body_mass_preview.h"
+#include "ui/panels/properties/forms.h"
+#include "ui/shell/display_units.h"
 
 namespace clevis::ui {
 namespace {
@@ -41,14 +41,16 @@ void switchSource(Mechanism& m, const std::string& name, int source)
         b.cg = pinCentroid(m, name);
         b.inertia = 0.0;
     }
-    if (source == Section) b.section = BarSection{0.02, 0.008, *materialDensity("steel"), std::nullopt};  // a 20 × 8 mm steel flat
+    if (source == Section)
+        b.section = BarSection{0.02, 0.008, *materialDensity("steel"), std::nullopt};  // a 20 × 8 mm steel flat
 }
 
 void sectionFields(FormBuilder& f, const Body& body, const std::function<Body&(Mechanism&)>& self, const QString& undo)
 {
     const BarSection& s = *body.section;
     const auto section = [self](Mechanism& m) -> BarSection& { return *self(m).section; };
-    f.number("width", QObject::tr("Width"), s.width, lengthQuantity(), undo, [section](Mechanism& m, double v) { section(m).width = v; });
+    f.number("width", QObject::tr("Width"), s.width, lengthQuantity(), undo,
+             [section](Mechanism& m, double v) { section(m).width = v; });
     f.number("thickness", QObject::tr("Thickness"), s.thickness, lengthQuantity(), undo,
              [section](Mechanism& m, double v) { section(m).thickness = v; });
     QStringList names;
@@ -58,9 +60,10 @@ void sectionFields(FormBuilder& f, const Body& body, const std::function<Body&(M
         names << QStringLiteral("%1 (%2 kg/m³)").arg(materialLabel(mat.name)).arg(mat.density, 0, 'f', 0);
     }
     names << QObject::tr("Other (density below)");
-    f.choice("material", QObject::tr("Material"), names, current < 0 ? names.size() - 1 : current, undo, [section](Mechanism& m, int i) {
-        if (i < int(materials().size())) section(m).density = materials()[i].density;
-    });
+    f.choice("material", QObject::tr("Material"), names, current < 0 ? names.size() - 1 : current, undo,
+             [section](Mechanism& m, int i) {
+                 if (i < int(materials().size())) section(m).density = materials()[i].density;
+             });
     f.number("density", QObject::tr("Density"), s.density, plainQuantity(QStringLiteral("kg/m³"), 1), undo,
              [section](Mechanism& m, double v) { section(m).density = v; });
     f.info({}, QObject::tr("A solid bar between the body's two farthest pins."));
@@ -72,19 +75,21 @@ void typedFields(FormBuilder& f, const Body& body, const std::function<Body&(Mec
              [self](Mechanism& m, double v) { self(m).mass = v; });
     for (int axis = 0; axis < 2; ++axis) {
         const std::optional<double> value = body.cg ? std::optional<double>((*body.cg)[axis]) : std::nullopt;
-        f.optionalNumber(axis ? "cgY" : "cgX", axis ? QObject::tr("Centre y") : QObject::tr("Centre x"), value, lengthQuantity(), undo,
-                         [self, axis](Mechanism& m, std::optional<double> v) {
+        f.optionalNumber(axis ? "cgY" : "cgX", axis ? QObject::tr("Centre y") : QObject::tr("Centre x"), value,
+                         lengthQuantity(), undo, [self, axis](Mechanism& m, std::optional<double> v) {
                              Body& b = self(m);
                              if (!v) return b.cg.reset();
                              if (!b.cg) b.cg = Vec2::Zero();
                              (*b.cg)[axis] = *v;
                          });
     }
-    f.optionalNumber("inertia", QObject::tr("Inertia about centre"), body.inertia, plainQuantity(QStringLiteral("kg·m²"), 6), undo,
+    f.optionalNumber("inertia", QObject::tr("Inertia about centre"), body.inertia,
+                     plainQuantity(QStringLiteral("kg·m²"), 6), undo,
                      [self](Mechanism& m, std::optional<double> v) { self(m).inertia = v; });
 }
 
-void pointMassFields(FormBuilder& f, const Body& body, const std::function<Body&(Mechanism&)>& self, const QString& undo)
+void pointMassFields(FormBuilder& f, const Body& body, const std::function<Body&(Mechanism&)>& self,
+                     const QString& undo)
 {
     for (std::size_t i = 0; i < body.pointMasses.size(); ++i) {
         const PointMass& pm = body.pointMasses[i];
@@ -95,7 +100,8 @@ void pointMassFields(FormBuilder& f, const Body& body, const std::function<Body&
             if (v <= 0) list.erase(list.begin() + i);  // a zero mass takes the point mass away
             else list[i].mass = v;
         });
-        pointFields(f, key, QObject::tr("At"), pm.at, undo, [self, i](Mechanism& m) -> Vec2& { return self(m).pointMasses[i].at; });
+        pointFields(f, key, QObject::tr("At"), pm.at, undo,
+                    [self, i](Mechanism& m) -> Vec2& { return self(m).pointMasses[i].at; });
     }
     if (!body.pointMasses.empty()) f.info({}, QObject::tr("A mass of 0 kg removes the point mass."));
 }
@@ -118,17 +124,23 @@ void bodyForm(FormBuilder& f, const Mechanism& m, const Body& body)
 {
     const std::string name = body.name;
     const QString qname = QString::fromStdString(name);
-    const std::function<Body&(Mechanism&)> self = [name](Mechanism& m) -> Body& { return m.bodies[bodyIndex(m, name)]; };
+    const std::function<Body&(Mechanism&)> self = [name](Mechanism& m) -> Body& {
+        return m.bodies[bodyIndex(m, name)];
+    };
     const QString undo = QObject::tr("Set %1 mass").arg(qname);
-    f.heading(QObject::tr("%1 %2").arg(bodyPins(m, name).size() > 2 ? QObject::tr("Plate") : QObject::tr("Link"), qname));
-    f.text("name", QObject::tr("Name"), qname, QObject::tr("Rename %1").arg(qname), [name](Mechanism& m, const QString& v) {
-        const QString problem = nameProblem(m, v);
-        if (problem.isEmpty()) edits::renameBody(m, name, v.toStdString());
-        return problem;
-    });
+    f.heading(
+        QObject::tr("%1 %2").arg(bodyPins(m, name).size() > 2 ? QObject::tr("Plate") : QObject::tr("Link"), qname));
+    f.text("name", QObject::tr("Name"), qname, QObject::tr("Rename %1").arg(qname),
+           [name](Mechanism& m, const QString& v) {
+               const QString problem = nameProblem(m, v);
+               if (problem.isEmpty()) edits::renameBody(m, name, v.toStdString());
+               return problem;
+           });
     const auto pins = bodyPins(m, name);
-    if (pins.size() == 2) f.info(QObject::tr("Length"), DisplayUnits::instance().formatLength((pins[1] - pins[0]).norm()));
-    f.choice("massSource", QObject::tr("Mass from"), {QObject::tr("nothing (massless)"), QObject::tr("typed values"), QObject::tr("bar section")},
+    if (pins.size() == 2)
+        f.info(QObject::tr("Length"), DisplayUnits::instance().formatLength((pins[1] - pins[0]).norm()));
+    f.choice("massSource", QObject::tr("Mass from"),
+             {QObject::tr("nothing (massless)"), QObject::tr("typed values"), QObject::tr("bar section")},
              sourceOf(body), undo, [name](Mechanism& m, int i) { switchSource(m, name, i); });
     if (sourceOf(body) == Section) sectionFields(f, body, self, undo);
     if (sourceOf(body) == Typed) typedFields(f, body, self, undo);

@@ -1,28 +1,30 @@
 #include "ui/panels/properties/display_quantity.h"
 
-#include "ui/shell/display_units.h"
 #include "core/file/file_units.h"
 #include "core/model/geometry.h"
+#include "ui/shell/display_units.h"
 
 namespace clevis::ui {
 namespace {
 DisplayUnits& units() { return DisplayUnits::instance(); }
-}
+}  // namespace
 
 DisplayQuantity lengthQuantity()
 {
-    return {units().lengthSymbol(), [](double v) { return units().lengthFromSi(v); }, [](double v) { return units().lengthToSi(v); },
-            units().lengthDecimals()};
+    return {units().lengthSymbol(), [](double v) { return units().lengthFromSi(v); },
+            [](double v) { return units().lengthToSi(v); }, units().lengthDecimals()};
 }
 
 DisplayQuantity forceQuantity()
 {
-    return {units().forceSymbol(), [](double v) { return units().forceFromSi(v); }, [](double v) { return units().forceToSi(v); }, 3};
+    return {units().forceSymbol(), [](double v) { return units().forceFromSi(v); },
+            [](double v) { return units().forceToSi(v); }, 3};
 }
 
 DisplayQuantity torqueQuantity()
 {
-    return {units().torqueSymbol(), [](double v) { return units().torqueFromSi(v); }, [](double v) { return units().torqueToSi(v); }, 3};
+    return {units().torqueSymbol(), [](double v) { return units().torqueFromSi(v); },
+            [](double v) { return units().torqueToSi(v); }, 3};
 }
 
 DisplayQuantity stiffnessQuantity()
@@ -34,12 +36,14 @@ DisplayQuantity stiffnessQuantity()
 DisplayQuantity angleQuantity()
 {
     // The file's own conversions, so a typed 30° is saved as 30 again.
-    return {QStringLiteral("°"), [](double v) { return fromSi(FileUnit::Degree, v); }, [](double v) { return toSi(FileUnit::Degree, v); }, 3};
+    return {QStringLiteral("°"), [](double v) { return fromSi(FileUnit::Degree, v); },
+            [](double v) { return toSi(FileUnit::Degree, v); }, 3};
 }
 
 DisplayQuantity rotarySpeedQuantity()
 {
-    return {QStringLiteral("rpm"), [](double v) { return fromSi(FileUnit::Rpm, v); }, [](double v) { return toSi(FileUnit::Rpm, v); }, 3};
+    return {QStringLiteral("rpm"), [](double v) { return fromSi(FileUnit::Rpm, v); },
+            [](double v) { return toSi(FileUnit::Rpm, v); }, 3};
 }
 
 DisplayQuantity linearSpeedQuantity()

@@ -18,9 +18,9 @@ DisplayQuantity lengthQuantity();
 DisplayQuantity forceQuantity();
 DisplayQuantity torqueQuantity();
 DisplayQuantity stiffnessQuantity();
-DisplayQuantity angleQuantity();          // degrees, SI radians
-DisplayQuantity rotarySpeedQuantity();    // rpm, SI rad/s
-DisplayQuantity linearSpeedQuantity();    // length per second
+DisplayQuantity angleQuantity();                                       // degrees, SI radians
+DisplayQuantity rotarySpeedQuantity();                                 // rpm, SI rad/s
+DisplayQuantity linearSpeedQuantity();                                 // length per second
 DisplayQuantity plainQuantity(const QString& unit, int decimals = 4);  // already SI (kg, kg·m², s)
 
 }  // namespace clevis::ui

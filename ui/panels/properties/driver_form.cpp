@@ -1,7 +1,7 @@
 #include "core/file/file_units.h"
-#include "ui/panels/properties/forms.h"
 #include "ui/document/mechanism_edits.h"
 #include "ui/document/sketch_geometry.h"
+#include "ui/panels/properties/forms.h"
 
 namespace clevis::ui {
 namespace {
@@ -51,25 +51,30 @@ void driverForm(FormBuilder& f, const Mechanism& m, const Driver& driver)
     const bool rotary = driver.type == DriverType::Rotary;
     const QString undo = QObject::tr("Set %1 motion").arg(qname);
     f.heading(rotary ? QObject::tr("Motor %1").arg(qname) : QObject::tr("Linear drive %1").arg(qname));
-    f.text("name", QObject::tr("Name"), qname, QObject::tr("Rename %1").arg(qname), [name](Mechanism& m, const QString& v) {
-        const QString problem = nameProblem(m, v);
-        if (problem.isEmpty()) edits::renameDriver(m, name, v.toStdString());
-        return problem;
-    });
+    f.text("name", QObject::tr("Name"), qname, QObject::tr("Rename %1").arg(qname),
+           [name](Mechanism& m, const QString& v) {
+               const QString problem = nameProblem(m, v);
+               if (problem.isEmpty()) edits::renameDriver(m, name, v.toStdString());
+               return problem;
+           });
     if (!driver.joint.empty()) f.info(QObject::tr("At joint"), QString::fromStdString(driver.joint));
     for (int e = 0; e < 2; ++e)
         if (driver.ends[e]) {
-            f.info(e ? QObject::tr("Rod end on") : QObject::tr("Barrel on"), QString::fromStdString(driver.ends[e]->body));
-            pointFields(f, e ? "rodEnd" : "barrelEnd", e ? QObject::tr("Rod end") : QObject::tr("Barrel end"), driver.ends[e]->at,
-                        QObject::tr("Move %1").arg(qname), [self, e](Mechanism& m) -> Vec2& { return self(m).ends[e]->at; });
+            f.info(e ? QObject::tr("Rod end on") : QObject::tr("Barrel on"),
+                   QString::fromStdString(driver.ends[e]->body));
+            pointFields(f, e ? "rodEnd" : "barrelEnd", e ? QObject::tr("Rod end") : QObject::tr("Barrel end"),
+                        driver.ends[e]->at, QObject::tr("Move %1").arg(qname),
+                        [self, e](Mechanism& m) -> Vec2& { return self(m).ends[e]->at; });
         }
     const DisplayQuantity pos = positionQuantity(driver);
     if (!driver.joint.empty())
-        f.number("offset", QObject::tr("Position as drawn"), driver.offset, pos, undo, [self](Mechanism& m, double v) { self(m).offset = v; });
+        f.number("offset", QObject::tr("Position as drawn"), driver.offset, pos, undo,
+                 [self](Mechanism& m, double v) { self(m).offset = v; });
     f.choice("law", QObject::tr("Motion law"),
              {QObject::tr("constant speed"), QObject::tr("cycloidal rise"), QObject::tr("3-4-5 polynomial rise"),
               QObject::tr("modified trapezoid rise"), QObject::tr("table of positions")},
-             lawOf(driver.motion), undo, [self](Mechanism& m, int law) { self(m).motion = motionFor(Law(law), self(m)); });
+             lawOf(driver.motion), undo,
+             [self](Mechanism& m, int law) { self(m).motion = motionFor(Law(law), self(m)); });
     if (const auto* c = std::get_if<ConstantSpeed>(&driver.motion)) {
         f.number("speed", QObject::tr("Speed"), c->speed, rotary ? rotarySpeedQuantity() : linearSpeedQuantity(), undo,
                  [self](Mechanism& m, double v) { std::get<ConstantSpeed>(self(m).motion).speed = v; });
@@ -80,7 +85,8 @@ void driverForm(FormBuilder& f, const Mechanism& m, const Driver& driver)
     }
     if (const auto* r = std::get_if<Rise>(&driver.motion)) {
         const auto rise = [self](Mechanism& m) -> Rise& { return std::get<Rise>(self(m).motion); };
-        f.number("riseFrom", QObject::tr("From"), r->from, pos, undo, [rise](Mechanism& m, double v) { rise(m).from = v; });
+        f.number("riseFrom", QObject::tr("From"), r->from, pos, undo,
+                 [rise](Mechanism& m, double v) { rise(m).from = v; });
         f.number("riseTo", QObject::tr("To"), r->to, pos, undo, [rise](Mechanism& m, double v) { rise(m).to = v; });
         f.number("riseStart", QObject::tr("Starts at"), r->start, plainQuantity("s", 3), undo,
                  [rise](Mechanism& m, double v) { rise(m).start = v; });
@@ -93,7 +99,9 @@ void driverForm(FormBuilder& f, const Mechanism& m, const Driver& driver)
                      [table](Mechanism& m, std::vector<double> v) { table(m).time = std::move(v); });
         f.numberList("tablePosition", QObject::tr("Positions"), t->position, pos, undo,
                      [table](Mechanism& m, std::vector<double> v) { table(m).position = std::move(v); });
-        f.info({}, QObject::tr("Times increase strictly; one position per time. Between them the motion follows a smooth curve."));
+        f.info({},
+               QObject::tr(
+                   "Times increase strictly; one position per time. Between them the motion follows a smooth curve."));
     }
 }
 

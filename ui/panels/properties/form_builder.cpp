@@ -24,7 +24,8 @@ QString show(double si, const DisplayQuantity& q)
 }
 
 // A line edit with its unit after it, so every number on screen carries one.
-QLineEdit* withUnit(QFormLayout* form, const QString& key, const QString& label, const QString& value, const QString& unit)
+QLineEdit* withUnit(QFormLayout* form, const QString& key, const QString& label, const QString& value,
+                    const QString& unit)
 {
     auto* row = new QWidget;
     auto* layout = new QHBoxLayout(row);
@@ -60,7 +61,8 @@ std::optional<double> parseNumber(const QString& text)
     return v;
 }
 
-void FormBuilder::number(const QString& key, const QString& label, double si, const DisplayQuantity& q, const QString& undo, Setter set)
+void FormBuilder::number(const QString& key, const QString& label, double si, const DisplayQuantity& q,
+                         const QString& undo, Setter set)
 {
     const QString shown = show(si, q);
     QLineEdit* edit = withUnit(form_, key, label, shown, q.unit);
@@ -69,12 +71,14 @@ void FormBuilder::number(const QString& key, const QString& label, double si, co
         const auto v = parseNumber(edit->text());
         if (!v) return refused(QObject::tr("Type a number in %1.").arg(q.unit));
         const double value = q.toSi(*v);
-        commit(doc, undo, [&](Mechanism& m) { set(m, value); }, refused);
+        commit(
+            doc, undo, [&](Mechanism& m) { set(m, value); }, refused);
     });
 }
 
-void FormBuilder::optionalNumber(const QString& key, const QString& label, std::optional<double> si, const DisplayQuantity& q,
-                                 const QString& undo, std::function<void(Mechanism&, std::optional<double>)> set)
+void FormBuilder::optionalNumber(const QString& key, const QString& label, std::optional<double> si,
+                                 const DisplayQuantity& q, const QString& undo,
+                                 std::function<void(Mechanism&, std::optional<double>)> set)
 {
     const QString shown = si ? show(*si, q) : QString();
     QLineEdit* edit = withUnit(form_, key, label, shown, q.unit);
@@ -87,12 +91,14 @@ void FormBuilder::optionalNumber(const QString& key, const QString& label, std::
             if (!v) return refused(QObject::tr("Type a number in %1, or leave it empty for the default.").arg(q.unit));
             value = q.toSi(*v);
         }
-        commit(doc, undo, [&](Mechanism& m) { set(m, value); }, refused);
+        commit(
+            doc, undo, [&](Mechanism& m) { set(m, value); }, refused);
     });
 }
 
-void FormBuilder::numberList(const QString& key, const QString& label, const std::vector<double>& si, const DisplayQuantity& q,
-                             const QString& undo, std::function<void(Mechanism&, std::vector<double>)> set)
+void FormBuilder::numberList(const QString& key, const QString& label, const std::vector<double>& si,
+                             const DisplayQuantity& q, const QString& undo,
+                             std::function<void(Mechanism&, std::vector<double>)> set)
 {
     QStringList parts;
     for (double v : si) parts << show(v, q);
@@ -101,12 +107,14 @@ void FormBuilder::numberList(const QString& key, const QString& label, const std
     QObject::connect(edit, &QLineEdit::editingFinished, edit, [=, doc = doc_, refused = refused_] {
         if (edit->text() == shown) return;
         std::vector<double> values;
-        for (const QString& token : edit->text().split(QRegularExpression(QStringLiteral("[\\s;]+")), Qt::SkipEmptyParts)) {
+        for (const QString& token :
+             edit->text().split(QRegularExpression(QStringLiteral("[\\s;]+")), Qt::SkipEmptyParts)) {
             const auto v = parseNumber(token);
             if (!v) return refused(QObject::tr("\"%1\" is not a number.").arg(token));
             values.push_back(q.toSi(*v));
         }
-        commit(doc, undo, [&](Mechanism& m) { set(m, values); }, refused);
+        commit(
+            doc, undo, [&](Mechanism& m) { set(m, values); }, refused);
     });
 }
 
@@ -131,8 +139,8 @@ void FormBuilder::text(const QString& key, const QString& label, const QString& 
     });
 }
 
-void FormBuilder::choice(const QString& key, const QString& label, const QStringList& options, int current, const QString& undo,
-                         std::function<void(Mechanism&, int)> set)
+void FormBuilder::choice(const QString& key, const QString& label, const QStringList& options, int current,
+                         const QString& undo, std::function<void(Mechanism&, int)> set)
 {
     auto* box = new QComboBox;
     box->setObjectName(key);
@@ -141,7 +149,8 @@ void FormBuilder::choice(const QString& key, const QString& label, const QString
     form_->addRow(label, box);
     QObject::connect(box, &QComboBox::activated, box, [=, doc = doc_, refused = refused_](int index) {
         if (index == current) return;
-        commit(doc, undo, [&](Mechanism& m) { set(m, index); }, refused);
+        commit(
+            doc, undo, [&](Mechanism& m) { set(m, index); }, refused);
     });
 }
 
@@ -153,7 +162,8 @@ void FormBuilder::check(const QString& key, const QString& label, bool value, co
     box->setChecked(value);
     form_->addRow(label, box);
     QObject::connect(box, &QCheckBox::toggled, box, [=, doc = doc_, refused = refused_](bool on) {
-        commit(doc, undo, [&](Mechanism& m) { set(m, on); }, refused);
+        commit(
+            doc, undo, [&](Mechanism& m) { set(m, on); }, refused);
     });
 }
 

@@ -26,22 +26,25 @@ public:
     using Refused = std::function<void(const QString& why)>;
 
     FormBuilder(QFormLayout* form, MechanismDocument* doc, Refused refused)
-        : form_(form), doc_(doc), refused_(std::move(refused)) {}
+        : form_(form), doc_(doc), refused_(std::move(refused))
+    {}
 
     // `undo` names the command, e.g. "Set crank mass". Object names (for
     // tests and accessibility) come from `key`.
-    void number(const QString& key, const QString& label, double si, const DisplayQuantity& q, const QString& undo, Setter set);
+    void number(const QString& key, const QString& label, double si, const DisplayQuantity& q, const QString& undo,
+                Setter set);
     // An empty field means "not given" (nullopt).
-    void optionalNumber(const QString& key, const QString& label, std::optional<double> si, const DisplayQuantity& q, const QString& undo,
-                        std::function<void(Mechanism&, std::optional<double>)> set);
+    void optionalNumber(const QString& key, const QString& label, std::optional<double> si, const DisplayQuantity& q,
+                        const QString& undo, std::function<void(Mechanism&, std::optional<double>)> set);
     // A list of numbers separated by commas or spaces.
-    void numberList(const QString& key, const QString& label, const std::vector<double>& si, const DisplayQuantity& q, const QString& undo,
-                    std::function<void(Mechanism&, std::vector<double>)> set);
+    void numberList(const QString& key, const QString& label, const std::vector<double>& si, const DisplayQuantity& q,
+                    const QString& undo, std::function<void(Mechanism&, std::vector<double>)> set);
     void text(const QString& key, const QString& label, const QString& value, const QString& undo,
               std::function<QString(Mechanism&, const QString&)> set);  // returns a problem, or empty
     void choice(const QString& key, const QString& label, const QStringList& options, int current, const QString& undo,
                 std::function<void(Mechanism&, int)> set);
-    void check(const QString& key, const QString& label, bool value, const QString& undo, std::function<void(Mechanism&, bool)> set);
+    void check(const QString& key, const QString& label, bool value, const QString& undo,
+               std::function<void(Mechanism&, bool)> set);
     void info(const QString& label, const QString& value);
     void heading(const QString& title);
 

@@ -1,6 +1,6 @@
-#include "ui/panels/properties/forms.h"
 #include "ui/document/mechanism_edits.h"
 #include "ui/document/sketch_geometry.h"
+#include "ui/panels/properties/forms.h"
 
 namespace clevis::ui {
 namespace {
@@ -27,17 +27,19 @@ void jointForm(FormBuilder& f, const Mechanism& m, const Joint& joint)
     const auto self = [name](Mechanism& m) -> Joint& { return m.joints[jointIndex(m, name)]; };
     const char* kinds[] = {"Pin", "Slider", "Pin in slot"};
     f.heading(QObject::tr("%1 %2").arg(QObject::tr(kinds[int(joint.type)]), qname));
-    f.text("name", QObject::tr("Name"), qname, QObject::tr("Rename %1").arg(qname), [name](Mechanism& m, const QString& v) {
-        const QString problem = nameProblem(m, v);
-        if (problem.isEmpty()) edits::renameJoint(m, name, v.toStdString());
-        return problem;
-    });
+    f.text("name", QObject::tr("Name"), qname, QObject::tr("Rename %1").arg(qname),
+           [name](Mechanism& m, const QString& v) {
+               const QString problem = nameProblem(m, v);
+               if (problem.isEmpty()) edits::renameJoint(m, name, v.toStdString());
+               return problem;
+           });
     const QStringList choices = bodyChoices(m);
     const QString roles[2][3] = {{QObject::tr("First body"), QObject::tr("Guide"), QObject::tr("Slotted body")},
                                  {QObject::tr("Second body"), QObject::tr("Block"), QObject::tr("Pin's body")}};
     for (int side = 0; side < 2; ++side)
-        f.choice(side ? "secondBody" : "firstBody", roles[side][int(joint.type)], choices, choiceIndex(choices, joint.bodies[side]),
-                 QObject::tr("Connect %1").arg(qname), [self, side, choices](Mechanism& m, int i) {
+        f.choice(side ? "secondBody" : "firstBody", roles[side][int(joint.type)], choices,
+                 choiceIndex(choices, joint.bodies[side]), QObject::tr("Connect %1").arg(qname),
+                 [self, side, choices](Mechanism& m, int i) {
                      self(m).bodies[side] = i == 0 ? std::string() : choices[i].toStdString();
                  });
     // Moved like a drag, so a stack of joints at one point stays together.
@@ -52,8 +54,10 @@ void jointForm(FormBuilder& f, const Mechanism& m, const Joint& joint)
     f.number("atY", QObject::tr("Position y"), joint.at.y(), lengthQuantity(), QObject::tr("Move %1").arg(qname),
              [moveTo](Mechanism& m, double v) { moveTo(m, 1, v); });
     if (joint.type != JointType::Pin)
-        f.number("axis", joint.type == JointType::Slider ? QObject::tr("Slide direction") : QObject::tr("Slot direction"), joint.axisDeg,
-                 plainQuantity(QStringLiteral("°"), 3), QObject::tr("Turn %1").arg(qname), [self](Mechanism& m, double deg) { self(m).axisDeg = deg; });
+        f.number("axis",
+                 joint.type == JointType::Slider ? QObject::tr("Slide direction") : QObject::tr("Slot direction"),
+                 joint.axisDeg, plainQuantity(QStringLiteral("°"), 3), QObject::tr("Turn %1").arg(qname),
+                 [self](Mechanism& m, double deg) { self(m).axisDeg = deg; });
     if (joint.bodies[0].empty() || joint.bodies[1].empty())
         f.info({}, QObject::tr("This pin is open: draw a link to it, or pick its bodies above."));
 }

@@ -1,6 +1,6 @@
-#include "ui/shell/display_units.h"
-#include "ui/panels/properties/forms.h"
 #include "ui/document/sketch_geometry.h"
+#include "ui/panels/properties/forms.h"
+#include "ui/shell/display_units.h"
 
 namespace clevis::ui {
 namespace {
@@ -12,10 +12,7 @@ QStringList movingBodies(const Mechanism& m)
     return names;
 }
 
-QStringList allBodies(const Mechanism& m)
-{
-    return QStringList{QString::fromUtf8(kGroundName)} + movingBodies(m);
-}
+QStringList allBodies(const Mechanism& m) { return QStringList{QString::fromUtf8(kGroundName)} + movingBodies(m); }
 
 template <typename T>
 std::function<T&(Mechanism&)> loadAt(int index)
@@ -37,7 +34,8 @@ void endFields(FormBuilder& f, const Mechanism& m, const QString& key, const QSt
                const QString& undo, std::function<BodyPointRef&(Mechanism&)> ref)
 {
     const QStringList bodies = allBodies(m);
-    f.choice(key + "Body", label + QObject::tr(" on"), bodies, std::max(0, int(bodies.indexOf(QString::fromStdString(end.body)))), undo,
+    f.choice(key + "Body", label + QObject::tr(" on"), bodies,
+             std::max(0, int(bodies.indexOf(QString::fromStdString(end.body)))), undo,
              [ref, bodies](Mechanism& m, int i) { ref(m).body = bodies[i].toStdString(); });
     pointFields(f, key, label, end.at, undo, [ref](Mechanism& m) -> Vec2& { return ref(m).at; });
 }
@@ -53,15 +51,20 @@ struct LoadFormVisitor {
         const QString undo = QObject::tr("Set force %1").arg(QString::fromStdString(load.name));
         f.heading(QObject::tr("Force %1").arg(QString::fromStdString(load.name)));
         nameField(f, load.name, [self](Mechanism& m) -> std::string& { return self(m).name; });
-        endFields(f, m, "point", QObject::tr("Acts"), load.point, undo, [self](Mechanism& m) -> BodyPointRef& { return self(m).point; });
-        f.number("forceX", QObject::tr("Force x"), load.force.x(), forceQuantity(), undo, [self](Mechanism& m, double v) { self(m).force.x() = v; });
-        f.number("forceY", QObject::tr("Force y"), load.force.y(), forceQuantity(), undo, [self](Mechanism& m, double v) { self(m).force.y() = v; });
+        endFields(f, m, "point", QObject::tr("Acts"), load.point, undo,
+                  [self](Mechanism& m) -> BodyPointRef& { return self(m).point; });
+        f.number("forceX", QObject::tr("Force x"), load.force.x(), forceQuantity(), undo,
+                 [self](Mechanism& m, double v) { self(m).force.x() = v; });
+        f.number("forceY", QObject::tr("Force y"), load.force.y(), forceQuantity(), undo,
+                 [self](Mechanism& m, double v) { self(m).force.y() = v; });
         f.info(QObject::tr("Magnitude"), QStringLiteral("%1 at %2°")
                                              .arg(DisplayUnits::instance().formatForce(load.force.norm()))
                                              .arg(angleDeg(Vec2::Zero(), load.force), 0, 'f', 1));
         f.check("turnsWithBody", QObject::tr("Turns with the body"), load.turnsWithBody, undo,
                 [self](Mechanism& m, bool on) { self(m).turnsWithBody = on; });
-        if (load.profile) f.info(QObject::tr("Profile"), QObject::tr("scaled over the cycle (%1 points, edit in the file)").arg(load.profile->at.size()));
+        if (load.profile)
+            f.info(QObject::tr("Profile"),
+                   QObject::tr("scaled over the cycle (%1 points, edit in the file)").arg(load.profile->at.size()));
     }
     void operator()(const TorqueLoad& load) const
     {
@@ -70,8 +73,8 @@ struct LoadFormVisitor {
         f.heading(QObject::tr("Torque %1").arg(QString::fromStdString(load.name)));
         nameField(f, load.name, [self](Mechanism& m) -> std::string& { return self(m).name; });
         const QStringList bodies = movingBodies(m);
-        f.choice("body", QObject::tr("On"), bodies, std::max(0, int(bodies.indexOf(QString::fromStdString(load.body)))), undo,
-                 [self, bodies](Mechanism& m, int i) { self(m).body = bodies[i].toStdString(); });
+        f.choice("body", QObject::tr("On"), bodies, std::max(0, int(bodies.indexOf(QString::fromStdString(load.body)))),
+                 undo, [self, bodies](Mechanism& m, int i) { self(m).body = bodies[i].toStdString(); });
         f.number("torque", QObject::tr("Torque (counter-clockwise +)"), load.torque, torqueQuantity(), undo,
                  [self](Mechanism& m, double v) { self(m).torque = v; });
     }
@@ -81,12 +84,15 @@ struct LoadFormVisitor {
         const QString undo = QObject::tr("Set spring %1").arg(QString::fromStdString(load.name));
         f.heading(QObject::tr("Spring %1").arg(QString::fromStdString(load.name)));
         nameField(f, load.name, [self](Mechanism& m) -> std::string& { return self(m).name; });
-        f.number("stiffness", QObject::tr("Rate"), load.stiffness, stiffnessQuantity(), undo, [self](Mechanism& m, double v) { self(m).stiffness = v; });
+        f.number("stiffness", QObject::tr("Rate"), load.stiffness, stiffnessQuantity(), undo,
+                 [self](Mechanism& m, double v) { self(m).stiffness = v; });
         f.number("freeLength", QObject::tr("Free length"), load.freeLength, lengthQuantity(), undo,
                  [self](Mechanism& m, double v) { self(m).freeLength = v; });
         f.info(QObject::tr("Length as drawn"), DisplayUnits::instance().formatLength((load.b.at - load.a.at).norm()));
-        endFields(f, m, "endA", QObject::tr("End A"), load.a, undo, [self](Mechanism& m) -> BodyPointRef& { return self(m).a; });
-        endFields(f, m, "endB", QObject::tr("End B"), load.b, undo, [self](Mechanism& m) -> BodyPointRef& { return self(m).b; });
+        endFields(f, m, "endA", QObject::tr("End A"), load.a, undo,
+                  [self](Mechanism& m) -> BodyPointRef& { return self(m).a; });
+        endFields(f, m, "endB", QObject::tr("End B"), load.b, undo,
+                  [self](Mechanism& m) -> BodyPointRef& { return self(m).b; });
     }
     void operator()(const DamperLoad& load) const
     {
@@ -96,8 +102,10 @@ struct LoadFormVisitor {
         nameField(f, load.name, [self](Mechanism& m) -> std::string& { return self(m).name; });
         f.number("damping", QObject::tr("Damping"), load.damping, plainQuantity(QStringLiteral("N·s/m"), 3), undo,
                  [self](Mechanism& m, double v) { self(m).damping = v; });
-        endFields(f, m, "endA", QObject::tr("End A"), load.a, undo, [self](Mechanism& m) -> BodyPointRef& { return self(m).a; });
-        endFields(f, m, "endB", QObject::tr("End B"), load.b, undo, [self](Mechanism& m) -> BodyPointRef& { return self(m).b; });
+        endFields(f, m, "endA", QObject::tr("End A"), load.a, undo,
+                  [self](Mechanism& m) -> BodyPointRef& { return self(m).a; });
+        endFields(f, m, "endB", QObject::tr("End B"), load.b, undo,
+                  [self](Mechanism& m) -> BodyPointRef& { return self(m).b; });
     }
     void operator()(const TorsionSpringLoad& load) const
     {

@@ -1,5 +1,5 @@
-#include "ui/panels/properties/forms.h"
 #include "ui/document/sketch_geometry.h"
+#include "ui/panels/properties/forms.h"
 
 #include <algorithm>
 #include <cmath>
@@ -21,8 +21,10 @@ QString nameProblem(const Mechanism& m, const QString& name)
 void pointFields(FormBuilder& f, const QString& key, const QString& label, const Vec2& at, const QString& undo,
                  std::function<Vec2&(Mechanism&)> point)
 {
-    f.number(key + "X", label + " x", at.x(), lengthQuantity(), undo, [point](Mechanism& m, double v) { point(m).x() = v; });
-    f.number(key + "Y", label + " y", at.y(), lengthQuantity(), undo, [point](Mechanism& m, double v) { point(m).y() = v; });
+    f.number(key + "X", label + " x", at.x(), lengthQuantity(), undo,
+             [point](Mechanism& m, double v) { point(m).x() = v; });
+    f.number(key + "Y", label + " y", at.y(), lengthQuantity(), undo,
+             [point](Mechanism& m, double v) { point(m).y() = v; });
 }
 
 void mechanismForm(FormBuilder& f, const Mechanism& m)
@@ -33,13 +35,16 @@ void mechanismForm(FormBuilder& f, const Mechanism& m)
                m.name = v.toStdString();
                return QString();
            });
-    f.check("gravity", QObject::tr("Gravity"), m.gravity.norm() > 0, QObject::tr("Switch gravity"), [](Mechanism& m, bool on) {
-        m.gravity = on ? Vec2(0.0, -9.80665) : Vec2::Zero();  // standard gravity, by definition
-    });
+    f.check("gravity", QObject::tr("Gravity"), m.gravity.norm() > 0, QObject::tr("Switch gravity"),
+            [](Mechanism& m, bool on) {
+                m.gravity = on ? Vec2(0.0, -9.80665) : Vec2::Zero();  // standard gravity, by definition
+            });
     f.number("cycleSteps", QObject::tr("Steps per cycle"), m.cycle.steps, plainQuantity(QObject::tr("steps"), 0),
-             QObject::tr("Set steps per cycle"), [](Mechanism& m, double v) { m.cycle.steps = std::max(1, int(std::lround(v))); });
+             QObject::tr("Set steps per cycle"),
+             [](Mechanism& m, double v) { m.cycle.steps = std::max(1, int(std::lround(v))); });
     f.optionalNumber("cycleDuration", QObject::tr("Cycle duration"), m.cycle.duration, plainQuantity("s", 3),
-                     QObject::tr("Set cycle duration"), [](Mechanism& m, std::optional<double> v) { m.cycle.duration = v; });
+                     QObject::tr("Set cycle duration"),
+                     [](Mechanism& m, std::optional<double> v) { m.cycle.duration = v; });
     f.info({}, QObject::tr("Select a part on the canvas or in the Parts list to edit it."));
 }
 
