@@ -3,25 +3,24 @@
 // shows its diagram; the peak table jumps to a peak; the plots draw the
 // report's panes and keep the joint choice in the view; the hover readout
 // leaves the window its size.
-#include "ui/analysis/analysis_state.h"
+#include "core/file/mechanism_file.h"
 #include "render/cycle_axis.h"
+#include "ui/analysis/analysis_state.h"
+#include "ui/document/mechanism_document.h"
 #include "ui/results/drive_scrubber.h"
 #include "ui/results/free_body_view.h"
-#include "ui/document/mechanism_document.h"
-#include "core/file/mechanism_file.h"
 #include "ui/results/peak_table.h"
 #include "ui/results/plot_stack.h"
-#include "ui/results/results_units.h"
 #include "ui/shell/display_units.h"
 
+#include <qcustomplot.h>
 #include <QApplication>
 #include <QCheckBox>
-#include <QSlider>
 #include <QDoubleSpinBox>
 #include <QListWidget>
+#include <QSlider>
 #include <QTest>
 #include <QVBoxLayout>
-#include <qcustomplot.h>
 
 #include <gtest/gtest.h>
 
@@ -39,7 +38,8 @@ struct Session {
 
     Session()
     {
-        doc.reset(loadMechanismFile(std::string(CLEVIS_SAMPLES_DIR) + "/punch_press.json").mechanism, "punch_press.json");
+        doc.reset(loadMechanismFile(std::string(CLEVIS_SAMPLES_DIR) + "/punch_press.json").mechanism,
+                  "punch_press.json");
         analysis = std::make_unique<AnalysisState>(&doc);
         analysis->waitForIdle();
         QCoreApplication::processEvents();
@@ -133,7 +133,8 @@ TEST(ResultsWidgets, PeakTableRowJumpsToThePeak)
     const int row = 1;  // crank_pin, the second joint
     const int expected = s.analysis->summary().joints[1].peak.step;
     ASSERT_GT(expected, 0);
-    QTest::mouseClick(table.viewport(), Qt::LeftButton, Qt::NoModifier, table.visualRect(table.model()->index(row, 0)).center());
+    QTest::mouseClick(table.viewport(), Qt::LeftButton, Qt::NoModifier,
+                      table.visualRect(table.model()->index(row, 0)).center());
     EXPECT_EQ(s.analysis->currentStep(), expected);
 }
 
