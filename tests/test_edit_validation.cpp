@@ -4,6 +4,7 @@
 // loads back as the same mechanism; a half-drawn sketch saves and reopens.
 #include "core/file/mechanism_file.h"
 #include "core/model/model_error.h"
+#include "tests/drawn_four_bar.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/document/mechanism_edits.h"
@@ -30,15 +31,7 @@ namespace {
 // A crank–rocker four-bar as the tools draw it, with typed masses.
 Mechanism fourBar()
 {
-    Mechanism m;
-    const std::string o1 = edits::addGroundPin(m, {0.0, 0.0});
-    const std::string o2 = edits::addGroundPin(m, {0.2, 0.0});
-    const std::string a = edits::addPin(m, {0.03, 0.04});
-    const std::string b = edits::addPin(m, {0.17, 0.12});
-    edits::addBody(m, {o1, a});
-    edits::addBody(m, {a, b});
-    edits::addBody(m, {b, o2});
-    edits::addRotaryMotor(m, o1);
+    Mechanism m = drawnFourBar();
     edits::renameBody(m, "link3", "rocker");
     m.bodies[2].mass = 1.5;
     m.bodies[2].cg = Vec2(0.18, 0.06);
@@ -63,7 +56,8 @@ TEST(PropertyEditorChecks, ANegativeMassIsRefusedNamingTheBodyAndNothingChanges)
     EXPECT_EQ(doc.mechanism().bodies[2].mass, 1.5);
     EXPECT_EQ(doc.undoStack()->count(), 0);
     EXPECT_FALSE(doc.isModified());
-    ASSERT_TRUE(QTest::qWaitFor([&] { return editor.findChild<QLabel*>(QStringLiteral("editRefusal")) != nullptr; }, 2000));
+    ASSERT_TRUE(
+        QTest::qWaitFor([&] { return editor.findChild<QLabel*>(QStringLiteral("editRefusal")) != nullptr; }, 2000));
     const QString why = editor.findChild<QLabel*>(QStringLiteral("editRefusal"))->text();
     EXPECT_TRUE(why.startsWith(QStringLiteral("Body “rocker”, mass: must be a finite number >= 0")))
         << why.toStdString();
@@ -80,13 +74,15 @@ TEST(PropertyEditorChecks, TheRefusalGoesWithTheNextAcceptedEdit)
     auto* mass = editor.findChild<QLineEdit*>(QStringLiteral("mass"));
     mass->setText(QStringLiteral("-2"));
     emit mass->editingFinished();
-    ASSERT_TRUE(QTest::qWaitFor([&] { return editor.findChild<QLabel*>(QStringLiteral("editRefusal")) != nullptr; }, 2000));
+    ASSERT_TRUE(
+        QTest::qWaitFor([&] { return editor.findChild<QLabel*>(QStringLiteral("editRefusal")) != nullptr; }, 2000));
 
     mass = editor.findChild<QLineEdit*>(QStringLiteral("mass"));
     mass->setText(QStringLiteral("2"));
     emit mass->editingFinished();
     EXPECT_EQ(doc.mechanism().bodies[2].mass, 2.0);
-    EXPECT_TRUE(QTest::qWaitFor([&] { return editor.findChild<QLabel*>(QStringLiteral("editRefusal")) == nullptr; }, 2000));
+    EXPECT_TRUE(
+        QTest::qWaitFor([&] { return editor.findChild<QLabel*>(QStringLiteral("editRefusal")) == nullptr; }, 2000));
 }
 
 // ---- random runs of edits ----
@@ -102,16 +98,23 @@ public:
         case 0: return apply("Add ground pin", [&](Mechanism& m) { edits::addGroundPin(m, point()); });
         case 1: return apply("Add pin", [&](Mechanism& m) { edits::addPin(m, point()); });
         case 2: return addBody();
-        case 3: return apply("Add slider", [&](Mechanism& m) { edits::addSlider(m, bodyOrGround(m), point(), angle()); });
-        case 4: return apply("Add pin in slot", [&](Mechanism& m) { edits::addPinInSlot(m, bodyOrGround(m), point(), angle()); });
+        case 3:
+            return apply("Add slider", [&](Mechanism& m) { edits::addSlider(m, bodyOrGround(m), point(), angle()); });
+        case 4:
+            return apply("Add pin in slot",
+                         [&](Mechanism& m) { edits::addPinInSlot(m, bodyOrGround(m), point(), angle()); });
         case 5: return addDriver();
         case 6: return addLoad();
         case 7: return moveJoint();
         case 8: return removePart();
         case 9: return rename();
-        case 10: case 11: return setValue();
-        case 12: return apply("Add point mass", [&](Mechanism& m) { edits::addPointMass(m, bodyOrGround(m), point(), number()); });
-        case 13: case 14: doc_.undoStack()->undo(); return "undo";
+        case 10:
+        case 11: return setValue();
+        case 12:
+            return apply("Add point mass",
+                         [&](Mechanism& m) { edits::addPointMass(m, bodyOrGround(m), point(), number()); });
+        case 13:
+        case 14: doc_.undoStack()->undo(); return "undo";
         default: doc_.undoStack()->redo(); return "redo";
         }
     }
@@ -119,7 +122,7 @@ public:
 private:
     int pick(int n) { return std::uniform_int_distribution<int>(0, n - 1)(rng_); }
     double number() { return std::uniform_real_distribution<double>(-0.5, 2.0)(rng_); }  // now and then out of range
-    Vec2 point() { return {0.01 * pick(30), 0.01 * pick(30)}; }  // on a grid, so that pins meet
+    Vec2 point() { return {0.01 * pick(30), 0.01 * pick(30)}; }                          // on a grid, so that pins meet
     double angle() { return 15.0 * pick(24); }
 
     template <class List>
@@ -227,7 +230,9 @@ private:
                 m.bodies[body].mass.reset(), m.bodies[body].cg.reset(), m.bodies[body].inertia.reset();
                 m.bodies[body].section = BarSection{v / 10.0, 0.008, 7850.0, std::nullopt};
             });
-        case 2: return apply("Set steps", [steps = pick(3) == 0 ? 0 : 1 + pick(720)](Mechanism& m) { m.cycle.steps = steps; });
+        case 2:
+            return apply("Set steps",
+                         [steps = pick(3) == 0 ? 0 : 1 + pick(720)](Mechanism& m) { m.cycle.steps = steps; });
         case 3: return apply("Set duration", [=](Mechanism& m) { m.cycle.duration = v; });
         case 4:
             if (m.loads.empty()) return "set stiffness (no load)";
@@ -258,10 +263,12 @@ TEST(RandomEditRuns, EverySavedStateLoadsBackAsTheDocument)
             try {
                 reopened = parseMechanism(text).mechanism;
             } catch (const ModelError& e) {
-                FAIL() << "seed " << seed << ": the saved file does not open: " << e.what() << "\nedits:\n" << log.str();
+                FAIL() << "seed " << seed << ": the saved file does not open: " << e.what() << "\nedits:\n"
+                       << log.str();
             }
             ASSERT_EQ(reopened, doc.mechanism()) << "seed " << seed << ": the file reopens as another mechanism\n"
-                                                 << text << "\nedits:\n" << log.str();
+                                                 << text << "\nedits:\n"
+                                                 << log.str();
         }
     }
 }

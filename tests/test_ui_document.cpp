@@ -1,9 +1,10 @@
 // The document and its edits: each kind of edit, undone and redone, gives
 // back exactly the saved JSON it started from and the one it produced.
+#include "core/file/mechanism_file.h"
 #include "core/solver/compiled_mechanism.h"
+#include "tests/drawn_four_bar.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/document/mechanism_edits.h"
-#include "core/file/mechanism_file.h"
 #include "ui/document/sketch_geometry.h"
 
 #include <gtest/gtest.h>
@@ -15,25 +16,7 @@ using namespace clevis::ui;
 
 namespace {
 
-std::string saved(const MechanismDocument& doc)
-{
-    return mechanismToJson(doc.mechanism()).dump();
-}
-
-// A four-bar as the tools build it: two ground pins, two pins, three links, a motor.
-Mechanism drawnFourBar()
-{
-    Mechanism m;
-    const std::string o1 = edits::addGroundPin(m, {0.0, 0.0});
-    const std::string o2 = edits::addGroundPin(m, {0.2, 0.0});
-    const std::string a = edits::addPin(m, {0.03, 0.04});
-    const std::string b = edits::addPin(m, {0.17, 0.12});
-    edits::addBody(m, {o1, a});
-    edits::addBody(m, {a, b});
-    edits::addBody(m, {b, o2});
-    edits::addRotaryMotor(m, o1);
-    return m;
-}
+std::string saved(const MechanismDocument& doc) { return mechanismToJson(doc.mechanism()).dump(); }
 
 struct NamedEdit {
     const char* name;
@@ -64,34 +47,85 @@ const Selection bodySel{Selection::Kind::Body, "link2", -1};
 
 INSTANTIATE_TEST_SUITE_P(
     EveryKindOfEdit, EditRoundTrip,
-    ::testing::Values(
-        NamedEdit{"Add ground pin", [](Mechanism& m) { edits::addGroundPin(m, {0.3, 0.0}); }},
-        NamedEdit{"Add pin", [](Mechanism& m) { edits::addPin(m, {0.1, 0.2}); }},
-        NamedEdit{"Add link", [](Mechanism& m) { edits::addBody(m, {"P1", "O2"}); }},
-        NamedEdit{"Add plate", [](Mechanism& m) { edits::addBody(m, {"P1", "P2", edits::addPin(m, {0.1, 0.2})}); }},
-        NamedEdit{"Add slider", [](Mechanism& m) { edits::addSlider(m, kGroundName, {0.3, 0.1}, 15.0); }},
-        NamedEdit{"Add pin in slot", [](Mechanism& m) { edits::addPinInSlot(m, "link2", {0.1, 0.08}, 30.0); }},
-        NamedEdit{"Add motor", [](Mechanism& m) { edits::addRotaryMotor(m, "O2"); }},
-        NamedEdit{"Add slider drive", [](Mechanism& m) { edits::addSliderDrive(m, edits::addSlider(m, kGroundName, {0.3, 0.1}, 0.0)); }},
-        NamedEdit{"Add cylinder", [](Mechanism& m) { edits::addCylinder(m, {kGroundName, {0.1, -0.05}}, {"link3", {0.18, 0.06}}); }},
-        NamedEdit{"Add force", [](Mechanism& m) { edits::addForce(m, {"link2", {0.1, 0.08}}, {0.0, -150.0}); }},
-        NamedEdit{"Add torque", [](Mechanism& m) { edits::addTorque(m, "link3", -4.0); }},
-        NamedEdit{"Add spring", [](Mechanism& m) { edits::addSpring(m, {kGroundName, {0.1, 0.2}}, {"link2", {0.1, 0.08}}); }},
-        NamedEdit{"Add damper", [](Mechanism& m) { edits::addDamper(m, {kGroundName, {0.1, 0.2}}, {"link2", {0.1, 0.08}}); }},
-        NamedEdit{"Add point mass", [](Mechanism& m) { edits::addPointMass(m, "link1", {0.015, 0.02}, 0.3); }},
-        NamedEdit{"Move pin", [](Mechanism& m) { edits::moveJoint(m, jointIndex(m, "P2"), {0.18, 0.13}); }},
-        NamedEdit{"Delete link", [](Mechanism& m) { edits::remove(m, bodySel); }},
-        NamedEdit{"Delete pin", [](Mechanism& m) { edits::remove(m, {Selection::Kind::Joint, "O1", -1}); }},
-        NamedEdit{"Delete motor", [](Mechanism& m) { edits::remove(m, {Selection::Kind::Driver, "motor1", -1}); }},
-        NamedEdit{"Rename body", [](Mechanism& m) { edits::renameBody(m, "link1", "crank"); }},
-        NamedEdit{"Rename joint", [](Mechanism& m) { edits::renameJoint(m, "O1", "A0"); }},
-        NamedEdit{"Rename driver", [](Mechanism& m) { edits::renameDriver(m, "motor1", "gearmotor"); }},
-        NamedEdit{"Set mass", [](Mechanism& m) {
-                      m.bodies[0].mass = 1.5;
-                      m.bodies[0].cg = Vec2(0.015, 0.02);
-                  }},
-        NamedEdit{"Set section", [](Mechanism& m) { m.bodies[1].section = BarSection{0.02, 0.008, 2700.0, std::nullopt}; }},
-        NamedEdit{"Set motion", [](Mechanism& m) { m.drivers[0].motion = Rise{CamLaw::Cycloidal, 0.0, 1.0, 0.0, 1.5}; }}),
+    ::testing::Values(NamedEdit{"Add ground pin",
+                                [](Mechanism& m) {
+                                    edits::addGroundPin(m, {0.3, 0.0});
+                                }},
+                      NamedEdit{"Add pin",
+                                [](Mechanism& m) {
+                                    edits::addPin(m, {0.1, 0.2});
+                                }},
+                      NamedEdit{"Add link",
+                                [](Mechanism& m) {
+                                    edits::addBody(m, {"P1", "O2"});
+                                }},
+                      NamedEdit{"Add plate",
+                                [](Mechanism& m) {
+                                    edits::addBody(m, {"P1", "P2", edits::addPin(m, {0.1, 0.2})});
+                                }},
+                      NamedEdit{"Add slider",
+                                [](Mechanism& m) {
+                                    edits::addSlider(m, kGroundName, {0.3, 0.1}, 15.0);
+                                }},
+                      NamedEdit{"Add pin in slot",
+                                [](Mechanism& m) {
+                                    edits::addPinInSlot(m, "link2", {0.1, 0.08}, 30.0);
+                                }},
+                      NamedEdit{"Add motor", [](Mechanism& m) { edits::addRotaryMotor(m, "O2"); }},
+                      NamedEdit{"Add slider drive",
+                                [](Mechanism& m) {
+                                    edits::addSliderDrive(m, edits::addSlider(m, kGroundName, {0.3, 0.1}, 0.0));
+                                }},
+                      NamedEdit{"Add cylinder",
+                                [](Mechanism& m) {
+                                    edits::addCylinder(m, {kGroundName, {0.1, -0.05}}, {"link3", {0.18, 0.06}});
+                                }},
+                      NamedEdit{"Add force",
+                                [](Mechanism& m) {
+                                    edits::addForce(m, {"link2", {0.1, 0.08}}, {0.0, -150.0});
+                                }},
+                      NamedEdit{"Add torque", [](Mechanism& m) { edits::addTorque(m, "link3", -4.0); }},
+                      NamedEdit{"Add spring",
+                                [](Mechanism& m) {
+                                    edits::addSpring(m, {kGroundName, {0.1, 0.2}}, {"link2", {0.1, 0.08}});
+                                }},
+                      NamedEdit{"Add damper",
+                                [](Mechanism& m) {
+                                    edits::addDamper(m, {kGroundName, {0.1, 0.2}}, {"link2", {0.1, 0.08}});
+                                }},
+                      NamedEdit{"Add point mass",
+                                [](Mechanism& m) {
+                                    edits::addPointMass(m, "link1", {0.015, 0.02}, 0.3);
+                                }},
+                      NamedEdit{"Move pin",
+                                [](Mechanism& m) {
+                                    edits::moveJoint(m, jointIndex(m, "P2"), {0.18, 0.13});
+                                }},
+                      NamedEdit{"Delete link", [](Mechanism& m) { edits::remove(m, bodySel); }},
+                      NamedEdit{"Delete pin",
+                                [](Mechanism& m) {
+                                    edits::remove(m, {Selection::Kind::Joint, "O1", -1});
+                                }},
+                      NamedEdit{"Delete motor",
+                                [](Mechanism& m) {
+                                    edits::remove(m, {Selection::Kind::Driver, "motor1", -1});
+                                }},
+                      NamedEdit{"Rename body", [](Mechanism& m) { edits::renameBody(m, "link1", "crank"); }},
+                      NamedEdit{"Rename joint", [](Mechanism& m) { edits::renameJoint(m, "O1", "A0"); }},
+                      NamedEdit{"Rename driver", [](Mechanism& m) { edits::renameDriver(m, "motor1", "gearmotor"); }},
+                      NamedEdit{"Set mass",
+                                [](Mechanism& m) {
+                                    m.bodies[0].mass = 1.5;
+                                    m.bodies[0].cg = Vec2(0.015, 0.02);
+                                }},
+                      NamedEdit{"Set section",
+                                [](Mechanism& m) {
+                                    m.bodies[1].section = BarSection{0.02, 0.008, 2700.0, std::nullopt};
+                                }},
+                      NamedEdit{"Set motion",
+                                [](Mechanism& m) {
+                                    m.drivers[0].motion = Rise{CamLaw::Cycloidal, 0.0, 1.0, 0.0, 1.5};
+                                }}),
     [](const auto& info) {
         std::string n = info.param.name;
         for (auto& c : n)
@@ -105,7 +139,13 @@ TEST(MechanismDocument, ConsecutiveEditsWithOneMergeIdAreOneUndoStep)
     doc.reset(drawnFourBar(), {});
     const std::string before = saved(doc);
     const int p = jointIndex(doc.mechanism(), "P1");
-    for (double x : {0.031, 0.032, 0.035}) doc.apply("Move pin P1", [=](Mechanism& m) { edits::moveJoint(m, p, {x, 0.04}); }, 1);
+    for (double x : {0.031, 0.032, 0.035})
+        doc.apply(
+            "Move pin P1",
+            [=](Mechanism& m) {
+                edits::moveJoint(m, p, {x, 0.04});
+            },
+            1);
     EXPECT_EQ(doc.undoStack()->count(), 1);
     EXPECT_DOUBLE_EQ(doc.mechanism().joints[p].at.x(), 0.035);
     doc.undoStack()->undo();
@@ -117,9 +157,19 @@ TEST(MechanismDocument, TwoSeparateDragsAreTwoUndoSteps)
     MechanismDocument doc;
     doc.reset(drawnFourBar(), {});
     const int p = jointIndex(doc.mechanism(), "P1");
-    doc.apply("Move pin P1", [=](Mechanism& m) { edits::moveJoint(m, p, {0.04, 0.04}); }, 1);
+    doc.apply(
+        "Move pin P1",
+        [=](Mechanism& m) {
+            edits::moveJoint(m, p, {0.04, 0.04});
+        },
+        1);
     doc.closeMergeRun();
-    doc.apply("Move pin P1", [=](Mechanism& m) { edits::moveJoint(m, p, {0.05, 0.04}); }, 1);
+    doc.apply(
+        "Move pin P1",
+        [=](Mechanism& m) {
+            edits::moveJoint(m, p, {0.05, 0.04});
+        },
+        1);
     EXPECT_EQ(doc.undoStack()->count(), 2);
 }
 
@@ -137,7 +187,13 @@ TEST(MechanismDocument, AMergedRunThatEndsWhereItBeganLeavesNoStep)
     MechanismDocument doc;
     doc.reset(drawnFourBar(), {});
     const int p = jointIndex(doc.mechanism(), "P1");
-    for (double x : {0.04, 0.03}) doc.apply("Move pin P1", [=](Mechanism& m) { edits::moveJoint(m, p, {x, 0.04}); }, 1);
+    for (double x : {0.04, 0.03})
+        doc.apply(
+            "Move pin P1",
+            [=](Mechanism& m) {
+                edits::moveJoint(m, p, {x, 0.04});
+            },
+            1);
     EXPECT_EQ(doc.undoStack()->count(), 0);
     EXPECT_FALSE(doc.isModified());
 }
