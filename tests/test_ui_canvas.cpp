@@ -5,6 +5,7 @@
 #include "core/file/mechanism_file.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/canvas/canvas_view.h"
+#include "ui/canvas/snapping.h"
 #include "ui/canvas/tool_palette.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/document/sketch_geometry.h"
@@ -182,6 +183,25 @@ TEST_F(CanvasTest, EscapeCancelsALinkHalfDrawn)
     QTest::keyClick(window.canvas(), Qt::Key_Escape);
     click(0.05, 0.05);  // starts a new link instead of finishing the cancelled one
     EXPECT_TRUE(mechanism().bodies.empty());
+}
+
+// A click just outside a pin's reach whose grid point is that pin draws to the
+// pin; it must not stack a second, unconnected pin on it.
+TEST_F(CanvasTest, AGridPointOnAPinIsThatPin)
+{
+    useTool("Ground pin");
+    click(0.0, 0.0);
+    const int offset = int(kSnapPixels) + 2;
+    // Zoom until half a grid step is wider than the offset, so the grid point is the pin's.
+    const auto halfStep = [&] { return window.canvas()->view().pixels(gridSpacing(window.canvas()->view())) / 2.0; };
+    for (int i = 0; i < 30 && halfStep() <= offset; ++i) window.canvas()->zoomBy(1.1);
+    ASSERT_GT(halfStep(), offset);
+    useTool("Link");
+    QTest::mouseClick(window.canvas(), Qt::LeftButton, {}, at(0.0, 0.0) + QPoint(offset, 0));
+    click(0.06, 0.04);
+    ASSERT_EQ(mechanism().bodies.size(), 1u);
+    EXPECT_EQ(jointsAt(mechanism(), Vec2(0.0, 0.0), 1e-9).size(), 1u);
+    EXPECT_EQ(mechanism().joints[0].bodies[1], mechanism().bodies[0].name);
 }
 
 TEST_F(CanvasTest, APointNearlyLevelWithTheStartSnapsLevel)

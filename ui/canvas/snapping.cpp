@@ -51,19 +51,16 @@ Vec2 snapToGrid(const ViewTransform& view, const Vec2& p)
     return {g.times(std::round(p.x() / step)), g.times(std::round(p.y() / step))};
 }
 
-SnapResult snap(const Mechanism& m, const ViewTransform& view, const QPointF& screen,
-                const std::optional<Vec2>& strokeStart, bool useGrid)
-{
-    const Vec2 raw = view.toWorld(screen);
-    const double radius = view.metres(kSnapPixels);
-    int nearest = -1;
-    double best = radius;
-    for (std::size_t i = 0; i < m.joints.size(); ++i) {
-        const double d = (m.joints[i].at - raw).norm();
-        if (d <= best) best = d, nearest = int(i);
-    }
-    if (nearest >= 0) return {m.joints[nearest].at, SnapResult::Kind::Pin, nearest};
+namespace {
 
+// Two points closer than this are one place (a micrometre: far below drawing accuracy).
+constexpr double kSamePlace = 1e-6;
+
+// Where the pointer lands when no pin is within reach: the grid drawn at
+// this zoom, then in line with the stroke's start.
+SnapResult snapBesidePins(const ViewTransform& view, const Vec2& raw, const std::optional<Vec2>& strokeStart,
+                          bool useGrid, double radius)
+{
     SnapResult r{raw, SnapResult::Kind::Free, -1};
     if (useGrid) {
         // The grid drawn at this zoom, so pins land on round numbers.
@@ -79,6 +76,29 @@ SnapResult snap(const Mechanism& m, const ViewTransform& view, const QPointF& sc
             r.kind = SnapResult::Kind::Vertical;
         }
     }
+    return r;
+}
+
+}  // namespace
+
+SnapResult snap(const Mechanism& m, const ViewTransform& view, const QPointF& screen,
+                const std::optional<Vec2>& strokeStart, bool useGrid)
+{
+    const Vec2 raw = view.toWorld(screen);
+    const double radius = view.metres(kSnapPixels);
+    int nearest = -1;
+    double best = radius;
+    for (std::size_t i = 0; i < m.joints.size(); ++i) {
+        const double d = (m.joints[i].at - raw).norm();
+        if (d <= best) best = d, nearest = int(i);
+    }
+    if (nearest >= 0) return {m.joints[nearest].at, SnapResult::Kind::Pin, nearest};
+
+    SnapResult r = snapBesidePins(view, raw, strokeStart, useGrid, radius);
+    // A grid or alignment point can land on a pin the pointer was just outside
+    // of: that is the pin, not a place for a second one stacked on it.
+    for (std::size_t i = 0; i < m.joints.size(); ++i)
+        if ((m.joints[i].at - r.point).norm() <= kSamePlace) return {m.joints[i].at, SnapResult::Kind::Pin, int(i)};
     return r;
 }
 
