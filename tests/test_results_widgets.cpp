@@ -168,6 +168,35 @@ TEST(ResultsWidgets, PlotsShowThePanesOfTheReportAndKeepTheChoice)
     EXPECT_EQ(plots.panes().front().curves.size(), 6u);
 }
 
+// After a refused analysis and a good one, the plots show only the current
+// state: no joint list beside the reason, no old reason beside the curves.
+TEST(ResultsWidgets, PlotsShowNothingStaleAfterAFailedAnalysis)
+{
+    Session s;
+    PlotStack plots(s.analysis.get());
+    auto* joints = plots.findChild<QListWidget*>();
+    ASSERT_NE(joints, nullptr);
+    ASSERT_GT(joints->count(), 0);
+
+    s.doc.apply(QStringLiteral("Remove drivers and loads"), [](Mechanism& m) {
+        m.loads.clear();
+        m.drivers.clear();
+    });
+    s.analysis->waitForIdle();
+    QCoreApplication::processEvents();
+    ASSERT_FALSE(s.analysis->hasResult());
+    const QString reason = plots.readoutText();
+    EXPECT_FALSE(reason.isEmpty());
+    EXPECT_EQ(joints->count(), 0);
+
+    s.doc.undoStack()->undo();
+    s.analysis->waitForIdle();
+    QCoreApplication::processEvents();
+    ASSERT_TRUE(s.analysis->hasResult()) << s.analysis->errorText().toStdString();
+    EXPECT_FALSE(plots.readoutText().contains(reason)) << plots.readoutText().toStdString();
+    EXPECT_GT(joints->count(), 0);
+}
+
 TEST(ResultsWidgets, HoverReadoutNeverWidensTheWindow)
 {
     Session s;

@@ -157,10 +157,14 @@ void PlotStack::rebuild()
     panes_.clear();
     peaks_->clear();
     if (!analysis_->hasResult()) {
+        // Nothing of an earlier result may stay on screen beside the reason.
+        const QSignalBlocker blockJoints(joints_);
+        joints_->clear();
         showReadout(analysis_->errorText());
         plot_->replot();
         return;
     }
+    showReadout({});  // an earlier error, or values read off the old curves
     const auto& m = analysis_->compiled();
     axis_ = cycleAxis(m, analysis_->result());
     listJoints(m);
