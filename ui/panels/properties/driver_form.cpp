@@ -43,7 +43,8 @@ DisplayQuantity positionQuantity(const Driver& d)
 
 }  // namespace
 
-void driverForm(FormBuilder& f, const Mechanism& m, const Driver& driver)
+void driverForm(FormBuilder& f, const Mechanism& /*every form takes it; a motion needs no other part*/,
+                const Driver& driver)
 {
     const std::string name = driver.name;
     const QString qname = QString::fromStdString(name);
