@@ -14,15 +14,36 @@
 
 namespace clevis::ui {
 
-int runDesktopApp(int argc, char** argv)
-{
-    QApplication app(argc, argv);
-    QApplication::setOrganizationName(QStringLiteral("Clevis"));
-    QApplication::setApplicationName(QStringLiteral("clevis"));
-    QApplication::setApplicationVersion(QStringLiteral(CLEVIS_VERSION));
-    QApplication::setWindowIcon(QIcon(QStringLiteral(":/clevis/clevis.svg")));  // resources/clevis.qrc
+namespace {
 
-    QCommandLineParser parser;
+// Help and version are text only: they must work where there is no display.
+bool asksOnlyForText(int argc, char** argv)
+{
+    for (int i = 1; i < argc; ++i) {
+        const QString arg = QString::fromLocal8Bit(argv[i]);
+        if (arg == "-h" || arg == "--help" || arg == "--help-all" || arg == "-v" || arg == "--version") return true;
+    }
+    return false;
+}
+
+void nameApplication()
+{
+    QCoreApplication::setOrganizationName(QStringLiteral("Clevis"));
+    QCoreApplication::setApplicationName(QStringLiteral("clevis"));
+    QCoreApplication::setApplicationVersion(QStringLiteral(CLEVIS_VERSION));
+}
+
+QCommandLineOption screenshotOption()
+{
+    return QCommandLineOption(QStringLiteral("screenshot"),
+                              QObject::tr("Render the main window with FILE open to a PNG of %1 × %2 px and exit.")
+                                  .arg(kScreenshotSize.width())
+                                  .arg(kScreenshotSize.height()),
+                              QObject::tr("OUT.png"));
+}
+
+void describeOptions(QCommandLineParser& parser)
+{
     parser.setApplicationDescription(
         QObject::tr("Clevis: sketch a planar linkage, edit it, and see the loads in every pin over the cycle.\n"
                     "Without a display, use --screenshot (e.g. with QT_QPA_PLATFORM=offscreen) or clevis-cli.\n"
@@ -31,16 +52,30 @@ int runDesktopApp(int argc, char** argv)
             .arg(RecoveryStore::defaultFolder()));
     parser.addHelpOption();
     parser.addVersionOption();
-    const QCommandLineOption screenshot(
-        QStringLiteral("screenshot"),
-        QObject::tr("Render the main window with FILE open to a PNG of %1 × %2 px and exit.")
-            .arg(kScreenshotSize.width())
-            .arg(kScreenshotSize.height()),
-        QObject::tr("OUT.png"));
-    parser.addOption(screenshot);
+    parser.addOption(screenshotOption());
     parser.addPositionalArgument(QStringLiteral("FILE"), QObject::tr("A mechanism file (.json) to open."),
                                  QStringLiteral("[FILE]"));
+}
+
+}  // namespace
+
+int runDesktopApp(int argc, char** argv)
+{
+    if (asksOnlyForText(argc, argv)) {
+        QCoreApplication app(argc, argv);
+        nameApplication();
+        QCommandLineParser parser;
+        describeOptions(parser);
+        parser.process(app);  // prints the text and exits
+        return 0;
+    }
+    QApplication app(argc, argv);
+    nameApplication();
+    QApplication::setWindowIcon(QIcon(QStringLiteral(":/clevis/clevis.svg")));  // resources/clevis.qrc
+    QCommandLineParser parser;
+    describeOptions(parser);
     parser.process(app);
+    const QCommandLineOption screenshot = screenshotOption();
 
     MainWindow window;
     const QStringList files = parser.positionalArguments();
