@@ -3,6 +3,7 @@
 // expected file; the status line must report one degree of freedom and a
 // mechanism that solves.
 #include "core/file/mechanism_file.h"
+#include "core/results/posed_mechanism.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/canvas/canvas_view.h"
 #include "ui/canvas/snapping.h"
@@ -202,6 +203,33 @@ TEST_F(CanvasTest, AGridPointOnAPinIsThatPin)
     ASSERT_EQ(mechanism().bodies.size(), 1u);
     EXPECT_EQ(jointsAt(mechanism(), Vec2(0.0, 0.0), 1e-9).size(), 1u);
     EXPECT_EQ(mechanism().joints[0].bodies[1], mechanism().bodies[0].name);
+}
+
+// With the cycle scrubbed, a click picks the part where it is drawn now and
+// keeps the position; a drawing tool goes back to the drawn pose and says so.
+TEST_F(CanvasTest, ClickingInTheScrubbedPosePicksWhatIsDrawnAndKeepsThePosition)
+{
+    drawFourBar();
+    AnalysisState* analysis = window.analysis();
+    analysis->waitForIdle();
+    QCoreApplication::processEvents();
+    ASSERT_TRUE(analysis->hasResult()) << analysis->errorText().toStdString();
+    useTool("Select");
+    analysis->setCurrentStep(120);
+    // The rocker (third link, between the second pin and the second ground
+    // pin) at step 120, half-way along: far from where it was drawn.
+    const Mechanism posed = posedMechanism(mechanism(), analysis->compiled(), analysis->result().steps[120]);
+    const Vec2 mid = 0.5 * (posed.joints[3].at + posed.joints[1].at);
+    const Vec2 drawnMid = 0.5 * (mechanism().joints[3].at + mechanism().joints[1].at);
+    ASSERT_GT((mid - drawnMid).norm(), 0.01);
+    click(mid.x(), mid.y());
+    EXPECT_EQ(analysis->currentStep(), 120);
+    EXPECT_EQ(window.document()->selection().kind, Selection::Kind::Body);
+    EXPECT_EQ(window.document()->selection().name.toStdString(), mechanism().bodies[2].name);
+
+    useTool("Pin");
+    click(0.1, -0.1);
+    EXPECT_EQ(analysis->currentStep(), 0);
 }
 
 TEST_F(CanvasTest, APointNearlyLevelWithTheStartSnapsLevel)

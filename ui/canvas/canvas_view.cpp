@@ -2,6 +2,7 @@
 
 #include "core/results/posed_mechanism.h"
 #include "ui/analysis/analysis_state.h"
+#include "ui/canvas/hit_test.h"
 #include "ui/canvas/sketch_painter.h"
 #include "ui/canvas/tools/select_tool.h"
 #include "ui/document/mechanism_document.h"
@@ -59,6 +60,15 @@ void CanvasView::setTool(std::unique_ptr<Tool> tool)
     update();
 }
 
+// Away from the start of the cycle the mechanism is shown where the scrubber
+// has it; nothing when it is at the drawn pose or there is no result.
+std::optional<Mechanism> CanvasView::scrubbedPose() const
+{
+    if (!analysis_->hasResult() || analysis_->currentStep() == 0) return std::nullopt;
+    return posedMechanism(doc_->mechanism(), analysis_->compiled(),
+                          analysis_->result().steps[analysis_->currentStep()]);
+}
+
 void CanvasView::announce() { emit hintChanged(tool_->hint()); }
 
 void CanvasView::tell(const QString& message)
@@ -98,13 +108,8 @@ void CanvasView::paintEvent(QPaintEvent*)
     QPainter p(this);
     p.setRenderHint(QPainter::Antialiasing);
     paintGrid(p, view_, rect());
-    // Away from the start of the cycle the mechanism is shown where the
-    // scrubber has it; edits are made on the drawn pose (see mousePressEvent).
-    const bool scrubbed = analysis_->hasResult() && analysis_->currentStep() > 0;
-    const Mechanism posed = scrubbed ? posedMechanism(doc_->mechanism(), analysis_->compiled(),
-                                                      analysis_->result().steps[analysis_->currentStep()])
-                                     : Mechanism{};
-    PaintContext c{p, view_, scrubbed ? posed : doc_->mechanism(), doc_->selection(), analysis_->offendingItems()};
+    const std::optional<Mechanism> posed = scrubbedPose();
+    PaintContext c{p, view_, posed ? *posed : doc_->mechanism(), doc_->selection(), analysis_->offendingItems()};
     paintSketch(c);
     tool_->paintPreview(p);
 }
@@ -118,8 +123,20 @@ void CanvasView::mousePressEvent(QMouseEvent* e)
         return;
     }
     if (e->button() != Qt::LeftButton) return;
-    analysis_->setCurrentStep(0);  // back to the drawn pose, where the document's coordinates are
     told_ = false;
+    if (const std::optional<Mechanism> posed = scrubbedPose()) {
+        // Selecting picks what is drawn and keeps the position, so the free-body
+        // diagram shows the part there; editing happens at the drawn pose.
+        if (dynamic_cast<SelectTool*>(tool_.get())) {
+            doc_->setSelection(partAt(*posed, view_, e->position()));
+            tell(
+                tr("Picked where it is at this position of the cycle. To move a pin, go back to the start of the "
+                   "cycle, where the mechanism is drawn."));
+            return;
+        }
+        analysis_->setCurrentStep(0);  // the document's coordinates are those of the drawn pose
+        tell(tr("Back at the drawn pose (start of the cycle) to edit."));
+    }
     tool_->press(pointer(e->position(), e->modifiers()));
     if (!told_) announce();  // a note about this click stays until the next one
 }

@@ -9,6 +9,7 @@
 #include <QWidget>
 
 #include <memory>
+#include <optional>
 
 namespace clevis::ui {
 
@@ -51,6 +52,7 @@ protected:
 private:
     Pointer pointer(const QPointF& pos, Qt::KeyboardModifiers mods) const;
     void announce();
+    std::optional<Mechanism> scrubbedPose() const;
 
     MechanismDocument* doc_;
     AnalysisState* analysis_;
