@@ -129,9 +129,7 @@ void CanvasView::mousePressEvent(QMouseEvent* e)
         // diagram shows the part there; editing happens at the drawn pose.
         if (dynamic_cast<SelectTool*>(tool_.get())) {
             doc_->setSelection(partAt(*posed, view_, e->position()));
-            tell(
-                tr("Picked where it is at this position of the cycle. To move a pin, go back to the start of the "
-                   "cycle, where the mechanism is drawn."));
+            tell(tr("Picked where it is now; pins are moved at the start of the cycle."));
             return;
         }
         analysis_->setCurrentStep(0);  // the document's coordinates are those of the drawn pose
