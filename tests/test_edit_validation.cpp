@@ -20,6 +20,7 @@
 
 #include <gtest/gtest.h>
 
+#include <memory>
 #include <random>
 #include <sstream>
 
@@ -39,14 +40,27 @@ Mechanism fourBar()
     return m;
 }
 
+// The four-bar open with its rocker selected in the property editor.
+struct RockerInEditor {
+    MechanismDocument doc;
+    std::unique_ptr<PropertyEditor> editor;
+
+    RockerInEditor()
+    {
+        doc.reset(fourBar(), {});
+        doc.setSelection({Selection::Kind::Body, "rocker", -1});
+        editor = std::make_unique<PropertyEditor>(&doc);
+        editor->rebuildNow();
+    }
+    QLineEdit* massField() const { return editor->findChild<QLineEdit*>(QStringLiteral("mass")); }
+};
+
 TEST(PropertyEditorChecks, ANegativeMassIsRefusedNamingTheBodyAndNothingChanges)
 {
-    MechanismDocument doc;
-    doc.reset(fourBar(), {});
-    doc.setSelection({Selection::Kind::Body, "rocker", -1});
-    PropertyEditor editor(&doc);
-    editor.rebuildNow();
-    auto* mass = editor.findChild<QLineEdit*>(QStringLiteral("mass"));
+    RockerInEditor s;
+    MechanismDocument& doc = s.doc;
+    PropertyEditor& editor = *s.editor;
+    auto* mass = s.massField();
     ASSERT_NE(mass, nullptr);
     const QString shown = mass->text();
 
@@ -66,12 +80,10 @@ TEST(PropertyEditorChecks, ANegativeMassIsRefusedNamingTheBodyAndNothingChanges)
 
 TEST(PropertyEditorChecks, TheRefusalGoesWithTheNextAcceptedEdit)
 {
-    MechanismDocument doc;
-    doc.reset(fourBar(), {});
-    doc.setSelection({Selection::Kind::Body, "rocker", -1});
-    PropertyEditor editor(&doc);
-    editor.rebuildNow();
-    auto* mass = editor.findChild<QLineEdit*>(QStringLiteral("mass"));
+    RockerInEditor s;
+    MechanismDocument& doc = s.doc;
+    PropertyEditor& editor = *s.editor;
+    auto* mass = s.massField();
     mass->setText(QStringLiteral("-2"));
     emit mass->editingFinished();
     ASSERT_TRUE(

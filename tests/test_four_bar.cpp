@@ -175,12 +175,7 @@ TEST(Grashof, ClassifiesEachKind)
 // a full revolution.
 TEST(Grashof, DoubleCrankOutputTurnsFully)
 {
-    test::FourBarSpec spec;
-    spec.d = 0.1;
-    spec.a = 0.3;
-    spec.b = 0.35;
-    spec.c = 0.4;
-    spec.theta2 = 0.5;
+    test::FourBarSpec spec{.a = 0.3, .b = 0.35, .c = 0.4, .d = 0.1, .theta2 = 0.5};
     ASSERT_EQ(classifyFourBar({spec.d, spec.a, spec.b, spec.c}).kind, GrashofClass::DoubleCrank);
     const CompiledMechanism m = compile(test::fourBar(spec));
     const CycleResult r = sweepCycle(m, {.steps = 360});
@@ -203,11 +198,7 @@ TEST(Grashof, DoubleCrankOutputTurnsFully)
 // a near_singular flag.
 TEST(FourBar, NonGrashofStopsAtToggle)
 {
-    test::FourBarSpec spec;
-    spec.a = 0.75;
-    spec.b = 0.8;
-    spec.c = 0.9;
-    spec.d = 1.0;
+    test::FourBarSpec spec{.a = 0.75, .b = 0.8, .c = 0.9, .d = 1.0};
     ASSERT_EQ(classifyFourBar({spec.d, spec.a, spec.b, spec.c}).kind, GrashofClass::TripleRocker);
     const double limit =
         std::acos((spec.a * spec.a + spec.d * spec.d - std::pow(spec.b + spec.c, 2)) / (2 * spec.a * spec.d));
@@ -266,12 +257,7 @@ TEST(FourBar, NonGrashofStopsAtToggle)
 // stop there is explained by the class; a driven crank has nothing to explain.
 TEST(Grashof, DiagnosisNamesTheClassAndTheFullyTurningLink)
 {
-    test::FourBarSpec spec;
-    spec.d = 0.4;
-    spec.a = 0.3;
-    spec.b = 0.35;
-    spec.c = 0.1;
-    spec.theta2 = 1.0;
+    test::FourBarSpec spec{.a = 0.3, .b = 0.35, .c = 0.1, .d = 0.4, .theta2 = 1.0};
     ASSERT_EQ(classifyFourBar({spec.d, spec.a, spec.b, spec.c}).kind, GrashofClass::CrankRocker);
     const CompiledMechanism m = compile(test::fourBar(spec));
     const CycleResult r = sweepCycle(m, {.steps = 360});
@@ -290,11 +276,7 @@ TEST(Grashof, DiagnosisNamesTheClassAndTheFullyTurningLink)
               std::string::npos);
 
     EXPECT_EQ(grashofNote(compile(test::fourBar(crankRocker()))), "");
-    test::FourBarSpec dragLink;
-    dragLink.d = 0.1;
-    dragLink.a = 0.3;
-    dragLink.b = 0.35;
-    dragLink.c = 0.4;
+    const test::FourBarSpec dragLink{.a = 0.3, .b = 0.35, .c = 0.4, .d = 0.1};
     EXPECT_EQ(grashofNote(compile(test::fourBar(dragLink))), "");
 }
 
