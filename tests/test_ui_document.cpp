@@ -333,6 +333,20 @@ TEST(MechanismEdits, DeletingAPartDropsTheLoadsAndDriversOnIt)
     EXPECT_TRUE(m.drivers.empty());
 }
 
+TEST(MechanismEdits, DeletingTheDriverAProfileFollowsKeepsTheLoadAtItsNominalValue)
+{
+    for (const Selection& gone :
+         {Selection{Selection::Kind::Driver, "motor1", -1}, Selection{Selection::Kind::Joint, "O1", -1}}) {
+        Mechanism m = withEveryLoadKind();
+        const std::vector<std::string> following{std::get<ForceLoad>(m.loads[0]).name,
+                                                 std::get<TorqueLoad>(m.loads[1]).name};
+        EXPECT_EQ(edits::remove(m, gone), following) << gone.name.toStdString();
+        EXPECT_FALSE(std::get<ForceLoad>(m.loads[0]).profile);
+        EXPECT_FALSE(std::get<TorqueLoad>(m.loads[1]).profile);
+        EXPECT_NO_THROW(validateMechanism(m));  // the document stays one the file reader takes
+    }
+}
+
 TEST(MechanismEdits, DeletingABodyOpensItsPinsAndDropsItsLoads)
 {
     Mechanism m = drawnFourBar();

@@ -4,6 +4,7 @@
 #include "ui/document/part_references.h"
 #include "ui/document/sketch_geometry.h"
 
+#include <algorithm>
 #include <vector>
 
 namespace clevis::ui::edits {
@@ -197,7 +198,9 @@ void moveJoint(Mechanism& m, int joint, const Vec2& to)
     for (auto& load : m.loads) visitReferences(load, followPoint);
 }
 
-void remove(Mechanism& m, const Selection& s)
+namespace {
+
+void removePart(Mechanism& m, const Selection& s)
 {
     const std::string name = s.name.toStdString();
     switch (s.kind) {
@@ -222,6 +225,35 @@ void remove(Mechanism& m, const Selection& s)
         eraseReferring(m.loads, PartKind::Body, name);
         return;
     }
+}
+
+// A profile that follows a driver no longer there cannot be evaluated (the
+// file reader refuses it); the load keeps its nominal value instead.
+std::vector<std::string> releaseOrphanProfiles(Mechanism& m)
+{
+    std::vector<std::string> released;
+    for (auto& load : m.loads)
+        std::visit(
+            [&](auto& l) {
+                if constexpr (requires { l.profile; }) {
+                    if (l.profile && !l.profile->driver.empty() &&
+                        std::none_of(m.drivers.begin(), m.drivers.end(),
+                                     [&](const Driver& d) { return d.name == l.profile->driver; })) {
+                        l.profile.reset();
+                        released.push_back(l.name);
+                    }
+                }
+            },
+            load);
+    return released;
+}
+
+}  // namespace
+
+std::vector<std::string> remove(Mechanism& m, const Selection& s)
+{
+    removePart(m, s);
+    return releaseOrphanProfiles(m);
 }
 
 void renameBody(Mechanism& m, const std::string& from, const std::string& to)

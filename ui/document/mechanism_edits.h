@@ -41,7 +41,11 @@ void addPointMass(Mechanism& m, const std::string& body, const Vec2& at, double 
 // load and driver attachments) to `to`.
 void moveJoint(Mechanism& m, int joint, const Vec2& to);
 
-void remove(Mechanism& m, const Selection& s);
+// Removes the part and what cannot stand without it (the drivers and loads on
+// it; a body left without pins). A load whose profile follows a removed driver
+// keeps its nominal value and loses the profile: the names of those loads are
+// returned so the user can be told.
+std::vector<std::string> remove(Mechanism& m, const Selection& s);
 
 // Renames and updates every reference to the old name.
 void renameBody(Mechanism& m, const std::string& from, const std::string& to);

@@ -154,7 +154,14 @@ void MainWindow::deleteSelection()
     const Selection s = doc_->selection();
     if (s.kind == Selection::Kind::None) return;
     const QString what = s.kind == Selection::Kind::Load ? tr("load") : s.name;
-    doc_->apply(tr("Delete %1").arg(what), [s](Mechanism& m) { edits::remove(m, s); });
+    std::vector<std::string> released;
+    const QString refused =
+        doc_->apply(tr("Delete %1").arg(what), [s, &released](Mechanism& m) { released = edits::remove(m, s); });
+    if (!refused.isEmpty() || released.empty()) return;
+    QStringList names;
+    for (const auto& n : released) names << QString::fromStdString(n);
+    status_->showHint(tr("%1 no longer follows a driver: it now acts at its nominal value throughout the cycle.")
+                          .arg(names.join(", ")));
 }
 
 void MainWindow::closeEvent(QCloseEvent* e)
