@@ -11,6 +11,7 @@
 #include <fstream>
 #include <functional>
 #include <random>
+#include <regex>
 
 namespace clevis {
 namespace {
@@ -311,6 +312,17 @@ TEST(MechanismFileTest, OverflowingNumberIsRejected)
 }
 
 TEST(MechanismFileTest, RootMustBeAnObject) { EXPECT_EQ(errorForText("[1, 2]"), "expected an object, got an array"); }
+
+TEST(MechanismFileTest, NegativeZeroIsSavedAsZero)
+{
+    Mechanism m = richMechanism();
+    m.joints[0].at = {-0.0, -0.0};
+    m.bodies[0].cg = Vec2(-0.0, 0.0);
+    m.joints[1].axisDeg = -0.0;
+    const std::string text = saveMechanismText(m);
+    EXPECT_FALSE(std::regex_search(text, std::regex(R"(-0(\.0*[^0-9]|[^.0-9]))"))) << text;
+    EXPECT_EQ(parseMechanism(text).mechanism, validateMechanism(m));  // and reads back as before
+}
 
 TEST(MechanismFileTest, WrongTypeNamesThePath)
 {

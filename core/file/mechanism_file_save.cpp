@@ -189,6 +189,15 @@ Json list(const std::vector<Item>& items, Write write)
     return out;
 }
 
+// −0 arises from arithmetic on coordinates (a point mirrored about an axis,
+// an angle of −0°); it means 0 and a person reading the file should see 0.
+void clearNegativeZeros(Json& j)
+{
+    if (j.is_number_float() && j.get<double>() == 0.0) j = 0.0;
+    else if (j.is_structured())
+        for (Json& child : j) clearNegativeZeros(child);
+}
+
 Json document(const Mechanism& m)
 {
     Json out{{"clevis", kFileVersion}};
@@ -201,6 +210,7 @@ Json document(const Mechanism& m)
     if (m.cycle.duration) out["cycle"]["duration_s"] = *m.cycle.duration;
     const LoadWriter writeLoad(m.drivers);
     out["loads"] = list(m.loads, [&](const Load& l) { return std::visit(writeLoad, l); });
+    clearNegativeZeros(out);
     return out;
 }
 
