@@ -1,5 +1,7 @@
 #include "render/body_outline.h"
 
+#include "core/model/convex_hull.h"
+
 #include <QPainterPathStroker>
 #include <QPolygonF>
 
@@ -9,30 +11,14 @@
 namespace clevis::ui {
 namespace {
 
-double crossZ(QPointF o, QPointF a, QPointF b)
+// The hull of screen points: the flip of the y axis only reverses the order.
+QPolygonF screenHull(const std::vector<QPointF>& pts)
 {
-    return (a.x() - o.x()) * (b.y() - o.y()) - (a.y() - o.y()) * (b.x() - o.x());
-}
-
-// Monotone-chain convex hull.
-QPolygonF convexHull(std::vector<QPointF> pts)
-{
-    std::sort(pts.begin(), pts.end(),
-              [](QPointF a, QPointF b) { return a.x() < b.x() || (a.x() == b.x() && a.y() < b.y()); });
-    pts.erase(std::unique(pts.begin(), pts.end()), pts.end());
-    if (pts.size() < 3) return QPolygonF(QList<QPointF>(pts.begin(), pts.end()));
-    std::vector<QPointF> hull(2 * pts.size());
-    std::size_t k = 0;
-    for (std::size_t i = 0; i < pts.size(); ++i) {
-        while (k >= 2 && crossZ(hull[k - 2], hull[k - 1], pts[i]) <= 0) --k;
-        hull[k++] = pts[i];
-    }
-    for (std::size_t i = pts.size() - 1, t = k + 1; i > 0; --i) {
-        while (k >= t && crossZ(hull[k - 2], hull[k - 1], pts[i - 1]) <= 0) --k;
-        hull[k++] = pts[i - 1];
-    }
-    hull.resize(k - 1);
-    return QPolygonF(QList<QPointF>(hull.begin(), hull.end()));
+    std::vector<Vec2> points;
+    for (const QPointF& p : pts) points.emplace_back(p.x(), p.y());
+    QPolygonF hull;
+    for (const Vec2& p : clevis::convexHull(std::move(points))) hull << QPointF(p.x(), p.y());
+    return hull;
 }
 
 // Points (nearly) on one line make a hull of no area, which Qt's path
@@ -82,7 +68,7 @@ QPainterPath bodyOutlinePath(const std::vector<QPointF>& points, double halfWidt
     QPainterPath outline;
     outline.setFillRule(Qt::WindingFill);
     if (!points.empty()) {
-        const QPolygonF hull = barIfFlat(convexHull(points));
+        const QPolygonF hull = barIfFlat(screenHull(points));
         QPainterPath core;
         if (hull.size() == 1) core.addEllipse(hull.front(), halfWidth, halfWidth);
         else {

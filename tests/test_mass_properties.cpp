@@ -7,6 +7,9 @@
 
 #include <gtest/gtest.h>
 
+#include <algorithm>
+#include <cmath>
+
 using namespace clevis;
 
 namespace {
@@ -125,6 +128,85 @@ TEST(MassProperties, SectionEnds)
         ADD_FAILURE() << "a bar with one joint and no ends was accepted";
     } catch (const ModelError& e) {
         EXPECT_EQ(e.path(), "bodies[0].section");
+    }
+}
+
+// A rectangular plate a × b, thickness t (handbook): m = ρ t a b, centre at
+// the middle, polar I_G = m (a² + b²)/12. Far from the origin and in either
+// corner order, so the shift to the first corner and the sign are exercised.
+TEST(MassProperties, RectangularPlateMatchesHandbook)
+{
+    const double a = 0.3, b = 0.12, t = 0.008;
+    const Vec2 o(10.0, -20.0);
+    std::vector<Vec2> corners{o, o + Vec2(a, 0), o + Vec2(a, b), o + Vec2(0, b)};
+    const double mass = kSteel * t * a * b;
+    for (int order = 0; order < 2; ++order) {
+        const MassProperties p = plateMassProperties(corners, t, kSteel);
+        EXPECT_NEAR(p.mass, mass, 1e-12 * mass);
+        EXPECT_NEAR((p.cg - (o + Vec2(a / 2, b / 2))).norm(), 0.0, 1e-9);
+        EXPECT_NEAR(p.inertia, mass * (a * a + b * b) / 12.0, 1e-8 * p.inertia);
+        std::reverse(corners.begin(), corners.end());
+    }
+}
+
+// A triangular plate with sides a, b, c (handbook, polar moment of a
+// triangular lamina about its centroid): I_G = m (a² + b² + c²)/36, centre at
+// the mean of the corners.
+TEST(MassProperties, TriangularPlateMatchesHandbook)
+{
+    const Vec2 p0(0.02, 0.01), p1(0.25, -0.04), p2(0.11, 0.19);
+    const double t = 0.006, rho = 2700.0;
+    const double area = 0.5 * std::abs(cross(p1 - p0, p2 - p0));
+    const double mass = rho * t * area;
+    const double sides = (p1 - p0).squaredNorm() + (p2 - p1).squaredNorm() + (p0 - p2).squaredNorm();
+    const MassProperties p = plateMassProperties({p0, p1, p2}, t, rho);
+    EXPECT_NEAR(p.mass, mass, 1e-12 * mass);
+    EXPECT_NEAR((p.cg - (p0 + p1 + p2) / 3.0).norm(), 0.0, 1e-15);
+    EXPECT_NEAR(p.inertia, mass * sides / 36.0, 1e-12 * p.inertia);
+}
+
+// A non-convex L-shaped plate weighs what its two rectangles weigh together
+// (the rectangles as bars, combined by the parallel-axis theorem).
+TEST(MassProperties, LShapedPlateIsTwoRectangles)
+{
+    const double t = 0.01;
+    const std::vector<Vec2> l{{0, 0}, {0.4, 0}, {0.4, 0.1}, {0.1, 0.1}, {0.1, 0.3}, {0, 0.3}};
+    const MassProperties plate = plateMassProperties(l, t, kSteel);
+    const MassProperties parts = combine({barMassProperties({0, 0.05}, {0.4, 0.05}, 0.1, t, kSteel),
+                                          barMassProperties({0.05, 0.1}, {0.05, 0.3}, 0.1, t, kSteel)});
+    EXPECT_NEAR(plate.mass, parts.mass, 1e-12 * parts.mass);
+    EXPECT_NEAR((plate.cg - parts.cg).norm(), 0.0, 1e-15);
+    EXPECT_NEAR(plate.inertia, parts.inertia, 1e-12 * parts.inertia);
+}
+
+// A plate body without an outline is the polygon through its joints; three
+// joints on one line make no plate, and the message names the plate.
+TEST(MassProperties, CompiledPlateThroughItsJoints)
+{
+    const Vec2 a(0.0, 0.0), b(0.2, 0.0), c(0.05, 0.15);
+    Mechanism mech;
+    Body rocker;
+    rocker.name = "rocker";
+    rocker.plate = PlateSection{0.008, kSteel, std::nullopt};
+    mech.bodies = {rocker, test::pointBody("rod", 0.0, Vec2(0.3, 0.0), 0.0),
+                   test::pointBody("arm", 0.0, Vec2(0.0, 0.3), 0.0)};
+    mech.joints = {test::pin("O", kGroundName, "rocker", a), test::pin("A", "rocker", "rod", b),
+                   test::pin("B", "rocker", "arm", c), test::slider("S", kGroundName, "rod", Vec2(0.4, 0.0), 0.0),
+                   test::slider("T", kGroundName, "arm", Vec2(0.0, 0.4), 90.0)};
+    mech.drivers = {test::rotary("motor", "O", ConstantSpeed{1.0, 0.0})};
+    const MassProperties expected = plateMassProperties({a, b, c}, 0.008, kSteel);
+    const MassProperties& p = compile(mech).bodies[0].mass;
+    EXPECT_GT(expected.mass, 0.0);
+    EXPECT_EQ(p.mass, expected.mass);
+    EXPECT_EQ(p.cg, expected.cg);
+    EXPECT_EQ(p.inertia, expected.inertia);
+
+    mech.joints[2].at = Vec2(0.1, 0.0);  // on the line through the other two
+    try {
+        compile(mech);
+        ADD_FAILURE() << "a plate with its joints on one line was accepted";
+    } catch (const ModelError& e) {
+        EXPECT_EQ(e.path(), "bodies[0].plate");
     }
 }
 

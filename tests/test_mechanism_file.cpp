@@ -434,6 +434,34 @@ TEST(MechanismFileTest, ConflictingAlternativesAreRejected)
                          "drivers[0].motion: cannot be given together with speed_rpm"));
 }
 
+TEST(MechanismFileTest, APlateReadsAndSavesBack)
+{
+    json doc = baseDocument();
+    doc["bodies"][2]["plate"] = json::parse(R"({"thickness": 0.006, "material": "aluminium_alloy",
+                                                 "outline": [[0.35, -0.02], [0.45, -0.02], [0.4, 0.05]]})");
+    const Mechanism m = parseMechanism(doc.dump()).mechanism;
+    ASSERT_TRUE(m.bodies[2].plate);
+    EXPECT_EQ(m.bodies[2].plate->thickness, 0.006);
+    EXPECT_EQ(m.bodies[2].plate->density, *materialDensity("aluminium_alloy"));
+    ASSERT_TRUE(m.bodies[2].plate->outline);
+    EXPECT_EQ(m.bodies[2].plate->outline->size(), 3u);
+    EXPECT_EQ(parseMechanism(saveMechanismText(m)).mechanism, m);
+
+    EXPECT_TRUE(contains(errorFor([](json& d) {
+                             d["bodies"][1]["plate"] = {{"thickness", 0.01}, {"density", 1.0}};
+                         }),
+                         "bodies[1].plate: a body takes one of: mass, cg and inertia; a section; a plate"));
+    EXPECT_TRUE(
+        contains(errorFor([](json& d) {
+                     d["bodies"][2]["plate"] = {{"thickness", 0.01}, {"density", 1.0}, {"outline", {{0, 0}, {1, 0}}}};
+                 }),
+                 "bodies[2].plate.outline: a plate outline needs at least three corners"));
+    EXPECT_TRUE(contains(errorFor([](json& d) {
+                             d["bodies"][2]["plate"] = {{"thickness", -0.01}, {"density", 1.0}};
+                         }),
+                         "bodies[2].plate.thickness"));
+}
+
 TEST(MechanismFileTest, UnknownKeysWarnWithTheirPath)
 {
     json doc = baseDocument();

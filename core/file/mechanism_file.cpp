@@ -110,9 +110,24 @@ BarSection readSection(const JsonNode& node)
     return s;
 }
 
+PlateSection readPlate(const JsonNode& node)
+{
+    node.object({"thickness", "density", "material", "outline"});
+    PlateSection p;
+    p.thickness = node.at("thickness").number(Bound::Positive);
+    p.density = readDensity(node);
+    if (const auto outline = node.find("outline")) {
+        const std::vector<JsonNode> corners = outline->elements();
+        if (corners.size() < 3) throw outline->error("a plate outline needs at least three corners");
+        p.outline.emplace();
+        for (const JsonNode& c : corners) p.outline->push_back(c.point());
+    }
+    return p;
+}
+
 Body readBody(const JsonNode& node)
 {
-    node.object({"name", "mass", "cg", "inertia", "section", "point_masses"});
+    node.object({"name", "mass", "cg", "inertia", "section", "plate", "point_masses"});
     Body b;
     const JsonNode name = node.at("name");
     b.name = name.name();
@@ -125,6 +140,11 @@ Body readBody(const JsonNode& node)
         if (b.mass || b.cg || b.inertia)
             throw n->error("a body takes either mass, cg and inertia or a section, not both");
         b.section = readSection(*n);
+    }
+    if (const auto n = node.find("plate")) {
+        if (b.mass || b.cg || b.inertia || b.section)
+            throw n->error("a body takes one of: mass, cg and inertia; a section; a plate");
+        b.plate = readPlate(*n);
     }
     for (const JsonNode& p : listOf(node, "point_masses")) b.pointMasses.push_back(readPointMass(p));
     return b;

@@ -41,6 +41,16 @@ Json sectionJson(const BarSection& s)
     return out;
 }
 
+Json plateJson(const PlateSection& p)
+{
+    Json out{{"thickness", p.thickness}, {"density", p.density}};
+    if (p.outline) {
+        out["outline"] = Json::array();
+        for (const Vec2& corner : *p.outline) out["outline"].push_back(point(corner));
+    }
+    return out;
+}
+
 Json bodyJson(const Body& b)
 {
     Json out{{"name", b.name}};
@@ -48,6 +58,7 @@ Json bodyJson(const Body& b)
     if (b.cg) out["cg"] = point(*b.cg);
     if (b.inertia) out["inertia"] = *b.inertia;
     if (b.section) out["section"] = sectionJson(*b.section);
+    if (b.plate) out["plate"] = plateJson(*b.plate);
     if (!b.pointMasses.empty()) {
         out["point_masses"] = Json::array();
         for (const PointMass& p : b.pointMasses) out["point_masses"].push_back(pointMassJson(p));

@@ -33,14 +33,25 @@ struct BarSection {
     bool operator==(const BarSection&) const = default;
 };
 
+// A flat plate of uniform thickness whose outline is a polygon: by default
+// the convex hull of the points it is attached at (joints, cylinder ends).
+struct PlateSection {
+    double thickness = 0.0;                    // m, out of plane
+    double density = 0.0;                      // kg/m³
+    std::optional<std::vector<Vec2>> outline;  // m, corners in order, at the drawn pose
+
+    bool operator==(const PlateSection&) const = default;
+};
+
 struct Body {
     std::string name;
     // Mass properties typed in directly ...
     std::optional<double> mass;     // kg
     std::optional<Vec2> cg;         // m, global at the drawn pose
     std::optional<double> inertia;  // kg·m² about the centre of mass
-    // ... or derived from a bar section, plus point masses in either case.
+    // ... or derived from a bar section or a plate, plus point masses in every case.
     std::optional<BarSection> section;
+    std::optional<PlateSection> plate;
     std::vector<PointMass> pointMasses;
 
     bool operator==(const Body&) const = default;

@@ -1,5 +1,6 @@
 #include "core/solver/compiled_mechanism.h"
 
+#include "core/model/convex_hull.h"
 #include "core/model/mass_properties.h"
 #include "core/model/model_error.h"
 #include "core/model/model_limits.h"
@@ -106,6 +107,15 @@ MassProperties Compiler::massOf(std::size_t b) const
             throw ModelError(path + ".section", "the bar has zero length (its ends coincide)");
         const BarSection& s = *body.section;
         parts.push_back(barMassProperties(ends.first, ends.second, s.width, s.thickness, s.density));
+    } else if (body.plate) {
+        const PlateSection& plate = *body.plate;
+        const std::vector<Vec2> outline = plate.outline ? *plate.outline : convexHull(attachments);
+        const MassProperties p = plateMassProperties(outline, plate.thickness, plate.density);
+        if (p.mass <= 0.0)
+            throw ModelError(path + ".plate",
+                             plate.outline ? "the outline encloses no area"
+                                           : "a plate needs three joints not on one line, or an explicit \"outline\"");
+        parts.push_back(p);
     } else if (body.mass) {
         parts.push_back({*body.mass, body.cg.value_or(Vec2::Zero()), body.inertia.value_or(0.0)});
     }

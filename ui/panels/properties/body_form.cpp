@@ -8,11 +8,12 @@
 namespace clevis::ui {
 namespace {
 
-enum MassSource { Massless, Typed, Section };
+enum MassSource { Massless, Typed, Section, Plate };
 
 MassSource sourceOf(const Body& b)
 {
     if (b.section) return Section;
+    if (b.plate) return Plate;
     return b.mass ? Typed : Massless;
 }
 
@@ -35,7 +36,7 @@ Vec2 pinCentroid(const Mechanism& m, const std::string& body)
 void switchSource(Mechanism& m, const std::string& name, int source)
 {
     Body& b = m.bodies[bodyIndex(m, name)];
-    b.mass.reset(), b.cg.reset(), b.inertia.reset(), b.section.reset();
+    b.mass.reset(), b.cg.reset(), b.inertia.reset(), b.section.reset(), b.plate.reset();
     if (source == Typed) {
         b.mass = 1.0;
         b.cg = pinCentroid(m, name);
@@ -43,6 +44,26 @@ void switchSource(Mechanism& m, const std::string& name, int source)
     }
     if (source == Section)
         b.section = BarSection{0.02, 0.008, *materialDensity("steel"), std::nullopt};  // a 20 × 8 mm steel flat
+    if (source == Plate) b.plate = PlateSection{0.008, *materialDensity("steel"), std::nullopt};  // 8 mm steel plate
+}
+
+// The material list and the density it sets, for a bar or a plate.
+void materialFields(FormBuilder& f, double density, const std::function<double&(Mechanism&)>& target,
+                    const QString& undo)
+{
+    QStringList names;
+    int current = -1;
+    for (const auto& mat : materials()) {
+        if (mat.density == density) current = names.size();
+        names << QStringLiteral("%1 (%2 kg/m³)").arg(materialLabel(mat.name)).arg(mat.density, 0, 'f', 0);
+    }
+    names << QObject::tr("Other (density below)");
+    f.choice("material", QObject::tr("Material"), names, current < 0 ? names.size() - 1 : current, undo,
+             [target](Mechanism& m, int i) {
+                 if (i < int(materials().size())) target(m) = materials()[i].density;
+             });
+    f.number("density", QObject::tr("Density"), density, plainQuantity(QStringLiteral("kg/m³"), 1), undo,
+             [target](Mechanism& m, double v) { target(m) = v; });
 }
 
 void sectionFields(FormBuilder& f, const Body& body, const std::function<Body&(Mechanism&)>& self, const QString& undo)
@@ -53,20 +74,21 @@ void sectionFields(FormBuilder& f, const Body& body, const std::function<Body&(M
              [section](Mechanism& m, double v) { section(m).width = v; });
     f.number("thickness", QObject::tr("Thickness"), s.thickness, lengthQuantity(), undo,
              [section](Mechanism& m, double v) { section(m).thickness = v; });
-    QStringList names;
-    int current = -1;
-    for (const auto& mat : materials()) {
-        if (mat.density == s.density) current = names.size();
-        names << QStringLiteral("%1 (%2 kg/m³)").arg(materialLabel(mat.name)).arg(mat.density, 0, 'f', 0);
-    }
-    names << QObject::tr("Other (density below)");
-    f.choice("material", QObject::tr("Material"), names, current < 0 ? names.size() - 1 : current, undo,
-             [section](Mechanism& m, int i) {
-                 if (i < int(materials().size())) section(m).density = materials()[i].density;
-             });
-    f.number("density", QObject::tr("Density"), s.density, plainQuantity(QStringLiteral("kg/m³"), 1), undo,
-             [section](Mechanism& m, double v) { section(m).density = v; });
+    materialFields(
+        f, s.density, [section](Mechanism& m) -> double& { return section(m).density; }, undo);
     f.info({}, QObject::tr("A solid bar between the body's two farthest pins."));
+}
+
+void plateFields(FormBuilder& f, const Body& body, const std::function<Body&(Mechanism&)>& self, const QString& undo)
+{
+    const auto plate = [self](Mechanism& m) -> PlateSection& { return *self(m).plate; };
+    f.number("thickness", QObject::tr("Thickness"), body.plate->thickness, lengthQuantity(), undo,
+             [plate](Mechanism& m, double v) { plate(m).thickness = v; });
+    materialFields(
+        f, body.plate->density, [plate](Mechanism& m) -> double& { return plate(m).density; }, undo);
+    f.info({}, body.plate->outline ? QObject::tr("A flat plate with the outline given in the file.")
+                                   : QObject::tr("A flat plate through the body's pins (the metal round the pins "
+                                                 "is not counted: add point masses for it)."));
 }
 
 void typedFields(FormBuilder& f, const Body& body, const std::function<Body&(Mechanism&)>& self, const QString& undo)
@@ -86,6 +108,7 @@ void typedFields(FormBuilder& f, const Body& body, const std::function<Body&(Mec
     f.optionalNumber("inertia", QObject::tr("Inertia about centre"), body.inertia,
                      plainQuantity(QStringLiteral("kg·m²"), 6), undo,
                      [self](Mechanism& m, std::optional<double> v) { self(m).inertia = v; });
+    f.info({}, QObject::tr("A typed centre stays where it is typed: it does not move with the pins."));
 }
 
 void pointMassFields(FormBuilder& f, const Body& body, const std::function<Body&(Mechanism&)>& self,
@@ -140,9 +163,11 @@ void bodyForm(FormBuilder& f, const Mechanism& m, const Body& body)
     if (pins.size() == 2)
         f.info(QObject::tr("Length"), DisplayUnits::instance().formatLength((pins[1] - pins[0]).norm()));
     f.choice("massSource", QObject::tr("Mass from"),
-             {QObject::tr("nothing (massless)"), QObject::tr("typed values"), QObject::tr("bar section")},
+             {QObject::tr("nothing (massless)"), QObject::tr("typed values"), QObject::tr("bar section"),
+              QObject::tr("plate")},
              sourceOf(body), undo, [name](Mechanism& m, int i) { switchSource(m, name, i); });
     if (sourceOf(body) == Section) sectionFields(f, body, self, undo);
+    if (sourceOf(body) == Plate) plateFields(f, body, self, undo);
     if (sourceOf(body) == Typed) typedFields(f, body, self, undo);
     pointMassFields(f, body, self, undo);
     computedFields(f, m, body);
