@@ -19,6 +19,7 @@
 #include <QComboBox>
 #include <QDir>
 #include <QFileInfo>
+#include <QLabel>
 #include <QLineEdit>
 #include <QTemporaryDir>
 #include <QTest>
@@ -230,6 +231,34 @@ TEST_F(CanvasTest, ClickingInTheScrubbedPosePicksWhatIsDrawnAndKeepsThePosition)
     useTool("Pin");
     click(0.1, -0.1);
     EXPECT_EQ(analysis->currentStep(), 0);
+}
+
+// An opened file is fitted, once solved, around every position it moves
+// through, not only the pose it was drawn in.
+TEST_F(CanvasTest, AnOpenedFileIsFittedToItsWholeRangeOfMotion)
+{
+    QString error;
+    ASSERT_TRUE(window.files()->open(QStringLiteral(CLEVIS_SAMPLES_DIR "/punch_press.json"), &error))
+        << error.toStdString();
+    AnalysisState* analysis = window.analysis();
+    analysis->waitForIdle();
+    QCoreApplication::processEvents();
+    ASSERT_TRUE(analysis->hasResult()) << analysis->errorText().toStdString();
+    const QRectF visible = window.canvas()->rect();
+    for (const StepResult& step : analysis->result().steps)
+        for (const Joint& j : posedMechanism(mechanism(), analysis->compiled(), step).joints)
+            EXPECT_TRUE(visible.contains(window.canvas()->view().toScreen(j.at))) << j.name << " at t = " << step.t;
+}
+
+TEST_F(CanvasTest, TheCursorReadoutShowsTheSnappedPointInDisplayUnits)
+{
+    auto* readout = window.findChild<QLabel*>(QStringLiteral("cursorReadout"));
+    ASSERT_TRUE(readout);
+    const int width = readout->width();
+    QTest::mouseMove(window.canvas(), at(0.12, -0.03));
+    EXPECT_EQ(readout->text().toStdString(), "x 120.00  y -30.00 mm (on grid)");
+    QTest::mouseMove(window.canvas(), at(-0.0321, 0.0456));
+    EXPECT_EQ(readout->width(), width);  // moving never resizes the status bar
 }
 
 TEST_F(CanvasTest, APointNearlyLevelWithTheStartSnapsLevel)

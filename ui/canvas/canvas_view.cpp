@@ -33,6 +33,18 @@ std::vector<Vec2> drawnPoints(const Mechanism& m)
     return pts;
 }
 
+// Every point the mechanism reaches over the solved cycle.
+std::vector<Vec2> pointsOverCycle(const Mechanism& m, const AnalysisState& analysis)
+{
+    std::vector<Vec2> pts = drawnPoints(m);
+    if (!analysis.hasResult()) return pts;
+    for (const StepResult& step : analysis.result().steps) {
+        const std::vector<Vec2> posed = drawnPoints(posedMechanism(m, analysis.compiled(), step));
+        pts.insert(pts.end(), posed.begin(), posed.end());
+    }
+    return pts;
+}
+
 }  // namespace
 
 CanvasView::CanvasView(MechanismDocument* doc, AnalysisState* analysis, QWidget* parent)
@@ -44,8 +56,17 @@ CanvasView::CanvasView(MechanismDocument* doc, AnalysisState* analysis, QWidget*
     setAcceptDrops(false);  // files dropped here go to the main window
     connect(doc_, &MechanismDocument::mechanismChanged, this, qOverload<>(&QWidget::update));
     connect(doc_, &MechanismDocument::selectionChanged, this, qOverload<>(&QWidget::update));
-    connect(doc_, &MechanismDocument::documentReset, this, &CanvasView::fitToView);
-    connect(analysis_, &AnalysisState::resultChanged, this, qOverload<>(&QWidget::update));
+    connect(doc_, &MechanismDocument::documentReset, this, [this] {
+        fitOnResult_ = true;
+        fitAround(drawnPoints(doc_->mechanism()));  // the result on hand is the previous file's
+    });
+    connect(analysis_, &AnalysisState::resultChanged, this, [this] {
+        if (fitOnResult_ && analysis_->hasResult()) {
+            fitOnResult_ = false;
+            fitToView();
+        }
+        update();
+    });
     connect(analysis_, &AnalysisState::currentStepChanged, this, qOverload<>(&QWidget::update));
     connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, qOverload<>(&QWidget::update));
 }
@@ -77,9 +98,10 @@ void CanvasView::tell(const QString& message)
     emit hintChanged(message);
 }
 
-void CanvasView::fitToView()
+void CanvasView::fitToView() { fitAround(pointsOverCycle(doc_->mechanism(), *analysis_)); }
+
+void CanvasView::fitAround(const std::vector<Vec2>& pts)
 {
-    const std::vector<Vec2> pts = drawnPoints(doc_->mechanism());
     if (pts.empty()) {
         view_.fit({-0.05, -0.05}, {0.25, 0.15}, rect());
     } else {
@@ -147,7 +169,9 @@ void CanvasView::mouseMoveEvent(QMouseEvent* e)
         update();
         return;
     }
-    tool_->move(pointer(e->position(), e->modifiers()));
+    const Pointer at = pointer(e->position(), e->modifiers());
+    emit pointerMoved(at.snap);
+    tool_->move(at);
 }
 
 void CanvasView::mouseReleaseEvent(QMouseEvent* e)
@@ -189,6 +213,8 @@ void CanvasView::keyPressEvent(QKeyEvent* e)
     }
     QWidget::keyPressEvent(e);
 }
+
+void CanvasView::leaveEvent(QEvent*) { emit pointerLeft(); }
 
 void CanvasView::resizeEvent(QResizeEvent*)
 {

@@ -10,6 +10,7 @@
 
 #include <memory>
 #include <optional>
+#include <vector>
 
 namespace clevis::ui {
 
@@ -24,6 +25,8 @@ public:
 
     void setTool(std::unique_ptr<Tool> tool);
     const Tool* tool() const { return tool_.get(); }
+    // Fits the view around the mechanism in every position of the solved
+    // cycle (the drawn pose alone when nothing is solved).
     void fitToView();
     void zoomBy(double factor);
 
@@ -36,8 +39,10 @@ public:
     QSize sizeHint() const override { return {900, 620}; }
 
 signals:
-    void hintChanged(const QString& hint);  // what the active tool expects next, or a note about the last click
-    void toolDismissed();                   // Esc with nothing to cancel: back to selecting
+    void hintChanged(const QString& hint);    // what the active tool expects next, or a note about the last click
+    void toolDismissed();                     // Esc with nothing to cancel: back to selecting
+    void pointerMoved(const SnapResult& at);  // the point a click would place
+    void pointerLeft();
 
 protected:
     void paintEvent(QPaintEvent*) override;
@@ -48,19 +53,22 @@ protected:
     void wheelEvent(QWheelEvent*) override;
     void keyPressEvent(QKeyEvent*) override;
     void resizeEvent(QResizeEvent*) override;
+    void leaveEvent(QEvent*) override;
 
 private:
     Pointer pointer(const QPointF& pos, Qt::KeyboardModifiers mods) const;
     void announce();
     std::optional<Mechanism> scrubbedPose() const;
+    void fitAround(const std::vector<Vec2>& pts);
 
     MechanismDocument* doc_;
     AnalysisState* analysis_;
     ViewTransform view_;
     std::unique_ptr<Tool> tool_;
     std::optional<QPointF> panFrom_;
-    bool fitPending_ = true;  // fit once the widget has its real size
-    bool told_ = false;       // the tool left a note during this click: keep it instead of the hint
+    bool fitPending_ = true;    // fit once the widget has its real size
+    bool fitOnResult_ = false;  // an opened file: fit again to its range of motion once solved
+    bool told_ = false;         // the tool left a note during this click: keep it instead of the hint
 };
 
 }  // namespace clevis::ui

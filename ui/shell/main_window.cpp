@@ -2,6 +2,7 @@
 
 #include "ui/analysis/analysis_state.h"
 #include "ui/canvas/canvas_view.h"
+#include "ui/canvas/cursor_readout.h"
 #include "ui/canvas/tool_palette.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/document/mechanism_edits.h"
@@ -55,6 +56,10 @@ MainWindow::MainWindow(const QString& recoveryFolder, QWidget* parent)
     setCentralWidget(canvas_);
     setAcceptDrops(true);
     statusBar()->addWidget(status_, 1);
+    auto* cursor = new CursorReadout(this);
+    statusBar()->addPermanentWidget(cursor);
+    connect(canvas_, &CanvasView::pointerMoved, cursor, &CursorReadout::show);
+    connect(canvas_, &CanvasView::pointerLeft, cursor, &CursorReadout::clear);
     connect(canvas_, &CanvasView::hintChanged, status_, &StatusLine::showHint);
     connect(files_, &FileActions::note, status_, &StatusLine::showHint);
     connect(autosave_, &AutosaveTimer::note, status_, &StatusLine::showHint);
