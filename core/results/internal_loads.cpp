@@ -29,6 +29,12 @@ public:
         const Vec2 b = pointPosition(s.q, bar.ends[1].point);
         e_ = (b - a_) / bar.length;
         n_ = perp(e_);
+        const MassSpread& spread = bar.spread;
+        const double span = spread.to - spread.from;
+        if (span > 0.0) {
+            mu_ = spread.mass / span;
+            free_ = gravity_ - accel(a_ + spread.offset * n_);
+        }
     }
 
     // a(P) = a_G + α·(P − G)⊥ − ω²·(P − G)
@@ -72,8 +78,8 @@ public:
         const MassSpread& spread = bar_.spread;
         const double u0 = spread.from, u1 = std::min(x, spread.to), span = spread.to - spread.from;
         if (span <= 0.0 || u1 <= u0) return;
-        const double mu = spread.mass / span, d = spread.offset;
-        const Vec2 free = gravity_ - accel(a_ + d * n_);
+        const double mu = mu_, d = spread.offset;
+        const Vec2& free = free_;
         const double d1 = u1 - u0, d2 = u1 * u1 - u0 * u0, d3 = u1 * u1 * u1 - u0 * u0 * u0;
         const double w2 = omega_ * omega_;
         force += mu * (free * d1 - (alpha_ * n_ - w2 * e_) * (0.5 * d2));
@@ -99,6 +105,8 @@ private:
     const BarModel& bar_;
     Vec2 gravity_, a_, g_, aG_, e_, n_;
     double omega_, alpha_;
+    double mu_ = 0.0;           // kg/m of the spread
+    Vec2 free_ = Vec2::Zero();  // g − a₀, at the spread's start line
 };
 
 }  // namespace
