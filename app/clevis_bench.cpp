@@ -5,9 +5,11 @@
 // round one driven hub, whose Jacobian has no narrow band, time the sparse
 // LU path against the band path (jacobian_factor.h). The mobility check
 // that starts every cycle is also timed on its own, since its dense rank
-// tests grow with the cube of the size.
+// tests grow with the cube of the size. The 200-body chain is timed again
+// with the internal loads and envelopes of every bar added.
 #include "app/heap_reuse.h"
 #include "core/file/mechanism_file.h"
+#include "core/results/bar_envelope.h"
 #include "core/solver/cycle_sweep.h"
 #include "core/solver/mobility_check.h"
 #include "core/solver/step_solver.h"
@@ -19,7 +21,9 @@ namespace {
 
 constexpr int kSteps = 360;
 
-void timeCycle(benchmark::State& state, const clevis::CompiledMechanism& m)
+// `withBars`: also the internal loads of every bar at every step (21
+// stations each) and their envelopes, the pass that sizing adds to a cycle.
+void timeCycle(benchmark::State& state, const clevis::CompiledMechanism& m, const clevis::BarList* withBars = nullptr)
 {
     clevis::SweepOptions options;
     options.steps = kSteps;
@@ -30,6 +34,7 @@ void timeCycle(benchmark::State& state, const clevis::CompiledMechanism& m)
             break;
         }
         benchmark::DoNotOptimize(result);
+        if (withBars) benchmark::DoNotOptimize(clevis::barEnvelopes(m, result, withBars->bars, 21));
     }
     // A rate counter is divided by the CPU time; inverted, it is time per step.
     state.counters["time_per_step"] = benchmark::Counter(double(state.iterations()) * kSteps,
@@ -50,6 +55,18 @@ void FourBarChainCycle(benchmark::State& state)
     timeCycle(state, m);
 }
 BENCHMARK(FourBarChainCycle)->ArgName("bodies")->Arg(10)->Arg(50)->Arg(200)->Unit(benchmark::kMillisecond);
+
+// The same cycle with the internal loads of every bar: compare its median
+// with FourBarChainCycle's (the pass should add at most a quarter).
+void FourBarChainCycleWithBarLoads(benchmark::State& state)
+{
+    const clevis::Mechanism doc = clevis::test::fourBarChain(int(state.range(0)));
+    const clevis::CompiledMechanism m = clevis::compile(doc);
+    const clevis::BarList bars = clevis::findBars(doc, m);
+    timeCycle(state, m, &bars);
+    state.counters["bars"] = double(bars.bars.size());
+}
+BENCHMARK(FourBarChainCycleWithBarLoads)->ArgName("bodies")->Arg(200)->Unit(benchmark::kMillisecond);
 
 void FourBarFanCycle(benchmark::State& state)
 {

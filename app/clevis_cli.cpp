@@ -2,6 +2,7 @@
 #include "app/analyze_command.h"
 #include "app/cli_options.h"
 #include "app/heap_reuse.h"
+#include "app/internal_loads_command.h"
 #ifdef CLEVIS_HAS_RENDER
 #include "app/cli_render_commands.h"
 #endif
@@ -15,6 +16,8 @@ int run(const clevis::cli::Command& command)
     using namespace clevis::cli;
     if (const auto* help = std::get_if<HelpRequest>(&command)) std::cout << helpText(help->topic);
     else if (std::holds_alternative<VersionRequest>(command)) std::cout << "clevis-cli " CLEVIS_VERSION "\n";
+    else if (const auto* loads = std::get_if<InternalLoadsOptions>(&command))
+        return runInternalLoads(*loads, std::cout, std::cerr);
     else return runAnalyze(std::get<AnalyzeOptions>(command), std::cout, std::cerr);
     return kExitOk;
 }

@@ -3,6 +3,7 @@
 #include "core/model/model_limits.h"
 
 #include <charconv>
+#include <cmath>
 #include <optional>
 
 namespace clevis::cli {
@@ -15,7 +16,10 @@ Usage:
   clevis-cli fbd FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT) --out F.svg|F.pdf|F.png
                  [--steps N] [--dalembert]
   clevis-cli report FILE --out review.pdf [--steps N]
+  clevis-cli internal-loads FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)
+                 [--stations N] [--steps N] [--json OUT] [--csv OUT]
   clevis-cli analyze --help
+  clevis-cli internal-loads --help
   clevis-cli --help
   clevis-cli --version
 
@@ -29,6 +33,9 @@ Commands:
   report     write the design-review PDF: drawing, inputs, plots, peak loads,
              free-body diagrams at the critical positions, energy balance,
              cautions
+  internal-loads
+             axial force, shear force and bending moment along one bar at
+             one position, and their envelope over the cycle
   (fbd and report are present in builds that include the desktop app.)
 
 Run "clevis-cli analyze --help" for the options, units, sign conventions and
@@ -69,6 +76,45 @@ Exit status:
      trustworthy: the cycle could not be completed or some positions are near
      singular (dead centre, toggle). In that last case the summary is still
      printed and the outputs written; the warnings follow on stderr.
+  2  wrong command line
+)";
+
+const char* const kInternalLoadsHelp =
+    R"(Usage: clevis-cli internal-loads FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)
+                 [--stations N] [--steps N] [--json OUT] [--csv OUT]
+
+Prints the internal loads of the bar NAME at one position: the axial force N,
+shear force V and bending moment M at N equally spaced stations from its
+first end (s = 0) to its second, and their envelope over the whole cycle
+(largest tension and compression, |V| and |M|, with the station and drive
+position of each). A bar is a body with a section, or a body with exactly two
+joints; the output says how its mass is laid along it.
+
+Options:
+  --body NAME      the bar
+  --at-deg A       where the first rotary driver is at A degrees (modulo
+                   360°), solved at exactly that angle (the first time in the
+                   cycle it is reached)
+  --at-t T         at time T s, solved at exactly that time
+  --at-peak JOINT  at the solved position where that joint's load peaks
+  --stations N     stations along the bar, N >= 2, both ends included
+                   (default 21); the envelope uses the same stations
+  --steps N        intervals over the cycle (default: the file's setting)
+  --json OUT       write the stations and the envelope as JSON to OUT
+  --csv OUT        write the stations as CSV to OUT (s_m, axial_N, shear_N,
+                   moment_Nm)
+  (--name=value works too)
+
+Signs (docs/method.md, "Internal loads along a bar"): N > 0 is tension. Look
+along the bar from its first end to its second with its left side up: V and M
+then have the beam-table signs (V > 0 at a left-hand support, M > 0 sagging).
+
+Exit status:
+  0  done, and the cycle is trustworthy
+  1  FILE cannot be read or analysed; NAME is not a body or not a bar; the
+     joint is unknown; the position is not reached in the solved cycle; an
+     output cannot be written; or the results are not trustworthy (the
+     loads are still printed)
   2  wrong command line
 )";
 
@@ -124,6 +170,55 @@ Command parseAnalyze(ArgumentReader& in)
     return options;
 }
 
+int parseStations(const std::string& text)
+{
+    int value = 0;
+    const auto [end, error] = std::from_chars(text.data(), text.data() + text.size(), value);
+    if (error != std::errc() || end != text.data() + text.size() || value < 2 || value > kMaxSteps)
+        throw UsageError("--stations needs a whole number from 2 (the two ends) to " + std::to_string(kMaxSteps) +
+                         ", not \"" + text + "\"");
+    return value;
+}
+
+double parseNumber(const std::string& option, const std::string& text)
+{
+    double value = 0.0;
+    const auto [end, error] = std::from_chars(text.data(), text.data() + text.size(), value);
+    if (error != std::errc() || end != text.data() + text.size() || !std::isfinite(value))
+        throw UsageError(option + ": \"" + text + "\" is not a number");
+    return value;
+}
+
+Command parseInternalLoads(ArgumentReader& in)
+{
+    InternalLoadsOptions options;
+    int positions = 0;
+    while (!in.done()) {
+        const std::string arg = in.take();
+        if (isHelp(arg)) return HelpRequest{"internal-loads"};
+        if (arg.size() > 1 && arg[0] == '-') {
+            const std::size_t equals = arg.find('=');
+            const std::string name = arg.substr(0, equals);
+            const std::optional<std::string> value =
+                equals == std::string::npos ? std::nullopt : std::optional(arg.substr(equals + 1));
+            if (name == "--body") options.body = in.valueOf(name, value);
+            else if (name == "--at-deg") options.at.degrees = parseNumber(name, in.valueOf(name, value)), ++positions;
+            else if (name == "--at-t") options.at.time = parseNumber(name, in.valueOf(name, value)), ++positions;
+            else if (name == "--at-peak") options.at.peakOfJoint = in.valueOf(name, value), ++positions;
+            else if (name == "--stations") options.stations = parseStations(in.valueOf(name, value));
+            else if (name == "--steps") options.steps = parseSteps(in.valueOf(name, value));
+            else if (name == "--json") options.jsonOut = in.valueOf(name, value);
+            else if (name == "--csv") options.csvOut = in.valueOf(name, value);
+            else throw UsageError("unknown option \"" + arg + "\" for internal-loads");
+        } else if (options.file.empty()) options.file = arg;
+        else throw UsageError("internal-loads takes one FILE; \"" + arg + "\" is a second one");
+    }
+    if (options.file.empty()) throw UsageError("internal-loads needs a mechanism FILE");
+    if (options.body.empty()) throw UsageError("internal-loads needs --body NAME");
+    if (positions != 1) throw UsageError("internal-loads needs exactly one of --at-deg, --at-t, --at-peak");
+    return options;
+}
+
 }  // namespace
 
 Command parseCommandLine(const std::vector<std::string>& args)
@@ -134,9 +229,15 @@ Command parseCommandLine(const std::vector<std::string>& args)
     if (isHelp(command)) return HelpRequest{};
     if (command == "--version") return VersionRequest{};
     if (command == "analyze") return parseAnalyze(in);
+    if (command == "internal-loads") return parseInternalLoads(in);
     throw UsageError("unknown command \"" + command + "\"");
 }
 
-std::string helpText(const std::string& topic) { return topic == "analyze" ? kAnalyzeHelp : kOverview; }
+std::string helpText(const std::string& topic)
+{
+    if (topic == "analyze") return kAnalyzeHelp;
+    if (topic == "internal-loads") return kInternalLoadsHelp;
+    return kOverview;
+}
 
 }  // namespace clevis::cli

@@ -2,6 +2,7 @@
 // nothing about mechanisms, so new subcommands only add a case here.
 #pragma once
 
+#include <optional>
 #include <stdexcept>
 #include <string>
 #include <variant>
@@ -24,7 +25,20 @@ struct AnalyzeOptions {
     int steps = 0;                // 0: the file's own setting
     std::string jsonOut, csvOut;  // empty: not written
 };
-using Command = std::variant<HelpRequest, VersionRequest, AnalyzeOptions>;
+// Where `internal-loads` looks: exactly one of the three is set.
+struct PositionChoice {
+    std::optional<double> degrees;  // first rotary driver's angle, solved exactly
+    std::optional<double> time;     // s, solved exactly
+    std::string peakOfJoint;        // the stored step where this joint's load peaks
+};
+struct InternalLoadsOptions {
+    std::string file, body;
+    PositionChoice at;
+    int stations = 21;  // equally spaced, both ends included
+    int steps = 0;      // 0: the file's own setting
+    std::string jsonOut, csvOut;
+};
+using Command = std::variant<HelpRequest, VersionRequest, AnalyzeOptions, InternalLoadsOptions>;
 
 // `args` excludes the program name. Throws UsageError.
 Command parseCommandLine(const std::vector<std::string>& args);

@@ -6,6 +6,7 @@
 #include "core/results/free_body.h"
 #include "core/solver/analysis_error.h"
 #include "core/solver/cycle_sweep.h"
+#include "core/solver/exact_position.h"
 #include "render/free_body_painter.h"
 #include "render/review_report.h"
 
@@ -108,35 +109,29 @@ std::unique_ptr<Solved> solve(const Parsed& p)
     return out;
 }
 
-// Nearest solved step to an angle of the first rotary driver (modulo 360°).
-int stepAtDegrees(const Solved& s, double degrees)
+// The step at exactly an angle of the first rotary driver (modulo 360°, the
+// first time the cycle reaches it), solved there and added to the cycle.
+int stepAtDegrees(Solved& s, double degrees)
 {
     int driver = -1;
     for (std::size_t d = 0; d < s.m.drivers.size() && driver < 0; ++d)
         if (s.m.drivers[d].type == DriverType::Rotary) driver = int(d);
     if (driver < 0) throw Usage("--at-deg: the mechanism has no rotary driver; use --at-t");
-    int best = 0;
-    double bestGap = 1e300;
-    for (std::size_t i = 0; i < s.r.steps.size(); ++i) {
-        const double gap = std::remainder(radToDeg(s.r.steps[i].drivePosition[driver]) - degrees, 360.0);
-        if (std::abs(gap) < bestGap) {
-            bestGap = std::abs(gap);
-            best = int(i);
-        }
-    }
-    return best;
+    const auto t = timeAtDrivePosition(s.m, s.r, driver, degToRad(degrees));
+    if (!t)
+        throw Usage("--at-deg " + std::to_string(degrees) + ": \"" + s.m.drivers[driver].name +
+                    "\" does not reach that angle in the solved cycle");
+    return insertStep(s.r, solveAtTime(s.m, s.r, *t));
 }
 
-int stepAtTime(const Solved& s, double t)
+// The step at exactly time t, solved there and added to the cycle.
+int stepAtTime(Solved& s, double t)
 {
     const auto& steps = s.r.steps;
     if (t < steps.front().t - 1e-12 || t > steps.back().t + 1e-12)
         throw Usage("--at-t " + std::to_string(t) + " s is outside the solved cycle (0 to " +
                     std::to_string(steps.back().t) + " s)");
-    int best = 0;
-    for (std::size_t i = 1; i < steps.size(); ++i)
-        if (std::abs(steps[i].t - t) < std::abs(steps[best].t - t)) best = int(i);
-    return best;
+    return insertStep(s.r, solveAtTime(s.m, s.r, std::clamp(t, steps.front().t, steps.back().t)));
 }
 
 int stepAtPeak(const Solved& s, const std::string& joint)
@@ -149,7 +144,7 @@ int stepAtPeak(const Solved& s, const std::string& joint)
     throw Usage("--at-peak: no joint \"" + joint + "\" (joints: " + names + ")");
 }
 
-int chooseStep(const Parsed& p, const Solved& s)
+int chooseStep(const Parsed& p, Solved& s)
 {
     const int given = int(p.options.count("--at-deg") + p.options.count("--at-t") + p.options.count("--at-peak"));
     if (given != 1) throw Usage("give exactly one of --at-deg, --at-t, --at-peak");

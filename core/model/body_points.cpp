@@ -52,4 +52,31 @@ std::vector<Vec2> bodyPins(const Mechanism& m, const std::string& body)
     return pins;
 }
 
+std::vector<Vec2> bodyAttachments(const Mechanism& m, const std::string& body)
+{
+    std::vector<Vec2> points;
+    for (const auto& j : m.joints)
+        if (j.bodies[0] == body || j.bodies[1] == body) points.push_back(j.at);
+    for (const auto& d : m.drivers)
+        for (const auto& end : d.ends)
+            if (end && end->body == body) points.push_back(end->at);
+    return points;
+}
+
+std::optional<std::pair<Vec2, Vec2>> sectionEnds(const Mechanism& m, const Body& body)
+{
+    if (!body.section) return std::nullopt;
+    if (body.section->ends) return body.section->ends;
+    const std::vector<Vec2> attachments = bodyAttachments(m, body.name);
+    std::optional<std::pair<Vec2, Vec2>> ends;
+    double longest = -1.0;
+    for (std::size_t i = 0; i < attachments.size(); ++i)
+        for (std::size_t k = i + 1; k < attachments.size(); ++k)
+            if ((attachments[k] - attachments[i]).norm() > longest) {
+                longest = (attachments[k] - attachments[i]).norm();
+                ends = {attachments[i], attachments[k]};
+            }
+    return ends;
+}
+
 }  // namespace clevis

@@ -7,7 +7,9 @@
 
 #include "core/model/mechanism.h"
 
+#include <optional>
 #include <string>
+#include <utility>
 #include <vector>
 
 namespace clevis {
@@ -35,5 +37,14 @@ std::vector<BodyPointOf> bodyPoints(const Mechanism& m, const std::string& body)
 
 // Joint points on a body (every joint that names it), in document order.
 std::vector<Vec2> bodyPins(const Mechanism& m, const std::string& body);
+
+// Where a body is joined to others, at the drawn pose: its joint points and
+// the cylinder ends on it, in document order.
+std::vector<Vec2> bodyAttachments(const Mechanism& m, const std::string& body);
+
+// The ends of a body's bar section: as given, or else its two farthest-apart
+// attachments (the first such pair in document order). None without a
+// section, or with fewer than two attachments and no ends given.
+std::optional<std::pair<Vec2, Vec2>> sectionEnds(const Mechanism& m, const Body& body);
 
 }  // namespace clevis

@@ -33,31 +33,33 @@ FreeBodyItem fromAction(const ConstraintAction& a)
     return item;
 }
 
-void addJointReactions(const CompiledMechanism& m, const StepResult& s, int body, std::vector<FreeBodyItem>& out)
+using ItemsPerBody = std::vector<std::vector<FreeBodyItem>>;
+
+void addJointReactions(const CompiledMechanism& m, const StepResult& s, ItemsPerBody& out)
 {
     for (std::size_t k = 0; k < m.joints.size(); ++k) {
         const CompiledJoint& j = m.joints[k];
         for (int side = 0; side < 2; ++side) {
-            if (j.body[side] != body) continue;
+            if (j.body[side] == kGround) continue;
             FreeBodyItem item = throughPoint(fromAction(s.actions[side][k]), contactPoint(s, j));
             item.kind = FreeBodyItemKind::JointReaction;
             item.name = j.name;
             item.otherBody = m.bodyName(j.body[1 - side]);
             item.jointType = j.type;
             item.axis = axisOf(s, j);
-            out.push_back(std::move(item));
+            out[j.body[side]].push_back(std::move(item));
         }
     }
 }
 
-void addDriverActions(const CompiledMechanism& m, const StepResult& s, int body, std::vector<FreeBodyItem>& out)
+void addDriverActions(const CompiledMechanism& m, const StepResult& s, ItemsPerBody& out)
 {
     for (std::size_t d = 0; d < m.drivers.size(); ++d) {
         const CompiledDriver& driver = m.drivers[d];
         const std::size_t k = m.joints.size() + d;  // constraints: joints, then drivers
         for (int side = 0; side < 2; ++side) {
             const ConstraintAction& a = s.actions[side][k];
-            if (a.body != body) continue;
+            if (a.body == kGround) continue;
             FreeBodyItem item = fromAction(a);
             int other = s.actions[1 - side][k].body;
             if (driver.joint >= 0) {
@@ -72,7 +74,7 @@ void addDriverActions(const CompiledMechanism& m, const StepResult& s, int body,
             item.kind = FreeBodyItemKind::DriverAction;
             item.name = driver.name;
             item.otherBody = m.bodyName(other);
-            out.push_back(std::move(item));
+            out[a.body].push_back(std::move(item));
         }
     }
 }
@@ -97,23 +99,32 @@ FreeBodyItemKind loadKind(const CompiledMechanism& m, std::string_view source)
     return FreeBodyItemKind::Weight;
 }
 
-void addAppliedLoads(const CompiledMechanism& m, const StepResult& s, int body, std::vector<FreeBodyItem>& out)
+void addAppliedLoads(const CompiledMechanism& m, const StepResult& s, ItemsPerBody& out)
 {
     for (const AppliedLoad& l : appliedLoads(m, s.q, s.qd, s.t, s.drivePosition)) {
-        if (l.body != body) continue;
+        if (l.body == kGround) continue;
         FreeBodyItem item;
         item.kind = loadKind(m, l.source);
         item.name = std::string(l.source);
         item.at = l.at;
         item.force = l.force;
         item.couple = l.couple;
-        out.push_back(std::move(item));
+        out[l.body].push_back(std::move(item));
     }
 }
 
 FreeBodyEquation equation(double sum, double kinetic) { return {sum, kinetic, sum - kinetic}; }
 
 }  // namespace
+
+std::vector<std::vector<FreeBodyItem>> freeBodyItems(const CompiledMechanism& m, const StepResult& s)
+{
+    ItemsPerBody items(m.bodies.size());
+    addJointReactions(m, s, items);
+    addDriverActions(m, s, items);
+    addAppliedLoads(m, s, items);
+    return items;
+}
 
 FreeBodyDiagram freeBodyDiagram(const CompiledMechanism& m, const CycleResult& r, int body, int step)
 {
@@ -133,9 +144,7 @@ FreeBodyDiagram freeBodyDiagram(const CompiledMechanism& m, const CycleResult& r
     d.inertia = m.bodies[body].mass.inertia;
     d.accel = s.qdd.segment<2>(3 * body);
     d.alpha = s.qdd[3 * body + 2];
-    addJointReactions(m, s, body, d.items);
-    addDriverActions(m, s, body, d.items);
-    addAppliedLoads(m, s, body, d.items);
+    d.items = std::move(freeBodyItems(m, s)[body]);
 
     Vec2 force = Vec2::Zero();
     double moment = 0.0;

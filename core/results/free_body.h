@@ -48,6 +48,11 @@ struct FreeBodyDiagram {
     double inertiaCouple() const { return inertia * alpha; }  // I_G·α
 };
 
+// What acts on each moving body at one step (indexed by body), in the order
+// of the diagram: joint reactions, driver actions, then applied loads and
+// weight. One pass over the mechanism serves every body.
+std::vector<std::vector<FreeBodyItem>> freeBodyItems(const CompiledMechanism& m, const StepResult& s);
+
 // The diagram of moving body `body` at steps[step]; throws std::out_of_range
 // for ground or an index outside the mechanism or the result.
 FreeBodyDiagram freeBodyDiagram(const CompiledMechanism& m, const CycleResult& r, int body, int step);

@@ -1,5 +1,6 @@
 #include "core/solver/compiled_mechanism.h"
 
+#include "core/model/body_points.h"
 #include "core/model/convex_hull.h"
 #include "core/model/mass_properties.h"
 #include "core/model/model_error.h"
@@ -27,7 +28,6 @@ private:
     int jointIndex(const std::string& name, const std::string& path) const;
     int driverIndex(const std::string& name, const std::string& path) const;
     BodyPoint point(int body, const Vec2& global) const;
-    std::vector<Vec2> attachmentPoints(int body) const;
     MassProperties massOf(std::size_t b) const;
     void checkAttachmentNames() const;
     void checkNotADuplicatePin(std::size_t k) const;
@@ -70,39 +70,16 @@ BodyPoint Compiler::point(int body, const Vec2& global) const
     return {body, body == kGround ? global : Vec2(global - out_.bodies[body].mass.cg)};
 }
 
-// Points where a body is attached to others: its joints and cylinder ends.
-std::vector<Vec2> Compiler::attachmentPoints(int body) const
-{
-    std::vector<Vec2> points;
-    const std::string& name = in_.bodies[body].name;
-    for (const auto& j : in_.joints)
-        if (j.bodies[0] == name || j.bodies[1] == name) points.push_back(j.at);
-    for (const auto& d : in_.drivers)
-        for (const auto& end : d.ends)
-            if (end && end->body == name) points.push_back(end->at);
-    return points;
-}
-
 MassProperties Compiler::massOf(std::size_t b) const
 {
     const Body& body = in_.bodies[b];
     const std::string path = at("bodies", b);
     std::vector<MassProperties> parts;
-    const std::vector<Vec2> attachments = attachmentPoints(int(b));
+    const std::vector<Vec2> attachments = bodyAttachments(in_, body.name);
     if (body.section) {
-        std::pair<Vec2, Vec2> ends;
-        if (body.section->ends) ends = *body.section->ends;
-        else {
-            if (attachments.size() < 2)
-                throw ModelError(path + ".section", "a bar needs two joints on the body, or explicit \"ends\"");
-            double longest = -1.0;
-            for (std::size_t i = 0; i < attachments.size(); ++i)
-                for (std::size_t k = i + 1; k < attachments.size(); ++k)
-                    if ((attachments[k] - attachments[i]).norm() > longest) {
-                        longest = (attachments[k] - attachments[i]).norm();
-                        ends = {attachments[i], attachments[k]};
-                    }
-        }
+        const auto found = sectionEnds(in_, body);
+        if (!found) throw ModelError(path + ".section", "a bar needs two joints on the body, or explicit \"ends\"");
+        const auto& ends = *found;
         if ((ends.second - ends.first).norm() < 1e-9)
             throw ModelError(path + ".section", "the bar has zero length (its ends coincide)");
         const BarSection& s = *body.section;
