@@ -1,52 +1,57 @@
 #include "ui/results/free_body_view.h"
 
 #include "render/free_body_painter.h"
-#include "render/palette.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/document/mechanism_document.h"
+#include "ui/results/free_body_canvas.h"
 #include "ui/shell/display_units.h"
 
 #include <QCheckBox>
-#include <QLabel>
-#include <QPainter>
+#include <QHBoxLayout>
+#include <QToolButton>
 #include <QVBoxLayout>
 
 namespace clevis::ui {
+namespace {
 
-// Paints the current diagram scaled into the widget.
-class FreeBodyCanvas : public QWidget {
-public:
-    explicit FreeBodyCanvas(QWidget* parent) : QWidget(parent) { setMinimumSize(200, 140); }
-    std::unique_ptr<FreeBodyPainter> figure;
+QToolButton* toolButton(const QString& text, const QString& tip, QWidget* parent)
+{
+    auto* b = new QToolButton(parent);
+    b->setText(text);
+    b->setToolTip(tip);
+    b->setAutoRaise(true);
+    return b;
+}
 
-protected:
-    void paintEvent(QPaintEvent*) override
-    {
-        QPainter p(this);
-        p.fillRect(rect(), palette::paper());
-        if (!figure) return;
-        p.setRenderHint(QPainter::Antialiasing);
-        p.setRenderHint(QPainter::TextAntialiasing);
-        figure->paint(p, QRectF(rect()).adjusted(4, 4, -4, -4));
-    }
-};
+}  // namespace
 
 FreeBodyView::FreeBodyView(MechanismDocument* doc, AnalysisState* analysis, QWidget* parent)
     : QWidget(parent)
     , doc_(doc)
     , analysis_(analysis)
     , dAlembert_(new QCheckBox(tr("Inertia loads on the body"), this))
-    , message_(new QLabel(this))
+    , zoomOut_(toolButton(QStringLiteral("−"), tr("Smaller (−)"), this))
+    , zoomIn_(toolButton(QStringLiteral("+"), tr("Larger (+)"), this))
+    , fit_(toolButton(tr("Fit"), tr("The whole body in view (0)"), this))
     , canvas_(new FreeBodyCanvas(this))
 {
     setObjectName("freeBodyView");
     dAlembert_->setToolTip(tr("d'Alembert: draw −m·a_G and −I_G·α on the body instead of a separate kinetic diagram"));
-    message_->setWordWrap(true);
+    auto* controls = new QHBoxLayout;
+    controls->setContentsMargins(0, 0, 0, 0);
+    controls->addWidget(dAlembert_);
+    controls->addStretch(1);
+    controls->addWidget(zoomOut_);
+    controls->addWidget(zoomIn_);
+    controls->addWidget(fit_);
     auto* layout = new QVBoxLayout(this);
     layout->setContentsMargins(2, 2, 2, 2);
-    layout->addWidget(dAlembert_);
-    layout->addWidget(message_);
+    layout->setSpacing(2);
+    layout->addLayout(controls);
     layout->addWidget(canvas_, 1);
+    connect(zoomOut_, &QToolButton::clicked, canvas_, &FreeBodyCanvas::zoomOut);
+    connect(zoomIn_, &QToolButton::clicked, canvas_, &FreeBodyCanvas::zoomIn);
+    connect(fit_, &QToolButton::clicked, canvas_, &FreeBodyCanvas::fit);
     connect(doc_, &MechanismDocument::selectionChanged, this, &FreeBodyView::refresh);
     connect(analysis_, &AnalysisState::resultChanged, this, &FreeBodyView::refresh);
     connect(analysis_, &AnalysisState::currentStepChanged, this, &FreeBodyView::refresh);
@@ -56,12 +61,12 @@ FreeBodyView::FreeBodyView(MechanismDocument* doc, AnalysisState* analysis, QWid
 }
 
 bool FreeBodyView::dAlembert() const { return dAlembert_->isChecked(); }
-QString FreeBodyView::message() const { return message_->text(); }
+QString FreeBodyView::message() const { return canvas_->message(); }
 
 void FreeBodyView::refresh()
 {
+    const int shownBody = diagram_ ? diagram_->body : -1;
     diagram_.reset();
-    canvas_->figure.reset();
     const Selection s = doc_->selection();
     QString note;
     if (!analysis_->hasResult()) note = tr("No solved cycle: %1").arg(analysis_->errorText());
@@ -72,14 +77,12 @@ void FreeBodyView::refresh()
         if (body < 0) note = tr("%1 is the frame: its loads are the shaking force and moment.").arg(s.name);
         else {
             diagram_ = freeBodyDiagram(m, analysis_->result(), body, analysis_->currentStep());
-            canvas_->figure = std::make_unique<FreeBodyPainter>(
-                m, analysis_->result(), *diagram_,
-                FreeBodyPaintOptions{renderUnits(DisplayUnits::instance()), dAlembert(), false});
+            canvas_->showFigure(m, analysis_->result(), *diagram_,
+                                {renderUnits(DisplayUnits::instance()), dAlembert(), true}, body != shownBody);
         }
     }
-    message_->setText(note);
-    message_->setVisible(!note.isEmpty());
-    canvas_->update();
+    if (!diagram_) canvas_->showMessage(note);
+    for (QToolButton* b : {zoomOut_, zoomIn_, fit_}) b->setEnabled(diagram_.has_value());
 }
 
 }  // namespace clevis::ui

@@ -1,5 +1,7 @@
 // The free-body diagram of the selected body at the current step, redrawn
-// when the selection, the step, the result or the display units change.
+// when the selection, the step, the result or the display units change: a
+// live drawing with zoom buttons over it. The zoom stays while the cycle is
+// scrubbed and the whole body is shown again when another body is selected.
 #pragma once
 
 #include "core/results/free_body.h"
@@ -9,13 +11,12 @@
 #include <optional>
 
 class QCheckBox;
-class QLabel;
+class QToolButton;
 
 namespace clevis::ui {
 
 class AnalysisState;
 class MechanismDocument;
-
 class FreeBodyCanvas;
 
 class FreeBodyView : public QWidget {
@@ -26,7 +27,9 @@ public:
     // The diagram on show; empty when no moving body is selected or nothing is solved.
     const std::optional<FreeBodyDiagram>& diagram() const { return diagram_; }
     bool dAlembert() const;
+    // Why there is no diagram; empty while one is shown.
     QString message() const;
+    FreeBodyCanvas* canvas() const { return canvas_; }
 
 private:
     void refresh();
@@ -34,7 +37,9 @@ private:
     MechanismDocument* doc_;
     AnalysisState* analysis_;
     QCheckBox* dAlembert_;
-    QLabel* message_;
+    QToolButton* zoomOut_;
+    QToolButton* zoomIn_;
+    QToolButton* fit_;
     FreeBodyCanvas* canvas_;
     std::optional<FreeBodyDiagram> diagram_;
 };

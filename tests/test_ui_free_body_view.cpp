@@ -1,0 +1,254 @@
+// The free-body diagram in the window, offscreen, on the six-bar sample: its
+// text is drawn no smaller than the interface's font; the wheel zooms about
+// the pointer, a drag moves the drawing, scrubbing keeps the zoom and another
+// body is shown whole; with no body selected a message sits in the middle.
+#include "core/file/mechanism_file.h"
+#include "render/free_body_painter.h"
+#include "ui/analysis/analysis_state.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/results/free_body_canvas.h"
+#include "ui/results/free_body_view.h"
+
+#include <QApplication>
+#include <QCheckBox>
+#include <QFontInfo>
+#include <QPaintEngine>
+#include <QPainter>
+#include <QTest>
+#include <QTextItem>
+
+#include <gtest/gtest.h>
+
+#include <climits>
+#include <cmath>
+#include <memory>
+#include <vector>
+
+using namespace clevis;
+using namespace clevis::ui;
+
+namespace {
+
+struct DrawnText {
+    QString text;
+    QPointF at;     // device pixels
+    double pixels;  // the font's height in device pixels
+};
+
+// A paint device that keeps the text drawn on it: what it says, where, and
+// how large it comes out after the painter's transform.
+class TextRecorder : public QPaintDevice {
+public:
+    explicit TextRecorder(QSize size) : size_(size) {}
+    QPaintEngine* paintEngine() const override { return &engine_; }
+    const std::vector<DrawnText>& texts() const { return engine_.texts; }
+
+protected:
+    int metric(PaintDeviceMetric m) const override
+    {
+        switch (m) {
+        case PdmWidth: return size_.width();
+        case PdmHeight: return size_.height();
+        case PdmWidthMM: return size_.width() * 254 / 960;
+        case PdmHeightMM: return size_.height() * 254 / 960;
+        case PdmNumColors: return INT_MAX;
+        case PdmDepth: return 32;
+        case PdmDpiX:
+        case PdmDpiY:
+        case PdmPhysicalDpiX:
+        case PdmPhysicalDpiY: return 96;
+        case PdmDevicePixelRatio: return 1;
+        case PdmDevicePixelRatioScaled: return int(devicePixelRatioFScale());
+        }
+        return 0;
+    }
+
+private:
+    struct Engine : QPaintEngine {
+        Engine() : QPaintEngine(AllFeatures) {}
+        bool begin(QPaintDevice*) override { return true; }
+        bool end() override { return true; }
+        void updateState(const QPaintEngineState& state) override
+        {
+            if (state.state() & DirtyTransform) transform = state.transform();
+        }
+        void drawPixmap(const QRectF&, const QPixmap&, const QRectF&) override {}
+        // Only the text is kept; the engine's own drawPolygon overloads call each other.
+        void drawPath(const QPainterPath&) override {}
+        using QPaintEngine::drawPolygon;
+        void drawPolygon(const QPointF*, int, PolygonDrawMode) override {}
+        void drawTextItem(const QPointF& at, const QTextItem& item) override
+        {
+            const QFont f = item.font();
+            const double pixels = f.pixelSize() > 0 ? f.pixelSize() : f.pointSizeF() * 96 / 72;
+            texts.push_back({item.text(), transform.map(at), pixels * std::sqrt(std::abs(transform.determinant()))});
+        }
+        Type type() const override { return User; }
+
+        QTransform transform;
+        std::vector<DrawnText> texts;
+    };
+    QSize size_;
+    mutable Engine engine_;
+};
+
+std::vector<DrawnText> textDrawnBy(QWidget& w)
+{
+    TextRecorder device(w.size());
+    QPainter p(&device);
+    w.render(&p);
+    p.end();
+    return device.texts();
+}
+
+class FreeBodyViewTest : public ::testing::Test {
+protected:
+    void SetUp() override
+    {
+        doc.reset(loadMechanismFile(std::string(CLEVIS_SAMPLES_DIR) + "/dwell_six_bar.json").mechanism,
+                  "dwell_six_bar.json");
+        analysis = std::make_unique<AnalysisState>(&doc);
+        analysis->waitForIdle();
+        QCoreApplication::processEvents();
+        ASSERT_TRUE(analysis->hasResult()) << analysis->errorText().toStdString();
+        view = std::make_unique<FreeBodyView>(&doc, analysis.get());
+        view->resize(420, 380);
+        view->show();
+        ASSERT_TRUE(QTest::qWaitForWindowExposed(view.get()));
+        analysis->setCurrentStep(90);
+    }
+
+    void select(const char* body) { doc.setSelection({Selection::Kind::Body, body, -1}); }
+    FreeBodyCanvas* canvas() const { return view->canvas(); }
+    // Where the point `pixel` of the canvas falls in the free body's drawing,
+    // in page units from the drawing's corner: the same point of the body at
+    // any zoom and position.
+    QPointF drawingPointAt(QPointF pixel) const
+    {
+        return (pixel - canvas()->origin() - canvas()->figure()->bodyDrawing().topLeft()) / canvas()->zoom();
+    }
+    void wheel(QPointF at, int notches)
+    {
+        QWheelEvent event(at, canvas()->mapToGlobal(at), QPoint(), QPoint(0, 120 * notches), Qt::NoButton,
+                          Qt::NoModifier, Qt::NoScrollPhase, false);
+        QApplication::sendEvent(canvas(), &event);
+    }
+
+    MechanismDocument doc;
+    std::unique_ptr<AnalysisState> analysis;
+    std::unique_ptr<FreeBodyView> view;
+};
+
+TEST_F(FreeBodyViewTest, TextIsNoSmallerThanTheInterfaceFont)
+{
+    select("coupler_plate");
+    ASSERT_TRUE(view->diagram().has_value());
+    const int interfacePixels = QFontInfo(view->font()).pixelSize();
+    const std::vector<DrawnText> texts = textDrawnBy(*view);
+    int diagramTexts = 0;
+    for (const DrawnText& t : texts) {
+        EXPECT_GE(t.pixels, interfacePixels - 0.5) << t.text.toStdString();
+        diagramTexts += t.text.contains("ΣFx") || t.text.contains("coupler_plate") || t.text.contains("scale");
+    }
+    EXPECT_GE(diagramTexts, 3);  // the title, the equations and the scale bars were drawn
+}
+
+TEST_F(FreeBodyViewTest, NothingSelectedShowsAMessageInTheMiddle)
+{
+    doc.setSelection({});
+    EXPECT_FALSE(view->diagram().has_value());
+    ASSERT_TRUE(view->message().contains("Select a body")) << view->message().toStdString();
+    bool drawn = false;
+    for (const DrawnText& t : textDrawnBy(*view)) {
+        if (!t.text.contains("Select a body")) continue;
+        drawn = true;
+        EXPECT_GT(t.at.y(), view->height() / 3.0);
+        EXPECT_LT(t.at.y(), view->height() * 2 / 3.0);
+    }
+    EXPECT_TRUE(drawn);
+}
+
+TEST_F(FreeBodyViewTest, TheWheelZoomsAboutThePointer)
+{
+    select("coupler_plate");
+    ASSERT_NE(canvas()->figure(), nullptr);
+    const double before = canvas()->zoom();
+    const QPointF pointer = canvas()->origin() + canvas()->figure()->bodyDrawing().center() + QPointF(30, -20);
+    const QPointF underPointer = drawingPointAt(pointer);
+    wheel(pointer, 2);
+    EXPECT_NEAR(canvas()->zoom(), before * 1.25 * 1.25, 1e-9 * before);
+    EXPECT_NEAR(drawingPointAt(pointer).x(), underPointer.x(), 1e-6);
+    EXPECT_NEAR(drawingPointAt(pointer).y(), underPointer.y(), 1e-6);
+    EXPECT_NEAR(canvas()->figure()->options().zoom, canvas()->zoom(), 1e-12);  // the drawing follows
+    wheel(pointer, -1);
+    EXPECT_NEAR(canvas()->zoom(), before * 1.25, 1e-9 * before);
+    EXPECT_NEAR(drawingPointAt(pointer).x(), underPointer.x(), 1e-6);
+}
+
+// What the view's zoom rests on: the drawing's corner stays where it is at
+// any zoom and its size grows in proportion, while the text keeps its size.
+TEST_F(FreeBodyViewTest, ThePaintersDrawingGrowsFromAFixedCorner)
+{
+    select("coupler_plate");
+    const FreeBodyPainter& shown = *canvas()->figure();
+    FreeBodyPaintOptions options = shown.options();
+    options.zoom = 1;
+    const FreeBodyPainter one(analysis->compiled(), analysis->result(), shown.diagram(), options);
+    options.zoom = 3;
+    const FreeBodyPainter three(analysis->compiled(), analysis->result(), shown.diagram(), options);
+    EXPECT_EQ(one.bodyDrawing().topLeft(), three.bodyDrawing().topLeft());
+    EXPECT_NEAR(three.bodyDrawing().width(), 3 * one.bodyDrawing().width(), 1e-9);
+    EXPECT_NEAR(three.bodyDrawing().height(), 3 * one.bodyDrawing().height(), 1e-9);
+}
+
+TEST_F(FreeBodyViewTest, ADragMovesTheDrawing)
+{
+    select("coupler_plate");
+    const QPointF before = canvas()->origin();
+    const double zoom = canvas()->zoom();
+    QTest::mousePress(canvas(), Qt::LeftButton, {}, QPoint(100, 100));
+    QMouseEvent move(QEvent::MouseMove, QPointF(160, 70), canvas()->mapToGlobal(QPointF(160, 70)), Qt::NoButton,
+                     Qt::LeftButton, {});
+    QApplication::sendEvent(canvas(), &move);
+    QTest::mouseRelease(canvas(), Qt::LeftButton, {}, QPoint(160, 70));
+    EXPECT_EQ(canvas()->origin(), before + QPointF(60, -30));
+    EXPECT_EQ(canvas()->zoom(), zoom);
+}
+
+TEST_F(FreeBodyViewTest, ScrubbingKeepsTheZoomAndAnotherBodyIsShownWhole)
+{
+    select("coupler_plate");
+    const double fitted = canvas()->zoom();
+    canvas()->zoomIn();
+    canvas()->zoomIn();
+    const double zoomed = canvas()->zoom();
+    const QPointF origin = canvas()->origin();
+    ASSERT_GT(zoomed, fitted * 1.5);
+    analysis->setCurrentStep(200);
+    ASSERT_EQ(view->diagram()->step, 200);
+    EXPECT_EQ(canvas()->figure()->diagram().step, 200);
+    EXPECT_EQ(canvas()->zoom(), zoomed);
+    EXPECT_EQ(canvas()->origin(), origin);
+
+    select("rocker");
+    ASSERT_EQ(view->diagram()->bodyName, "rocker");
+    const double refitted = canvas()->zoom();
+    EXPECT_LT(refitted, zoomed / 1.5);
+    // Shown whole: the free-body panel inside the canvas.
+    const QRectF panel = canvas()->figure()->bodyPanel().translated(canvas()->origin());
+    EXPECT_TRUE(QRectF(canvas()->rect()).adjusted(-0.5, -0.5, 0.5, 0.5).contains(panel));
+    canvas()->fit();
+    EXPECT_NEAR(canvas()->zoom(), refitted, 1e-12);
+}
+
+TEST_F(FreeBodyViewTest, InertiaLoadsOnTheBodyStillDrawn)
+{
+    select("coupler_plate");
+    view->findChild<QCheckBox*>()->setChecked(true);
+    ASSERT_TRUE(canvas()->figure()->options().dAlembert);
+    bool inertia = false;
+    for (const DrawnText& t : textDrawnBy(*view)) inertia = inertia || t.text.startsWith("−m·a_G");
+    EXPECT_TRUE(inertia);
+}
+
+}  // namespace
