@@ -183,11 +183,19 @@ void CanvasView::keyPressEvent(QKeyEvent* e)
         return;
     }
     if (e->key() == Qt::Key_Return || e->key() == Qt::Key_Enter) {
+        told_ = false;
         tool_->finish();
-        announce();
+        if (!told_) announce();
         return;
     }
+    if (tool_->type(e->key(), e->text())) return;
     QWidget::keyPressEvent(e);
+}
+
+// Tab moves between the fields of a length being typed, not to the next widget.
+bool CanvasView::focusNextPrevChild(bool next)
+{
+    return tool_->type(next ? Qt::Key_Tab : Qt::Key_Backtab, {}) || QWidget::focusNextPrevChild(next);
 }
 
 void CanvasView::resizeEvent(QResizeEvent*)

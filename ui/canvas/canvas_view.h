@@ -48,6 +48,7 @@ protected:
     void wheelEvent(QWheelEvent*) override;
     void keyPressEvent(QKeyEvent*) override;
     void resizeEvent(QResizeEvent*) override;
+    bool focusNextPrevChild(bool next) override;
 
 private:
     Pointer pointer(const QPointF& pos, Qt::KeyboardModifiers mods) const;
