@@ -39,7 +39,9 @@ void PropertyEditor::rebuildNow()
 {
     pending_ = false;
     // Keep the keyboard in the field that had it, so Tab through a form still works.
+    // Only when it has it still: a click on the canvas takes the keyboard there.
     const QWidget* focused = widget() ? widget()->focusWidget() : nullptr;
+    if (focused && !focused->hasFocus()) focused = nullptr;
     const QString focusKey = focused ? focused->objectName() : QString();
     // ... and the form where it was scrolled to, so that editing a field far down does not jump back to the top.
     const int scrolled = verticalScrollBar()->value();
