@@ -167,9 +167,10 @@ void FormBuilder::check(const QString& key, const QString& label, bool value, co
     });
 }
 
-void FormBuilder::info(const QString& label, const QString& value)
+void FormBuilder::info(const QString& label, const QString& value, const QString& key)
 {
     auto* l = new QLabel(value);
+    l->setObjectName(key);
     l->setTextInteractionFlags(Qt::TextSelectableByMouse);
     l->setWordWrap(true);
     form_->addRow(label, l);

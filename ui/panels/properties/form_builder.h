@@ -45,7 +45,7 @@ public:
                 std::function<void(Mechanism&, int)> set);
     void check(const QString& key, const QString& label, bool value, const QString& undo,
                std::function<void(Mechanism&, bool)> set);
-    void info(const QString& label, const QString& value);
+    void info(const QString& label, const QString& value, const QString& key = {});
     void heading(const QString& title);
 
     MechanismDocument* document() const { return doc_; }
