@@ -198,6 +198,16 @@ TEST_F(DrawingTest, PartsAreNamedInOneScheme)
                                          "link 1", "link 2", "link 3", "plate 1", "motor 1", "force 1"};
     EXPECT_EQ(names, expected);
 
+    // The form's heading says the kind once: "Link 1", not "Link link 1".
+    useTool("Select");
+    click(0.015, 0.02);
+    auto* editor = window.findChild<PropertyEditor*>();
+    editor->rebuildNow();
+    QStringList headings;
+    for (const QLabel* label : editor->findChildren<QLabel*>())
+        if (label->text().startsWith(QStringLiteral("<b>"))) headings << label->text();
+    EXPECT_TRUE(headings.contains(QStringLiteral("<b>Link 1</b>"))) << headings.join(", ").toStdString();
+
     // A force read from a file without a name gets the name the tool gave.
     const Mechanism read = parseMechanism(R"({"clevis": 1, "bodies": [{"name": "b"}],
         "joints": [{"name": "j", "type": "pin", "bodies": ["ground", "b"], "at": [0, 0]}],

@@ -87,11 +87,11 @@ void drawPinRing(QPainter& p, const QPointF& at, bool isOpen)
 // designer sees how many parts share the pin.
 void drawExtraBodies(QPainter& p, const QPointF& at, int extra)
 {
-    p.setPen(QPen(palette::ink(), 1.3));
+    p.setPen(QPen(palette::ink(), 1.2));
     p.setBrush(palette::ink());
-    const double r = style::kPinRadius + 3.5;
+    const double r = style::kPinRadius + 6.5;
     for (int k = 0; k < extra; ++k) {
-        const double a = qDegreesToRadians(45.0 + 40.0 * k);  // up and right, away from the bracket below
+        const double a = qDegreesToRadians(90.0 + 35.0 * k);  // above, then on round to the left: clear of the label
         p.drawEllipse(at + QPointF(r * std::cos(a), -r * std::sin(a)), 2.0, 2.0);
     }
 }
@@ -142,7 +142,7 @@ void paintJoints(PaintContext& c)
         QStringList names;
         for (int i : stack) names << QString::fromStdString(m.joints[i].name);
         if (j.type != JointType::Slider)
-            drawLabel(p, at + QPointF(stack.size() > 1 ? 12 : 8, -8),
+            drawLabel(p, at + QPointF(8, -8),
                       stack.size() > 1 ? names.join(QStringLiteral(" + ")) : QString::fromStdString(j.name),
                       palette::ink());
     }

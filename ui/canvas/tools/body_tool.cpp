@@ -141,7 +141,7 @@ void BodyTool::tellJoins(const std::string& body, std::size_t jointsBefore)
         if (j.bodies[1] != body || j.bodies[0].empty()) continue;
         const std::vector<int> here = pinsAt(m, j.at);
         const QString first = QString::fromStdString(m.joints[here.front()].name);
-        joins << QObject::tr("pinned to %1 at %2 by new pin %3")
+        joins << QObject::tr("pinned to %1 at %2 through %3, a new pin")
                      .arg(QString::fromStdString(j.bodies[0]), first, QString::fromStdString(j.name));
     }
     if (!joins.isEmpty())

@@ -176,6 +176,12 @@ void FormBuilder::info(const QString& label, const QString& value, const QString
     form_->addRow(label, l);
 }
 
+void FormBuilder::partHeading(const QString& kind, const QString& name)
+{
+    const bool saysKind = name.startsWith(kind + QLatin1Char(' '), Qt::CaseInsensitive);
+    heading(saysKind ? kind + name.mid(kind.size()) : kind + QLatin1Char(' ') + name);
+}
+
 void FormBuilder::heading(const QString& title)
 {
     auto* l = new QLabel(QStringLiteral("<b>%1</b>").arg(title.toHtmlEscaped()));

@@ -62,7 +62,7 @@ void jointForm(FormBuilder& f, const Mechanism& m, const Joint& joint, const Ana
     const QString qname = QString::fromStdString(name);
     const auto self = [name](Mechanism& m) -> Joint& { return m.joints[jointIndex(m, name)]; };
     const char* kinds[] = {"Pin", "Slider", "Pin in slot"};
-    f.heading(QObject::tr("%1 %2").arg(QObject::tr(kinds[int(joint.type)]), qname));
+    f.partHeading(QObject::tr(kinds[int(joint.type)]), qname);
     f.text("name", QObject::tr("Name"), qname, QObject::tr("Rename %1").arg(qname),
            [name](Mechanism& m, const QString& v) {
                const QString problem = nameProblem(m, v);
