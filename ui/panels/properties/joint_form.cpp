@@ -47,7 +47,10 @@ void compoundPinRows(FormBuilder& f, const Mechanism& m, const Joint& joint, con
             const auto k = std::find_if(joints.begin(), joints.end(), [&](const auto& c) { return c.name == j.name; });
             if (k != joints.end()) {
                 const Vec2 force = analysis->result().steps[analysis->currentStep()].joints[k - joints.begin()].force;
-                value = QObject::tr("%1: %2").arg(between, DisplayUnits::instance().formatForce(force.norm()));
+                value = QObject::tr("%1: %2").arg(
+                    between, DisplayUnits::instance()
+                                 .formatForce(force.norm())
+                                 .replace(QLatin1Char(' '), QChar(0x00A0)));  // number and unit on one line
             }
         }
         f.info(name, value, QStringLiteral("force:") + name);
