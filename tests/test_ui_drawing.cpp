@@ -137,18 +137,41 @@ TEST_F(DrawingTest, ALengthAndAngleTypedWhileDrawingPlaceTheEndExactly)
 {
     useTool("Ground pin");
     click(0.0, 0.0);
+    useTool("Select");
+    click(0.0, 0.0);  // selected: Backspace is also the key that deletes a part
+    ASSERT_EQ(window.document()->selection().kind, Selection::Kind::Joint);
     useTool("Link");
     click(0.0, 0.0);
-    QTest::keyClicks(window.canvas(), "100");
+    QTest::keyClicks(window.canvas(), "1005");
+    QTest::keyClick(window.canvas(), Qt::Key_Backspace);  // corrects the typing, deletes no part
     QTest::keyClick(window.canvas(), Qt::Key_Tab);
     QTest::keyClicks(window.canvas(), "30");
     QTest::keyClick(window.canvas(), Qt::Key_Return);
     ASSERT_EQ(mechanism().bodies.size(), 1u);
+    EXPECT_EQ(mechanism().joints.size(), 2u);
     const std::vector<Vec2> ends = bodyPins(mechanism(), mechanism().bodies[0].name);
     ASSERT_EQ(ends.size(), 2u);
     EXPECT_NEAR(ends[1].x(), 0.05 * std::sqrt(3.0), 1e-12);
     EXPECT_NEAR(ends[1].y(), 0.05, 1e-12);
     EXPECT_EQ(window.canvas()->tool()->strokeStart(), std::nullopt);
+}
+
+// An undo during a stroke renumbers the joints; the link still ends where
+// it was clicked, at a pin found there again.
+TEST_F(DrawingTest, AnUndoDuringAStrokeLeavesTheLinkWhereItWasClicked)
+{
+    useTool("Ground pin");
+    click(0.0, 0.0);
+    click(0.1, 0.0);
+    useTool("Link");
+    click(0.1, 0.0);
+    window.document()->undoStack()->undo();  // the second ground pin goes
+    click(0.05, 0.05);
+    ASSERT_EQ(mechanism().bodies.size(), 1u);
+    const std::vector<Vec2> ends = bodyPins(mechanism(), mechanism().bodies[0].name);
+    ASSERT_EQ(ends.size(), 2u);
+    EXPECT_EQ(ends[0], Vec2(0.1, 0.0));
+    EXPECT_EQ(ends[1], Vec2(0.05, 0.05));
 }
 
 // Once a point is placed, its dimension goes: only the side being drawn

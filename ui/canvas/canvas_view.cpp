@@ -192,6 +192,17 @@ void CanvasView::keyPressEvent(QKeyEvent* e)
     QWidget::keyPressEvent(e);
 }
 
+// Backspace corrects a length being typed instead of deleting the selected part.
+bool CanvasView::event(QEvent* e)
+{
+    if (e->type() == QEvent::ShortcutOverride && tool_->typing() &&
+        static_cast<QKeyEvent*>(e)->key() == Qt::Key_Backspace) {
+        e->accept();
+        return true;
+    }
+    return QWidget::event(e);
+}
+
 // Tab moves between the fields of a length being typed, not to the next widget.
 bool CanvasView::focusNextPrevChild(bool next)
 {

@@ -49,6 +49,7 @@ protected:
     void keyPressEvent(QKeyEvent*) override;
     void resizeEvent(QResizeEvent*) override;
     bool focusNextPrevChild(bool next) override;
+    bool event(QEvent* e) override;
 
 private:
     Pointer pointer(const QPointF& pos, Qt::KeyboardModifiers mods) const;

@@ -121,8 +121,11 @@ void BodyTool::commit()
     std::string body;
     const bool added = tryEdit([&](Mechanism& m, QString&) {
         std::vector<std::string> joints;
-        for (const auto& p : points)
-            joints.push_back(p.kind == SnapResult::Kind::Pin ? m.joints[p.joint].name : edits::addPin(m, p.point));
+        // Found again by position: an undo or a delete during the stroke may have renumbered the joints.
+        for (const auto& p : points) {
+            const std::vector<int> here = jointsAt(m, p.point, 1e-9);
+            joints.push_back(here.empty() ? edits::addPin(m, p.point) : m.joints[here.front()].name);
+        }
         body = edits::addBody(m, joints);
         return shape_ == Shape::Bar ? QObject::tr("Add link") : QObject::tr("Add plate");
     });

@@ -24,6 +24,7 @@ public:
     void finish() override;
     bool cancel() override;
     bool type(int key, const QString& text) override;
+    bool typing() const override { return typed_.has_value(); }
     void paintPreview(QPainter& p) const override;
 
 private:

@@ -53,6 +53,8 @@ public:
     // A key the canvas does not use itself (digits, Backspace, Tab); true
     // when the tool took it.
     virtual bool type(int /*key*/, const QString& /*text*/) { return false; }
+    // Whether a number is being typed: its keys (Backspace) are then the tool's, not shortcuts.
+    virtual bool typing() const { return false; }
     virtual void paintPreview(QPainter&) const {}
 
 protected:
