@@ -33,7 +33,7 @@ namespace {
 Mechanism fourBar()
 {
     Mechanism m = drawnFourBar();
-    edits::renameBody(m, "link3", "rocker");
+    edits::renameBody(m, "link 3", "rocker");
     m.bodies[2].mass = 1.5;
     m.bodies[2].cg = Vec2(0.18, 0.06);
     m.bodies[2].inertia = 0.002;
@@ -148,7 +148,7 @@ private:
     }
     std::string someName()
     {
-        static const char* const names[] = {"crank", "rocker", "P1", "link1", "motor1", "", "ground", "O1"};
+        static const char* const names[] = {"crank", "rocker", "pin 3", "link 1", "motor 1", "", "ground", "pin 1"};
         return names[pick(8)];
     }
 
@@ -309,7 +309,7 @@ TEST(HalfDrawnSketch, SavesReopensAndTheAnalysisSaysWhatIsMissing)
     EXPECT_EQ(doc->mechanism(), drawn);
 
     window.analysis()->waitForIdle();
-    const std::string expected = "Pin “" + pin + "” joins only “link1”: connect it to a second part or to ground";
+    const std::string expected = "Pin “" + pin + "” joins only “link 1”: connect it to a second part or to ground";
     EXPECT_EQ(window.analysis()->errorText().toStdString(), expected);
     EXPECT_EQ(window.analysis()->offendingItems().join(QStringLiteral(", ")).toStdString(), pin);
 }

@@ -4,6 +4,7 @@
 // mechanism that solves.
 #include "core/file/mechanism_file.h"
 #include "core/results/posed_mechanism.h"
+#include "tests/canvas_fixture.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/canvas/canvas_view.h"
 #include "ui/canvas/snapping.h"
@@ -28,59 +29,9 @@
 
 using namespace clevis;
 using namespace clevis::ui;
+using clevis::ui::test::CanvasTest;
 
 namespace {
-
-class CanvasTest : public ::testing::Test {
-protected:
-    void SetUp() override
-    {
-        window.resize(1400, 900);
-        window.show();
-        ASSERT_TRUE(QTest::qWaitForWindowExposed(&window));
-        window.canvas()->fitToView();
-    }
-
-    QPoint at(double x, double y) const { return window.canvas()->view().toScreen({x, y}).toPoint(); }
-    void useTool(const char* name) { window.tools()->action(QString::fromUtf8(name))->trigger(); }
-    void click(double x, double y) { QTest::mouseClick(window.canvas(), Qt::LeftButton, {}, at(x, y)); }
-    const Mechanism& mechanism() const { return window.document()->mechanism(); }
-    // A pointer move with the left button held down.
-    void dragTo(double x, double y)
-    {
-        QMouseEvent move(QEvent::MouseMove, at(x, y), window.canvas()->mapToGlobal(at(x, y)), Qt::NoButton,
-                         Qt::LeftButton, {});
-        QApplication::sendEvent(window.canvas(), &move);
-    }
-
-    template <typename W>
-    W* field(const char* name)
-    {
-        auto* editor = window.findChild<PropertyEditor*>();
-        editor->rebuildNow();
-        return editor->findChild<W*>(QString::fromUtf8(name));
-    }
-
-    // Four-bar with its pins on the 10 mm grid: crank 50 mm, coupler 161 mm,
-    // rocker 124 mm, frame 200 mm (a crank-rocker: 50 + 200 < 161 + 124).
-    void drawFourBar()
-    {
-        useTool("Ground pin");
-        click(0.0, 0.0);
-        click(0.2, 0.0);
-        useTool("Pin");
-        click(0.03, 0.04);
-        click(0.17, 0.12);
-        useTool("Link");
-        click(0.0, 0.0), click(0.03, 0.04);
-        click(0.03, 0.04), click(0.17, 0.12);
-        click(0.17, 0.12), click(0.2, 0.0);
-        useTool("Motor");
-        click(0.0, 0.0);
-    }
-
-    MainWindow window;
-};
 
 TEST_F(CanvasTest, DrawAFourBarSetAMassSaveAndReopen)
 {
@@ -92,7 +43,7 @@ TEST_F(CanvasTest, DrawAFourBarSetAMassSaveAndReopen)
     useTool("Select");
     click(0.015, 0.02);  // the middle of the crank
     ASSERT_EQ(window.document()->selection().kind, Selection::Kind::Body);
-    ASSERT_EQ(window.document()->selection().name.toStdString(), "link1");
+    ASSERT_EQ(window.document()->selection().name.toStdString(), "link 1");
     auto* source = field<QComboBox>("massSource");
     ASSERT_NE(source, nullptr);
     emit source->activated(1);  // typed values
@@ -148,13 +99,13 @@ TEST_F(CanvasTest, DraggingAPinIsOneUndoStepAndTheLinksFollow)
     for (double x : {0.172, 0.175, 0.18}) dragTo(x, 0.13);
     QTest::mouseRelease(window.canvas(), Qt::LeftButton, {}, at(0.18, 0.13));
     EXPECT_EQ(window.document()->undoStack()->count(), steps + 1);
-    const Joint& moved = mechanism().joints[jointIndex(mechanism(), "P2")];
+    const Joint& moved = mechanism().joints[jointIndex(mechanism(), "pin 4")];
     EXPECT_NEAR(moved.at.x(), 0.18, 1e-12);  // snapped to the grid
     EXPECT_NEAR(moved.at.y(), 0.13, 1e-12);
-    const auto coupler = bodyPins(mechanism(), "link2");
+    const auto coupler = bodyPins(mechanism(), "link 2");
     EXPECT_NEAR(coupler[1].x(), 0.18, 1e-12);
     window.document()->undoStack()->undo();
-    EXPECT_NEAR(mechanism().joints[jointIndex(mechanism(), "P2")].at.x(), 0.17, 1e-12);
+    EXPECT_NEAR(mechanism().joints[jointIndex(mechanism(), "pin 4")].at.x(), 0.17, 1e-12);
 }
 
 // Esc puts the pin back and leaves no step behind: neither to undo nor to redo.
@@ -173,7 +124,7 @@ TEST_F(CanvasTest, EscapeDuringADragLeavesNoUndoStep)
     EXPECT_EQ(mechanism(), before);
     EXPECT_FALSE(stack->canRedo()) << stack->redoText().toStdString();
     EXPECT_EQ(stack->count(), steps);
-    EXPECT_EQ(stack->undoText().toStdString(), "Add motor motor1");
+    EXPECT_EQ(stack->undoText().toStdString(), "Add motor motor 1");
 }
 
 TEST_F(CanvasTest, EscapeCancelsALinkHalfDrawn)
@@ -275,7 +226,7 @@ TEST_F(CanvasTest, APointNearlyLevelWithTheStartSnapsLevel)
 TEST_F(CanvasTest, EditNamesAreReadableInTheUndoStack)
 {
     drawFourBar();
-    EXPECT_EQ(window.document()->undoStack()->undoText().toStdString(), "Add motor motor1");
+    EXPECT_EQ(window.document()->undoStack()->undoText().toStdString(), "Add motor motor 1");
     window.document()->undoStack()->undo();
     EXPECT_EQ(window.document()->undoStack()->undoText().toStdString(), "Add link");
 }

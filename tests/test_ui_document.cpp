@@ -43,7 +43,7 @@ TEST_P(EditRoundTrip, UndoAndRedoRestoreTheSavedJsonExactly)
     EXPECT_EQ(saved(doc), before);
 }
 
-const Selection bodySel{Selection::Kind::Body, "link2", -1};
+const Selection bodySel{Selection::Kind::Body, "link 2", -1};
 
 INSTANTIATE_TEST_SUITE_P(
     EveryKindOfEdit, EditRoundTrip,
@@ -57,11 +57,11 @@ INSTANTIATE_TEST_SUITE_P(
                                 }},
                       NamedEdit{"Add link",
                                 [](Mechanism& m) {
-                                    edits::addBody(m, {"P1", "O2"});
+                                    edits::addBody(m, {"pin 3", "pin 2"});
                                 }},
                       NamedEdit{"Add plate",
                                 [](Mechanism& m) {
-                                    edits::addBody(m, {"P1", "P2", edits::addPin(m, {0.1, 0.2})});
+                                    edits::addBody(m, {"pin 3", "pin 4", edits::addPin(m, {0.1, 0.2})});
                                 }},
                       NamedEdit{"Add slider",
                                 [](Mechanism& m) {
@@ -69,50 +69,50 @@ INSTANTIATE_TEST_SUITE_P(
                                 }},
                       NamedEdit{"Add pin in slot",
                                 [](Mechanism& m) {
-                                    edits::addPinInSlot(m, "link2", {0.1, 0.08}, 30.0);
+                                    edits::addPinInSlot(m, "link 2", {0.1, 0.08}, 30.0);
                                 }},
-                      NamedEdit{"Add motor", [](Mechanism& m) { edits::addRotaryMotor(m, "O2"); }},
+                      NamedEdit{"Add motor", [](Mechanism& m) { edits::addRotaryMotor(m, "pin 2"); }},
                       NamedEdit{"Add slider drive",
                                 [](Mechanism& m) {
                                     edits::addSliderDrive(m, edits::addSlider(m, kGroundName, {0.3, 0.1}, 0.0));
                                 }},
                       NamedEdit{"Add cylinder",
                                 [](Mechanism& m) {
-                                    edits::addCylinder(m, {kGroundName, {0.1, -0.05}}, {"link3", {0.18, 0.06}});
+                                    edits::addCylinder(m, {kGroundName, {0.1, -0.05}}, {"link 3", {0.18, 0.06}});
                                 }},
                       NamedEdit{"Add force",
                                 [](Mechanism& m) {
-                                    edits::addForce(m, {"link2", {0.1, 0.08}}, {0.0, -150.0});
+                                    edits::addForce(m, {"link 2", {0.1, 0.08}}, {0.0, -150.0});
                                 }},
-                      NamedEdit{"Add torque", [](Mechanism& m) { edits::addTorque(m, "link3", -4.0); }},
+                      NamedEdit{"Add torque", [](Mechanism& m) { edits::addTorque(m, "link 3", -4.0); }},
                       NamedEdit{"Add spring",
                                 [](Mechanism& m) {
-                                    edits::addSpring(m, {kGroundName, {0.1, 0.2}}, {"link2", {0.1, 0.08}});
+                                    edits::addSpring(m, {kGroundName, {0.1, 0.2}}, {"link 2", {0.1, 0.08}});
                                 }},
                       NamedEdit{"Add damper",
                                 [](Mechanism& m) {
-                                    edits::addDamper(m, {kGroundName, {0.1, 0.2}}, {"link2", {0.1, 0.08}});
+                                    edits::addDamper(m, {kGroundName, {0.1, 0.2}}, {"link 2", {0.1, 0.08}});
                                 }},
                       NamedEdit{"Add point mass",
                                 [](Mechanism& m) {
-                                    edits::addPointMass(m, "link1", {0.015, 0.02}, 0.3);
+                                    edits::addPointMass(m, "link 1", {0.015, 0.02}, 0.3);
                                 }},
                       NamedEdit{"Move pin",
                                 [](Mechanism& m) {
-                                    edits::moveJoint(m, jointIndex(m, "P2"), {0.18, 0.13});
+                                    edits::moveJoint(m, jointIndex(m, "pin 4"), {0.18, 0.13});
                                 }},
                       NamedEdit{"Delete link", [](Mechanism& m) { edits::remove(m, bodySel); }},
                       NamedEdit{"Delete pin",
                                 [](Mechanism& m) {
-                                    edits::remove(m, {Selection::Kind::Joint, "O1", -1});
+                                    edits::remove(m, {Selection::Kind::Joint, "pin 1", -1});
                                 }},
                       NamedEdit{"Delete motor",
                                 [](Mechanism& m) {
-                                    edits::remove(m, {Selection::Kind::Driver, "motor1", -1});
+                                    edits::remove(m, {Selection::Kind::Driver, "motor 1", -1});
                                 }},
-                      NamedEdit{"Rename body", [](Mechanism& m) { edits::renameBody(m, "link1", "crank"); }},
-                      NamedEdit{"Rename joint", [](Mechanism& m) { edits::renameJoint(m, "O1", "A0"); }},
-                      NamedEdit{"Rename driver", [](Mechanism& m) { edits::renameDriver(m, "motor1", "gearmotor"); }},
+                      NamedEdit{"Rename body", [](Mechanism& m) { edits::renameBody(m, "link 1", "crank"); }},
+                      NamedEdit{"Rename joint", [](Mechanism& m) { edits::renameJoint(m, "pin 1", "A0"); }},
+                      NamedEdit{"Rename driver", [](Mechanism& m) { edits::renameDriver(m, "motor 1", "gearmotor"); }},
                       NamedEdit{"Set mass",
                                 [](Mechanism& m) {
                                     m.bodies[0].mass = 1.5;
@@ -138,7 +138,7 @@ TEST(MechanismDocument, ConsecutiveEditsWithOneMergeIdAreOneUndoStep)
     MechanismDocument doc;
     doc.reset(drawnFourBar(), {});
     const std::string before = saved(doc);
-    const int p = jointIndex(doc.mechanism(), "P1");
+    const int p = jointIndex(doc.mechanism(), "pin 3");
     for (double x : {0.031, 0.032, 0.035})
         doc.apply(
             "Move pin P1",
@@ -156,7 +156,7 @@ TEST(MechanismDocument, TwoSeparateDragsAreTwoUndoSteps)
 {
     MechanismDocument doc;
     doc.reset(drawnFourBar(), {});
-    const int p = jointIndex(doc.mechanism(), "P1");
+    const int p = jointIndex(doc.mechanism(), "pin 3");
     doc.apply(
         "Move pin P1",
         [=](Mechanism& m) {
@@ -186,7 +186,7 @@ TEST(MechanismDocument, AMergedRunThatEndsWhereItBeganLeavesNoStep)
 {
     MechanismDocument doc;
     doc.reset(drawnFourBar(), {});
-    const int p = jointIndex(doc.mechanism(), "P1");
+    const int p = jointIndex(doc.mechanism(), "pin 3");
     for (double x : {0.04, 0.03})
         doc.apply(
             "Move pin P1",
@@ -216,7 +216,7 @@ TEST(MechanismDocument, UndoingAnAddClearsASelectionOfTheRemovedPart)
 {
     MechanismDocument doc;
     doc.reset(drawnFourBar(), {});
-    doc.apply("Add torque", [](Mechanism& m) { edits::addTorque(m, "link3", 2.0); });
+    doc.apply("Add torque", [](Mechanism& m) { edits::addTorque(m, "link 3", 2.0); });
     doc.setSelection({Selection::Kind::Load, {}, 0});
     doc.undoStack()->undo();
     EXPECT_EQ(doc.selection().kind, Selection::Kind::None);
@@ -227,31 +227,31 @@ TEST(MechanismEdits, LinksDrawnPinToPinJoinTheBodies)
     const Mechanism m = drawnFourBar();
     ASSERT_EQ(m.joints.size(), 4u);
     EXPECT_EQ(m.joints[0].bodies[0], kGroundName);
-    EXPECT_EQ(m.joints[0].bodies[1], "link1");
-    EXPECT_EQ(m.joints[2].bodies[0], "link1");  // P1: crank to coupler
-    EXPECT_EQ(m.joints[2].bodies[1], "link2");
-    EXPECT_EQ(m.joints[3].bodies[0], "link2");  // P2: coupler to rocker
-    EXPECT_EQ(m.joints[3].bodies[1], "link3");
-    EXPECT_EQ(m.joints[1].bodies[1], "link3");  // O2: ground to rocker
+    EXPECT_EQ(m.joints[0].bodies[1], "link 1");
+    EXPECT_EQ(m.joints[2].bodies[0], "link 1");  // pin 3: crank to coupler
+    EXPECT_EQ(m.joints[2].bodies[1], "link 2");
+    EXPECT_EQ(m.joints[3].bodies[0], "link 2");  // pin 4: coupler to rocker
+    EXPECT_EQ(m.joints[3].bodies[1], "link 3");
+    EXPECT_EQ(m.joints[1].bodies[1], "link 3");  // pin 2: ground to rocker
 }
 
 TEST(MechanismEdits, AThirdLinkOnAFullPinAddsAPinBesideIt)
 {
     Mechanism m = drawnFourBar();
     const std::string c = edits::addPin(m, {0.1, 0.25});
-    edits::addBody(m, {"P1", c});
+    edits::addBody(m, {"pin 3", c});
     const auto here = jointsAt(m, {0.03, 0.04}, 1e-9);
     ASSERT_EQ(here.size(), 2u);
-    EXPECT_EQ(m.joints[here[1]].bodies[0], "link1");
-    EXPECT_EQ(m.joints[here[1]].bodies[1], "link4");
+    EXPECT_EQ(m.joints[here[1]].bodies[0], "link 1");
+    EXPECT_EQ(m.joints[here[1]].bodies[1], "link 4");
 }
 
 TEST(MechanismEdits, MovingAPinMovesWhatIsFixedAtTheSamePoint)
 {
     Mechanism m = drawnFourBar();
-    edits::addSpring(m, {kGroundName, {0.1, 0.2}}, {"link2", {0.17, 0.12}});
-    edits::moveJoint(m, jointIndex(m, "P2"), {0.16, 0.13});
-    EXPECT_EQ(m.joints[jointIndex(m, "P2")].at, Vec2(0.16, 0.13));
+    edits::addSpring(m, {kGroundName, {0.1, 0.2}}, {"link 2", {0.17, 0.12}});
+    edits::moveJoint(m, jointIndex(m, "pin 4"), {0.16, 0.13});
+    EXPECT_EQ(m.joints[jointIndex(m, "pin 4")].at, Vec2(0.16, 0.13));
     EXPECT_EQ(std::get<SpringLoad>(m.loads[0]).b.at, Vec2(0.16, 0.13));
     EXPECT_EQ(std::get<SpringLoad>(m.loads[0]).a.at, Vec2(0.1, 0.2));
 }
@@ -259,39 +259,39 @@ TEST(MechanismEdits, MovingAPinMovesWhatIsFixedAtTheSamePoint)
 TEST(MechanismEdits, RenamingABodyUpdatesEveryReference)
 {
     Mechanism m = drawnFourBar();
-    edits::addTorque(m, "link1", 1.0);
-    edits::renameBody(m, "link1", "crank");
+    edits::addTorque(m, "link 1", 1.0);
+    edits::renameBody(m, "link 1", "crank");
     EXPECT_EQ(m.bodies[0].name, "crank");
     EXPECT_EQ(m.joints[0].bodies[1], "crank");
     EXPECT_EQ(std::get<TorqueLoad>(m.loads[0]).body, "crank");
     EXPECT_EQ(compile(m).bodies.size(), 3u);  // still consistent for the solver
 }
 
-// The four-bar with one load of every kind on the coupler (link2) and at P1,
+// The four-bar with one load of every kind on the coupler (link 2) and at pin 3,
 // the force and torque scaled by profiles that follow the motor, and a
 // cylinder from the frame to P2.
 Mechanism withEveryLoadKind()
 {
     Mechanism m = drawnFourBar();
     const Vec2 p2{0.17, 0.12};
-    edits::addForce(m, {"link2", p2}, {0.0, -10.0});
-    edits::addTorque(m, "link2", 1.0);
-    edits::addSpring(m, {kGroundName, {0.1, 0.2}}, {"link2", p2});
-    edits::addDamper(m, {"link2", p2}, {kGroundName, {0.3, 0.2}});
-    m.loads.push_back(TorsionSpringLoad{"torsion1", "P1", 2.0, 0.0});
-    const LoadProfile byMotor{"motor1", {0.0, 1.0}, {1.0, 2.0}};
+    edits::addForce(m, {"link 2", p2}, {0.0, -10.0});
+    edits::addTorque(m, "link 2", 1.0);
+    edits::addSpring(m, {kGroundName, {0.1, 0.2}}, {"link 2", p2});
+    edits::addDamper(m, {"link 2", p2}, {kGroundName, {0.3, 0.2}});
+    m.loads.push_back(TorsionSpringLoad{"torsion1", "pin 3", 2.0, 0.0});
+    const LoadProfile byMotor{"motor 1", {0.0, 1.0}, {1.0, 2.0}};
     std::get<ForceLoad>(m.loads[0]).profile = byMotor;
     std::get<TorqueLoad>(m.loads[1]).profile = byMotor;
-    edits::addCylinder(m, {kGroundName, {0.3, 0.0}}, {"link2", p2});
+    edits::addCylinder(m, {kGroundName, {0.3, 0.0}}, {"link 2", p2});
     return m;
 }
 
 TEST(MechanismEdits, EveryLoadKindFollowsTheRenamedParts)
 {
     Mechanism m = withEveryLoadKind();
-    edits::renameBody(m, "link2", "coupler");
-    edits::renameJoint(m, "P1", "B");
-    edits::renameDriver(m, "motor1", "gearmotor");
+    edits::renameBody(m, "link 2", "coupler");
+    edits::renameJoint(m, "pin 3", "B");
+    edits::renameDriver(m, "motor 1", "gearmotor");
     const auto& force = std::get<ForceLoad>(m.loads[0]);
     const auto& torque = std::get<TorqueLoad>(m.loads[1]);
     EXPECT_EQ(force.point.body, "coupler");
@@ -301,7 +301,7 @@ TEST(MechanismEdits, EveryLoadKindFollowsTheRenamedParts)
     EXPECT_EQ(std::get<SpringLoad>(m.loads[2]).b.body, "coupler");
     EXPECT_EQ(std::get<DamperLoad>(m.loads[3]).a.body, "coupler");
     EXPECT_EQ(std::get<TorsionSpringLoad>(m.loads[4]).joint, "B");
-    EXPECT_EQ(m.drivers[0].joint, "O1");
+    EXPECT_EQ(m.drivers[0].joint, "pin 1");
     EXPECT_EQ(m.drivers[1].ends[1]->body, "coupler");
     EXPECT_EQ(compile(m).bodies.size(), 3u);  // still consistent for the solver
 }
@@ -310,7 +310,7 @@ TEST(MechanismEdits, EveryPointFixedAtAMovedPinFollowsIt)
 {
     Mechanism m = withEveryLoadKind();
     const Vec2 to{0.16, 0.13};
-    edits::moveJoint(m, jointIndex(m, "P2"), to);
+    edits::moveJoint(m, jointIndex(m, "pin 4"), to);
     EXPECT_EQ(std::get<ForceLoad>(m.loads[0]).point.at, to);
     EXPECT_EQ(std::get<SpringLoad>(m.loads[2]).b.at, to);
     EXPECT_EQ(std::get<DamperLoad>(m.loads[3]).a.at, to);
@@ -322,14 +322,14 @@ TEST(MechanismEdits, EveryPointFixedAtAMovedPinFollowsIt)
 TEST(MechanismEdits, DeletingAPartDropsTheLoadsAndDriversOnIt)
 {
     Mechanism m = withEveryLoadKind();
-    edits::remove(m, {Selection::Kind::Body, "link2", -1});
+    edits::remove(m, {Selection::Kind::Body, "link 2", -1});
     ASSERT_EQ(m.loads.size(), 1u);  // the torsion spring is at a pin, not on the body
     EXPECT_TRUE(std::holds_alternative<TorsionSpringLoad>(m.loads[0]));
     ASSERT_EQ(m.drivers.size(), 1u);
-    EXPECT_EQ(m.drivers[0].name, "motor1");
-    edits::remove(m, {Selection::Kind::Joint, "P1", -1});
+    EXPECT_EQ(m.drivers[0].name, "motor 1");
+    edits::remove(m, {Selection::Kind::Joint, "pin 3", -1});
     EXPECT_TRUE(m.loads.empty());
-    edits::remove(m, {Selection::Kind::Joint, "O1", -1});
+    edits::remove(m, {Selection::Kind::Joint, "pin 1", -1});
     EXPECT_TRUE(m.drivers.empty());
 }
 
@@ -350,11 +350,11 @@ TEST(MechanismEdits, DeletingTheDriverAProfileFollowsKeepsTheLoadAtItsNominalVal
 TEST(MechanismEdits, DeletingABodyOpensItsPinsAndDropsItsLoads)
 {
     Mechanism m = drawnFourBar();
-    edits::addTorque(m, "link2", 1.0);
-    edits::remove(m, {Selection::Kind::Body, "link2", -1});
+    edits::addTorque(m, "link 2", 1.0);
+    edits::remove(m, {Selection::Kind::Body, "link 2", -1});
     EXPECT_EQ(m.bodies.size(), 2u);
     EXPECT_TRUE(m.loads.empty());
-    EXPECT_EQ(m.joints[jointIndex(m, "P1")].bodies[1], "");
+    EXPECT_EQ(m.joints[jointIndex(m, "pin 3")].bodies[1], "");
 }
 
 }  // namespace

@@ -207,14 +207,33 @@ void CanvasView::keyPressEvent(QKeyEvent* e)
         return;
     }
     if (e->key() == Qt::Key_Return || e->key() == Qt::Key_Enter) {
+        told_ = false;
         tool_->finish();
-        announce();
+        if (!told_) announce();
         return;
     }
+    if (tool_->type(e->key(), e->text())) return;
     QWidget::keyPressEvent(e);
 }
 
 void CanvasView::leaveEvent(QEvent*) { emit pointerLeft(); }
+
+// Backspace corrects a length being typed instead of deleting the selected part.
+bool CanvasView::event(QEvent* e)
+{
+    if (e->type() == QEvent::ShortcutOverride && tool_->typing() &&
+        static_cast<QKeyEvent*>(e)->key() == Qt::Key_Backspace) {
+        e->accept();
+        return true;
+    }
+    return QWidget::event(e);
+}
+
+// Tab moves between the fields of a length being typed, not to the next widget.
+bool CanvasView::focusNextPrevChild(bool next)
+{
+    return tool_->type(next ? Qt::Key_Tab : Qt::Key_Backtab, {}) || QWidget::focusNextPrevChild(next);
+}
 
 void CanvasView::resizeEvent(QResizeEvent*)
 {

@@ -54,6 +54,8 @@ protected:
     void keyPressEvent(QKeyEvent*) override;
     void resizeEvent(QResizeEvent*) override;
     void leaveEvent(QEvent*) override;
+    bool focusNextPrevChild(bool next) override;
+    bool event(QEvent* e) override;
 
 private:
     Pointer pointer(const QPointF& pos, Qt::KeyboardModifiers mods) const;

@@ -14,10 +14,10 @@ namespace {
 constexpr double kSamePoint = 1e-9;
 
 std::string addJoint(Mechanism& m, JointType type, const std::string& first, const std::string& second, const Vec2& at,
-                     double axisDeg, const std::string& stem)
+                     double axisDeg, NewPart kind)
 {
     Joint j;
-    j.name = freshName(m, stem);
+    j.name = freshName(m, kind);
     j.type = type;
     j.bodies[0] = first;
     j.bodies[1] = second;
@@ -29,9 +29,21 @@ std::string addJoint(Mechanism& m, JointType type, const std::string& first, con
 
 bool hasBody(const Joint& j, const std::string& body) { return j.bodies[0] == body || j.bodies[1] == body; }
 
-// The body a new pin at an occupied joint hangs from: the frame for a ground
-// pin, the pin's own body for a slot, the block for a slider.
-std::string baseOf(const Joint& j) { return j.type == JointType::Pin ? j.bodies[0] : j.bodies[1]; }
+// The body a new pin at an occupied point hangs from, whichever of the joints
+// stacked there was clicked: the frame where one of them is a ground pin, else
+// the first body of the first pin there (the pin's own body for a slot, the
+// block at a slider). The file keeps joints between two bodies, so a third
+// body at a point gets a pin of its own to this one.
+std::string baseAt(const Mechanism& m, const std::vector<int>& here)
+{
+    for (int i : here)
+        if (m.joints[i].type == JointType::Pin && hasBody(m.joints[i], kGroundName)) return kGroundName;
+    for (int i : here) {
+        const Joint& j = m.joints[i];
+        if (j.type != JointType::Slider) return j.type == JointType::Pin ? j.bodies[0] : j.bodies[1];
+    }
+    return m.joints[here.front()].bodies[1];  // a slider alone: its block
+}
 
 // Fills the joint's open slot with `body`, or adds a pin beside it.
 void attach(Mechanism& m, const std::string& jointName, const std::string& body)
@@ -52,8 +64,7 @@ void attach(Mechanism& m, const std::string& jointName, const std::string& body)
             return;
         }
     }
-    const Joint& j = m.joints[jointIndex(m, jointName)];
-    addJoint(m, JointType::Pin, baseOf(j), body, at, 0.0, "pin");
+    addJoint(m, JointType::Pin, baseAt(m, here), body, at, 0.0, NewPart::Pin);
 }
 
 template <class List>
@@ -72,15 +83,15 @@ void eraseReferring(List& list, PartKind kind, const std::string& name)
 
 std::string addGroundPin(Mechanism& m, const Vec2& at)
 {
-    return addJoint(m, JointType::Pin, kGroundName, "", at, 0.0, "O");
+    return addJoint(m, JointType::Pin, kGroundName, "", at, 0.0, NewPart::Pin);
 }
 
-std::string addPin(Mechanism& m, const Vec2& at) { return addJoint(m, JointType::Pin, "", "", at, 0.0, "P"); }
+std::string addPin(Mechanism& m, const Vec2& at) { return addJoint(m, JointType::Pin, "", "", at, 0.0, NewPart::Pin); }
 
 std::string addBody(Mechanism& m, const std::vector<std::string>& joints)
 {
     Body b;
-    b.name = freshName(m, joints.size() > 2 ? "plate" : "link");
+    b.name = freshName(m, joints.size() > 2 ? NewPart::Plate : NewPart::Link);
     m.bodies.push_back(b);
     for (const auto& j : joints) attach(m, j, b.name);
     return b.name;
@@ -89,22 +100,22 @@ std::string addBody(Mechanism& m, const std::vector<std::string>& joints)
 std::string addSlider(Mechanism& m, const std::string& guide, const Vec2& at, double axisDeg)
 {
     Body block;
-    block.name = freshName(m, "block");
+    block.name = freshName(m, NewPart::Block);
     m.bodies.push_back(block);
-    const std::string slider = addJoint(m, JointType::Slider, guide, block.name, at, axisDeg, "S");
-    addJoint(m, JointType::Pin, block.name, "", at, 0.0, "P");
+    const std::string slider = addJoint(m, JointType::Slider, guide, block.name, at, axisDeg, NewPart::Slider);
+    addJoint(m, JointType::Pin, block.name, "", at, 0.0, NewPart::Pin);
     return slider;
 }
 
 std::string addPinInSlot(Mechanism& m, const std::string& slotBody, const Vec2& at, double axisDeg)
 {
-    return addJoint(m, JointType::PinInSlot, slotBody, "", at, axisDeg, "K");
+    return addJoint(m, JointType::PinInSlot, slotBody, "", at, axisDeg, NewPart::Slot);
 }
 
 std::string addRotaryMotor(Mechanism& m, const std::string& pinJoint)
 {
     Driver d;
-    d.name = freshName(m, "motor");
+    d.name = freshName(m, NewPart::Motor);
     d.type = DriverType::Rotary;
     d.joint = pinJoint;
     d.motion = ConstantSpeed{toSi(FileUnit::Rpm, 60.0), 0.0};  // as a file's "speed_rpm": 60 reads
@@ -115,7 +126,7 @@ std::string addRotaryMotor(Mechanism& m, const std::string& pinJoint)
 std::string addSliderDrive(Mechanism& m, const std::string& sliderJoint)
 {
     Driver d;
-    d.name = freshName(m, "drive");
+    d.name = freshName(m, NewPart::Drive);
     d.type = DriverType::Linear;
     d.joint = sliderJoint;
     d.motion = MotionTable{{0.0, 1.0, 2.0}, {0.0, 0.05, 0.0}};
@@ -126,7 +137,7 @@ std::string addSliderDrive(Mechanism& m, const std::string& sliderJoint)
 std::string addCylinder(Mechanism& m, const BodyPointRef& a, const BodyPointRef& b)
 {
     Driver d;
-    d.name = freshName(m, "cylinder");
+    d.name = freshName(m, NewPart::Cylinder);
     d.type = DriverType::Linear;
     d.ends[0] = a;
     d.ends[1] = b;
@@ -140,7 +151,7 @@ std::string addCylinder(Mechanism& m, const BodyPointRef& a, const BodyPointRef&
 void addForce(Mechanism& m, const BodyPointRef& at, const Vec2& force)
 {
     ForceLoad f;
-    f.name = freshName(m, "force");
+    f.name = freshName(m, NewPart::Force);
     f.point = at;
     f.force = force;
     m.loads.push_back(f);
@@ -149,7 +160,7 @@ void addForce(Mechanism& m, const BodyPointRef& at, const Vec2& force)
 void addTorque(Mechanism& m, const std::string& body, double torque)
 {
     TorqueLoad t;
-    t.name = freshName(m, "torque");
+    t.name = freshName(m, NewPart::Torque);
     t.body = body;
     t.torque = torque;
     m.loads.push_back(t);
@@ -158,7 +169,7 @@ void addTorque(Mechanism& m, const std::string& body, double torque)
 void addSpring(Mechanism& m, const BodyPointRef& a, const BodyPointRef& b)
 {
     SpringLoad s;
-    s.name = freshName(m, "spring");
+    s.name = freshName(m, NewPart::Spring);
     s.a = a;
     s.b = b;
     s.stiffness = 1000.0;
@@ -169,7 +180,7 @@ void addSpring(Mechanism& m, const BodyPointRef& a, const BodyPointRef& b)
 void addDamper(Mechanism& m, const BodyPointRef& a, const BodyPointRef& b)
 {
     DamperLoad d;
-    d.name = freshName(m, "damper");
+    d.name = freshName(m, NewPart::Damper);
     d.a = a;
     d.b = b;
     d.damping = 50.0;
@@ -181,7 +192,7 @@ void addPointMass(Mechanism& m, const std::string& body, const Vec2& at, double 
     const int b = bodyIndex(m, body);
     if (b < 0) return;
     Body& target = m.bodies[b];
-    target.pointMasses.push_back({freshName(m, "mass"), mass, at});
+    target.pointMasses.push_back({freshName(m, NewPart::Mass), mass, at});
 }
 
 void moveJoint(Mechanism& m, int joint, const Vec2& to)

@@ -39,16 +39,37 @@ std::vector<int> jointsAt(const Mechanism& m, const Vec2& p, double tolerance)
     return found;
 }
 
+std::vector<int> pinsAt(const Mechanism& m, const Vec2& p)
+{
+    std::vector<int> pins = jointsAt(m, p, 1e-9);
+    std::erase_if(pins, [&](int i) { return m.joints[i].type != JointType::Pin; });
+    return pins;
+}
+
+std::vector<std::string> bodiesOf(const Mechanism& m, const std::vector<int>& joints)
+{
+    std::vector<std::string> bodies;
+    for (int i : joints)
+        for (const auto& b : m.joints[i].bodies)
+            if (!b.empty() && std::find(bodies.begin(), bodies.end(), b) == bodies.end()) bodies.push_back(b);
+    return bodies;
+}
+
 int bodyIndex(const Mechanism& m, const std::string& name) { return indexByName(m.bodies, name); }
 int jointIndex(const Mechanism& m, const std::string& name) { return indexByName(m.joints, name); }
 int driverIndex(const Mechanism& m, const std::string& name) { return indexByName(m.drivers, name); }
 
-std::string freshName(const Mechanism& m, const std::string& stem)
+std::string freshName(const Mechanism& m, NewPart kind)
 {
+    static const char* const words[] = {"pin",   "slider",   "slot",  "link",   "plate",  "block",  "motor",
+                                        "drive", "cylinder", "force", "torque", "spring", "damper", "mass"};
+    const std::string stem = std::string(words[int(kind)]) + " ";
     std::set<std::string> used{kGroundName};
     for (const auto& b : m.bodies) used.insert(b.name);
     for (const auto& j : m.joints) used.insert(j.name);
     for (const auto& d : m.drivers) used.insert(d.name);
+    for (const auto& b : m.bodies)
+        for (const auto& p : b.pointMasses) used.insert(p.name);
     for (std::size_t i = 0; i < m.loads.size(); ++i) used.insert(loadName(m.loads[i], int(i)));
     for (int n = 1;; ++n) {
         std::string name = stem + std::to_string(n);

@@ -1,5 +1,6 @@
 #include "ui/panels/property_editor.h"
 
+#include "ui/analysis/analysis_state.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/document/sketch_geometry.h"
 #include "ui/panels/properties/forms.h"
@@ -15,7 +16,8 @@
 
 namespace clevis::ui {
 
-PropertyEditor::PropertyEditor(MechanismDocument* doc, QWidget* parent) : QScrollArea(parent), doc_(doc)
+PropertyEditor::PropertyEditor(MechanismDocument* doc, AnalysisState* analysis, QWidget* parent)
+    : QScrollArea(parent), doc_(doc), analysis_(analysis)
 {
     setObjectName(QStringLiteral("propertyEditor"));
     setWidgetResizable(true);
@@ -23,6 +25,14 @@ PropertyEditor::PropertyEditor(MechanismDocument* doc, QWidget* parent) : QScrol
     connect(doc_, &MechanismDocument::mechanismChanged, this, &PropertyEditor::scheduleRebuild);
     connect(doc_, &MechanismDocument::selectionChanged, this, &PropertyEditor::scheduleRebuild);
     connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, &PropertyEditor::scheduleRebuild);
+    // A joint's form shows the forces at the shown position.
+    const auto jointShown = [this] {
+        if (doc_->selection().kind == Selection::Kind::Joint) scheduleRebuild();
+    };
+    if (analysis_) {
+        connect(analysis_, &AnalysisState::resultChanged, this, jointShown);
+        connect(analysis_, &AnalysisState::currentStepChanged, this, jointShown);
+    }
     rebuildNow();
 }
 
@@ -39,7 +49,9 @@ void PropertyEditor::rebuildNow()
 {
     pending_ = false;
     // Keep the keyboard in the field that had it, so Tab through a form still works.
+    // Only when it has it still: a click on the canvas takes the keyboard there.
     const QWidget* focused = widget() ? widget()->focusWidget() : nullptr;
+    if (focused && !focused->hasFocus()) focused = nullptr;
     const QString focusKey = focused ? focused->objectName() : QString();
     // ... and the form where it was scrolled to, so that editing a field far down does not jump back to the top.
     const int scrolled = verticalScrollBar()->value();
@@ -57,7 +69,7 @@ void PropertyEditor::rebuildNow()
     const std::string name = s.name.toStdString();
     const int body = bodyIndex(m, name), joint = jointIndex(m, name), driver = driverIndex(m, name);
     if (s.kind == Selection::Kind::Body && body >= 0) bodyForm(f, m, m.bodies[body]);
-    else if (s.kind == Selection::Kind::Joint && joint >= 0) jointForm(f, m, m.joints[joint]);
+    else if (s.kind == Selection::Kind::Joint && joint >= 0) jointForm(f, m, m.joints[joint], analysis_);
     else if (s.kind == Selection::Kind::Driver && driver >= 0) driverForm(f, m, m.drivers[driver]);
     else if (s.kind == Selection::Kind::Load && s.loadIndex >= 0 && s.loadIndex < int(m.loads.size()))
         loadForm(f, m, s.loadIndex);

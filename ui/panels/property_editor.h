@@ -11,12 +11,14 @@ class QFormLayout;
 
 namespace clevis::ui {
 
+class AnalysisState;
 class MechanismDocument;
 
 class PropertyEditor : public QScrollArea {
     Q_OBJECT
 public:
-    explicit PropertyEditor(MechanismDocument* doc, QWidget* parent = nullptr);
+    // `analysis`, when given, supplies the joint forces a compound pin lists.
+    explicit PropertyEditor(MechanismDocument* doc, AnalysisState* analysis = nullptr, QWidget* parent = nullptr);
 
     // Rebuilds now instead of at the next turn of the event loop (for tests).
     void rebuildNow();
@@ -26,6 +28,7 @@ private:
     void showRefusal(QFormLayout* form);
 
     MechanismDocument* doc_;
+    AnalysisState* analysis_;
     bool pending_ = false;
     QString refusal_;  // why the last typed value was not taken, shown by the next rebuild
 };

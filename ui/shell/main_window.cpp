@@ -106,7 +106,7 @@ void MainWindow::resetLayout()
 void MainWindow::buildDocks()
 {
     addPanel(this, tr("Parts"), QStringLiteral("partsDock"), new PartsPanel(doc_, analysis_), {180, 90});
-    addPanel(this, tr("Properties"), QStringLiteral("propertiesDock"), new PropertyEditor(doc_), {220, 140});
+    addPanel(this, tr("Properties"), QStringLiteral("propertiesDock"), new PropertyEditor(doc_, analysis_), {220, 140});
 }
 
 QMenu* MainWindow::buildMenus()

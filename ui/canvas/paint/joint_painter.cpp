@@ -1,9 +1,14 @@
 #include "render/palette.h"
 #include "ui/canvas/sketch_painter.h"
 #include "ui/canvas/sketch_style.h"
+#include "ui/document/sketch_geometry.h"
 
 #include <QPainterPath>
+#include <QStringList>
 #include <QtMath>
+
+#include <algorithm>
+#include <cmath>
 
 namespace clevis::ui {
 namespace {
@@ -77,23 +82,54 @@ void drawPinRing(QPainter& p, const QPointF& at, bool isOpen)
     p.drawEllipse(at, style::kPinRadius, style::kPinRadius);
 }
 
+// A compound pin, where three or more bodies meet: one ring as for any pin,
+// and a small bead on its rim for each body beyond the second, so the
+// designer sees how many parts share the pin.
+void drawExtraBodies(QPainter& p, const QPointF& at, int extra)
+{
+    p.setPen(QPen(palette::ink(), 1.2));
+    p.setBrush(palette::ink());
+    const double r = style::kPinRadius + 6.5;
+    for (int k = 0; k < extra; ++k) {
+        const double a = qDegreesToRadians(90.0 + 35.0 * k);  // above, then on round to the left: clear of the label
+        p.drawEllipse(at + QPointF(r * std::cos(a), -r * std::sin(a)), 2.0, 2.0);
+    }
+}
+
 }  // namespace
 
 void paintJoints(PaintContext& c)
 {
     QPainter& p = c.painter;
     p.save();
-    for (const auto& j : c.mechanism.joints) {
+    const Mechanism& m = c.mechanism;
+    for (const auto& j : m.joints) {
         const QPointF at = c.view.toScreen(j.at);
         const bool ground = j.bodies[0] == kGroundName;
-        p.setPen(c.haloPen(Selection::Kind::Joint, j.name, 2 * style::kPinRadius));
+        // The joints of a compound pin are drawn once, by the first of them,
+        // with the halo of whichever is selected.
+        const std::vector<int> stack = j.type == JointType::Pin ? pinsAt(m, j.at) : std::vector<int>{};
+        if (stack.size() > 1 && &m.joints[stack.front()] != &j) continue;
         p.setBrush(Qt::NoBrush);
-        p.drawPoint(at);
+        std::vector<const Joint*> members{&j};
+        if (stack.size() > 1) {
+            members.clear();
+            for (int i : stack) members.push_back(&m.joints[i]);
+        }
+        for (const Joint* member : members) {
+            p.setPen(c.haloPen(Selection::Kind::Joint, member->name, 2 * style::kPinRadius));
+            p.drawPoint(at);
+        }
         switch (j.type) {
-        case JointType::Pin:
-            if (ground) drawGroundBracket(p, at);
-            drawPinRing(p, at, open(j));
+        case JointType::Pin: {
+            const bool anyGround = std::any_of(stack.begin(), stack.end(), [&](int i) {
+                return m.joints[i].bodies[0] == kGroundName || m.joints[i].bodies[1] == kGroundName;
+            });
+            if (ground || anyGround) drawGroundBracket(p, at);
+            drawPinRing(p, at, std::any_of(stack.begin(), stack.end(), [&](int i) { return open(m.joints[i]); }));
+            drawExtraBodies(p, at, int(bodiesOf(m, stack).size()) - 2);
             break;
+        }
         case JointType::Slider:
             drawRail(p, at, j.axisDeg, ground, 70.0);
             drawBlock(p, at, j.axisDeg);
@@ -103,8 +139,12 @@ void paintJoints(PaintContext& c)
             drawPinRing(p, at, open(j));
             break;
         }
+        QStringList names;
+        for (int i : stack) names << QString::fromStdString(m.joints[i].name);
         if (j.type != JointType::Slider)
-            drawLabel(p, at + QPointF(8, -8), QString::fromStdString(j.name), palette::ink());
+            drawLabel(p, at + QPointF(8, -8),
+                      stack.size() > 1 ? names.join(QStringLiteral(" + ")) : QString::fromStdString(j.name),
+                      palette::ink());
     }
     p.restore();
 }

@@ -9,7 +9,12 @@
 
 namespace clevis::ui {
 
-void paintRubberBand(QPainter& p, const ViewTransform& view, const Vec2& from, const Vec2& to);
+// The dashed line; with `measured`, its length and angle beside the far end.
+void paintRubberBand(QPainter& p, const ViewTransform& view, const Vec2& from, const Vec2& to, bool measured = true);
+// The box of a length and an angle being typed, below and right of `at`;
+// the field being typed into is underlined.
+void paintTypedInput(QPainter& p, const QPointF& at, const QString& length, const QString& angle,
+                     const QString& lengthUnit, bool onAngle);
 void paintSnapMark(QPainter& p, const ViewTransform& view, const Vec2& at);
 
 }  // namespace clevis::ui

@@ -5,6 +5,7 @@
 #include "ui/document/sketch_geometry.h"
 
 #include <QObject>
+#include <QStringList>
 
 namespace clevis::ui {
 namespace {
@@ -28,7 +29,10 @@ void SelectTool::press(const Pointer& p)
 
 void SelectTool::move(const Pointer& p)
 {
-    if (!drag_) return;
+    if (!drag_) {
+        showCompoundPin(p.screen);
+        return;
+    }
     const Vec2 raw = host_.view().toWorld(p.screen);
     const Vec2 to = (p.modifiers & Qt::AltModifier) ? raw : snapToGrid(host_.view(), raw);
     applyToDrag([joint = drag_->joint, to](Mechanism& m) { edits::moveJoint(m, joint, to); });
@@ -49,6 +53,26 @@ bool SelectTool::cancel()
     doc().closeMergeRun();
     drag_.reset();
     return true;
+}
+
+// Over a pin where three or more bodies meet, the status line lists them and
+// the two-body joints that hold them; moving off it brings the hint back.
+void SelectTool::showCompoundPin(const QPointF& screen)
+{
+    const Mechanism& m = mechanism();
+    const Selection hit = partAt(m, host_.view(), screen);
+    const int joint = hit.kind == Selection::Kind::Joint ? jointIndex(m, hit.name.toStdString()) : -1;
+    const std::vector<int> here = joint >= 0 ? pinsAt(m, m.joints[joint].at) : std::vector<int>{};
+    if (here.size() < 2) {
+        if (overCompound_) host_.tell(hint());
+        overCompound_ = false;
+        return;
+    }
+    overCompound_ = true;
+    QStringList bodies, joints;
+    for (const auto& b : bodiesOf(m, here)) bodies << QString::fromStdString(b);
+    for (int i : here) joints << QString::fromStdString(m.joints[i].name);
+    host_.tell(QObject::tr("Compound pin: %1 meet here, held by %2.").arg(bodies.join(", "), joints.join(", ")));
 }
 
 // Every edit of one drag merges into the same undo step.

@@ -1,6 +1,7 @@
 // Picks parts and drags pins; the links on a pin follow because they are
 // drawn between their pins. A whole drag is one undo step, and a drag
-// cancelled with Esc leaves none.
+// cancelled with Esc leaves none. Hovering over a compound pin lists what
+// meets there.
 #pragma once
 
 #include "ui/canvas/tools/tool.h"
@@ -22,8 +23,10 @@ private:
         Mechanism start;  // as it was when the drag began, for Esc
     };
     void applyToDrag(const std::function<void(Mechanism&)>& edit);
+    void showCompoundPin(const QPointF& screen);
 
     std::optional<Drag> drag_;
+    bool overCompound_ = false;  // the status line lists a compound pin's bodies
 };
 
 }  // namespace clevis::ui

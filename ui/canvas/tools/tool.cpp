@@ -2,16 +2,16 @@
 
 namespace clevis::ui {
 
-void Tool::tryEdit(const TrialEdit& edit)
+bool Tool::tryEdit(const TrialEdit& edit)
 {
     Mechanism trial = mechanism();
     QString problem;
     const QString undoText = edit(trial, problem);
     if (!problem.isEmpty()) {
         host_.tell(problem);
-        return;
+        return false;
     }
-    doc().apply(undoText, [&trial](Mechanism& m) { m = std::move(trial); });
+    return doc().apply(undoText, [&trial](Mechanism& m) { m = std::move(trial); }).isEmpty();
 }
 
 }  // namespace clevis::ui

@@ -50,14 +50,20 @@ public:
     virtual void finish() {}  // Enter or a double click
     // Esc: drops the stroke in progress; returns false when there was none.
     virtual bool cancel() { return false; }
+    // A key the canvas does not use itself (digits, Backspace, Tab); true
+    // when the tool took it.
+    virtual bool type(int /*key*/, const QString& /*text*/) { return false; }
+    // Whether a number is being typed: its keys (Backspace) are then the tool's, not shortcuts.
+    virtual bool typing() const { return false; }
     virtual void paintPreview(QPainter&) const {}
 
 protected:
     ToolHost& host_;
     MechanismDocument& doc() { return *host_.document(); }
     const Mechanism& mechanism() { return host_.document()->mechanism(); }
-    // Applies the edit as one undo step, or tells the user its problem and changes nothing.
-    void tryEdit(const TrialEdit& edit);
+    // Applies the edit as one undo step, or tells the user its problem and
+    // changes nothing; true when the edit was applied.
+    bool tryEdit(const TrialEdit& edit);
 };
 
 }  // namespace clevis::ui

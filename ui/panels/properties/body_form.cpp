@@ -117,7 +117,7 @@ void pointMassFields(FormBuilder& f, const Body& body, const std::function<Body&
     for (std::size_t i = 0; i < body.pointMasses.size(); ++i) {
         const PointMass& pm = body.pointMasses[i];
         const QString key = QStringLiteral("pointMass%1").arg(i);
-        f.heading(QObject::tr("Point mass %1").arg(QString::fromStdString(pm.name)));
+        f.partHeading(QObject::tr("Point mass"), QString::fromStdString(pm.name));
         f.number(key, QObject::tr("Mass"), pm.mass, plainQuantity("kg"), undo, [self, i](Mechanism& m, double v) {
             auto& list = self(m).pointMasses;
             if (v <= 0) list.erase(list.begin() + i);  // a zero mass takes the point mass away
@@ -151,8 +151,7 @@ void bodyForm(FormBuilder& f, const Mechanism& m, const Body& body)
         return m.bodies[bodyIndex(m, name)];
     };
     const QString undo = QObject::tr("Set %1 mass").arg(qname);
-    f.heading(
-        QObject::tr("%1 %2").arg(bodyPins(m, name).size() > 2 ? QObject::tr("Plate") : QObject::tr("Link"), qname));
+    f.partHeading(bodyPins(m, name).size() > 2 ? QObject::tr("Plate") : QObject::tr("Link"), qname);
     f.text("name", QObject::tr("Name"), qname, QObject::tr("Rename %1").arg(qname),
            [name](Mechanism& m, const QString& v) {
                const QString problem = nameProblem(m, v);

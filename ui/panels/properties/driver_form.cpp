@@ -51,7 +51,7 @@ void driverForm(FormBuilder& f, const Mechanism& /*every form takes it; a motion
     const auto self = [name](Mechanism& m) -> Driver& { return m.drivers[driverIndex(m, name)]; };
     const bool rotary = driver.type == DriverType::Rotary;
     const QString undo = QObject::tr("Set %1 motion").arg(qname);
-    f.heading(rotary ? QObject::tr("Motor %1").arg(qname) : QObject::tr("Linear drive %1").arg(qname));
+    f.partHeading(rotary ? QObject::tr("Motor") : QObject::tr("Linear drive"), qname);
     f.text("name", QObject::tr("Name"), qname, QObject::tr("Rename %1").arg(qname),
            [name](Mechanism& m, const QString& v) {
                const QString problem = nameProblem(m, v);

@@ -167,12 +167,19 @@ void FormBuilder::check(const QString& key, const QString& label, bool value, co
     });
 }
 
-void FormBuilder::info(const QString& label, const QString& value)
+void FormBuilder::info(const QString& label, const QString& value, const QString& key)
 {
     auto* l = new QLabel(value);
+    l->setObjectName(key);
     l->setTextInteractionFlags(Qt::TextSelectableByMouse);
     l->setWordWrap(true);
     form_->addRow(label, l);
+}
+
+void FormBuilder::partHeading(const QString& kind, const QString& name)
+{
+    const bool saysKind = name.startsWith(kind + QLatin1Char(' '), Qt::CaseInsensitive);
+    heading(saysKind ? kind + name.mid(kind.size()) : kind + QLatin1Char(' ') + name);
 }
 
 void FormBuilder::heading(const QString& title)

@@ -45,8 +45,10 @@ public:
                 std::function<void(Mechanism&, int)> set);
     void check(const QString& key, const QString& label, bool value, const QString& undo,
                std::function<void(Mechanism&, bool)> set);
-    void info(const QString& label, const QString& value);
+    void info(const QString& label, const QString& value, const QString& key = {});
     void heading(const QString& title);
+    // "Link crank", but "Link 2" for a part named "link 2": the kind is not said twice.
+    void partHeading(const QString& kind, const QString& name);
 
     MechanismDocument* document() const { return doc_; }
 

@@ -8,7 +8,9 @@ namespace clevis::ui {
 
 void mechanismForm(FormBuilder& f, const Mechanism& m);
 void bodyForm(FormBuilder& f, const Mechanism& m, const Body& body);
-void jointForm(FormBuilder& f, const Mechanism& m, const Joint& joint);
+class AnalysisState;
+// With a solved analysis, a compound pin's form lists each of its joints' forces.
+void jointForm(FormBuilder& f, const Mechanism& m, const Joint& joint, const AnalysisState* analysis);
 void driverForm(FormBuilder& f, const Mechanism& m, const Driver& driver);
 void loadForm(FormBuilder& f, const Mechanism& m, int loadIndex);
 

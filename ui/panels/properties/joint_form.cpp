@@ -1,6 +1,12 @@
+#include "ui/analysis/analysis_state.h"
 #include "ui/document/mechanism_edits.h"
 #include "ui/document/sketch_geometry.h"
 #include "ui/panels/properties/forms.h"
+#include "ui/shell/display_units.h"
+
+#include <QStringList>
+
+#include <algorithm>
 
 namespace clevis::ui {
 namespace {
@@ -18,15 +24,48 @@ int choiceIndex(const QStringList& choices, const std::string& body)
     return body.empty() ? 0 : std::max(0, int(choices.indexOf(QString::fromStdString(body))));
 }
 
+// Every joint at a compound pin (three or more bodies on one pin, a two-body
+// joint per extra body): the bodies it joins and, once solved, the force
+// between them at the position shown (the reaction of results.h).
+void compoundPinRows(FormBuilder& f, const Mechanism& m, const Joint& joint, const AnalysisState* analysis)
+{
+    const std::vector<int> stack = pinsAt(m, joint.at);
+    if (stack.size() < 2) return;
+    QStringList bodies;
+    for (const auto& b : bodiesOf(m, stack)) bodies << QString::fromStdString(b);
+    f.heading(QObject::tr("Compound pin"));
+    f.info(QObject::tr("Bodies on it"), bodies.join(QStringLiteral(", ")));
+    const bool solved = analysis && analysis->hasResult();
+    for (int i : stack) {
+        const Joint& j = m.joints[i];
+        const QString name = QString::fromStdString(j.name);
+        const QString between = QObject::tr("force between %1 and %2")
+                                    .arg(QString::fromStdString(j.bodies[0]), QString::fromStdString(j.bodies[1]));
+        QString value = QObject::tr("%1 (not solved)").arg(between);
+        if (solved) {
+            const auto& joints = analysis->compiled().joints;
+            const auto k = std::find_if(joints.begin(), joints.end(), [&](const auto& c) { return c.name == j.name; });
+            if (k != joints.end()) {
+                const Vec2 force = analysis->result().steps[analysis->currentStep()].joints[k - joints.begin()].force;
+                value = QObject::tr("%1: %2").arg(
+                    between, DisplayUnits::instance()
+                                 .formatForce(force.norm())
+                                 .replace(QLatin1Char(' '), QChar(0x00A0)));  // number and unit on one line
+            }
+        }
+        f.info(name, value, QStringLiteral("force:") + name);
+    }
+}
+
 }  // namespace
 
-void jointForm(FormBuilder& f, const Mechanism& m, const Joint& joint)
+void jointForm(FormBuilder& f, const Mechanism& m, const Joint& joint, const AnalysisState* analysis)
 {
     const std::string name = joint.name;
     const QString qname = QString::fromStdString(name);
     const auto self = [name](Mechanism& m) -> Joint& { return m.joints[jointIndex(m, name)]; };
     const char* kinds[] = {"Pin", "Slider", "Pin in slot"};
-    f.heading(QObject::tr("%1 %2").arg(QObject::tr(kinds[int(joint.type)]), qname));
+    f.partHeading(QObject::tr(kinds[int(joint.type)]), qname);
     f.text("name", QObject::tr("Name"), qname, QObject::tr("Rename %1").arg(qname),
            [name](Mechanism& m, const QString& v) {
                const QString problem = nameProblem(m, v);
@@ -60,6 +99,7 @@ void jointForm(FormBuilder& f, const Mechanism& m, const Joint& joint)
                  [self](Mechanism& m, double deg) { self(m).axisDeg = deg; });
     if (joint.bodies[0].empty() || joint.bodies[1].empty())
         f.info({}, QObject::tr("This pin is open: draw a link to it, or pick its bodies above."));
+    if (joint.type == JointType::Pin) compoundPinRows(f, m, joint, analysis);
 }
 
 }  // namespace clevis::ui

@@ -49,7 +49,7 @@ struct LoadFormVisitor {
     {
         const auto self = loadAt<ForceLoad>(index);
         const QString undo = QObject::tr("Set force %1").arg(QString::fromStdString(load.name));
-        f.heading(QObject::tr("Force %1").arg(QString::fromStdString(load.name)));
+        f.partHeading(QObject::tr("Force"), QString::fromStdString(load.name));
         nameField(f, load.name, [self](Mechanism& m) -> std::string& { return self(m).name; });
         endFields(f, m, "point", QObject::tr("Acts"), load.point, undo,
                   [self](Mechanism& m) -> BodyPointRef& { return self(m).point; });
@@ -70,7 +70,7 @@ struct LoadFormVisitor {
     {
         const auto self = loadAt<TorqueLoad>(index);
         const QString undo = QObject::tr("Set torque %1").arg(QString::fromStdString(load.name));
-        f.heading(QObject::tr("Torque %1").arg(QString::fromStdString(load.name)));
+        f.partHeading(QObject::tr("Torque"), QString::fromStdString(load.name));
         nameField(f, load.name, [self](Mechanism& m) -> std::string& { return self(m).name; });
         const QStringList bodies = movingBodies(m);
         f.choice("body", QObject::tr("On"), bodies, std::max(0, int(bodies.indexOf(QString::fromStdString(load.body)))),
@@ -82,7 +82,7 @@ struct LoadFormVisitor {
     {
         const auto self = loadAt<SpringLoad>(index);
         const QString undo = QObject::tr("Set spring %1").arg(QString::fromStdString(load.name));
-        f.heading(QObject::tr("Spring %1").arg(QString::fromStdString(load.name)));
+        f.partHeading(QObject::tr("Spring"), QString::fromStdString(load.name));
         nameField(f, load.name, [self](Mechanism& m) -> std::string& { return self(m).name; });
         f.number("stiffness", QObject::tr("Rate"), load.stiffness, stiffnessQuantity(), undo,
                  [self](Mechanism& m, double v) { self(m).stiffness = v; });
@@ -98,7 +98,7 @@ struct LoadFormVisitor {
     {
         const auto self = loadAt<DamperLoad>(index);
         const QString undo = QObject::tr("Set damper %1").arg(QString::fromStdString(load.name));
-        f.heading(QObject::tr("Damper %1").arg(QString::fromStdString(load.name)));
+        f.partHeading(QObject::tr("Damper"), QString::fromStdString(load.name));
         nameField(f, load.name, [self](Mechanism& m) -> std::string& { return self(m).name; });
         f.number("damping", QObject::tr("Damping"), load.damping, plainQuantity(QStringLiteral("N·s/m"), 3), undo,
                  [self](Mechanism& m, double v) { self(m).damping = v; });
@@ -111,7 +111,7 @@ struct LoadFormVisitor {
     {
         const auto self = loadAt<TorsionSpringLoad>(index);
         const QString undo = QObject::tr("Set torsion spring %1").arg(QString::fromStdString(load.name));
-        f.heading(QObject::tr("Torsion spring %1").arg(QString::fromStdString(load.name)));
+        f.partHeading(QObject::tr("Torsion spring"), QString::fromStdString(load.name));
         nameField(f, load.name, [self](Mechanism& m) -> std::string& { return self(m).name; });
         f.info(QObject::tr("At pin"), QString::fromStdString(load.joint));
         f.number("stiffness", QObject::tr("Rate"), load.stiffness, plainQuantity(QStringLiteral("N·m/rad"), 4), undo,
