@@ -336,7 +336,7 @@ TEST(MechanismEdits, DeletingAPartDropsTheLoadsAndDriversOnIt)
 TEST(MechanismEdits, DeletingTheDriverAProfileFollowsKeepsTheLoadAtItsNominalValue)
 {
     for (const Selection& gone :
-         {Selection{Selection::Kind::Driver, "motor1", -1}, Selection{Selection::Kind::Joint, "O1", -1}}) {
+         {Selection{Selection::Kind::Driver, "motor 1", -1}, Selection{Selection::Kind::Joint, "pin 1", -1}}) {
         Mechanism m = withEveryLoadKind();
         const std::vector<std::string> following{std::get<ForceLoad>(m.loads[0]).name,
                                                  std::get<TorqueLoad>(m.loads[1]).name};
