@@ -324,11 +324,11 @@ std::vector<QCPLegend*> legendsOf(QCustomPlot* plot)
     return out;
 }
 
-std::vector<QString> titlesOf(QCustomPlot* plot)
+std::vector<QCPTextElement*> titlesOf(QCustomPlot* plot)
 {
-    std::vector<QString> out;
+    std::vector<QCPTextElement*> out;
     for (QCPLayoutElement* e : plot->plotLayout()->elements(true))
-        if (auto* text = qobject_cast<QCPTextElement*>(e)) out.push_back(text->text());
+        if (auto* text = qobject_cast<QCPTextElement*>(e)) out.push_back(text);
     return out;
 }
 
@@ -364,19 +364,28 @@ TEST(PlotReadability, WindowLegendsShowTheLineOfEachCurve)
     const auto titles = titlesOf(shown.plots->plot());
     ASSERT_EQ(titles.size(), panes.size());
     for (std::size_t i = 0; i < panes.size(); ++i) {
-        EXPECT_EQ(titles[i], panes[i].title);
-        ASSERT_EQ(legends[i]->itemCount(), int(panes[i].curves.size())) << panes[i].title.toStdString();
-        for (int j = 0; j < legends[i]->itemCount(); ++j) {
-            auto* item = qobject_cast<QCPPlottableLegendItem*>(legends[i]->item(j));
-            ASSERT_NE(item, nullptr);
-            const auto* graph = qobject_cast<const QCPGraph*>(item->plottable());
+        EXPECT_EQ(titles[i]->text(), panes[i].title);
+        EXPECT_GE(titles[i]->outerRect().width(),
+                  static_cast<QCPLayoutElement*>(titles[i])->minimumOuterSizeHint().width())
+            << "title squeezed";
+        // The entries in order, skipping the empty cells a wrapped legend ends with.
+        std::vector<QCPPlottableLegendItem*> items;
+        for (int j = 0; j < legends[i]->itemCount(); ++j)
+            if (auto* item = qobject_cast<QCPPlottableLegendItem*>(legends[i]->item(j))) items.push_back(item);
+        ASSERT_EQ(items.size(), panes[i].curves.size()) << panes[i].title.toStdString();
+        for (std::size_t j = 0; j < items.size(); ++j) {
+            const auto* graph = qobject_cast<const QCPGraph*>(items[j]->plottable());
             ASSERT_NE(graph, nullptr);
             EXPECT_EQ(graph->name(), panes[i].curves[j].series.name);
             EXPECT_EQ(graph->pen(), curvePen(panes[i].curves[j].pen));
-            for (int k = j + 1; k < legends[i]->itemCount(); ++k)
-                EXPECT_FALSE(overlap(legends[i]->item(j)->outerRect(), legends[i]->item(k)->outerRect()))
+            for (std::size_t k = j + 1; k < items.size(); ++k)
+                EXPECT_FALSE(overlap(items[j]->outerRect(), items[k]->outerRect()))
                     << graph->name().toStdString() << " and entry " << k;
-            EXPECT_TRUE(QRectF(shown.plots->plot()->rect()).contains(legends[i]->item(j)->outerRect()));
+            EXPECT_TRUE(QRectF(shown.plots->plot()->rect()).contains(items[j]->outerRect()));
+            // Not squeezed: the entry has the room its line sample and name need.
+            EXPECT_GE(items[j]->outerRect().width(),
+                      static_cast<QCPLayoutElement*>(items[j])->minimumOuterSizeHint().width())
+                << graph->name().toStdString();
         }
     }
 }

@@ -10,6 +10,7 @@
 #include <QHBoxLayout>
 #include <QLabel>
 #include <QListWidget>
+#include <QResizeEvent>
 #include <QScrollArea>
 #include <QSplitter>
 #include <QVBoxLayout>
@@ -25,9 +26,11 @@ constexpr int kPaneHeight = 160;  // px: title and legend, three ticks, the x nu
 void wrapLegend(QCPLegend* legend, int width)
 {
     int widest = 1;
-    for (int i = 0; i < legend->itemCount(); ++i)
-        widest = std::max(widest, legend->item(i)->minimumOuterSizeHint().width());
+    for (int i = 0; i < legend->itemCount(); ++i)  // cells past the last entry of a wrapped legend are empty
+        if (const QCPAbstractLegendItem* item = legend->item(i))
+            widest = std::max(widest, item->minimumOuterSizeHint().width());
     legend->setWrap(std::max(1, width / widest));
+    legend->setFillOrder(QCPLegend::foColumnsFirst, true);  // a new wrap only applies once rearranged
 }
 
 }  // namespace
@@ -187,6 +190,7 @@ void PlotStack::rebuild()
         // Nothing of an earlier result may stay on screen beside the reason.
         const QSignalBlocker blockJoints(joints_);
         joints_->clear();
+        plot_->setMinimumHeight(0);  // no room kept for the panes that were
         showReadout(analysis_->errorText());
         plot_->replot();
         return;
@@ -341,7 +345,9 @@ void PlotStack::showReadout(const QString& text)
 bool PlotStack::eventFilter(QObject* watched, QEvent* event)
 {
     if (watched == readout_ && event->type() == QEvent::Resize) showReadout(fullReadout_);
-    if (watched == plot_ && event->type() == QEvent::Resize && !legends_.empty()) {
+    // A new width may wrap the legends otherwise; the height they set must not start it again.
+    if (watched == plot_ && event->type() == QEvent::Resize && !legends_.empty() &&
+        static_cast<QResizeEvent*>(event)->oldSize().width() != plot_->width()) {
         fitLegends();
         plot_->replot(QCustomPlot::rpQueuedReplot);
     }
