@@ -26,6 +26,12 @@ int CycleAxis::nearestStep(double x) const
     return best;
 }
 
+QString CycleAxis::format(double x) const
+{
+    // Degrees to a tenth; metres and seconds to four places (0.1 mm, 0.1 ms).
+    return QString("%1 %2").arg(x, 0, 'f', unit == "°" ? 1 : 4).arg(unit);
+}
+
 CycleAxis cycleAxis(const CompiledMechanism& m, const CycleResult& r)
 {
     CycleAxis axis;
@@ -34,7 +40,9 @@ CycleAxis cycleAxis(const CompiledMechanism& m, const CycleResult& r)
         for (const auto& s : r.steps) axis.values.push_back(driveDisplayValue(d.type, s.drivePosition[0]));
         if (strictlyMonotonic(axis.values)) {
             axis.unit = driveDisplayUnit(d.type);
-            axis.label = QString("%1 (%2)").arg(QString::fromStdString(d.name), axis.unit);
+            axis.label = QString("%1 %2 (%3)")
+                             .arg(QString::fromStdString(d.name), d.type == DriverType::Rotary ? "angle" : "position",
+                                  axis.unit);
             axis.byTime = false;
             return axis;
         }

@@ -12,13 +12,16 @@
 namespace clevis::ui {
 
 struct CycleAxis {
-    QString label;  // e.g. "motor (°)" or "time (s)"
+    QString label;  // e.g. "motor angle (°)", "ram position (m)" or "time (s)"
     QString unit;   // "°", "m" or "s"
     bool byTime = true;
     std::vector<double> values;  // one per step, in `unit`
 
     // The step whose value is nearest `x`.
     int nearestStep(double x) const;
+    // A position on the axis with its unit, to the precision a reader needs:
+    // "120.0 °", "0.0412 m", "0.2500 s".
+    QString format(double x) const;
 };
 
 CycleAxis cycleAxis(const CompiledMechanism& m, const CycleResult& r);

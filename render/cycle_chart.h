@@ -1,6 +1,8 @@
 // A chart of curves over the cycle for print (report pages, headless
-// exports): axes with round ticks, each curve's peak marked with its value,
-// near-singular steps and the unreachable end of the cycle shaded.
+// exports): axes with round ticks and titles, near-singular steps and the
+// unreachable end of the cycle shaded, each curve's peak marked on it and
+// listed in a legend under the chart beside a sample of the curve's line, so
+// that no two labels can overlap however the peaks fall.
 #pragma once
 
 #include "render/cycle_axis.h"
@@ -11,17 +13,28 @@ namespace clevis::ui {
 
 class CycleChart final : public Figure {
 public:
-    CycleChart(PlotPane pane, CycleAxis axis, const CycleResult& r, QSizeF size = {515, 230});
+    // The height follows from the width: the plot, then as many legend rows as the curves need.
+    CycleChart(PlotPane pane, CycleAxis axis, const CycleResult& r, double width = 515);
 
     QSizeF size() const override { return size_; }
     void paint(QPainter& p, const QRectF& target) const override;
 
 private:
+    struct LegendEntry {
+        QRectF sample;  // the line sample with the peak mark
+        QRectF text;
+        QString label;  // "A |F|  peak 1.20 kN at 95.0 °"
+    };
+    void layOutLegend();
+    void paintAxes(QPainter& p, double xlo, double xhi, double ylo, double yhi) const;
+
     PlotPane pane_;
     CycleAxis axis_;
     std::vector<std::pair<int, int>> singular_;
     double reachEnd_ = 0, plannedEnd_ = 0;  // x where the solved part ends and the cycle would
     QSizeF size_;
+    QRectF plot_;
+    std::vector<LegendEntry> legend_;
 };
 
 // Round tick positions covering [lo, hi], about `count` of them.

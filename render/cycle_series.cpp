@@ -1,5 +1,7 @@
 #include "render/cycle_series.h"
 
+#include <algorithm>
+#include <cmath>
 #include <functional>
 
 namespace clevis::ui {
@@ -58,6 +60,13 @@ CycleSeries transmissionSeries(const CompiledMechanism& m, const CycleResult& r,
 {
     return {QString::fromStdString(m.joints[r.transmissionPins[pin].joint].name) + " transmission angle", "°",
             collect(r, [&](const StepResult& s) { return s.transmissionDeg[pin]; })};
+}
+
+int peakStep(const std::vector<double>& values)
+{
+    const auto peak =
+        std::max_element(values.begin(), values.end(), [](double a, double b) { return std::abs(a) < std::abs(b); });
+    return peak == values.end() ? -1 : int(peak - values.begin());
 }
 
 std::vector<std::pair<int, int>> nearSingularRuns(const CycleResult& r)

@@ -28,6 +28,9 @@ CycleSeries shakingForceSeries(const CycleResult& r, const RenderUnits& u);
 CycleSeries shakingMomentSeries(const CycleResult& r, const RenderUnits& u);
 CycleSeries transmissionSeries(const CompiledMechanism& m, const CycleResult& r, int pin);
 
+// The step where |value| is largest (the first of equals); -1 when there are no values.
+int peakStep(const std::vector<double>& values);
+
 // Runs of consecutive steps the solver flagged near a singular position, as
 // [first, last] step indices.
 std::vector<std::pair<int, int>> nearSingularRuns(const CycleResult& r);

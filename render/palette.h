@@ -6,6 +6,7 @@
 #pragma once
 
 #include <QColor>
+#include <QVector>
 
 namespace clevis::ui::palette {
 
@@ -23,5 +24,33 @@ inline QColor weight() { return {0xE6, 0x9F, 0x00}; }     // orange: gravity
 inline QColor inertia() { return {0x56, 0xB4, 0xE9}; }    // sky blue, dashed: m·a_G, I_G·α
 inline QColor selection() { return {0xF0, 0xE4, 0x42}; }  // yellow halo behind the selected part
 inline QColor problem() { return {0xB0, 0x00, 0x20}; }    // the part an error names
+
+// The style of the n-th curve on a chart (window and report alike): a colour
+// of the Okabe–Ito set (M. Okabe and K. Ito, 2008; its yellow is left out,
+// too pale on white) and a dash pattern, in pen widths, empty for a solid
+// line. The twelve styles differ pairwise in colour or dash, consecutive
+// ones in both; two styles with one dash differ by at least 20 in CIE L* (a
+// threshold of our choosing), so a dozen curves stay apart in grey-scale
+// print. Curves past the twelfth repeat the styles.
+struct CurveStyle {
+    QColor colour;
+    QVector<qreal> dashes;
+};
+
+inline constexpr int kCurveStyles = 12;
+
+inline CurveStyle curveStyle(int index)
+{
+    const QColor black(0x00, 0x00, 0x00), orange(0xE6, 0x9F, 0x00), skyBlue(0x56, 0xB4, 0xE9),
+        bluishGreen(0x00, 0x9E, 0x73), blue(0x00, 0x72, 0xB2), vermillion(0xD5, 0x5E, 0x00),
+        reddishPurple(0xCC, 0x79, 0xA7);
+    const QVector<qreal> solid, dash{5, 3}, dot{1, 2.5}, dashDot{5, 2.5, 1, 2.5}, longDash{11, 3.5},
+        dashDotDot{5, 2.5, 1, 2.5, 1, 2.5};
+    const CurveStyle styles[kCurveStyles] = {{black, solid},         {vermillion, dash}, {blue, dot},
+                                             {bluishGreen, dashDot}, {orange, longDash}, {reddishPurple, dashDotDot},
+                                             {skyBlue, solid},       {black, dash},      {orange, dot},
+                                             {black, dashDot},       {blue, longDash},   {black, dashDotDot}};
+    return styles[((index % kCurveStyles) + kCurveStyles) % kCurveStyles];
+}
 
 }  // namespace clevis::ui::palette

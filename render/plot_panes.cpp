@@ -5,8 +5,8 @@
 namespace clevis::ui {
 namespace {
 
-// Drivers keep one pen in every pane, after the two the frame panes use.
-constexpr int kFirstDriverPen = 2;
+// Drivers keep one pen in every pane, the first in the vermillion the sketch draws motors in.
+constexpr int kFirstDriverPen = 1;
 
 void addPane(std::vector<PlotPane>& panes, const QString& title, std::vector<PlotCurve> curves)
 {
@@ -64,10 +64,10 @@ std::vector<PlotPane> plotPanes(const CompiledMechanism& m, const CycleResult& r
 
 QPen curvePen(int index)
 {
-    const QColor colours[] = {palette::ink(),  palette::link(),   palette::driver(),
-                              palette::load(), palette::spring(), palette::weight()};
-    const Qt::PenStyle styles[] = {Qt::SolidLine, Qt::DashLine, Qt::DotLine, Qt::DashDotLine};
-    return QPen(colours[index % 6], 1.6, styles[index % 4]);
+    const palette::CurveStyle style = palette::curveStyle(index);
+    QPen pen(style.colour, 1.6, Qt::SolidLine, Qt::FlatCap);
+    if (!style.dashes.isEmpty()) pen.setDashPattern(style.dashes);
+    return pen;
 }
 
 }  // namespace clevis::ui

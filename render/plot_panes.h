@@ -36,8 +36,8 @@ struct PaneChoice {
 std::vector<PlotPane> plotPanes(const CompiledMechanism& m, const CycleResult& r, const RenderUnits& u,
                                 const PaneChoice& choice = {});
 
-// The pen of the n-th curve: palette colours, then dash styles, so curves
-// differ by more than colour.
+// The pen of the n-th curve: palette::curveStyle(), colour and dash, so
+// curves differ by more than colour.
 QPen curvePen(int index);
 
 }  // namespace clevis::ui

@@ -23,6 +23,7 @@ AnalysisState::AnalysisState(MechanismDocument* doc, QObject* parent)
     connect(thread_, &QThread::finished, worker_, &QObject::deleteLater);
     connect(worker_, &SolveWorker::solved, this, &AnalysisState::publish, Qt::QueuedConnection);
     connect(doc_, &MechanismDocument::mechanismChanged, this, &AnalysisState::requestSolve);
+    connect(doc_, &MechanismDocument::documentReset, this, &AnalysisState::forgetResult);
     thread_->start();
     requestSolve();
 }
@@ -56,6 +57,20 @@ void AnalysisState::publish(std::shared_ptr<const SolveOutcome> outcome)
     if (step != currentStep_) {
         currentStep_ = step;
         emit currentStepChanged(step);
+    }
+}
+
+// After New or Open the last result is another document's: no view may show
+// it while the new one is being solved.
+void AnalysisState::forgetResult()
+{
+    auto none = std::make_shared<SolveOutcome>();
+    none->generation = outcome_->generation;  // still busy with the request for the new document
+    outcome_ = std::move(none);
+    emit resultChanged();
+    if (currentStep_ != 0) {
+        currentStep_ = 0;
+        emit currentStepChanged(0);
     }
 }
 

@@ -52,6 +52,7 @@ signals:
 private:
     void requestSolve();
     void publish(std::shared_ptr<const SolveOutcome> outcome);
+    void forgetResult();
 
     MechanismDocument* doc_;
     QThread* thread_;

@@ -91,14 +91,22 @@ void DriveScrubber::rebuild()
 {
     const bool ok = analysis_->hasResult();
     setEnabled(ok);
+    const QSignalBlocker b1(slider_), b2(position_);
     if (!ok) {
+        // No position of an earlier result stays: the box reads "–", the slider rests at the start.
         setPlaying(false);
         drivers_->setText(analysis_->errorText().isEmpty() ? tr("No solved cycle yet") : analysis_->errorText());
+        axis_ = {};
+        slider_->setRange(0, 0);
+        position_->setSpecialValueText(QStringLiteral("–"));
+        position_->setSuffix({});
+        position_->setRange(0, 0);
+        position_->setToolTip({});
         return;
     }
     const auto& r = analysis_->result();
     axis_ = cycleAxis(analysis_->compiled(), r);
-    const QSignalBlocker b1(slider_), b2(position_);
+    position_->setSpecialValueText({});
     slider_->setRange(0, int(r.steps.size()) - 1);
     slider_->setPageStep(std::max(1, int(r.steps.size()) / 10));
     position_->setSuffix(" " + axis_.unit);

@@ -10,6 +10,7 @@
 #include <QHBoxLayout>
 #include <QLabel>
 #include <QListWidget>
+#include <QResizeEvent>
 #include <QScrollArea>
 #include <QSplitter>
 #include <QVBoxLayout>
@@ -19,17 +20,17 @@
 namespace clevis::ui {
 namespace {
 
-constexpr int kPaneHeight = 130;  // px: room for three ticks and a legend line
+constexpr int kPaneHeight = 160;  // px: title and legend, three ticks, the x numbers and title
 
-void addLegend(QCustomPlot* plot, QCPAxisRect* rect, const QString& text)
+// Legend entries of equal width, as many across as fit in `width` px.
+void wrapLegend(QCPLegend* legend, int width)
 {
-    auto* legend = new QCPItemText(plot);
-    legend->setClipAxisRect(rect);
-    legend->position->setAxisRect(rect);
-    legend->position->setType(QCPItemPosition::ptAxisRectRatio);
-    legend->position->setCoords(0.005, 0.02);
-    legend->setPositionAlignment(Qt::AlignLeft | Qt::AlignTop);
-    legend->setText(text);
+    int widest = 1;
+    for (int i = 0; i < legend->itemCount(); ++i)  // cells past the last entry of a wrapped legend are empty
+        if (const QCPAbstractLegendItem* item = legend->item(i))
+            widest = std::max(widest, item->minimumOuterSizeHint().width());
+    legend->setWrap(std::max(1, width / widest));
+    legend->setFillOrder(QCPLegend::foColumnsFirst, true);  // a new wrap only applies once rearranged
 }
 
 }  // namespace
@@ -54,6 +55,8 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     // The readout is one line elided to the room there is: a long one must not widen the window.
     readout_->setSizePolicy(QSizePolicy::Ignored, QSizePolicy::Preferred);
     readout_->installEventFilter(this);
+    plot_->installEventFilter(this);
+    plot_->setAutoAddPlottableToLegend(false);  // each pane has a legend of its own
 
     auto* side = new QWidget(this);
     auto* sideLayout = new QVBoxLayout(side);
@@ -62,7 +65,12 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     sideLayout->addWidget(joints_, 1);
     sideLayout->addWidget(components_);
     sideLayout->addWidget(new QLabel(tr("Peaks"), side));
-    sideLayout->addWidget(peaks_, 2);
+    // One line per curve: however many there are, the list scrolls rather than being cut off.
+    auto* peakScroll = new QScrollArea(side);
+    peakScroll->setWidgetResizable(true);
+    peakScroll->setFrameShape(QFrame::NoFrame);
+    peakScroll->setWidget(peaks_);
+    sideLayout->addWidget(peakScroll, 2);
     auto* centre = new QWidget(this);
     auto* centreLayout = new QVBoxLayout(centre);
     centreLayout->setContentsMargins(0, 0, 0, 0);
@@ -134,14 +142,35 @@ void PlotStack::showChoice()
     components_->setChecked(choice_.components);
 }
 
-QCPAxisRect* PlotStack::addPane(const QString& unit, bool lastPane)
+// A pane: a header row with its title and a legend of line samples, then
+// the axes; every pane numbers the x axis and names it, so any one scrolled
+// into view reads alone.
+QCPAxisRect* PlotStack::addPane(const PlotPane& pane)
 {
+    auto* header = new QCPLayoutGrid;
+    const int row = plot_->plotLayout()->rowCount();
+    plot_->plotLayout()->addElement(row, 0, header);
+    plot_->plotLayout()->setRowStretchFactor(row, 0.001);  // as tall as its text, the axes take the rest
+    auto* title = new QCPTextElement(plot_, pane.title, QFont(font().family(), font().pointSize(), QFont::Bold));
+    title->setTextFlags(Qt::AlignLeft | Qt::AlignVCenter);
+    header->addElement(0, 0, title);
+    auto* legend = new QCPLegend;
+    header->addElement(0, 1, legend);
+    header->setColumnStretchFactors({0.001, 1});
+    legend->setFillOrder(QCPLegend::foColumnsFirst);
+    legend->setBorderPen(Qt::NoPen);
+    legend->setBrush(Qt::NoBrush);
+    legend->setIconSize(26, 18);  // rows tall enough for the underscores in names
+    legend->setFont(font());
+    legend->setLayer("legend");
+    legends_.push_back(legend);
+
     auto* rect = new QCPAxisRect(plot_);
-    rect->axis(QCPAxis::atLeft)->setLabel(unit);
+    rect->axis(QCPAxis::atLeft)->setLabel(pane.unit);
     rect->axis(QCPAxis::atLeft)->ticker()->setTickCount(3);
     rect->axis(QCPAxis::atBottom)->ticker()->setTickCount(8);
-    rect->axis(QCPAxis::atBottom)->setTickLabels(lastPane);
-    if (lastPane) rect->axis(QCPAxis::atBottom)->setLabel(axis_.label);
+    rect->axis(QCPAxis::atBottom)->setLabel(axis_.label);
+    rect->axis(QCPAxis::atBottom)->setLabelPadding(1);
     rect->setRangeDrag(Qt::Orientations());
     rect->setRangeZoom(Qt::Orientations());
     plot_->plotLayout()->addElement(plot_->plotLayout()->rowCount(), 0, rect);
@@ -154,12 +183,14 @@ void PlotStack::rebuild()
     plot_->clearPlottables();
     plot_->plotLayout()->clear();
     cursors_.clear();
+    legends_.clear();
     panes_.clear();
     peaks_->clear();
     if (!analysis_->hasResult()) {
         // Nothing of an earlier result may stay on screen beside the reason.
         const QSignalBlocker blockJoints(joints_);
         joints_->clear();
+        plot_->setMinimumHeight(0);  // no room kept for the panes that were
         showReadout(analysis_->errorText());
         plot_->replot();
         return;
@@ -172,25 +203,36 @@ void PlotStack::rebuild()
     panes_ = plotPanes(m, analysis_->result(), renderUnits(DisplayUnits::instance()), choice_);
     auto* margins = new QCPMarginGroup(plot_);
     QStringList peakLines;
-    for (std::size_t i = 0; i < panes_.size(); ++i) peakLines << drawPane(panes_[i], i + 1 == panes_.size(), margins);
-    plot_->setMinimumHeight(kPaneHeight * int(panes_.size()) + 40);
+    for (const PlotPane& pane : panes_) peakLines << drawPane(pane, margins);
+    fitLegends();
     peaks_->setText(peakLines.join("\n"));
     moveCursor(analysis_->currentStep());
 }
 
+// Legends wrap to the plot's width; the plot is as tall as its panes need.
+void PlotStack::fitLegends()
+{
+    int extraRows = 0;
+    for (QCPLegend* legend : legends_) {
+        wrapLegend(legend, plot_->width() * 3 / 4);
+        extraRows += std::max(0, legend->rowCount() - 1);
+    }
+    plot_->setMinimumHeight(kPaneHeight * int(panes_.size()) + extraRows * fontMetrics().height() + 20);
+}
+
 // Draws one pane's curves with their peaks marked, the shading and the
 // cursor; returns the peak lines for the list beside the plots.
-QStringList PlotStack::drawPane(const PlotPane& pane, bool lastPane, QCPMarginGroup* margins)
+QStringList PlotStack::drawPane(const PlotPane& pane, QCPMarginGroup* margins)
 {
     const CycleResult& r = analysis_->result();
     const QVector<double> x(axis_.values.begin(), axis_.values.end());
     const double end = plannedEnd(axis_, r);
-    QCPAxisRect* rect = addPane(pane.unit, lastPane);
+    QCPAxisRect* rect = addPane(pane);
     rect->setMarginGroup(QCP::msLeft | QCP::msRight, margins);
     QCPAxis* xa = rect->axis(QCPAxis::atBottom);
     QCPAxis* ya = rect->axis(QCPAxis::atLeft);
     xa->setRange(std::min({x.front(), x.back(), end}), std::max({x.front(), x.back(), end}));
-    QStringList names, peakLines;
+    QStringList peakLines;
     double lo = 0, hi = 0;
     for (const PlotCurve& c : pane.curves) {
         const CycleSeries& s = c.series;
@@ -198,28 +240,23 @@ QStringList PlotStack::drawPane(const PlotPane& pane, bool lastPane, QCPMarginGr
         g->setName(s.name);
         g->setPen(curvePen(c.pen));
         g->setData(x, QVector<double>(s.values.begin(), s.values.end()), true);
-        names << s.name;
-        const auto peak = std::max_element(s.values.begin(), s.values.end(),
-                                           [](double a, double b) { return std::abs(a) < std::abs(b); });
-        const int k = int(peak - s.values.begin());
+        g->addToLegend(legends_.back());
+        const int k = peakStep(s.values);
         auto* mark = new QCPItemTracer(plot_);
         mark->setGraph(g);
         mark->setGraphKey(x[k]);
         mark->setStyle(QCPItemTracer::tsCircle);
         mark->setSize(7);
-        mark->setPen(g->pen());
-        peakLines << tr("%1: %2 at %3 %4")
-                         .arg(s.name, formatQuantity(*peak, s.unit))
-                         .arg(x[k], 0, 'f', axis_.byTime ? 4 : 1)
-                         .arg(axis_.unit);
+        mark->setPen(QPen(g->pen().color(), 1.2));
+        mark->setBrush(Qt::white);
+        peakLines << tr("%1: %2 at %3").arg(s.name, formatQuantity(s.values[k], s.unit), axis_.format(x[k]));
         for (const double v : s.values) {
             lo = std::min(lo, v);
             hi = std::max(hi, v);
         }
     }
-    addLegend(plot_, rect, pane.title + ": " + names.join(", "));
     const double pad = std::max(1e-9, 0.08 * (hi - lo));
-    ya->setRange(lo - (lo < 0 ? pad : 0), hi + pad + 0.12 * (hi - lo));
+    ya->setRange(lo - (lo < 0 ? pad : 0), hi + pad);
     QColor flagged = palette::problem();
     flagged.setAlphaF(0.15);
     for (const auto& [a, b] : nearSingularRuns(r))
@@ -291,7 +328,7 @@ void PlotStack::pointerMoved(QMouseEvent* e)
     if (cursors_.empty()) return;
     const int step = stepAtPixel(e->position().x());
     if (e->buttons() & Qt::LeftButton) analysis_->setCurrentStep(step);
-    QStringList parts{tr("%1 = %2").arg(axis_.label).arg(axis_.values[step], 0, 'f', axis_.byTime ? 4 : 1)};
+    QStringList parts{tr("%1 = %2").arg(axis_.label, axis_.format(axis_.values[step]))};
     for (const PlotPane& pane : panes_)
         for (const PlotCurve& c : pane.curves)
             parts << tr("%1 %2").arg(c.series.name, formatQuantity(c.series.values[step], c.series.unit));
@@ -308,6 +345,12 @@ void PlotStack::showReadout(const QString& text)
 bool PlotStack::eventFilter(QObject* watched, QEvent* event)
 {
     if (watched == readout_ && event->type() == QEvent::Resize) showReadout(fullReadout_);
+    // A new width may wrap the legends otherwise; the height they set must not start it again.
+    if (watched == plot_ && event->type() == QEvent::Resize && !legends_.empty() &&
+        static_cast<QResizeEvent*>(event)->oldSize().width() != plot_->width()) {
+        fitLegends();
+        plot_->replot(QCustomPlot::rpQueuedReplot);
+    }
     return QWidget::eventFilter(watched, event);
 }
 

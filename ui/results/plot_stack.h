@@ -17,6 +17,7 @@ class QCheckBox;
 class QCustomPlot;
 class QCPAxisRect;
 class QCPItemStraightLine;
+class QCPLegend;
 class QCPMarginGroup;
 class QLabel;
 class QListWidget;
@@ -51,8 +52,9 @@ private:
     void listJoints(const CompiledMechanism& m);
     void showChoice();
     void jointTicked(QListWidgetItem* item);
-    QStringList drawPane(const PlotPane& pane, bool lastPane, QCPMarginGroup* margins);
-    QCPAxisRect* addPane(const QString& unit, bool lastPane);
+    QStringList drawPane(const PlotPane& pane, QCPMarginGroup* margins);
+    QCPAxisRect* addPane(const PlotPane& pane);
+    void fitLegends();
     void shade(QCPAxisRect* rect, double from, double to, QColor colour);
     void moveCursor(int step);
     void pointerPressed(QMouseEvent* e);
@@ -71,6 +73,7 @@ private:
     QLabel* readout_;
     QLabel* peaks_;
     std::vector<QCPItemStraightLine*> cursors_;
+    std::vector<QCPLegend*> legends_;  // one per pane, in pane order
 };
 
 }  // namespace clevis::ui
