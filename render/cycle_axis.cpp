@@ -40,9 +40,9 @@ CycleAxis cycleAxis(const CompiledMechanism& m, const CycleResult& r)
         for (const auto& s : r.steps) axis.values.push_back(driveDisplayValue(d.type, s.drivePosition[0]));
         if (strictlyMonotonic(axis.values)) {
             axis.unit = driveDisplayUnit(d.type);
-            axis.label = QString("%1 %2 (%3)")
-                             .arg(QString::fromStdString(d.name), d.type == DriverType::Rotary ? "angle" : "position",
-                                  axis.unit);
+            axis.name = QString("%1 %2").arg(QString::fromStdString(d.name),
+                                             d.type == DriverType::Rotary ? "angle" : "position");
+            axis.label = QString("%1 (%2)").arg(axis.name, axis.unit);
             axis.byTime = false;
             return axis;
         }
@@ -50,6 +50,7 @@ CycleAxis cycleAxis(const CompiledMechanism& m, const CycleResult& r)
     }
     for (const auto& s : r.steps) axis.values.push_back(s.t);
     axis.unit = "s";
+    axis.name = "time";
     axis.label = "time (s)";
     return axis;
 }

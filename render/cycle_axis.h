@@ -12,7 +12,8 @@
 namespace clevis::ui {
 
 struct CycleAxis {
-    QString label;  // e.g. "motor angle (°)", "ram position (m)" or "time (s)"
+    QString name;   // e.g. "motor angle", "ram position" or "time"
+    QString label;  // the name and the unit: "motor angle (°)"
     QString unit;   // "°", "m" or "s"
     bool byTime = true;
     std::vector<double> values;  // one per step, in `unit`

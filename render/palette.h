@@ -26,8 +26,7 @@ inline QColor selection() { return {0xF0, 0xE4, 0x42}; }  // yellow halo behind 
 inline QColor problem() { return {0xB0, 0x00, 0x20}; }    // the part an error names
 
 // The style of the n-th curve on a chart (window and report alike): a colour
-// of the Okabe–Ito set (M. Okabe and K. Ito, 2008; its yellow is left out,
-// too pale on white) and a dash pattern, in pen widths, empty for a solid
+// of the Okabe–Ito set (its yellow is left out, too pale on white) and a dash pattern, in pen widths, empty for a solid
 // line. The twelve styles differ pairwise in colour or dash, consecutive
 // ones in both; two styles with one dash differ by at least 20 in CIE L* (a
 // threshold of our choosing), so a dozen curves stay apart in grey-scale

@@ -83,6 +83,10 @@ TEST(ResultsWidgets, ClickOnAPlotMovesTheScrubber)
     EXPECT_TRUE(plots.peakListText().contains("main_motor torque")) << plots.peakListText().toStdString();
     QTest::mouseMove(plots.plot(), plots.pixelForStep(100));
     EXPECT_TRUE(plots.readoutText().contains(" N")) << plots.readoutText().toStdString();
+    // The position reads once, with its unit once: "main_motor angle = 100.0 °".
+    const CycleAxis axis = cycleAxis(s.analysis->compiled(), s.analysis->result());
+    EXPECT_TRUE(plots.readoutText().startsWith(axis.name + " = " + axis.format(axis.values[100]) + "   "))
+        << plots.readoutText().toStdString();
 }
 
 TEST(ResultsWidgets, SelectingABodyShowsItsDiagramAtTheCurrentStep)

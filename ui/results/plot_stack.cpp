@@ -328,7 +328,7 @@ void PlotStack::pointerMoved(QMouseEvent* e)
     if (cursors_.empty()) return;
     const int step = stepAtPixel(e->position().x());
     if (e->buttons() & Qt::LeftButton) analysis_->setCurrentStep(step);
-    QStringList parts{tr("%1 = %2").arg(axis_.label, axis_.format(axis_.values[step]))};
+    QStringList parts{tr("%1 = %2").arg(axis_.name, axis_.format(axis_.values[step]))};
     for (const PlotPane& pane : panes_)
         for (const PlotCurve& c : pane.curves)
             parts << tr("%1 %2").arg(c.series.name, formatQuantity(c.series.values[step], c.series.unit));
