@@ -12,15 +12,12 @@
 #include "core/solver/cycle_sweep.h"
 #include "core/solver/exact_position.h"
 #include "tests/mechanism_builders.h"
+#include "tests/python_check.h"
 
 #include <gtest/gtest.h>
 #include <nlohmann/json.hpp>
 
-#include <sys/wait.h>
-#include <unistd.h>
-#include <cstdio>
 #include <filesystem>
-#include <fstream>
 
 using namespace clevis;
 
@@ -387,27 +384,9 @@ TEST(ExactPosition, DriveAngleBetweenStepsIsSolvedExactly)
 
 nlohmann::json toJson(const Vec2& v) { return nlohmann::json::array({v.x(), v.y()}); }
 
-// Runs the script; fails (never skips) when python3 or sympy is missing.
 nlohmann::json runSympy(const nlohmann::json& input)
 {
-    const auto path = std::filesystem::temp_directory_path() /
-                      ("clevis_sympy_internal_loads_" + std::to_string(::getpid()) + ".json");
-    std::ofstream(path) << input.dump();
-    const std::string command =
-        std::string("/usr/bin/python3 '") + CLEVIS_SYMPY_INTERNAL_LOADS + "' '" + path.string() + "'";
-    std::string output;
-    int status = -1;
-    if (FILE* pipe = ::popen(command.c_str(), "r")) {
-        char buffer[4096];
-        while (std::size_t n = std::fread(buffer, 1, sizeof buffer, pipe)) output.append(buffer, n);
-        status = ::pclose(pipe);
-    }
-    std::filesystem::remove(path);
-    if (status != 0 || !WIFEXITED(status) || WEXITSTATUS(status) != 0) {
-        ADD_FAILURE() << command << " exited with status " << status << "; it needs python3-sympy";
-        return {};
-    }
-    return nlohmann::json::parse(output);
+    return test::runPythonCheck(CLEVIS_SYMPY_INTERNAL_LOADS, input);
 }
 
 // The coupler of a loaded, accelerating four-bar whose mass centre is off

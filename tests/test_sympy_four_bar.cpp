@@ -6,15 +6,10 @@
 #include "core/solver/compiled_mechanism.h"
 #include "core/solver/cycle_sweep.h"
 #include "tests/mechanism_builders.h"
+#include "tests/python_check.h"
 
 #include <gtest/gtest.h>
 #include <nlohmann/json.hpp>
-
-#include <sys/wait.h>
-#include <unistd.h>
-#include <cstdio>
-#include <filesystem>
-#include <fstream>
 
 using namespace clevis;
 
@@ -22,9 +17,6 @@ namespace {
 
 #ifndef CLEVIS_SYMPY_SCRIPT
 #error "CLEVIS_SYMPY_SCRIPT must name tests/sympy_four_bar.py"
-#endif
-#ifndef CLEVIS_PYTHON
-#error "CLEVIS_PYTHON must name the python3 that has sympy"
 #endif
 
 // Masses, inertias and centres of mass off the link lines; gravity; a point
@@ -73,30 +65,7 @@ nlohmann::json scriptInput(const Mechanism& mech, const test::FourBarSpec& spec,
     return in;
 }
 
-// Runs the script; fails the test (never skips) when python3 or sympy is
-// missing, since the check would then prove nothing.
-nlohmann::json runScript(const nlohmann::json& input)
-{
-    const auto path =
-        std::filesystem::temp_directory_path() / ("clevis_sympy_four_bar_" + std::to_string(::getpid()) + ".json");
-    std::ofstream(path) << input.dump();
-    const std::string command =
-        std::string("'") + CLEVIS_PYTHON + "' '" + CLEVIS_SYMPY_SCRIPT + "' '" + path.string() + "'";
-    std::string output;
-    int status = -1;
-    if (FILE* pipe = ::popen(command.c_str(), "r")) {
-        char buffer[4096];
-        while (std::size_t n = std::fread(buffer, 1, sizeof buffer, pipe)) output.append(buffer, n);
-        status = ::pclose(pipe);
-    }
-    std::filesystem::remove(path);
-    if (status != 0 || !WIFEXITED(status) || WEXITSTATUS(status) != 0) {
-        ADD_FAILURE() << "the sympy check could not run (" << command << " exited with status " << status
-                      << "); it needs " << CLEVIS_PYTHON << " with python3-sympy installed";
-        return {};
-    }
-    return nlohmann::json::parse(output);
-}
+nlohmann::json runScript(const nlohmann::json& input) { return test::runPythonCheck(CLEVIS_SYMPY_SCRIPT, input); }
 
 TEST(SympyFourBar, ReactionsAndTorqueMatchHandMethod)
 {
