@@ -50,7 +50,7 @@ double LabelPlacer::cost(const QRectF& box) const
     return c;
 }
 
-void LabelPlacer::add(const QString& text, QPointF anchor, QPointF push)
+void LabelPlacer::add(const QString& text, QPointF anchor, QPointF push, const QColor& ink)
 {
     const QFontMetricsF metrics(font_);
     const QSizeF size = metrics.boundingRect(text).size() + QSizeF(2 * kPadding, 2 * kPadding);
@@ -73,7 +73,14 @@ void LabelPlacer::add(const QString& text, QPointF anchor, QPointF push)
                 best = box;
             }
         }
-    placed_.push_back({text, best, anchor});
+    placed_.push_back({text, best, anchor, ink});
+}
+
+std::vector<QRectF> LabelPlacer::placedBoxes() const
+{
+    std::vector<QRectF> boxes;
+    for (const Placed& l : placed_) boxes.push_back(l.box);
+    return boxes;
 }
 
 void LabelPlacer::paint(QPainter& p, const QColor& ink, const QColor& paper) const
@@ -81,16 +88,17 @@ void LabelPlacer::paint(QPainter& p, const QColor& ink, const QColor& paper) con
     p.save();
     p.setFont(font_);
     for (const Placed& l : placed_) {
+        const QColor& text = l.ink.isValid() ? l.ink : ink;
         const QPointF nearest(std::clamp(l.anchor.x(), l.box.left(), l.box.right()),
                               std::clamp(l.anchor.y(), l.box.top(), l.box.bottom()));
         if (std::hypot(nearest.x() - l.anchor.x(), nearest.y() - l.anchor.y()) > 14) {
-            p.setPen(QPen(ink, 0.5));
+            p.setPen(QPen(text, 0.5));
             p.drawLine(l.anchor, nearest);
         }
         QColor patch = paper;
         patch.setAlphaF(0.85);
         p.fillRect(l.box, patch);
-        p.setPen(ink);
+        p.setPen(text);
         p.drawText(l.box, Qt::AlignCenter, l.text);
     }
     p.restore();

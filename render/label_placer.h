@@ -24,18 +24,23 @@ public:
     void addObstacle(const QRectF& box);
     void addObstacle(const QLineF& line);
 
-    // Places at once (earlier labels win the best spots); `push` is a unit
-    // direction away from the drawing.
-    void add(const QString& text, QPointF anchor, QPointF push);
+    // Places at once (earlier labels win the best spots); `push` is a
+    // direction away from the drawing. A label with an `ink` of its own is
+    // painted in it, the others in paint()'s.
+    void add(const QString& text, QPointF anchor, QPointF push, const QColor& ink = {});
 
     // Text in `ink` on a `paper` patch, with a leader line when moved away.
     void paint(QPainter& p, const QColor& ink, const QColor& paper) const;
+
+    // Where each label went, in the order added.
+    std::vector<QRectF> placedBoxes() const;
 
 private:
     struct Placed {
         QString text;
         QRectF box;
         QPointF anchor;
+        QColor ink;
     };
     double cost(const QRectF& box) const;
 

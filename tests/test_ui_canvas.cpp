@@ -7,6 +7,7 @@
 #include "tests/canvas_fixture.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/canvas/canvas_view.h"
+#include "ui/canvas/sketch_painter.h"
 #include "ui/canvas/snapping.h"
 #include "ui/canvas/tool_palette.h"
 #include "ui/document/mechanism_document.h"
@@ -22,6 +23,7 @@
 #include <QFileInfo>
 #include <QLabel>
 #include <QLineEdit>
+#include <QPainter>
 #include <QTemporaryDir>
 #include <QTest>
 
@@ -188,17 +190,46 @@ TEST_F(CanvasTest, ClickingInTheScrubbedPosePicksWhatIsDrawnAndKeepsThePosition)
 // through, not only the pose it was drawn in.
 TEST_F(CanvasTest, AnOpenedFileIsFittedToItsWholeRangeOfMotion)
 {
+    for (const char* sample : {"punch_press", "tipping_bed", "tote_arm", "flap_folder", "dwell_six_bar"}) {
+        QString error;
+        ASSERT_TRUE(window.files()->open(QStringLiteral(CLEVIS_SAMPLES_DIR "/%1.json").arg(sample), &error))
+            << error.toStdString();
+        AnalysisState* analysis = window.analysis();
+        analysis->waitForIdle();
+        QCoreApplication::processEvents();
+        ASSERT_TRUE(analysis->hasResult()) << sample << ": " << analysis->errorText().toStdString();
+        const QRectF visible = window.canvas()->rect();
+        for (const StepResult& step : analysis->result().steps)
+            for (const Joint& j : posedMechanism(mechanism(), analysis->compiled(), step).joints)
+                EXPECT_TRUE(visible.contains(window.canvas()->view().toScreen(j.at)))
+                    << sample << ": " << j.name << " at t = " << step.t;
+    }
+}
+
+// On a laptop-sized canvas the six-bar's labels (bodies, pins, the motor,
+// the spring, the point mass) neither cover each other nor leave the canvas.
+TEST_F(CanvasTest, LabelsNeitherOverlapNorLeaveTheCanvas)
+{
+    window.resize(1366, 768);
     QString error;
-    ASSERT_TRUE(window.files()->open(QStringLiteral(CLEVIS_SAMPLES_DIR "/punch_press.json"), &error))
+    ASSERT_TRUE(window.files()->open(QStringLiteral(CLEVIS_SAMPLES_DIR "/dwell_six_bar.json"), &error))
         << error.toStdString();
-    AnalysisState* analysis = window.analysis();
-    analysis->waitForIdle();
+    window.analysis()->waitForIdle();
     QCoreApplication::processEvents();
-    ASSERT_TRUE(analysis->hasResult()) << analysis->errorText().toStdString();
-    const QRectF visible = window.canvas()->rect();
-    for (const StepResult& step : analysis->result().steps)
-        for (const Joint& j : posedMechanism(mechanism(), analysis->compiled(), step).joints)
-            EXPECT_TRUE(visible.contains(window.canvas()->view().toScreen(j.at))) << j.name << " at t = " << step.t;
+    window.canvas()->fitToView();
+    const QRect area = window.canvas()->rect();
+    QImage image(area.size(), QImage::Format_ARGB32);
+    QPainter p(&image);
+    LabelPlacer labels(area, labelFont(window.canvas()->font()));
+    PaintContext c{p, window.canvas()->view(), mechanism(), {}, {}, labels};
+    paintSketch(c);
+    const std::vector<QRectF> boxes = labels.placedBoxes();
+    ASSERT_GE(boxes.size(), mechanism().bodies.size() + mechanism().drivers.size());
+    for (std::size_t i = 0; i < boxes.size(); ++i) {
+        EXPECT_TRUE(QRectF(area).contains(boxes[i])) << "label " << i;
+        for (std::size_t k = i + 1; k < boxes.size(); ++k)
+            EXPECT_FALSE(boxes[i].intersects(boxes[k])) << "labels " << i << " and " << k;
+    }
 }
 
 TEST_F(CanvasTest, TheCursorReadoutShowsTheSnappedPointInDisplayUnits)

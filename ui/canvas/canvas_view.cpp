@@ -131,7 +131,9 @@ void CanvasView::paintEvent(QPaintEvent*)
     p.setRenderHint(QPainter::Antialiasing);
     paintGrid(p, view_, rect());
     const std::optional<Mechanism> posed = scrubbedPose();
-    PaintContext c{p, view_, posed ? *posed : doc_->mechanism(), doc_->selection(), analysis_->offendingItems()};
+    LabelPlacer labels(rect(), labelFont(font()));
+    PaintContext c{p,     view_, posed ? *posed : doc_->mechanism(), doc_->selection(), analysis_->offendingItems(),
+                   labels};
     paintSketch(c);
     tool_->paintPreview(p);
 }

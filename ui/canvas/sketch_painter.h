@@ -5,6 +5,7 @@
 #pragma once
 
 #include "core/model/mechanism.h"
+#include "render/label_placer.h"
 #include "ui/canvas/view_transform.h"
 #include "ui/document/mechanism_document.h"
 
@@ -19,13 +20,22 @@ struct PaintContext {
     const Mechanism& mechanism;
     Selection selected;
     QStringList problems;  // names the last analysis blamed
+    // Labels are placed clear of each other, of the pins and of the bars, and
+    // inside the canvas; paintSketch paints them last, over everything.
+    LabelPlacer& labels;
+
+    // A part's label beside `anchor`, pushed away from it along `push`.
+    void label(const QString& text, QPointF anchor, QPointF push, const QColor& colour);
 
     // The halo behind a part: yellow when selected, red when blamed; none otherwise.
     bool halo(Selection::Kind kind, const std::string& name, int loadIndex = -1) const;
     QPen haloPen(Selection::Kind kind, const std::string& name, double width, int loadIndex = -1) const;
 };
 
-void paintSketch(PaintContext& c);  // everything below, in drawing order
+void paintSketch(PaintContext& c);  // everything below, in drawing order, then the labels
+
+// The font of the canvas's labels.
+QFont labelFont(const QFont& base);
 
 void paintGrid(QPainter& p, const ViewTransform& view, const QRectF& area);
 void paintBodies(PaintContext& c);
@@ -36,6 +46,6 @@ void paintMasses(PaintContext& c);  // centres of mass and point masses
 
 // Canvas strokes; arrows and the centre-of-mass mark are render/drawing_symbols.h's.
 void drawZigZag(QPainter& p, const QPointF& a, const QPointF& b);
-void drawLabel(QPainter& p, const QPointF& at, const QString& text, const QColor& colour);
+void drawLabel(QPainter& p, const QPointF& at, const QString& text, const QColor& colour);  // fixed place
 
 }  // namespace clevis::ui

@@ -18,11 +18,19 @@ QPainterPath bodyShape(const std::vector<Vec2>& outline, const ViewTransform& vi
     return bodyOutlinePath(screen, style::kBarWidth / 2);
 }
 
-QPointF labelPoint(const std::vector<Vec2>& outline, const ViewTransform& view)
+// A body's name sits by the middle of its outline, pushed off a bar to the
+// side facing up the screen.
+void labelBody(PaintContext& c, const Body& body, const std::vector<Vec2>& outline)
 {
-    Vec2 c = Vec2::Zero();
-    for (const auto& p : outline) c += p / double(outline.size());
-    return view.toScreen(c) + QPointF(style::kBarWidth * 0.6, -style::kBarWidth * 0.7);
+    Vec2 centre = Vec2::Zero();
+    for (const auto& p : outline) centre += p / double(outline.size());
+    QPointF push(0.6, -0.8);
+    if (outline.size() == 2) {
+        const QPointF along = c.view.toScreen(outline[1]) - c.view.toScreen(outline[0]);
+        push = QPointF(along.y(), -along.x());
+        if (push.y() > 0) push = -push;
+    }
+    c.label(QString::fromStdString(body.name), c.view.toScreen(centre), push, palette::link());
 }
 
 }  // namespace
@@ -43,7 +51,7 @@ void paintBodies(PaintContext& c)
         p.setBrush(fill);
         p.setPen(QPen(palette::link(), 1.6));
         p.drawPath(shape);
-        drawLabel(p, labelPoint(outline, c.view), QString::fromStdString(body.name), palette::link());
+        labelBody(c, body, outline);
     }
     p.restore();
 }

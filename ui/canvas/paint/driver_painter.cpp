@@ -50,8 +50,8 @@ void paintDrivers(PaintContext& c)
             p.setPen(c.haloPen(Selection::Kind::Driver, d.name, 12));
             p.drawLine(a, b);
             drawCylinder(p, a, b);
-            drawLabel(p, a + QPointF(10, 18), QString::fromStdString(d.name) + "  " + motionLabel(d),
-                      palette::driver());
+            c.label(QString::fromStdString(d.name) + "  " + motionLabel(d), (a + b) / 2, QPointF(0.5, 0.9),
+                    palette::driver());
             continue;
         }
         const int j = jointIndex(c.mechanism, d.joint);
@@ -77,8 +77,7 @@ void paintDrivers(PaintContext& c)
             drawArrow(p, mid, mid + u * 22, arrow);
             drawArrow(p, mid, mid - u * 22, arrow);
         }
-        drawLabel(p, at + QPointF(style::kMotorRadius + 4, -style::kMotorRadius),
-                  QString::fromStdString(d.name) + "  " + motionLabel(d), palette::driver());
+        c.label(QString::fromStdString(d.name) + "  " + motionLabel(d), at, QPointF(-0.7, -0.7), palette::driver());
     }
     p.restore();
 }

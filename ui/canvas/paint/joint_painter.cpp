@@ -142,9 +142,8 @@ void paintJoints(PaintContext& c)
         QStringList names;
         for (int i : stack) names << QString::fromStdString(m.joints[i].name);
         if (j.type != JointType::Slider)
-            drawLabel(p, at + QPointF(8, -8),
-                      stack.size() > 1 ? names.join(QStringLiteral(" + ")) : QString::fromStdString(j.name),
-                      palette::ink());
+            c.label(stack.size() > 1 ? names.join(QStringLiteral(" + ")) : QString::fromStdString(j.name), at,
+                    QPointF(0.7, -0.7), palette::ink());
     }
     p.restore();
 }

@@ -44,7 +44,8 @@ public:
         const QPointF tail = tip - screenDir(f.force) * style::kArrowLength;
         halo(f.name, [&] { painter_.drawLine(tail, tip); });
         drawArrow(painter_, tail, tip, sketchArrow(QPen(palette::load(), 2.2)));
-        label(tail, QString::fromStdString(f.name) + "  " + DisplayUnits::instance().formatForce(f.force.norm()));
+        label(tail, tail - tip,
+              QString::fromStdString(f.name) + "  " + DisplayUnits::instance().formatForce(f.force.norm()));
     }
     void operator()(const TorqueLoad& t)
     {
@@ -53,7 +54,7 @@ public:
         halo(t.name, [&] { painter_.drawEllipse(at, r, r); });
         const ArrowStyle arrow = sketchArrow(QPen(palette::load(), 2.2));
         drawArcArrow(painter_, at, r, t.torque >= 0 ? -60 : 240, t.torque >= 0 ? 200 : -200, arrow);
-        label(at + QPointF(r, -r),
+        label(at + QPointF(r, -r) * 0.7, QPointF(1, -1),
               QString::fromStdString(t.name) + "  " + DisplayUnits::instance().formatTorque(t.torque));
     }
     void operator()(const SpringLoad& s)
@@ -63,7 +64,7 @@ public:
         painter_.setPen(QPen(palette::spring(), 1.8, Qt::SolidLine, Qt::RoundCap, Qt::RoundJoin));
         drawZigZag(painter_, a, b);
         endDots(a, b);
-        label((a + b) / 2 + QPointF(8, -8),
+        label((a + b) / 2, QPointF(0.7, -0.7),
               QString::fromStdString(s.name) + "  " + DisplayUnits::instance().formatStiffness(s.stiffness));
     }
     void operator()(const DamperLoad& d)
@@ -74,7 +75,7 @@ public:
         painter_.setBrush(Qt::NoBrush);
         drawDashpot(painter_, a, b);
         endDots(a, b);
-        label((a + b) / 2 + QPointF(8, -10),
+        label((a + b) / 2, QPointF(-0.7, 0.7),
               QString::fromStdString(d.name) + QStringLiteral("  %1 N·s/m").arg(d.damping, 0, 'g', 4));
     }
     void operator()(const TorsionSpringLoad& t)
@@ -90,7 +91,7 @@ public:
             coil << at + QPointF(std::cos(a) * r, -std::sin(a) * r);
         }
         painter_.drawPolyline(coil);
-        label(at + QPointF(16, 20),
+        label(at + QPointF(12, 12), QPointF(0.7, 0.7),
               QString::fromStdString(t.name) + QStringLiteral("  %1 N·m/rad").arg(t.stiffness, 0, 'g', 4));
     }
 
@@ -110,7 +111,10 @@ private:
         painter_.drawEllipse(a, 2.5, 2.5);
         painter_.drawEllipse(b, 2.5, 2.5);
     }
-    void label(const QPointF& at, const QString& text) { drawLabel(painter_, at, text, palette::ink()); }
+    void label(const QPointF& at, const QPointF& push, const QString& text)
+    {
+        context_.label(text, at, push, palette::ink());
+    }
 
     PaintContext& context_;
     QPainter& painter_;

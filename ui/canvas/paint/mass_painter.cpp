@@ -42,7 +42,7 @@ void paintTypedCentre(PaintContext& c, const Body& body)
     if (std::hypot(gap.x(), gap.y()) < 24.0) return;  // px: on or beside its part
     p.setPen(QPen(palette::problem(), 1.0, Qt::DashLine));
     p.drawLine(near, at);
-    drawLabel(p, at + QPointF(8, 14), QObject::tr("typed centre: does not follow the pins"), palette::problem());
+    c.label(QObject::tr("typed centre: does not follow the pins"), at, at - near, palette::problem());
 }
 
 }  // namespace
@@ -58,7 +58,7 @@ void paintMasses(PaintContext& c)
             p.setPen(QPen(palette::ink(), 1.2));
             p.setBrush(palette::ink());
             p.drawRect(QRectF(at.x() - 4, at.y() - 4, 8, 8));
-            drawLabel(p, at + QPointF(7, -6), QStringLiteral("%1 kg").arg(pm.mass, 0, 'g', 4), palette::ink());
+            c.label(QStringLiteral("%1 kg").arg(pm.mass, 0, 'g', 4), at, QPointF(0.7, -0.7), palette::ink());
         }
     }
     p.restore();

@@ -1,5 +1,7 @@
 #include "render/palette.h"
 #include "ui/canvas/sketch_painter.h"
+#include "ui/canvas/sketch_style.h"
+#include "ui/document/sketch_geometry.h"
 
 #include <QFontMetricsF>
 #include <QPainterPath>
@@ -25,13 +27,59 @@ QPen PaintContext::haloPen(Selection::Kind kind, const std::string& name, double
     return QPen(Qt::NoPen);
 }
 
+void PaintContext::label(const QString& text, QPointF anchor, QPointF push, const QColor& colour)
+{
+    labels.add(text, anchor, push, colour);
+}
+
+QFont labelFont(const QFont& base)
+{
+    QFont f = base;
+    f.setPointSizeF(8.5);
+    return f;
+}
+
+namespace {
+
+// What a label must not cover: the pins (with a ground bracket's base or a
+// motor's arc round them) and the centre lines of the bodies.
+void addObstacles(PaintContext& c)
+{
+    for (const Joint& j : c.mechanism.joints) {
+        const QPointF at = c.view.toScreen(j.at);
+        const double r = style::kPinRadius + 3;
+        c.labels.addObstacle(QRectF(at - QPointF(r, r), at + QPointF(r, r)));
+        if (j.bodies[0] == kGroundName || j.bodies[1] == kGroundName)
+            c.labels.addObstacle(QRectF(at.x() - style::kGroundWidth / 2, at.y(), style::kGroundWidth, 14));
+    }
+    for (const Driver& d : c.mechanism.drivers) {
+        const int j = jointIndex(c.mechanism, d.joint);
+        if (d.type != DriverType::Rotary || j < 0) continue;
+        const QPointF at = c.view.toScreen(c.mechanism.joints[std::size_t(j)].at);
+        const double r = style::kMotorRadius;
+        c.labels.addObstacle(QRectF(at - QPointF(r, r), at + QPointF(r, r)));
+    }
+    for (const Body& b : c.mechanism.bodies) {
+        const std::vector<Vec2> outline = bodyOutline(c.mechanism, b.name);
+        if (outline.size() < 2) continue;
+        const std::size_t edges = outline.size() == 2 ? 1 : outline.size();
+        for (std::size_t i = 0; i < edges; ++i)
+            c.labels.addObstacle(
+                QLineF(c.view.toScreen(outline[i]), c.view.toScreen(outline[(i + 1) % outline.size()])));
+    }
+}
+
+}  // namespace
+
 void paintSketch(PaintContext& c)
 {
+    addObstacles(c);
     paintBodies(c);
     paintLoads(c);
     paintJoints(c);
     paintDrivers(c);
     paintMasses(c);
+    c.labels.paint(c.painter, palette::ink(), palette::paper());
 }
 
 void drawZigZag(QPainter& p, const QPointF& a, const QPointF& b)
@@ -55,8 +103,7 @@ void drawZigZag(QPainter& p, const QPointF& a, const QPointF& b)
 void drawLabel(QPainter& p, const QPointF& at, const QString& text, const QColor& colour)
 {
     p.save();
-    QFont f = p.font();
-    f.setPointSizeF(8.5);
+    const QFont f = labelFont(p.font());
     p.setFont(f);
     const QRectF box = QFontMetricsF(f).boundingRect(text).adjusted(-3, -1, 3, 1).translated(at);
     QColor paper = palette::paper();
