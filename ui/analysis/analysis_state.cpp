@@ -86,6 +86,8 @@ QString AnalysisState::errorText() const { return outcome_->error; }
 
 QStringList AnalysisState::offendingItems() const { return outcome_->offendingItems; }
 
+bool AnalysisState::nothingDrawn() const { return outcome_->nothingDrawn; }
+
 const std::optional<MobilityReport>& AnalysisState::mobility() const { return outcome_->mobility; }
 
 bool AnalysisState::busy() const { return outcome_->generation != requested_; }

@@ -36,6 +36,7 @@ public:
     const clevis::CycleSummary& summary() const;
     QString errorText() const;  // empty when the last solve succeeded (ModelError/AnalysisError text otherwise)
     QStringList offendingItems() const;
+    bool nothingDrawn() const;  // the drawing has no moving part yet
     bool busy() const;
     int currentStep() const;        // the scrubbed position, index into result().steps
     void setCurrentStep(int step);  // clamps; emits currentStepChanged when it changes

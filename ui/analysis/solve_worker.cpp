@@ -38,6 +38,7 @@ SolveOutcome solveMechanism(const Mechanism& m, const std::function<bool()>& sti
 {
     SolveOutcome out;
     if (m.bodies.empty()) {
+        out.nothingDrawn = true;
         out.error = QStringLiteral("Nothing to solve yet: draw a link between pins.");
         return out;
     }

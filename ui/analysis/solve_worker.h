@@ -24,7 +24,8 @@ struct SolveOutcome {
     std::optional<MobilityReport> mobility;     // degrees of freedom at the drawn pose
     CycleResult result;
     CycleSummary summary;
-    QString error;  // empty when the cycle solved (possibly only in part)
+    bool nothingDrawn = false;  // a blank drawing: not a fault, only nothing to solve
+    QString error;              // empty when the cycle solved (possibly only in part)
     QStringList offendingItems;
 };
 

@@ -24,6 +24,8 @@ QString describeAnalysis(const AnalysisState& a)
         counts = QObject::tr("%1, %2. ")
                      .arg(plural(mob->mobility, QObject::tr("degree of freedom"), QObject::tr("degrees of freedom")),
                           plural(mob->drivers, QObject::tr("driver"), QObject::tr("drivers")));
+    if (a.nothingDrawn())
+        return QObject::tr("Nothing drawn yet: place ground pins and pins, then draw links between them.");
     if (!a.errorText().isEmpty()) return counts + QObject::tr("Does not solve: %1").arg(a.errorText());
     if (!a.hasResult()) return counts + QObject::tr("Not solved yet.");
     const CycleResult& r = a.result();
@@ -63,11 +65,13 @@ void StatusLine::refresh()
     const bool solves = analysis_->errorText().isEmpty() && analysis_->hasResult() && analysis_->result().complete;
     const QString text = describeAnalysis(*analysis_);
     state_->setFullText(analysis_->busy() ? text + tr("  (solving…)") : text);
-    // The mark differs in shape as well as colour: a filled disc when it solves, a ring with a bar when not.
-    const QColor c = solves ? palette::load() : palette::problem();
-    mark_->setText(solves ? QStringLiteral("●") : QStringLiteral("⊘"));
+    // The mark differs in shape as well as colour: a filled disc when it
+    // solves, a ring with a bar when not, an open ring for a blank drawing.
+    const bool blank = analysis_->nothingDrawn();
+    const QColor c = solves ? palette::load() : blank ? palette::groundHatch() : palette::problem();
+    mark_->setText(solves ? QStringLiteral("●") : blank ? QStringLiteral("○") : QStringLiteral("⊘"));
     mark_->setStyleSheet(QStringLiteral("color: %1; font-weight: bold;").arg(c.name()));
-    state_->setStyleSheet(solves ? QString() : QStringLiteral("color: %1;").arg(palette::problem().name()));
+    state_->setStyleSheet(solves || blank ? QString() : QStringLiteral("color: %1;").arg(palette::problem().name()));
 }
 
 }  // namespace clevis::ui
