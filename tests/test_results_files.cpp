@@ -96,7 +96,7 @@ TEST(ResultsJson, HasTheDocumentedShape)
     for (const char* key : {"peak_force_n", "peak_force_step", "peak_moment_nm", "peak_moment_step"})
         EXPECT_TRUE(summary["ground"].contains(key)) << key;
     for (const char* key : {"driver_work_j", "kinetic_change_j", "gravity_change_j", "spring_change_j", "damper_work_j",
-                            "load_work_j", "residual_j", "gross_j", "relative_residual"})
+                            "load_work_j", "residual_j", "throughput_j", "relative_residual"})
         EXPECT_TRUE(summary["energy_balance"].contains(key)) << key;
     EXPECT_EQ(summary["near_singular_steps"], 0);
     const double centripetal = kMass * kOmega * kOmega * kArm;  // m ω² d
