@@ -181,13 +181,16 @@ void peakSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis
     const auto force = [&](double v) { return u.force(v); };
     const auto torque = [&](double v) { return u.torque(v); };
     const auto watts = [](double v) { return formatQuantity(v, "W"); };
+    // RMS, mean and work integrate over the unreliable steps too.
+    const PeakAt overCycle{0.0, -1, s.nearSingularSteps > 0};
     bool flagged = false;
     for (const auto& j : s.joints) flagged |= j.peak.flagged.step >= 0 || j.peakMoment.flagged.step >= 0;
     f.subheading("Joints");
     std::vector<QStringList> joints{{"Joint", "Peak |F|", "Where", "RMS |F|", "Peak slider moment"}};
     if (flagged) joints.front() << "Larger, near a toggle";
     for (const auto& j : s.joints) {
-        joints.push_back({qs(j.name), marked(u.force(j.peak.value), j.peak), at(axis, j.peak.step), u.force(j.rms),
+        joints.push_back({qs(j.name), marked(u.force(j.peak.value), j.peak), at(axis, j.peak.step),
+                          marked(u.force(j.rms), overCycle),
                           j.peakMoment.step >= 0 ? marked(u.torque(j.peakMoment.value), j.peakMoment) : QString("–")});
         if (flagged)
             joints.back() << (j.peak.flagged.step >= 0 ? larger(axis, j.peak, force)
@@ -201,10 +204,11 @@ void peakSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis
     for (const auto& d : s.drivers) {
         const auto effortOf = [&](double v) { return effort(u, d.type, v); };
         drivers.push_back(
-            {qs(d.name), marked(effortOf(d.peak.value), d.peak), at(axis, d.peak.step), effortOf(d.rms),
-             effortOf(d.mean), d.peakPower.step >= 0 ? marked(watts(d.peakPower.value), d.peakPower) : QString("–"),
+            {qs(d.name), marked(effortOf(d.peak.value), d.peak), at(axis, d.peak.step),
+             marked(effortOf(d.rms), overCycle), marked(effortOf(d.mean), overCycle),
+             d.peakPower.step >= 0 ? marked(watts(d.peakPower.value), d.peakPower) : QString("–"),
              d.peakRegenerative.step >= 0 ? marked(watts(d.peakRegenerative.value), d.peakRegenerative) : QString("–"),
-             formatQuantity(d.work, "J")});
+             marked(formatQuantity(d.work, "J"), overCycle)});
         if (d.peak.flagged.step >= 0 || d.peakPower.flagged.step >= 0)
             driverFlags.push_back({qs(d.name), larger(axis, d.peak, effortOf), larger(axis, d.peakPower, watts)});
     }

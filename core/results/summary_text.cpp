@@ -82,6 +82,13 @@ bool anyFlagged(std::initializer_list<const Peak*> peaks)
 
 const char* const kFlaggedHeading = "Larger, near a toggle";
 
+// An RMS, mean or work integrates over every solved step, the unreliable ones
+// included: marked whenever there are any.
+std::string overCycle(const CycleSummary& s, double value, const char* unit)
+{
+    return quantity(value, unit) + (s.nearSingularSteps > 0 ? std::string(" ") + kNearToggleMark : "");
+}
+
 std::string heading(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s)
 {
     std::string text = "Cycle summary" + (m.name.empty() ? std::string() : ": " + m.name) + "\n";
@@ -97,7 +104,8 @@ std::string heading(const CompiledMechanism& m, const CycleResult& r, const Cycl
         text += "  " + std::to_string(s.nearSingularSteps) + " of " + std::to_string(r.steps.size()) +
                 " steps are near a singular position: the reactions there are unreliable. Peaks below are\n"
                 "  taken over the other steps; a larger value at a flagged step is shown apart and marked " +
-                kNearToggleMark + ".\n";
+                kNearToggleMark + ".\n  RMS, mean and work include those steps and are marked " + kNearToggleMark +
+                " too.\n";
     for (const auto& t : s.toggles) text += "  " + std::string(kNearToggleMark) + " " + toggleText(m, t) + ".\n";
     return text;
 }
@@ -118,7 +126,7 @@ std::string jointSection(const CompiledMechanism& m, const CycleResult& r, const
         const JointSummary& js = s.joints[j];
         const bool slider = m.joints[j].type == JointType::Slider;
         std::vector<std::string> row{js.name, jointTypeName(m.joints[j].type), peakValue(js.peak, "N"),
-                                     at(m, r, js.peak), quantity(js.rms, "N")};
+                                     at(m, r, js.peak), overCycle(s, js.rms, "N")};
         if (slider) row.insert(row.end(), {peakValue(js.peakMoment, "N·m"), at(m, r, js.peakMoment)});
         else if (sliders) row.insert(row.end(), {"", ""});
         if (flagged) {
@@ -133,10 +141,11 @@ std::string jointSection(const CompiledMechanism& m, const CycleResult& r, const
 
 std::string driverSection(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s)
 {
-    bool flaggedEffort = false, flaggedPower = false;
+    bool flaggedEffort = false, flaggedPower = false, flaggedRegen = false;
     for (const auto& d : s.drivers) {
         flaggedEffort |= anyFlagged({&d.peak});
-        flaggedPower |= anyFlagged({&d.peakPower, &d.peakRegenerative});
+        flaggedPower |= anyFlagged({&d.peakPower});
+        flaggedRegen |= anyFlagged({&d.peakRegenerative});
     }
     TextTable effort(
         {Align::Left, Align::Right, Align::Left, Align::Right, Align::Right, Align::Right, Align::Right, Align::Left});
@@ -146,16 +155,17 @@ std::string driverSection(const CompiledMechanism& m, const CycleResult& r, cons
     TextTable power({Align::Left, Align::Right, Align::Left, Align::Right, Align::Left, Align::Right, Align::Left,
                      Align::Right, Align::Left});
     std::vector<std::string> powerHeader{"Driver", "Peak power", "", "Peak regenerative", ""};
-    if (flaggedPower) powerHeader.insert(powerHeader.end(), {"Larger power, near a toggle", "", "Larger regen.", ""});
+    if (flaggedPower) powerHeader.insert(powerHeader.end(), {"Larger power, near a toggle", ""});
+    if (flaggedRegen) powerHeader.insert(powerHeader.end(), {"Larger regenerative, near a toggle", ""});
     power.addRow(powerHeader);
     for (const auto& d : s.drivers) {
         const char* unit = effortUnit(d.type);
         std::vector<std::string> e{d.name,
                                    peakValue(d.peak, unit),
                                    at(m, r, d.peak),
-                                   quantity(d.rms, unit),
-                                   quantity(d.mean, unit),
-                                   quantity(d.work, "J")};
+                                   overCycle(s, d.rms, unit),
+                                   overCycle(s, d.mean, unit),
+                                   overCycle(s, d.work, "J")};
         if (flaggedEffort) {
             const auto cells = flaggedCells(m, r, d.peak, unit);
             e.insert(e.end(), cells.begin(), cells.end());
@@ -164,8 +174,8 @@ std::string driverSection(const CompiledMechanism& m, const CycleResult& r, cons
         std::vector<std::string> p{
             d.name, d.peakPower.step < 0 ? "none" : peakValue(d.peakPower, "W"), at(m, r, d.peakPower),
             d.peakRegenerative.step < 0 ? "none" : peakValue(d.peakRegenerative, "W"), at(m, r, d.peakRegenerative)};
-        if (flaggedPower)
-            for (const Peak* peak : {&d.peakPower, &d.peakRegenerative}) {
+        for (const auto& [shown, peak] : {std::pair{flaggedPower, &d.peakPower}, {flaggedRegen, &d.peakRegenerative}})
+            if (shown) {
                 const auto cells = flaggedCells(m, r, *peak, "W");
                 p.insert(p.end(), cells.begin(), cells.end());
             }

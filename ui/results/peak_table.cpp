@@ -65,6 +65,10 @@ void PeakTable::rebuild()
                        .arg(kNearToggleMark, QString::fromStdString(toggleText(m, *t)))
                  : QString();
     };
+    // RMS, mean and work integrate over the unreliable steps too.
+    const auto overCycle = [&](const QString& value) {
+        return s.nearSingularSteps > 0 ? QString("%1 %2").arg(value, kNearToggleMark) : value;
+    };
     bool anyLarger = false;
     const auto addRow = [&](const QString& part, const Peak& peak, const QString& value, const QStringList& cells,
                             const QString& flaggedValue) {
@@ -89,13 +93,13 @@ void PeakTable::rebuild()
     };
     for (const auto& j : s.joints)
         addRow(tr("joint %1").arg(QString::fromStdString(j.name)), j.peak, u.force(j.peak.value),
-               {u.force(j.rms), "", "", ""}, u.force(j.peak.flagged.value));
+               {overCycle(u.force(j.rms)), "", "", ""}, u.force(j.peak.flagged.value));
     for (const auto& d : s.drivers) {
         const auto effort = [&](double v) { return d.type == DriverType::Rotary ? u.torque(v) : u.force(v); };
         addRow(tr("driver %1").arg(QString::fromStdString(d.name)), d.peak, effort(d.peak.value),
-               {effort(d.rms), effort(d.mean),
+               {overCycle(effort(d.rms)), overCycle(effort(d.mean)),
                 d.peakPower.step >= 0 ? marked(formatQuantity(d.peakPower.value, "W"), d.peakPower) : QString("–"),
-                formatQuantity(d.work, "J")},
+                overCycle(formatQuantity(d.work, "J"))},
                effort(d.peak.flagged.value));
     }
     addRow(tr("shaking force"), s.groundForce, u.force(s.groundForce.value), {"", "", "", ""},
@@ -106,7 +110,7 @@ void PeakTable::rebuild()
     for (const auto& t : s.toggles) {
         const int row = rowCount();
         insertRow(row);
-        auto* item = new QTableWidgetItem(QString("%1 %2: values there are unreliable")
+        auto* item = new QTableWidgetItem(QString("%1 %2: values there are unreliable; RMS, mean and work include them")
                                               .arg(kNearToggleMark, QString::fromStdString(toggleText(m, t))));
         item->setData(kStepRole, t.worst);
         item->setToolTip(tr("Click to go to the worst step of this toggle"));
