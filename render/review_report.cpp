@@ -196,7 +196,7 @@ void peakSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis
             joints.back() << (j.peak.flagged.step >= 0 ? larger(axis, j.peak, force)
                                                        : larger(axis, j.peakMoment, torque));
     }
-    f.table(joints, flagged ? std::vector<double>{0.1, 0.14, 0.22, 0.12, 0.14, 0.28}
+    f.table(joints, flagged ? std::vector<double>{0.08, 0.12, 0.2, 0.12, 0.18, 0.3}
                             : std::vector<double>{0.14, 0.18, 0.3, 0.18, 0.2});
     f.subheading("Drivers");
     std::vector<QStringList> drivers{{"Driver", "Peak", "Where", "RMS", "Mean", "Peak power", "Regenerative", "Work"}};
@@ -221,9 +221,13 @@ void peakSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis
         {"shaking moment about the origin", marked(u.torque(s.groundMoment.value), s.groundMoment),
          at(axis, s.groundMoment.step)}};
     if (s.groundForce.flagged.step >= 0)
-        frame.push_back({"shaking force, larger near a toggle", larger(axis, s.groundForce, force), ""});
+        frame.push_back({"shaking force, larger near a toggle",
+                         marked(force(s.groundForce.flagged.value), s.groundForce.flagged),
+                         at(axis, s.groundForce.flagged.step)});
     if (s.groundMoment.flagged.step >= 0)
-        frame.push_back({"shaking moment, larger near a toggle", larger(axis, s.groundMoment, torque), ""});
+        frame.push_back({"shaking moment, larger near a toggle",
+                         marked(torque(s.groundMoment.flagged.value), s.groundMoment.flagged),
+                         at(axis, s.groundMoment.flagged.step)});
     for (const auto& t : s.transmission) {
         frame.push_back({QString("transmission angle at %1, least").arg(qs(t.joint)), formatDirection(t.minimum.value),
                          at(axis, t.minimum.step)});
