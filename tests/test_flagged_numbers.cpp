@@ -10,6 +10,7 @@
 #include "core/solver/cycle_sweep.h"
 #include "core/solver/transmission_angle.h"
 #include "tests/mechanism_builders.h"
+#include "tests/solved_mechanism.h"
 
 #include <gtest/gtest.h>
 
@@ -21,20 +22,6 @@ using namespace clevis;
 using namespace clevis::test;
 
 namespace {
-
-struct Solved {
-    CompiledMechanism m;
-    CycleResult r;
-    CycleSummary s;
-};
-
-Solved solve(const Mechanism& mechanism)
-{
-    Solved out{compile(mechanism), {}, {}};
-    out.r = sweepCycle(out.m);
-    out.s = summarize(out.m, out.r);
-    return out;
-}
 
 FourBarSpec withMasses(FourBarSpec spec)
 {

@@ -6,6 +6,7 @@
 #include "core/solver/compiled_mechanism.h"
 #include "core/solver/cycle_sweep.h"
 #include "tests/mechanism_builders.h"
+#include "tests/solved_mechanism.h"
 
 #include <gtest/gtest.h>
 
@@ -13,6 +14,8 @@
 
 using namespace clevis;
 using nlohmann::json;
+using test::solve;
+using test::Solved;
 
 namespace {
 
@@ -30,20 +33,6 @@ Mechanism spinningLink(int steps)
     m.drivers = {test::rotary("motor", "O", ConstantSpeed{kOmega, 0.0})};
     m.cycle.steps = steps;
     return m;
-}
-
-struct Solved {
-    CompiledMechanism m;
-    CycleResult r;
-    CycleSummary s;
-};
-
-Solved solve(const Mechanism& mech)
-{
-    Solved out{compile(mech), {}, {}};
-    out.r = sweepCycle(out.m);
-    out.s = summarize(out.m, out.r);
-    return out;
 }
 
 // Splits one CSV line, honouring quoted fields.
