@@ -242,8 +242,7 @@ std::string energySection(const CycleSummary& s)
     t.addRow({"Energy through the mechanism", quantity(e.throughput, "J")});
     t.addRow({"Residual", quantity(e.residual, "J")});
     std::string text =
-        "\nEnergy over the cycle (put in: positive power; taken back: negative power, the mechanism\n"
-        "driving the motor)\n" +
+        "\nEnergy over the cycle (put in: where a driver's power is positive; taken back: where it is negative)\n" +
         drivers.render() + t.render();
     if (e.throughput <= kNegligibleEnergy)
         return text +
