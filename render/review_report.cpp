@@ -62,20 +62,27 @@ QString larger(const CycleAxis& axis, const Peak& p, const std::function<QString
                : QString("%1 %2 at %3").arg(format(p.flagged.value), kNearToggleMark, at(axis, p.flagged.step));
 }
 
-// "steel bar 20 × 8 mm", "bar 20 × 8 mm, ρ = 7000 kg/m³" or "typed in", with
-// any point masses added.
+// The handbook material with this density, or "ρ = … kg/m³".
+QString materialOf(double density)
+{
+    const auto all = materials();
+    const auto material = std::find_if(all.begin(), all.end(), [&](const Material& m) { return m.density == density; });
+    return material != all.end() ? QString(material->name).replace('_', ' ')
+                                 : QString("ρ = %1").arg(formatQuantity(density, "kg/m³"));
+}
+
+// "steel bar 20 × 8 mm", "aluminium alloy plate 6 mm thick" or "typed in",
+// with any point masses added.
 QString massSource(const CompiledBody& b)
 {
     QString text = "typed in";
-    if (const auto& s = b.section) {
-        const auto all = materials();
-        const auto material =
-            std::find_if(all.begin(), all.end(), [&](const Material& m) { return m.density == s->density; });
-        const QString size =
-            QString("bar %1 × %2 mm").arg(s->width * 1e3, 0, 'g', 4).arg(s->thickness * 1e3, 0, 'g', 4);
-        text = material != all.end() ? QString("%1 %2").arg(QString(material->name).replace('_', ' '), size)
-                                     : QString("%1, ρ = %2").arg(size, formatQuantity(s->density, "kg/m³"));
-    }
+    if (const auto& s = b.section)
+        text = QString("%1 bar %2 × %3 mm")
+                   .arg(materialOf(s->density))
+                   .arg(s->width * 1e3, 0, 'g', 4)
+                   .arg(s->thickness * 1e3, 0, 'g', 4);
+    else if (const auto& p = b.plate)
+        text = QString("%1 plate %2 mm thick").arg(materialOf(p->density)).arg(p->thickness * 1e3, 0, 'g', 4);
     if (b.pointMasses > 0) text += QString(" + %1 point mass%2").arg(b.pointMasses).arg(b.pointMasses > 1 ? "es" : "");
     return text;
 }
