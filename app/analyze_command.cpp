@@ -45,13 +45,16 @@ bool writeOutputs(const AnalyzeOptions& options, const CompiledMechanism& m, con
     return ok;
 }
 
-// Incomplete cycles and near-singular positions make the figures unreliable.
-bool trustworthy(const CycleResult& r, const CycleSummary& s, const std::string& file, std::ostream& err)
+// Incomplete cycles and near-singular positions make the figures unreliable;
+// the part that locks is named.
+bool trustworthy(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s, const std::string& file,
+                 std::ostream& err)
 {
     const bool trusted = r.complete && s.nearSingularSteps == 0;
     if (!trusted)
         err << file << ": the results are not trustworthy: "
             << (r.complete ? "some positions are near singular" : "the cycle could not be completed") << '\n';
+    for (const auto& t : s.toggles) err << file << ": warning: " << toggleText(m, t) << '\n';
     for (const auto& w : r.warnings) err << file << ": warning: " << w.message << '\n';
     return trusted;
 }
@@ -70,7 +73,7 @@ int runAnalyze(const AnalyzeOptions& options, std::ostream& out, std::ostream& e
         const CycleSummary s = summarize(m, r);
         out << summaryText(m, r, s) << std::flush;
         const bool written = writeOutputs(options, m, r, s, err);
-        const bool trusted = trustworthy(r, s, options.file, err);
+        const bool trusted = trustworthy(m, r, s, options.file, err);
         return written && trusted ? kExitOk : kExitFailed;
     } catch (const ModelError& e) {
         err << options.file << ": " << e.what() << '\n';

@@ -31,6 +31,8 @@ PageFlow::PageFlow(QPdfWriter& writer, QPainter& painter, QString footer)
 
 double PageFlow::width() const { return kPageWidth - 2 * kMargin; }
 
+double PageFlow::pageHeight() const { return bottom() - kMargin; }
+
 void PageFlow::footer()
 {
     painter_.save();

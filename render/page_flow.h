@@ -20,6 +20,7 @@ public:
     PageFlow(QPdfWriter& writer, QPainter& painter, QString footer);
 
     double width() const;               // content width, pt
+    double pageHeight() const;          // content height of a page, pt
     void heading(const QString& text);  // a numbered section starts a new page when little room is left
     void subheading(const QString& text);
     void paragraph(const QString& text, const QColor& colour = QColor(), bool bold = false);

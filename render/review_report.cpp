@@ -1,7 +1,9 @@
 #include "render/review_report.h"
 
+#include "core/model/materials.h"
 #include "core/model/type_names.h"
 #include "core/results/drive_units.h"
+#include "core/results/summary_text.h"
 #include "core/solver/body_state.h"
 #include "render/cycle_axis.h"
 #include "render/cycle_chart.h"
@@ -16,6 +18,7 @@
 #include <QFileInfo>
 #include <QPdfWriter>
 
+#include <algorithm>
 #include <set>
 
 namespace clevis::ui {
@@ -42,6 +45,46 @@ QString at(const CycleAxis& axis, int step)
 QString effort(const RenderUnits& u, DriverType type, double v)
 {
     return type == DriverType::Rotary ? u.torque(v) : u.force(v);
+}
+
+// A value from a step near a singular position carries the mark the notes
+// under the table explain.
+QString marked(const QString& value, const PeakAt& p)
+{
+    return p.nearSingular ? QString("%1 %2").arg(value, kNearToggleMark) : value;
+}
+
+// A larger value at a flagged step, with where it occurs, or a dash.
+QString larger(const CycleAxis& axis, const Peak& p, const std::function<QString(double)>& format)
+{
+    return p.flagged.step < 0
+               ? QString("–")
+               : QString("%1 %2 at %3").arg(format(p.flagged.value), kNearToggleMark, at(axis, p.flagged.step));
+}
+
+// The handbook material with this density, or "ρ = … kg/m³".
+QString materialOf(double density)
+{
+    const auto all = materials();
+    const auto material = std::find_if(all.begin(), all.end(), [&](const Material& m) { return m.density == density; });
+    return material != all.end() ? QString(material->name).replace('_', ' ')
+                                 : QString("ρ = %1").arg(formatQuantity(density, "kg/m³"));
+}
+
+// "steel bar 20 × 8 mm", "aluminium alloy plate 6 mm thick" or "typed in",
+// with any point masses added.
+QString massSource(const CompiledBody& b)
+{
+    QString text = "typed in";
+    if (const auto& s = b.section)
+        text = QString("%1 bar %2 × %3 mm")
+                   .arg(materialOf(s->density))
+                   .arg(s->width * 1e3, 0, 'g', 4)
+                   .arg(s->thickness * 1e3, 0, 'g', 4);
+    else if (const auto& p = b.plate)
+        text = QString("%1 plate %2 mm thick").arg(materialOf(p->density)).arg(p->thickness * 1e3, 0, 'g', 4);
+    if (b.pointMasses > 0) text += QString(" + %1 point mass%2").arg(b.pointMasses).arg(b.pointMasses > 1 ? "es" : "");
+    return text;
 }
 
 QString motionText(const CompiledDriver& d)
@@ -74,11 +117,11 @@ void inputsSection(PageFlow& f, const ReviewReportInput& in)
     const auto& m = in.mechanism;
     const auto& u = in.units;
     f.subheading("Bodies");
-    std::vector<QStringList> bodies{{"Body", "Mass", "Centre of mass (drawn)", "I_G"}};
+    std::vector<QStringList> bodies{{"Body", "Mass", "From", "Centre of mass (drawn)", "I_G"}};
     for (const auto& b : m.bodies)
-        bodies.push_back({qs(b.name), formatQuantity(b.mass.mass, "kg"), point(u, b.mass.cg),
+        bodies.push_back({qs(b.name), formatQuantity(b.mass.mass, "kg"), massSource(b), point(u, b.mass.cg),
                           formatQuantity(b.mass.inertia, "kg·m²")});
-    f.table(bodies, {0.22, 0.18, 0.36, 0.24});
+    f.table(bodies, {0.17, 0.12, 0.31, 0.24, 0.16});
     f.subheading("Joints");
     std::vector<QStringList> joints{{"Joint", "Type", "First body", "Second body", "At (drawn)", "Axis"}};
     for (const auto& j : m.joints) {
@@ -142,26 +185,56 @@ void peakSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis
 {
     const auto& s = in.summary;
     const auto& u = in.units;
+    const auto force = [&](double v) { return u.force(v); };
+    const auto torque = [&](double v) { return u.torque(v); };
+    const auto watts = [](double v) { return formatQuantity(v, "W"); };
+    // RMS, mean and work integrate over the unreliable steps too.
+    const PeakAt overCycle{0.0, -1, s.nearSingularSteps > 0};
+    bool flagged = false;
+    for (const auto& j : s.joints) flagged |= j.peak.flagged.step >= 0 || j.peakMoment.flagged.step >= 0;
     f.subheading("Joints");
     std::vector<QStringList> joints{{"Joint", "Peak |F|", "Where", "RMS |F|", "Peak slider moment"}};
-    for (const auto& j : s.joints)
-        joints.push_back({qs(j.name), u.force(j.peak.value), at(axis, j.peak.step), u.force(j.rms),
-                          j.peakMoment.step >= 0 ? u.torque(j.peakMoment.value) : QString("–")});
-    f.table(joints, {0.14, 0.18, 0.3, 0.18, 0.2});
+    if (flagged) joints.front() << "Larger, near a toggle";
+    for (const auto& j : s.joints) {
+        joints.push_back({qs(j.name), marked(u.force(j.peak.value), j.peak), at(axis, j.peak.step),
+                          marked(u.force(j.rms), overCycle),
+                          j.peakMoment.step >= 0 ? marked(u.torque(j.peakMoment.value), j.peakMoment) : QString("–")});
+        if (flagged)
+            joints.back() << (j.peak.flagged.step >= 0 ? larger(axis, j.peak, force)
+                                                       : larger(axis, j.peakMoment, torque));
+    }
+    f.table(joints, flagged ? std::vector<double>{0.08, 0.12, 0.2, 0.12, 0.18, 0.3}
+                            : std::vector<double>{0.14, 0.18, 0.3, 0.18, 0.2});
     f.subheading("Drivers");
     std::vector<QStringList> drivers{{"Driver", "Peak", "Where", "RMS", "Mean", "Peak power", "Regenerative", "Work"}};
-    for (const auto& d : s.drivers)
-        drivers.push_back({qs(d.name), effort(u, d.type, d.peak.value), at(axis, d.peak.step), effort(u, d.type, d.rms),
-                           effort(u, d.type, d.mean),
-                           d.peakPower.step >= 0 ? formatQuantity(d.peakPower.value, "W") : QString("–"),
-                           d.peakRegenerative.step >= 0 ? formatQuantity(d.peakRegenerative.value, "W") : QString("–"),
-                           formatQuantity(d.work, "J")});
+    std::vector<QStringList> driverFlags{{"Driver", "Larger effort, near a toggle", "Larger power, near a toggle"}};
+    for (const auto& d : s.drivers) {
+        const auto effortOf = [&](double v) { return effort(u, d.type, v); };
+        drivers.push_back(
+            {qs(d.name), marked(effortOf(d.peak.value), d.peak), at(axis, d.peak.step),
+             marked(effortOf(d.rms), overCycle), marked(effortOf(d.mean), overCycle),
+             d.peakPower.step >= 0 ? marked(watts(d.peakPower.value), d.peakPower) : QString("–"),
+             d.peakRegenerative.step >= 0 ? marked(watts(d.peakRegenerative.value), d.peakRegenerative) : QString("–"),
+             marked(formatQuantity(d.work, "J"), overCycle)});
+        if (d.peak.flagged.step >= 0 || d.peakPower.flagged.step >= 0)
+            driverFlags.push_back({qs(d.name), larger(axis, d.peak, effortOf), larger(axis, d.peakPower, watts)});
+    }
     f.table(drivers, {0.11, 0.12, 0.2, 0.11, 0.11, 0.12, 0.12, 0.11});
+    if (driverFlags.size() > 1) f.table(driverFlags, {0.2, 0.4, 0.4});
     f.subheading("Frame and transmission");
     std::vector<QStringList> frame{
         {"Quantity", "Peak", "Where"},
-        {"shaking force", u.force(s.groundForce.value), at(axis, s.groundForce.step)},
-        {"shaking moment about the origin", u.torque(s.groundMoment.value), at(axis, s.groundMoment.step)}};
+        {"shaking force", marked(u.force(s.groundForce.value), s.groundForce), at(axis, s.groundForce.step)},
+        {"shaking moment about the origin", marked(u.torque(s.groundMoment.value), s.groundMoment),
+         at(axis, s.groundMoment.step)}};
+    if (s.groundForce.flagged.step >= 0)
+        frame.push_back({"shaking force, larger near a toggle",
+                         marked(force(s.groundForce.flagged.value), s.groundForce.flagged),
+                         at(axis, s.groundForce.flagged.step)});
+    if (s.groundMoment.flagged.step >= 0)
+        frame.push_back({"shaking moment, larger near a toggle",
+                         marked(torque(s.groundMoment.flagged.value), s.groundMoment.flagged),
+                         at(axis, s.groundMoment.flagged.step)});
     for (const auto& t : s.transmission) {
         frame.push_back({QString("transmission angle at %1, least").arg(qs(t.joint)), formatDirection(t.minimum.value),
                          at(axis, t.minimum.step)});
@@ -170,10 +243,14 @@ void peakSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis
     }
     f.table(frame, {0.45, 0.2, 0.35});
     if (s.nearSingularSteps > 0)
-        f.paragraph(
-            QString("%1 steps are near a singular position (shaded in the plots); the loads there are unreliable.")
-                .arg(s.nearSingularSteps),
-            palette::problem(), true);
+        f.paragraph(QString("%1 steps are near a singular position (shaded in the plots); the loads there are "
+                            "unreliable. The peaks above are taken over the other steps; values from those steps "
+                            "are marked %2 and any larger one is listed apart.")
+                        .arg(s.nearSingularSteps)
+                        .arg(kNearToggleMark),
+                    palette::problem(), true);
+    for (const auto& t : s.toggles)
+        f.paragraph(QString("%1 %2.").arg(kNearToggleMark, qs(toggleText(in.mechanism, t))), palette::problem());
     for (const auto& w : in.result.warnings)
         f.paragraph(QString("Warning (%1): %2").arg(qs(w.code), qs(w.message)), palette::problem());
 }
@@ -257,7 +334,6 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
         ok = advance();
     }
     if (ok) {
-        f.newPage();
         f.heading(sections[2]);
         plotsSection(f, in, axis);
         ok = advance();
@@ -268,7 +344,6 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
         ok = advance();
     }
     if (ok) {
-        f.newPage();
         f.heading(sections[4]);
         f.paragraph(
             "Each body below is cut free at the position where one of its joints carries its peak load; "
@@ -277,18 +352,24 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
         for (const auto& c : critical) {
             if (!(ok = advance())) break;
             const FreeBodyPainter figure(m, r, freeBodyDiagram(m, r, c.body, c.step), {in.units, false});
-            f.keep(figure.size().height() * f.width() / figure.size().width() + 26);
+            // Two diagrams to a page where they fit at a readable width.
+            const double width = std::clamp(figure.size().width() * (f.pageHeight() / 2 - 34) / figure.size().height(),
+                                            0.8 * f.width(), f.width());
+            f.keep(figure.size().height() * width / figure.size().width() + 26);
             f.subheading(QString("%1: %2 at %3").arg(c.reason, qs(m.bodies[c.body].name), at(axis, c.step)));
-            f.figure(figure, f.width());
+            f.figure(figure, width);
         }
     }
     if (ok) {
         f.heading(sections[5]);
         f.paragraph(
-            "W_drivers = ΔT + ΔV_gravity + ΔV_springs + W_dampers − W_loads + residual, over the solved span. "
-            "A residual that is not small against the energy passing through means the step count is too coarse "
-            "or the cycle passes a singular position.");
-        f.figure(EnergyBalanceFigure(in.summary.energy), f.width());
+            "Energy put into the mechanism (right) and taken out of it (left) over the solved span: by each driver "
+            "(positive and negative power apart), the net work of the applied loads, the kinetic and potential "
+            "energy stored, and the energy lost in dampers. Bars are to scale against the energy passing through "
+            "(what the drivers and loads put in); a term under 0.1 % of it is written ≈ 0. The residual closes "
+            "W_drivers = ΔT + ΔV_gravity + ΔV_springs + W_dampers − W_loads + residual: one that is not small means "
+            "the step count is too coarse or the cycle passes a singular position.");
+        f.figure(EnergyBalanceFigure(in.summary), f.width());
         ok = advance();
     }
     if (ok) {

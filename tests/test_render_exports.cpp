@@ -217,6 +217,9 @@ TEST(ReviewReport, RendersEveryPageWithItsSectionsAndThePeakTable)
     for (const char* caution :
          {"ideal joints", "Fatigue is not covered", "service and dynamic factors", "local codes", "licensed engineer"})
         EXPECT_TRUE(text.contains(caution)) << caution;
+    // Where each mass came from, as the sample file gives it.
+    for (const char* source : {"typed in", "steel bar 50 × 30 mm", "typed in + 1 point mass"})
+        EXPECT_TRUE(text.contains(source)) << source;
 
     // The peak table, row by row, has summarize()'s numbers.
     const ui::RenderUnits u;

@@ -6,6 +6,7 @@
 #include "core/solver/compiled_mechanism.h"
 #include "core/solver/cycle_sweep.h"
 #include "tests/mechanism_builders.h"
+#include "tests/solved_mechanism.h"
 
 #include <gtest/gtest.h>
 
@@ -13,6 +14,8 @@
 
 using namespace clevis;
 using nlohmann::json;
+using test::solve;
+using test::Solved;
 
 namespace {
 
@@ -30,20 +33,6 @@ Mechanism spinningLink(int steps)
     m.drivers = {test::rotary("motor", "O", ConstantSpeed{kOmega, 0.0})};
     m.cycle.steps = steps;
     return m;
-}
-
-struct Solved {
-    CompiledMechanism m;
-    CycleResult r;
-    CycleSummary s;
-};
-
-Solved solve(const Mechanism& mech)
-{
-    Solved out{compile(mech), {}, {}};
-    out.r = sweepCycle(out.m);
-    out.s = summarize(out.m, out.r);
-    return out;
 }
 
 // Splits one CSV line, honouring quoted fields.
@@ -96,7 +85,7 @@ TEST(ResultsJson, HasTheDocumentedShape)
     for (const char* key : {"peak_force_n", "peak_force_step", "peak_moment_nm", "peak_moment_step"})
         EXPECT_TRUE(summary["ground"].contains(key)) << key;
     for (const char* key : {"driver_work_j", "kinetic_change_j", "gravity_change_j", "spring_change_j", "damper_work_j",
-                            "load_work_j", "residual_j", "gross_j", "relative_residual"})
+                            "load_work_j", "residual_j", "throughput_j", "relative_residual"})
         EXPECT_TRUE(summary["energy_balance"].contains(key)) << key;
     EXPECT_EQ(summary["near_singular_steps"], 0);
     const double centripetal = kMass * kOmega * kOmega * kArm;  // m ω² d

@@ -113,7 +113,7 @@ TEST(CycleSummary, SpinningLinkWithoutGravityHasConstantPinLoad)
     EXPECT_NEAR(s.drivers[0].work, 0.0, 1e-9);
     EXPECT_NEAR(s.groundForce.value, expected, 1e-9 * expected);
     // Nothing passes through the mechanism: the balance has nothing to measure.
-    EXPECT_LT(s.energy.gross, kNegligibleEnergy);
+    EXPECT_LT(s.energy.throughput, kNegligibleEnergy);
     EXPECT_EQ(s.energy.relativeResidual, 0.0);
     EXPECT_EQ(s.nearSingularSteps, 0);
 }
@@ -177,7 +177,7 @@ TEST(CycleSummary, EnergyBalanceClosesForAnAcceleratingLink)
     EXPECT_EQ(e.springChange, 0.0);
     EXPECT_EQ(e.damperWork, 0.0);
     EXPECT_EQ(e.loadWork, 0.0);
-    EXPECT_GT(e.gross, kinetic);
+    EXPECT_GT(e.throughput, kinetic);
     EXPECT_LT(e.relativeResidual, 1e-5);
     EXPECT_NEAR(e.residual, e.driverWork - e.kineticChange - e.gravityChange, 1e-12);
 }

@@ -61,10 +61,11 @@ struct Warning {
     int step = -1;  // -1: about the whole analysis
 };
 
-// A pin between two moving bodies whose transmission angle is reported. Each
-// body's line through the pin runs to its farthest other joint point or, for
-// a body whose only other joint is a slider or slot, along that axis's normal
-// (the direction in which the body's own point cannot move).
+// A pin where a coupler drives an output link on the frame, whose
+// transmission angle is reported (see core/solver/transmission_angle.h). The
+// coupler's line through the pin runs to its farthest other joint point, the
+// output's from its frame pivot; a slider or slot's normal (the direction in
+// which the body's own point cannot move) takes the place of a line.
 struct TransmissionPin {
     int joint = -1;
     BodyPoint far[2];

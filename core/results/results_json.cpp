@@ -66,9 +66,19 @@ json stepToJson(const CompiledMechanism& m, const CycleResult& r, const StepResu
             {"near_singular", s.nearSingular}};
 }
 
+// `<key>_near_singular`: the peak's step is flagged; `<key>_near_toggle`: a
+// larger value at a flagged step, kept apart ({value, step}, or null).
+void addFlags(json& out, const std::string& key, const Peak& p)
+{
+    out[key + "_near_singular"] = p.nearSingular;
+    out[key + "_near_toggle"] =
+        p.flagged.step < 0 ? json(nullptr) : json{{"value", p.flagged.value}, {"step", p.flagged.step}};
+}
+
 json jointSummary(const CompiledMechanism& m, const CycleResult& r, const JointSummary& j, JointType type)
 {
     json out = {{"peak_n", j.peak.value}, {"peak_step", stepIndex(j.peak.step)}, {"rms_n", j.rms}};
+    addFlags(out, "peak", j.peak);
     if (j.peak.step >= 0) {
         out["peak_t"] = r.steps[j.peak.step].t;
         out["peak_drive"] = drivePositions(m, r.steps[j.peak.step]);
@@ -76,22 +86,29 @@ json jointSummary(const CompiledMechanism& m, const CycleResult& r, const JointS
     if (type == JointType::Slider) {
         out["peak_moment_nm"] = j.peakMoment.value;
         out["peak_moment_step"] = stepIndex(j.peakMoment.step);
+        addFlags(out, "peak_moment", j.peakMoment);
     }
     return out;
 }
 
 json driverSummary(const DriverSummary& d)
 {
-    return {{"unit", effortUnit(d.type)},
-            {"peak", d.peak.value},
-            {"peak_step", stepIndex(d.peak.step)},
-            {"rms", d.rms},
-            {"mean", d.mean},
-            {"peak_power_w", d.peakPower.value},
-            {"peak_power_step", stepIndex(d.peakPower.step)},
-            {"peak_regen_w", d.peakRegenerative.value},
-            {"peak_regen_step", stepIndex(d.peakRegenerative.step)},
-            {"work_j", d.work}};
+    json out = {{"unit", effortUnit(d.type)},
+                {"peak", d.peak.value},
+                {"peak_step", stepIndex(d.peak.step)},
+                {"rms", d.rms},
+                {"mean", d.mean},
+                {"peak_power_w", d.peakPower.value},
+                {"peak_power_step", stepIndex(d.peakPower.step)},
+                {"peak_regen_w", d.peakRegenerative.value},
+                {"peak_regen_step", stepIndex(d.peakRegenerative.step)},
+                {"work_j", d.work},
+                {"work_in_j", d.workIn},
+                {"work_out_j", d.workOut}};
+    addFlags(out, "peak", d.peak);
+    addFlags(out, "peak_power", d.peakPower);
+    addFlags(out, "peak_regen", d.peakRegenerative);
+    return out;
 }
 
 json energyBalance(const EnergyBalance& e)
@@ -103,13 +120,32 @@ json energyBalance(const EnergyBalance& e)
             {"damper_work_j", e.damperWork},
             {"load_work_j", e.loadWork},
             {"residual_j", e.residual},
-            {"gross_j", e.gross},
+            {"throughput_j", e.throughput},
             {"relative_residual", e.relativeResidual}};
+}
+
+json toggleJson(const CompiledMechanism& m, const NearToggle& t)
+{
+    json bodies = json::array();
+    for (const int b : t.bodies)
+        if (b != kGround) bodies.push_back(m.bodies[b].name);
+    return {{"first_step", t.first},
+            {"last_step", t.last},
+            {"worst_step", t.worst},
+            {"bodies", bodies},
+            {"joint", t.joint < 0 ? json(nullptr) : json(m.joints[t.joint].name)}};
 }
 
 json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s)
 {
-    json joints = json::object(), drivers = json::object(), transmission = json::object();
+    json joints = json::object(), drivers = json::object(), transmission = json::object(), toggles = json::array();
+    for (const auto& t : s.toggles) toggles.push_back(toggleJson(m, t));
+    json ground = {{"peak_force_n", s.groundForce.value},
+                   {"peak_force_step", stepIndex(s.groundForce.step)},
+                   {"peak_moment_nm", s.groundMoment.value},
+                   {"peak_moment_step", stepIndex(s.groundMoment.step)}};
+    addFlags(ground, "peak_force", s.groundForce);
+    addFlags(ground, "peak_moment", s.groundMoment);
     for (std::size_t j = 0; j < s.joints.size(); ++j)
         joints[s.joints[j].name] = jointSummary(m, r, s.joints[j], m.joints[j].type);
     for (const auto& d : s.drivers) drivers[d.name] = driverSummary(d);
@@ -120,14 +156,11 @@ json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const Cycle
                                  {"max_step", stepIndex(t.maximum.step)}};
     return {{"joints", joints},
             {"drivers", drivers},
-            {"ground",
-             {{"peak_force_n", s.groundForce.value},
-              {"peak_force_step", stepIndex(s.groundForce.step)},
-              {"peak_moment_nm", s.groundMoment.value},
-              {"peak_moment_step", stepIndex(s.groundMoment.step)}}},
+            {"ground", ground},
             {"transmission", transmission},
             {"energy_balance", energyBalance(s.energy)},
-            {"near_singular_steps", s.nearSingularSteps}};
+            {"near_singular_steps", s.nearSingularSteps},
+            {"toggles", toggles}};
 }
 
 }  // namespace

@@ -60,6 +60,35 @@ std::string at(const CompiledMechanism& m, const CycleResult& r, const PeakAt& p
     return std::abs(peak.value) < kNoise ? "" : where(m, r, peak.step);
 }
 
+// A peak's value with its unit, marked when its step is near a singular position.
+std::string peakValue(const PeakAt& peak, const char* unit)
+{
+    return quantity(peak.value, unit) + (peak.nearSingular ? std::string(" ") + kNearToggleMark : "");
+}
+
+// The larger value at a flagged step, with where it occurs, or blanks.
+std::vector<std::string> flaggedCells(const CompiledMechanism& m, const CycleResult& r, const Peak& p, const char* unit)
+{
+    if (p.flagged.step < 0) return {"", ""};
+    return {peakValue(p.flagged, unit), at(m, r, p.flagged)};
+}
+
+bool anyFlagged(std::initializer_list<const Peak*> peaks)
+{
+    for (const Peak* p : peaks)
+        if (p->flagged.step >= 0) return true;
+    return false;
+}
+
+const char* const kFlaggedHeading = "Larger, near a toggle";
+
+// An RMS, mean or work integrates over every solved step, the unreliable ones
+// included: marked whenever there are any.
+std::string overCycle(const CycleSummary& s, double value, const char* unit)
+{
+    return quantity(value, unit) + (s.nearSingularSteps > 0 ? std::string(" ") + kNearToggleMark : "");
+}
+
 std::string heading(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s)
 {
     std::string text = "Cycle summary" + (m.name.empty() ? std::string() : ": " + m.name) + "\n";
@@ -73,7 +102,11 @@ std::string heading(const CompiledMechanism& m, const CycleResult& r, const Cycl
                 "). The figures below cover the solved part only.\n";
     if (s.nearSingularSteps > 0)
         text += "  " + std::to_string(s.nearSingularSteps) + " of " + std::to_string(r.steps.size()) +
-                " steps are near a singular position: the reactions there are unreliable.\n";
+                " steps are near a singular position: the reactions there are unreliable. Peaks below are\n"
+                "  taken over the other steps; a larger value at a flagged step is shown apart and marked " +
+                kNearToggleMark + ".\n  RMS, mean and work include those steps and are marked " + kNearToggleMark +
+                " too.\n";
+    for (const auto& t : s.toggles) text += "  " + std::string(kNearToggleMark) + " " + toggleText(m, t) + ".\n";
     return text;
 }
 
@@ -81,18 +114,26 @@ std::string jointSection(const CompiledMechanism& m, const CycleResult& r, const
 {
     TextTable t({Align::Left, Align::Left, Align::Right, Align::Left, Align::Right, Align::Right, Align::Left});
     std::vector<std::string> header{"Joint", "Type", "Peak |F|", "", "RMS |F|"};
-    for (const auto& j : m.joints)
-        if (j.type == JointType::Slider) {
-            header.insert(header.end(), {"Peak |M|", ""});
-            break;
-        }
+    bool sliders = false, flagged = false;
+    for (std::size_t j = 0; j < s.joints.size(); ++j) {
+        sliders |= m.joints[j].type == JointType::Slider;
+        flagged |= anyFlagged({&s.joints[j].peak, &s.joints[j].peakMoment});
+    }
+    if (sliders) header.insert(header.end(), {"Peak |M|", ""});
+    if (flagged) header.insert(header.end(), {kFlaggedHeading, ""});
     t.addRow(header);
     for (std::size_t j = 0; j < s.joints.size(); ++j) {
         const JointSummary& js = s.joints[j];
-        std::vector<std::string> row{js.name, jointTypeName(m.joints[j].type), quantity(js.peak.value, "N"),
-                                     at(m, r, js.peak), quantity(js.rms, "N")};
-        if (m.joints[j].type == JointType::Slider)
-            row.insert(row.end(), {quantity(js.peakMoment.value, "N·m"), at(m, r, js.peakMoment)});
+        const bool slider = m.joints[j].type == JointType::Slider;
+        std::vector<std::string> row{js.name, jointTypeName(m.joints[j].type), peakValue(js.peak, "N"),
+                                     at(m, r, js.peak), overCycle(s, js.rms, "N")};
+        if (slider) row.insert(row.end(), {peakValue(js.peakMoment, "N·m"), at(m, r, js.peakMoment)});
+        else if (sliders) row.insert(row.end(), {"", ""});
+        if (flagged) {
+            const auto cells = js.peak.flagged.step >= 0 || !slider ? flaggedCells(m, r, js.peak, "N")
+                                                                    : flaggedCells(m, r, js.peakMoment, "N·m");
+            row.insert(row.end(), cells.begin(), cells.end());
+        }
         t.addRow(row);
     }
     return "\nJoint loads (force between the two bodies; RMS weighted over time)\n" + t.render();
@@ -100,17 +141,45 @@ std::string jointSection(const CompiledMechanism& m, const CycleResult& r, const
 
 std::string driverSection(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s)
 {
-    TextTable effort({Align::Left, Align::Right, Align::Left, Align::Right, Align::Right, Align::Right});
-    effort.addRow({"Driver", "Peak effort", "", "RMS", "Mean", "Work"});
-    TextTable power({Align::Left, Align::Right, Align::Left, Align::Right, Align::Left});
-    power.addRow({"Driver", "Peak power", "", "Peak regenerative", ""});
+    bool flaggedEffort = false, flaggedPower = false, flaggedRegen = false;
+    for (const auto& d : s.drivers) {
+        flaggedEffort |= anyFlagged({&d.peak});
+        flaggedPower |= anyFlagged({&d.peakPower});
+        flaggedRegen |= anyFlagged({&d.peakRegenerative});
+    }
+    TextTable effort(
+        {Align::Left, Align::Right, Align::Left, Align::Right, Align::Right, Align::Right, Align::Right, Align::Left});
+    std::vector<std::string> effortHeader{"Driver", "Peak effort", "", "RMS", "Mean", "Work"};
+    if (flaggedEffort) effortHeader.insert(effortHeader.end(), {kFlaggedHeading, ""});
+    effort.addRow(effortHeader);
+    TextTable power({Align::Left, Align::Right, Align::Left, Align::Right, Align::Left, Align::Right, Align::Left,
+                     Align::Right, Align::Left});
+    std::vector<std::string> powerHeader{"Driver", "Peak power", "", "Peak regenerative", ""};
+    if (flaggedPower) powerHeader.insert(powerHeader.end(), {"Larger power, near a toggle", ""});
+    if (flaggedRegen) powerHeader.insert(powerHeader.end(), {"Larger regenerative, near a toggle", ""});
+    power.addRow(powerHeader);
     for (const auto& d : s.drivers) {
         const char* unit = effortUnit(d.type);
-        effort.addRow({d.name, quantity(d.peak.value, unit), at(m, r, d.peak), quantity(d.rms, unit),
-                       quantity(d.mean, unit), quantity(d.work, "J")});
-        power.addRow({d.name, d.peakPower.step < 0 ? "none" : quantity(d.peakPower.value, "W"), at(m, r, d.peakPower),
-                      d.peakRegenerative.step < 0 ? "none" : quantity(d.peakRegenerative.value, "W"),
-                      at(m, r, d.peakRegenerative)});
+        std::vector<std::string> e{d.name,
+                                   peakValue(d.peak, unit),
+                                   at(m, r, d.peak),
+                                   overCycle(s, d.rms, unit),
+                                   overCycle(s, d.mean, unit),
+                                   overCycle(s, d.work, "J")};
+        if (flaggedEffort) {
+            const auto cells = flaggedCells(m, r, d.peak, unit);
+            e.insert(e.end(), cells.begin(), cells.end());
+        }
+        effort.addRow(e);
+        std::vector<std::string> p{
+            d.name, d.peakPower.step < 0 ? "none" : peakValue(d.peakPower, "W"), at(m, r, d.peakPower),
+            d.peakRegenerative.step < 0 ? "none" : peakValue(d.peakRegenerative, "W"), at(m, r, d.peakRegenerative)};
+        for (const auto& [shown, peak] : {std::pair{flaggedPower, &d.peakPower}, {flaggedRegen, &d.peakRegenerative}})
+            if (shown) {
+                const auto cells = flaggedCells(m, r, *peak, "W");
+                p.insert(p.end(), cells.begin(), cells.end());
+            }
+        power.addRow(p);
     }
     return "\nDrivers (effort on the driven body, positive along the driver's coordinate)\n" + effort.render() +
            "\nDriver power (regenerative: the mechanism drives the motor)\n" + power.render();
@@ -118,9 +187,15 @@ std::string driverSection(const CompiledMechanism& m, const CycleResult& r, cons
 
 std::string groundSection(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s)
 {
-    TextTable t({Align::Left, Align::Right, Align::Left});
-    t.addRow({"Peak shaking force", quantity(s.groundForce.value, "N"), at(m, r, s.groundForce)});
-    t.addRow({"Peak shaking moment about the origin", quantity(s.groundMoment.value, "N·m"), at(m, r, s.groundMoment)});
+    TextTable t({Align::Left, Align::Right, Align::Left, Align::Right, Align::Left});
+    const auto row = [&](const char* name, const Peak& p, const char* unit) {
+        std::vector<std::string> cells{name, peakValue(p, unit), at(m, r, p)};
+        if (p.flagged.step >= 0)
+            cells.insert(cells.end(), {"larger near a toggle: " + peakValue(p.flagged, unit), at(m, r, p.flagged)});
+        t.addRow(cells);
+    };
+    row("Peak shaking force", s.groundForce, "N");
+    row("Peak shaking moment about the origin", s.groundMoment, "N·m");
     return "\nLoad on the frame\n" + t.render();
 }
 
@@ -144,23 +219,37 @@ std::string transmissionSection(const CompiledMechanism& m, const CycleResult& r
     return "\nTransmission angle (common practice: keep within " + transmissionRange() + ")\n" + t.render();
 }
 
+// A term of the energy balance, or "≈ 0 J" below a small share of the
+// energy passing through (the same terms the report's figure leaves out).
+std::string energyTerm(double value, const EnergyBalance& e)
+{
+    return negligibleEnergy(value, e) ? "≈ 0 J" : quantity(value, "J");
+}
+
 std::string energySection(const CycleSummary& s)
 {
     const EnergyBalance& e = s.energy;
+    TextTable drivers({Align::Left, Align::Right, Align::Right, Align::Right});
+    drivers.addRow({"Driver", "Put in", "Taken back", "Net work"});
+    for (const auto& d : s.drivers)
+        drivers.addRow({d.name, energyTerm(d.workIn, e), energyTerm(d.workOut, e), energyTerm(d.work, e)});
     TextTable t({Align::Left, Align::Right});
-    t.addRow({"Work done by the drivers", quantity(e.driverWork, "J")});
-    t.addRow({"Kinetic energy gained", quantity(e.kineticChange, "J")});
-    t.addRow({"Gravity potential gained", quantity(e.gravityChange, "J")});
-    t.addRow({"Energy stored in springs", quantity(e.springChange, "J")});
-    t.addRow({"Dissipated in dampers", quantity(e.damperWork, "J")});
-    t.addRow({"Work done by applied loads", quantity(e.loadWork, "J")});
+    t.addRow({"Lost in dampers", energyTerm(e.damperWork, e)});
+    t.addRow({"Work done by applied loads", energyTerm(e.loadWork, e)});
+    t.addRow({"Kinetic energy gained", energyTerm(e.kineticChange, e)});
+    t.addRow({"Gravity potential gained", energyTerm(e.gravityChange, e)});
+    t.addRow({"Energy stored in springs", energyTerm(e.springChange, e)});
+    t.addRow({"Energy through the mechanism", quantity(e.throughput, "J")});
     t.addRow({"Residual", quantity(e.residual, "J")});
-    t.addRow({"Gross energy through the cycle", quantity(e.gross, "J")});
-    std::string text = "\nEnergy over the cycle\n" + t.render();
-    if (e.gross <= kNegligibleEnergy)
+    std::string text =
+        "\nEnergy over the cycle (put in: where a driver's power is positive; taken back: where it is negative)\n" +
+        drivers.render() + t.render();
+    if (e.throughput <= kNegligibleEnergy)
         return text +
                "  No work passes through the mechanism over the cycle: the energy balance has nothing to check.\n";
-    text += "  Energy balance closes to " + percent(e.relativeResidual) + " of the work through the cycle.\n";
+    text += "  Energy balance closes to " + percent(e.relativeResidual) +
+            " of the work through the cycle (terms under " + percent(kNegligibleEnergyShare) +
+            " of it are shown as ≈ 0).\n";
     if (e.relativeResidual > kLargeResidual)
         text +=
             "  That is more than rounding: use more steps, and see the warnings (a near-singular position or a\n"
@@ -177,6 +266,26 @@ std::string warningSection(const CycleResult& r)
 }
 
 }  // namespace
+
+std::string toggleText(const CompiledMechanism& m, const NearToggle& t)
+{
+    std::string text = "near a toggle: ";
+    if (t.bodies[0] == kGround) text += "the mechanism locks";
+    else if (t.bodies[1] == kGround) text += m.bodyName(t.bodies[0]) + " locks";
+    else text += m.bodyName(t.bodies[0]) + " and " + m.bodyName(t.bodies[1]) + " line up";
+    if (t.joint >= 0)
+        text += std::string(" at ") + jointTypeName(m.joints[t.joint].type) + " " + m.joints[t.joint].name;
+    text += t.first == t.last ? " (step " + std::to_string(t.first) + ")"
+                              : " (steps " + std::to_string(t.first) + "–" + std::to_string(t.last) + ")";
+    return text;
+}
+
+const NearToggle* toggleAt(const CycleSummary& s, int step)
+{
+    for (const auto& t : s.toggles)
+        if (step >= t.first && step <= t.last) return &t;
+    return nullptr;
+}
 
 std::string summaryText(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s)
 {

@@ -319,11 +319,16 @@ CompiledMechanism Compiler::run()
     out_.steps = in_.cycle.steps;
     for (std::size_t b = 0; b < in_.bodies.size(); ++b) {
         bodies_[in_.bodies[b].name] = int(b);
-        out_.bodies.push_back({in_.bodies[b].name, {}});
+        out_.bodies.push_back({in_.bodies[b].name, {}, {}, {}, 0});
     }
     checkJointsComplete(in_);
     checkAttachmentNames();
-    for (std::size_t b = 0; b < in_.bodies.size(); ++b) out_.bodies[b].mass = massOf(b);
+    for (std::size_t b = 0; b < in_.bodies.size(); ++b) {
+        out_.bodies[b].mass = massOf(b);
+        out_.bodies[b].section = in_.bodies[b].section;
+        out_.bodies[b].plate = in_.bodies[b].plate;
+        out_.bodies[b].pointMasses = in_.bodies[b].pointMasses.size();
+    }
     compileJoints();
     compileDrivers();
     compileLoads();

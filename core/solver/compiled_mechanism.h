@@ -23,6 +23,11 @@ struct BodyPoint {
 struct CompiledBody {
     std::string name;
     MassProperties mass;
+    // Where the mass came from, for the report: a bar section or a plate
+    // (else typed in) and how many point masses were added.
+    std::optional<BarSection> section;
+    std::optional<PlateSection> plate;
+    std::size_t pointMasses = 0;
 };
 
 struct CompiledJoint {

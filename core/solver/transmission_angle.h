@@ -1,7 +1,11 @@
-// Transmission angle μ at pins between two moving bodies that are not input
-// links (see transmission_angle.cpp): the angle between
-// the two bodies' lines through the pin. Force is passed on best at 90°; a
-// common rule of practice is to keep μ within 40°–140°.
+// Transmission angle μ where it says how well force is passed on: at a pin
+// between a coupler (a moving body with no joint to the frame) and an output
+// link (a body joined to the frame, not driven) that lies farther from the
+// drivers than the coupler, so that power flows from the coupler into the
+// output. μ is the angle between the coupler's line through the pin and the
+// output's line from its frame pivot to the pin (for an output on a slide,
+// the slide's normal). Force is passed on best at 90°; a common rule of
+// practice is to keep μ within 40°–140°. See docs/method.md.
 #pragma once
 
 #include "core/results/results.h"
