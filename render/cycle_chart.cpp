@@ -1,5 +1,6 @@
 #include "render/cycle_chart.h"
 
+#include "core/results/cycle_summary.h"
 #include "render/palette.h"
 
 #include <QFontMetricsF>
@@ -79,7 +80,8 @@ std::vector<double> niceTicks(double lo, double hi, int count)
 CycleChart::CycleChart(PlotPane pane, CycleAxis axis, const CycleResult& r, double width)
     : pane_(std::move(pane))
     , axis_(std::move(axis))
-    , singular_(nearSingularRuns(r))
+    , unreliable_(unreliableSteps(r))
+    , singular_(unreliableRuns(unreliable_))
     , size_(width, kPlotTop + kPlotHeight + kBelowPlot + kBottomPad)
     , plot_(kPlotLeft, kPlotTop, width - kPlotLeft - kPlotRight, kPlotHeight)
 {
@@ -99,11 +101,8 @@ void CycleChart::layOutLegend()
     QStringList labels;
     double widest = 0;
     for (const PlotCurve& c : pane_.curves) {
-        const int k = peakStep(c.series.values);
-        const QString label = k < 0 ? c.series.name
-                                    : QString("%1  peak %2 at %3")
-                                          .arg(c.series.name, formatQuantity(c.series.values[k], c.series.unit),
-                                               axis_.format(axis_.values[std::min<int>(k, axis_.values.size() - 1)]));
+        const QString peak = peakText(c.series, axis_, curvePeak(c.series.values, unreliable_));
+        const QString label = peak.isEmpty() ? c.series.name : QString("%1  peak %2").arg(c.series.name, peak);
         labels << label;
         widest = std::max(widest, metrics.horizontalAdvance(label));
     }
@@ -208,7 +207,7 @@ void CycleChart::paint(QPainter& p, const QRectF& target) const
     }
     // Peak marks over every line, so none hides under a later curve.
     for (const auto& c : pane_.curves)
-        if (const int k = peakStep(c.series.values); k >= 0 && k < int(axis_.values.size()))
+        if (const int k = curvePeak(c.series.values, unreliable_).step; k >= 0 && k < int(axis_.values.size()))
             paintPeakMark(p, QPointF(X(axis_.values[k]), Y(c.series.values[k])), c.pen);
     p.restore();
 

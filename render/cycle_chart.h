@@ -30,6 +30,7 @@ private:
 
     PlotPane pane_;
     CycleAxis axis_;
+    std::vector<bool> unreliable_;  // per step
     std::vector<std::pair<int, int>> singular_;
     double reachEnd_ = 0, plannedEnd_ = 0;  // x where the solved part ends and the cycle would
     QSizeF size_;

@@ -62,18 +62,37 @@ CycleSeries transmissionSeries(const CompiledMechanism& m, const CycleResult& r,
             collect(r, [&](const StepResult& s) { return s.transmissionDeg[pin]; })};
 }
 
-int peakStep(const std::vector<double>& values)
+CurvePeak curvePeak(const std::vector<double>& values, const std::vector<bool>& unreliable)
 {
-    const auto peak =
-        std::max_element(values.begin(), values.end(), [](double a, double b) { return std::abs(a) < std::abs(b); });
-    return peak == values.end() ? -1 : int(peak - values.begin());
+    int steps[2] = {-1, -1};  // reliable, unreliable
+    for (std::size_t i = 0; i < values.size(); ++i) {
+        int& best = steps[i < unreliable.size() && unreliable[i] ? 1 : 0];
+        if (best < 0 || std::abs(values[i]) > std::abs(values[std::size_t(best)])) best = int(i);
+    }
+    if (steps[0] < 0) return {steps[1], -1};  // every step unreliable
+    if (steps[1] >= 0 && std::abs(values[std::size_t(steps[1])]) > std::abs(values[std::size_t(steps[0])]))
+        return {steps[0], steps[1]};
+    return {steps[0], -1};
 }
 
-std::vector<std::pair<int, int>> nearSingularRuns(const CycleResult& r)
+QString peakText(const CycleSeries& s, const CycleAxis& axis, const CurvePeak& peak)
+{
+    const auto at = [&](int k) {
+        return QStringLiteral("%1 at %2")
+            .arg(formatQuantity(s.values[std::size_t(k)], s.unit),
+                 axis.format(axis.values[std::min<std::size_t>(std::size_t(k), axis.values.size() - 1)]));
+    };
+    if (peak.step < 0 || axis.values.empty()) return {};
+    QString text = at(peak.step);
+    if (peak.flaggedStep >= 0) text += QStringLiteral("  (⚠ %1, unreliable)").arg(at(peak.flaggedStep));
+    return text;
+}
+
+std::vector<std::pair<int, int>> unreliableRuns(const std::vector<bool>& unreliable)
 {
     std::vector<std::pair<int, int>> runs;
-    for (int i = 0; i < int(r.steps.size()); ++i) {
-        if (!r.steps[i].nearSingular) continue;
+    for (int i = 0; i < int(unreliable.size()); ++i) {
+        if (!unreliable[std::size_t(i)]) continue;
         if (!runs.empty() && runs.back().second == i - 1) runs.back().second = i;
         else runs.emplace_back(i, i);
     }

@@ -4,6 +4,7 @@
 #pragma once
 
 #include "core/results/results.h"
+#include "render/cycle_axis.h"
 #include "render/render_units.h"
 
 #include <QString>
@@ -28,11 +29,20 @@ CycleSeries shakingForceSeries(const CycleResult& r, const RenderUnits& u);
 CycleSeries shakingMomentSeries(const CycleResult& r, const RenderUnits& u);
 CycleSeries transmissionSeries(const CompiledMechanism& m, const CycleResult& r, int pin);
 
-// The step where |value| is largest (the first of equals); -1 when there are no values.
-int peakStep(const std::vector<double>& values);
+// Where a curve peaks, as the summary judges it: the step of largest |value|
+// among the reliable steps (the first of equals) and, apart, the step of a
+// larger |value| at an unreliable one (see unreliableSteps); −1 for none.
+struct CurvePeak {
+    int step = -1;
+    int flaggedStep = -1;
+};
+CurvePeak curvePeak(const std::vector<double>& values, const std::vector<bool>& unreliable);
 
-// Runs of consecutive steps the solver flagged near a singular position, as
-// [first, last] step indices.
-std::vector<std::pair<int, int>> nearSingularRuns(const CycleResult& r);
+// "12.34 N at 120.0 °", and "(⚠ 156.0 kN at 179.0 °, unreliable)" after it
+// when a larger value comes from an unreliable step.
+QString peakText(const CycleSeries& s, const CycleAxis& axis, const CurvePeak& peak);
+
+// Runs of consecutive unreliable steps, as [first, last] step indices.
+std::vector<std::pair<int, int>> unreliableRuns(const std::vector<bool>& unreliable);
 
 }  // namespace clevis::ui

@@ -64,6 +64,26 @@ double lightness(const QColor& c)
     return 116 * f - 16;
 }
 
+// A curve's peak is taken over the reliable steps, as in the summary; a
+// larger value at an unreliable step (near a toggle) is shown apart, marked.
+TEST(PlotReadability, APeakFromAnUnreliableStepIsShownApartAndMarked)
+{
+    const std::vector<double> values{1.0, -5.0, 3.0, 100.0, 2.0};
+    const CurvePeak peak = curvePeak(values, {false, false, false, true, false});
+    EXPECT_EQ(peak.step, 1);
+    EXPECT_EQ(peak.flaggedStep, 3);
+    CycleAxis axis;
+    axis.unit = "°";
+    axis.values = {0.0, 90.0, 180.0, 270.0, 360.0};
+    CycleSeries s;
+    s.unit = "N";
+    s.values = values;
+    EXPECT_EQ(peakText(s, axis, peak), "-5.000 N at 90.0 °  (⚠ 100.0 N at 270.0 °, unreliable)");
+    EXPECT_EQ(curvePeak(values, {}).step, 3);                                      // nothing unreliable
+    EXPECT_EQ(curvePeak(values, {true, true, true, true, true}).flaggedStep, -1);  // all unreliable: one peak
+    EXPECT_EQ((unreliableRuns({false, true, true, false, true})), (std::vector<std::pair<int, int>>{{1, 2}, {4, 4}}));
+}
+
 TEST(PlotReadability, LightnessMatchesTheReferenceValues)
 {
     // sRGB #777777 has L* = 50.0 and pure white 100 (values of the CIELAB definition, from memory).

@@ -69,7 +69,8 @@ void FreeBodyView::refresh()
     diagram_.reset();
     const Selection s = doc_->selection();
     QString note;
-    if (!analysis_->hasResult()) note = tr("No solved cycle: %1").arg(analysis_->errorText());
+    if (analysis_->nothingDrawn()) note = tr("Draw a mechanism: each body's free-body diagram shows here.");
+    else if (!analysis_->hasResult()) note = tr("No solved cycle: %1").arg(analysis_->errorText());
     else if (s.kind != Selection::Kind::Body) note = tr("Select a body to see its free-body diagram.");
     else {
         const auto& m = analysis_->compiled();

@@ -1,5 +1,6 @@
 #include "ui/results/plot_stack.h"
 
+#include "core/results/cycle_summary.h"
 #include "render/palette.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/shell/display_units.h"
@@ -232,6 +233,7 @@ QStringList PlotStack::drawPane(const PlotPane& pane, QCPMarginGroup* margins)
     QCPAxis* xa = rect->axis(QCPAxis::atBottom);
     QCPAxis* ya = rect->axis(QCPAxis::atLeft);
     xa->setRange(std::min({x.front(), x.back(), end}), std::max({x.front(), x.back(), end}));
+    const std::vector<bool> unreliable = unreliableSteps(r);
     QStringList peakLines;
     double lo = 0, hi = 0;
     for (const PlotCurve& c : pane.curves) {
@@ -241,7 +243,8 @@ QStringList PlotStack::drawPane(const PlotPane& pane, QCPMarginGroup* margins)
         g->setPen(curvePen(c.pen));
         g->setData(x, QVector<double>(s.values.begin(), s.values.end()), true);
         g->addToLegend(legends_.back());
-        const int k = peakStep(s.values);
+        const CurvePeak peak = curvePeak(s.values, unreliable);
+        const int k = peak.step;
         auto* mark = new QCPItemTracer(plot_);
         mark->setGraph(g);
         mark->setGraphKey(x[k]);
@@ -249,7 +252,7 @@ QStringList PlotStack::drawPane(const PlotPane& pane, QCPMarginGroup* margins)
         mark->setSize(7);
         mark->setPen(QPen(g->pen().color(), 1.2));
         mark->setBrush(Qt::white);
-        peakLines << tr("%1: %2 at %3").arg(s.name, formatQuantity(s.values[k], s.unit), axis_.format(x[k]));
+        peakLines << tr("%1: %2").arg(s.name, peakText(s, axis_, peak));
         for (const double v : s.values) {
             lo = std::min(lo, v);
             hi = std::max(hi, v);
@@ -259,7 +262,7 @@ QStringList PlotStack::drawPane(const PlotPane& pane, QCPMarginGroup* margins)
     ya->setRange(lo - (lo < 0 ? pad : 0), hi + pad);
     QColor flagged = palette::problem();
     flagged.setAlphaF(0.15);
-    for (const auto& [a, b] : nearSingularRuns(r))
+    for (const auto& [a, b] : unreliableRuns(unreliable))
         shade(rect, x[std::max(a - 1, 0)], x[std::min<int>(b + 1, x.size() - 1)], flagged);
     if (end != x.back()) {
         QColor unreached = palette::groundHatch();
