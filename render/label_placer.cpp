@@ -57,7 +57,11 @@ void LabelPlacer::add(const QString& text, QPointF anchor, QPointF push, const Q
     const double pushAngle = std::atan2(push.y(), push.x());
     QRectF best;
     double bestCost = std::numeric_limits<double>::infinity();
-    for (const double distance : {6.0, 18.0, 34.0})
+    // Rings of candidate places at distances in proportion to the text's
+    // height, so a label set large (a zoomed screen view) can clear as much
+    // of the drawing as a small one on paper.
+    const double h = metrics.height();
+    for (const double distance : {0.5 * h, 1.6 * h, 3.0 * h, 4.5 * h})
         for (int k = 0; k < 16; ++k) {
             // Alternate either side of the push direction, nearest first.
             const int step = (k + 1) / 2 * (k % 2 ? 1 : -1);

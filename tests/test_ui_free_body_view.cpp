@@ -12,6 +12,7 @@
 #include <QApplication>
 #include <QCheckBox>
 #include <QFontInfo>
+#include <QFontMetricsF>
 #include <QPaintEngine>
 #include <QPainter>
 #include <QTest>
@@ -33,6 +34,7 @@ struct DrawnText {
     QString text;
     QPointF at;     // device pixels
     double pixels;  // the font's height in device pixels
+    QRectF box;     // device pixels, the text's ink
 };
 
 // A paint device that keeps the text drawn on it: what it says, where, and
@@ -81,7 +83,9 @@ private:
         {
             const QFont f = item.font();
             const double pixels = f.pixelSize() > 0 ? f.pixelSize() : f.pointSizeF() * 96 / 72;
-            texts.push_back({item.text(), transform.map(at), pixels * std::sqrt(std::abs(transform.determinant()))});
+            const QRectF box = QFontMetricsF(f).tightBoundingRect(item.text()).translated(at);
+            texts.push_back({item.text(), transform.map(at), pixels * std::sqrt(std::abs(transform.determinant())),
+                             transform.mapRect(box)});
         }
         Type type() const override { return User; }
 
@@ -151,6 +155,31 @@ TEST_F(FreeBodyViewTest, TextIsNoSmallerThanTheInterfaceFont)
         diagramTexts += t.text.contains("ΣFx") || t.text.contains("coupler_plate") || t.text.contains("scale");
     }
     EXPECT_GE(diagramTexts, 3);  // the title, the equations and the scale bars were drawn
+}
+
+// As the view first shows each body, no two load labels cover each other:
+// in the dock as a laptop screen lays it out, at the start of the cycle and
+// scrubbed.
+TEST_F(FreeBodyViewTest, LoadLabelsDoNotOverlapWhenFitted)
+{
+    view->resize(460, 290);
+    for (const int step : {0, 90})
+        for (const Body& body : doc.mechanism().bodies) {
+            analysis->setCurrentStep(step);
+            doc.setSelection({});
+            select(body.name.c_str());
+            std::vector<DrawnText> labels;
+            for (const DrawnText& t : textDrawnBy(*view))
+                if (t.text.contains(QStringLiteral("∠")) || t.text.endsWith(QStringLiteral(" cw")) ||
+                    t.text.endsWith(QStringLiteral(" ccw")))
+                    labels.push_back(t);
+            ASSERT_GE(labels.size(), 2u) << body.name;
+            for (std::size_t i = 0; i < labels.size(); ++i)
+                for (std::size_t k = i + 1; k < labels.size(); ++k)
+                    EXPECT_FALSE(labels[i].box.intersects(labels[k].box))
+                        << body.name << " at step " << step << ": '" << labels[i].text.toStdString() << "' and '"
+                        << labels[k].text.toStdString() << "'";
+        }
 }
 
 TEST_F(FreeBodyViewTest, NothingSelectedShowsAMessageInTheMiddle)
