@@ -10,6 +10,8 @@
 #include "render/palette.h"
 #include "render/plot_panes.h"
 #include "tests/qstring_printer.h"
+#include "tests/recording_device.h"
+#include "tests/solved_mechanism.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/results/plot_stack.h"
@@ -18,8 +20,6 @@
 #include <qcustomplot.h>
 #include <QCheckBox>
 #include <QFile>
-#include <QPaintDevice>
-#include <QPaintEngine>
 #include <QPainter>
 #include <QTest>
 #include <QVBoxLayout>
@@ -27,7 +27,6 @@
 #include <gtest/gtest.h>
 
 #include <algorithm>
-#include <climits>
 #include <cmath>
 #include <map>
 #include <memory>
@@ -112,95 +111,16 @@ TEST(PlotReadability, TwelveCurvePensDifferInColourAndDashAndInGreyScale)
     }
 }
 
-// A paint device that keeps what is drawn on it: each text run with its box
-// (ascent to descent, in device units) and each straight line with its pen.
-class RecordingEngine final : public QPaintEngine {
-public:
-    struct Text {
-        QString text;
-        QRectF box;
-    };
-    struct Line {
-        QLineF line;
-        QPen pen;
-    };
-    std::vector<Text> texts;
-    std::vector<Line> lines;
+using test::Solved;
 
-    RecordingEngine() : QPaintEngine(QPaintEngine::AllFeatures) {}
-    bool begin(QPaintDevice*) override { return true; }
-    bool end() override { return true; }
-    void updateState(const QPaintEngineState& state) override
-    {
-        if (state.state() & DirtyTransform) transform_ = state.transform();
-        if (state.state() & DirtyPen) pen_ = state.pen();
-    }
-    void drawPixmap(const QRectF&, const QPixmap&, const QRectF&) override {}
-    void drawPath(const QPainterPath&) override {}
-    void drawPolygon(const QPointF*, int, PolygonDrawMode) override {}
-    void drawTextItem(const QPointF& p, const QTextItem& item) override
-    {
-        const QRectF box(p.x(), p.y() - item.ascent(), item.width(), item.ascent() + item.descent());
-        texts.push_back({item.text(), transform_.mapRect(box)});
-    }
-    void drawLines(const QLineF* l, int count) override
-    {
-        for (int i = 0; i < count; ++i) lines.push_back({transform_.map(l[i]), pen_});
-    }
-    Type type() const override { return QPaintEngine::User; }
-
-private:
-    QTransform transform_;
-    QPen pen_;
-};
-
-class Recording final : public QPaintDevice {
-public:
-    explicit Recording(QSize size) : size_(size) {}
-    QPaintEngine* paintEngine() const override { return &engine; }
-    mutable RecordingEngine engine;
-
-protected:
-    int metric(PaintDeviceMetric m) const override
-    {
-        switch (m) {
-        case PdmWidth: return size_.width();
-        case PdmHeight: return size_.height();
-        case PdmWidthMM: return size_.width() * 254 / 720;
-        case PdmHeightMM: return size_.height() * 254 / 720;
-        case PdmDpiX:
-        case PdmDpiY:
-        case PdmPhysicalDpiX:
-        case PdmPhysicalDpiY: return 72;
-        case PdmDepth: return 32;
-        case PdmNumColors: return INT_MAX;
-        case PdmDevicePixelRatio: return 1;
-        default: return QPaintDevice::metric(m);
-        }
-    }
-
-private:
-    QSize size_;
-};
-
-struct Solved {
-    CompiledMechanism m;
-    CycleResult r;
-};
-
-Solved solve(const std::string& sample)
-{
-    Solved s{compile(loadMechanismFile(samplePath(sample)).mechanism), {}};
-    s.r = sweepCycle(s.m);
-    return s;
-}
+Solved solve(const std::string& sample) { return test::solve(loadMechanismFile(samplePath(sample)).mechanism); }
 
 // Every pane of a sample's report charts, drawn at its natural size.
 struct DrawnChart {
     PlotPane pane;
     QSizeF size;
-    std::vector<RecordingEngine::Text> texts;
-    std::vector<RecordingEngine::Line> lines;
+    std::vector<test::RecordedText> texts;
+    std::vector<test::RecordedLine> lines;
 };
 
 std::vector<DrawnChart> drawCharts(const Solved& s, const PaneChoice& choice)
@@ -209,7 +129,7 @@ std::vector<DrawnChart> drawCharts(const Solved& s, const PaneChoice& choice)
     const CycleAxis axis = cycleAxis(s.m, s.r);
     for (const PlotPane& pane : plotPanes(s.m, s.r, RenderUnits{}, choice)) {
         const CycleChart chart(pane, axis, s.r);
-        Recording device(chart.size().toSize() + QSize(1, 1));
+        test::RecordingDevice device(chart.size().toSize() + QSize(1, 1));
         {
             QPainter p(&device);
             chart.paint(p, QRectF(QPointF(0, 0), chart.size()));
@@ -257,7 +177,7 @@ TEST(PlotReadability, ReportChartsNumberAndNameTheXAxis)
 {
     const Solved s = solve("dwell_six_bar");
     for (const DrawnChart& chart : drawCharts(s, {})) {
-        const RecordingEngine::Text* title = nullptr;
+        const test::RecordedText* title = nullptr;
         std::map<int, int> numbersByRow;  // rounded box top -> count
         for (const auto& t : chart.texts) {
             if (t.text == "index_motor angle (°)") title = &t;

@@ -4,6 +4,7 @@
 // body is shown whole; with no body selected a message sits in the middle.
 #include "core/file/mechanism_file.h"
 #include "render/free_body_painter.h"
+#include "tests/recording_device.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/results/free_body_canvas.h"
@@ -12,15 +13,11 @@
 #include <QApplication>
 #include <QCheckBox>
 #include <QFontInfo>
-#include <QFontMetricsF>
-#include <QPaintEngine>
 #include <QPainter>
 #include <QTest>
-#include <QTextItem>
 
 #include <gtest/gtest.h>
 
-#include <climits>
 #include <cmath>
 #include <memory>
 #include <vector>
@@ -30,79 +27,15 @@ using namespace clevis::ui;
 
 namespace {
 
-struct DrawnText {
-    QString text;
-    QPointF at;     // device pixels
-    double pixels;  // the font's height in device pixels
-    QRectF box;     // device pixels, the text's ink
-};
-
-// A paint device that keeps the text drawn on it: what it says, where, and
-// how large it comes out after the painter's transform.
-class TextRecorder : public QPaintDevice {
-public:
-    explicit TextRecorder(QSize size) : size_(size) {}
-    QPaintEngine* paintEngine() const override { return &engine_; }
-    const std::vector<DrawnText>& texts() const { return engine_.texts; }
-
-protected:
-    int metric(PaintDeviceMetric m) const override
-    {
-        switch (m) {
-        case PdmWidth: return size_.width();
-        case PdmHeight: return size_.height();
-        case PdmWidthMM: return size_.width() * 254 / 960;
-        case PdmHeightMM: return size_.height() * 254 / 960;
-        case PdmNumColors: return INT_MAX;
-        case PdmDepth: return 32;
-        case PdmDpiX:
-        case PdmDpiY:
-        case PdmPhysicalDpiX:
-        case PdmPhysicalDpiY: return 96;
-        case PdmDevicePixelRatio: return 1;
-        case PdmDevicePixelRatioScaled: return int(devicePixelRatioFScale());
-        }
-        return 0;
-    }
-
-private:
-    struct Engine : QPaintEngine {
-        Engine() : QPaintEngine(AllFeatures) {}
-        bool begin(QPaintDevice*) override { return true; }
-        bool end() override { return true; }
-        void updateState(const QPaintEngineState& state) override
-        {
-            if (state.state() & DirtyTransform) transform = state.transform();
-        }
-        void drawPixmap(const QRectF&, const QPixmap&, const QRectF&) override {}
-        // Only the text is kept; the engine's own drawPolygon overloads call each other.
-        void drawPath(const QPainterPath&) override {}
-        using QPaintEngine::drawPolygon;
-        void drawPolygon(const QPointF*, int, PolygonDrawMode) override {}
-        void drawTextItem(const QPointF& at, const QTextItem& item) override
-        {
-            const QFont f = item.font();
-            const double pixels = f.pixelSize() > 0 ? f.pixelSize() : f.pointSizeF() * 96 / 72;
-            const QRectF box = QFontMetricsF(f).tightBoundingRect(item.text()).translated(at);
-            texts.push_back({item.text(), transform.map(at), pixels * std::sqrt(std::abs(transform.determinant())),
-                             transform.mapRect(box)});
-        }
-        Type type() const override { return User; }
-
-        QTransform transform;
-        std::vector<DrawnText> texts;
-    };
-    QSize size_;
-    mutable Engine engine_;
-};
+using DrawnText = test::RecordedText;
 
 std::vector<DrawnText> textDrawnBy(QWidget& w)
 {
-    TextRecorder device(w.size());
+    test::RecordingDevice device(w.size(), 96);
     QPainter p(&device);
     w.render(&p);
     p.end();
-    return device.texts();
+    return device.engine.texts;
 }
 
 class FreeBodyViewTest : public ::testing::Test {
