@@ -188,7 +188,7 @@ void printText(std::ostream& out, const CompiledMechanism& m, const CycleResult&
     for (const auto& st : stations)
         out << std::setw(12) << st.s << std::setw(16) << st.axial << std::setw(16) << st.shear << std::setw(16)
             << st.moment << '\n';
-    out << "\nEnvelope over the cycle (" << r.steps.size() << " positions, " << stations.size() << " stations):\n";
+    out << "\nEnvelope over the cycle (" << r.steps.size() << " positions, exact peaks along the bar):\n";
     printPeak(out, m, r, "largest tension", env.tension, "N");
     printPeak(out, m, r, "largest compression", env.compression, "N");
     printPeak(out, m, r, "largest |V|", env.shear, "N");
@@ -223,7 +223,7 @@ int runInternalLoads(const InternalLoadsOptions& options, std::ostream& out, std
         const StepResult step = chooseStep(options.at, m, r);
         const auto stations =
             internalLoads(m, bar, step, freeBodyItems(m, step)[std::size_t(bar.body)], options.stations);
-        const BarEnvelope env = barEnvelopes(m, r, {bar}, options.stations).front();
+        const BarEnvelope env = barEnvelopes(m, r, {bar}).front();
         printText(out, m, r, bar, step, stations, env);
         out << std::flush;
         bool ok = true;

@@ -128,24 +128,7 @@ TEST(InternalLoads, AcceleratingBarShearAndMomentMatchClosedForm)
     }
 }
 
-// A parallelogram held still (crank speed 0): massless upright crank and
-// rocker of height h carry a horizontal steel coupler A → B between their top
-// pins, a simply supported span (the rocker is a two-force member, upright).
-Mechanism heldSpan(double h)
-{
-    Mechanism m;
-    Body coupler;
-    coupler.name = "coupler";
-    coupler.section = BarSection{kWidth, kThickness, kDensity, std::nullopt};
-    m.bodies = {test::pointBody("crank", 0.0, Vec2(0, h / 2), 0.0), coupler,
-                test::pointBody("rocker", 0.0, Vec2(kL, h / 2), 0.0)};
-    m.joints = {test::pin("O", kGroundName, "crank", Vec2(0, 0)), test::pin("A", "crank", "coupler", Vec2(0, h)),
-                test::pin("B", "coupler", "rocker", Vec2(kL, h)), test::pin("C", kGroundName, "rocker", Vec2(kL, 0))};
-    m.drivers = {test::rotary("motor", "O", ConstantSpeed{0.0, 0.0}, kPi / 2)};
-    m.cycle.duration = 1.0;
-    m.cycle.steps = 2;
-    return m;
-}
+Mechanism heldSpan(double h) { return test::heldSpan(h, kL, BarSection{kWidth, kThickness, kDensity, std::nullopt}); }
 
 // Beam tables, simply supported span under a uniform load w:
 // V(x) = w(L/2 − x), M(x) = wx(L − x)/2, M_max = wL²/8 at mid-span.
@@ -323,11 +306,13 @@ TEST(InternalLoads, PlatesAndCoincidentJointsAreNotBars)
     EXPECT_THROW(loadsAt(press, press.bars.bars[0], 0, 1), std::invalid_argument);
 }
 
-// The envelope is the largest of every station at every step, found by brute force here.
+// The envelope is at least the largest of every station at every step,
+// found by brute force here, and each peak is a value the bar takes there
+// (just before or beyond its station) at its step.
 TEST(BarEnvelope, PeaksAreTheLargestOverStationsAndSteps)
 {
     const Solved s = solve(loadMechanismFile(std::string(CLEVIS_SAMPLES_DIR) + "/flap_folder.json").mechanism);
-    const auto envelopes = barEnvelopes(s.m, s.r, s.bars.bars, 7);
+    const auto envelopes = barEnvelopes(s.m, s.r, s.bars.bars);
     ASSERT_EQ(envelopes.size(), s.bars.bars.size());
     for (std::size_t b = 0; b < envelopes.size(); ++b) {
         double tension = 0, compression = 0, shear = 0, moment = 0;
@@ -339,15 +324,23 @@ TEST(BarEnvelope, PeaksAreTheLargestOverStationsAndSteps)
                 moment = std::max(moment, std::abs(st.moment));
             }
         const BarEnvelope& env = envelopes[b];
-        EXPECT_EQ(env.tension.value, tension);
-        EXPECT_EQ(env.compression.value, compression);
-        EXPECT_EQ(std::abs(env.shear.value), shear);
-        EXPECT_EQ(std::abs(env.moment.value), moment);
+        const double slack = 1e-12 * std::max({tension, -compression, shear, moment});
+        EXPECT_GE(env.tension.value, tension - slack);
+        EXPECT_LE(env.compression.value, compression + slack);
+        EXPECT_GE(std::abs(env.shear.value), shear - slack);
+        EXPECT_GE(std::abs(env.moment.value), moment - slack);
         EXPECT_GT(moment, 0.0);
-        const auto at = loadsAt(s, s.bars.bars[b], env.moment.step, 7);
-        bool found = false;
-        for (const auto& st : at) found |= st.s == env.moment.s && st.moment == env.moment.value;
-        EXPECT_TRUE(found) << "the moment peak's station and step reproduce it";
+        const StepResult& step = s.r.steps[std::size_t(env.moment.step)];
+        BarLoads along;
+        std::vector<BodyLoad> loads;
+        const auto items = freeBodyItems(s.m, step);
+        for (const auto& item : items[std::size_t(s.bars.bars[b].body)])
+            loads.push_back({item.at, item.force, item.couple, item.kind == FreeBodyItemKind::Weight});
+        along.set(s.m, s.bars.bars[b], step, Pose(step.q), loads);
+        const double beyond = along.at(env.moment.s, false).moment, before = along.at(env.moment.s, true).moment;
+        EXPECT_NEAR(std::min(std::abs(beyond - env.moment.value), std::abs(before - env.moment.value)), 0.0,
+                    1e-12 * moment)
+            << "the moment peak's station and step reproduce it";
     }
 }
 

@@ -1,6 +1,9 @@
 // The envelope of a bar's internal loads over the cycle: the largest tension
-// and compression, and the largest |V| and |M|, over every station and every
-// solved step, each with the station and the step where it occurs.
+// and compression, and the largest |V| and |M|, anywhere along the bar at
+// every solved step, each with the station and the step where it occurs.
+// Along the bar the peaks are exact: between concentrated loads N and V are
+// quadratic and M cubic in s, so their extremes are found where the slopes
+// vanish (BarLoads::peaks), not by sampling.
 #pragma once
 
 #include "core/results/internal_loads.h"
@@ -23,10 +26,9 @@ struct BarEnvelope {
     EnvelopePeak moment;       // largest |M|
 };
 
-// One envelope per bar, in the order of `bars`, over `stations` stations per
-// bar (as internalLoads) at every step of `r`: one pass over the cycle, the
-// loads on all bodies gathered once per step.
+// One envelope per bar, in the order of `bars`, over every step of `r`: one
+// pass over the cycle, the loads on all bodies gathered once per step.
 std::vector<BarEnvelope> barEnvelopes(const CompiledMechanism& m, const CycleResult& r,
-                                      const std::vector<BarModel>& bars, int stations);
+                                      const std::vector<BarModel>& bars);
 
 }  // namespace clevis
