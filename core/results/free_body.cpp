@@ -137,12 +137,11 @@ void bodyLoads(const CompiledMechanism& m, const StepResult& s, const Pose& q, s
     for (std::size_t k = 0; k < s.actions[0].size(); ++k)
         for (int side = 0; side < 2; ++side) {
             const ConstraintAction a = placedAction(m, s, q, k, side);
-            if (a.body != kGround) out[std::size_t(a.body)].push_back({a.at, a.force, a.couple, false});
+            if (a.body != kGround) out[std::size_t(a.body)].push_back({a.at, a.force, a.couple});
         }
     for (const AppliedLoad& l : appliedLoads(m, q, s.qd, s.t, s.drivePosition))
-        if (l.body != kGround)
-            out[std::size_t(l.body)].push_back(
-                {l.at, l.force, l.couple, loadKind(m, l.source) == FreeBodyItemKind::Weight});
+        if (l.body != kGround && loadKind(m, l.source) != FreeBodyItemKind::Weight)
+            out[std::size_t(l.body)].push_back({l.at, l.force, l.couple});
 }
 
 FreeBodyDiagram freeBodyDiagram(const CompiledMechanism& m, const CycleResult& r, int body, int step)

@@ -65,8 +65,7 @@ void BarLoads::set(const CompiledMechanism& m, const BarModel& bar, const StepRe
     setDistributed(bar.spread);
 
     loads_.clear();
-    for (const auto& l : loads)
-        if (!l.weight) add(l.at, l.force, l.couple);
+    for (const auto& l : loads) add(l.at, l.force, l.couple);
     for (const auto& [mass, point] : bar.pointMasses) {
         const Vec2 p = q.point(point);
         add(p, mass * (gravity_ - accel(p)), 0.0);
@@ -216,7 +215,7 @@ std::vector<BarStation> internalLoads(const CompiledMechanism& m, const BarModel
     std::vector<BodyLoad> loads;
     loads.reserve(items.size());
     for (const auto& item : items)
-        loads.push_back({item.at, item.force, item.couple, item.kind == FreeBodyItemKind::Weight});
+        if (item.kind != FreeBodyItemKind::Weight) loads.push_back({item.at, item.force, item.couple});
     BarLoads at;
     at.set(m, bar, s, Pose(s.q), loads);
     std::vector<BarStation> out;

@@ -59,8 +59,8 @@ struct BarPeaks {
 // its storage.
 class BarLoads {
 public:
-    // `loads` is what acts on the bar's body (bodyLoads(m, s, q)[bar.body]),
-    // whose weight gives way to the mass along the line; `q` is s's pose.
+    // `loads` is what acts on the bar's body but its weight (bodyLoads(m, s,
+    // q)[bar.body]): the mass along the line stands for it; `q` is s's pose.
     void set(const CompiledMechanism& m, const BarModel& bar, const StepResult& s, const Pose& q,
              const std::vector<BodyLoad>& loads);
 
