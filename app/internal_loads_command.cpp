@@ -6,6 +6,7 @@
 #include "core/results/bar_envelope.h"
 #include "core/results/cycle_summary.h"
 #include "core/results/drive_units.h"
+#include "core/results/sizing_json.h"
 #include "core/solver/analysis_error.h"
 #include "core/solver/cycle_sweep.h"
 #include "core/solver/exact_position.h"
@@ -108,22 +109,6 @@ std::string massModelText(const BarModel& b)
     return s.str();
 }
 
-nlohmann::json drivesJson(const CompiledMechanism& m, const StepResult& s)
-{
-    nlohmann::json out = nlohmann::json::object();
-    for (std::size_t d = 0; d < m.drivers.size(); ++d)
-        out[m.drivers[d].name] = {{"position", driveDisplayValue(m.drivers[d].type, s.drivePosition[d])},
-                                  {"unit", driveDisplayUnit(m.drivers[d].type)}};
-    return out;
-}
-
-nlohmann::json peakJson(const CompiledMechanism& m, const CycleResult& r, const EnvelopePeak& p, const char* key)
-{
-    if (p.step < 0) return nullptr;
-    const StepResult& s = r.steps[std::size_t(p.step)];
-    return {{key, p.value}, {"s_m", p.s}, {"t", s.t}, {"drive", drivesJson(m, s)}};
-}
-
 nlohmann::json toJson(const CompiledMechanism& m, const CycleResult& r, const BarModel& b, const StepResult& s,
                       const std::vector<BarStation>& stations, const BarEnvelope& env)
 {
@@ -134,7 +119,7 @@ nlohmann::json toJson(const CompiledMechanism& m, const CycleResult& r, const Ba
                           {"from_joint", endJson(b.ends[0])},
                           {"to_joint", endJson(b.ends[1])},
                           {"length_m", b.length},
-                          {"drive", drivesJson(m, s)},
+                          {"drive", drivePositionsJson(m, s)},
                           {"t", s.t},
                           {"mass_along_bar",
                            {{"idealised", b.idealised},

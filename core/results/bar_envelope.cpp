@@ -22,6 +22,8 @@ void update(BarEnvelope& envelope, const BarPeaks& peaks, int step)
     keep(envelope.compression, peaks.compression, step, below);
     keep(envelope.shear, peaks.shear, step, bigger);
     keep(envelope.moment, peaks.moment, step, bigger);
+    keep(envelope.fibreTension, peaks.fibreTension, step, above);
+    keep(envelope.fibreCompression, peaks.fibreCompression, step, below);
 }
 
 }  // namespace

@@ -20,10 +20,11 @@ struct EnvelopePeak {
 
 struct BarEnvelope {
     int body = kGround;
-    EnvelopePeak tension;      // largest N > 0
-    EnvelopePeak compression;  // most negative N
-    EnvelopePeak shear;        // largest |V|
-    EnvelopePeak moment;       // largest |M|
+    EnvelopePeak tension;                         // largest N > 0
+    EnvelopePeak compression;                     // most negative N
+    EnvelopePeak shear;                           // largest |V|
+    EnvelopePeak moment;                          // largest |M|
+    EnvelopePeak fibreTension, fibreCompression;  // Pa, section bars: σ = N/A ± M/Z at the extreme fibres
 };
 
 // One envelope per bar, in the order of `bars`, over every step of `r`: one

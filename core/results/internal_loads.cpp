@@ -185,6 +185,23 @@ BarPeaks BarLoads::peaks() const
         shear(st.s, st.shear);
         moment(st.s, st.moment);
     };
+    // σ = N/A ± M/Z, each a cubic on the piece like M.
+    const double perArea = bar_->area > 0.0 ? 1.0 / bar_->area : 0.0;
+    const double perModulus = bar_->area > 0.0 ? 1.0 / bar_->sectionModulus : 0.0;
+    const auto fibres = [&](const Piece& p, double from, double to) {
+        for (const double side : {1.0, -1.0}) {
+            double c[4];
+            for (int i = 0; i < 4; ++i) c[i] = (i < 3 ? p.n[i] * perArea : 0.0) + side * p.m[i] * perModulus;
+            const auto stress = [&](double x) {
+                const double v = c[0] + x * (c[1] + x * (c[2] + x * c[3]));
+                if (v > out.fibreTension.value) out.fibreTension = {v, x};
+                if (v < out.fibreCompression.value) out.fibreCompression = {v, x};
+            };
+            stress(from);
+            rootsBetween(3.0 * c[3], 2.0 * c[2], c[1], from, to, stress);
+            stress(to);
+        }
+    };
     Vec2 force = Vec2::Zero();
     double sum = 0.0;
     auto next = loads_.begin();
@@ -202,6 +219,7 @@ BarPeaks BarLoads::peaks() const
                      [&](double x) { shear(x, p.v[0] + x * (p.v[1] + x * p.v[2])); });
         rootsBetween(3.0 * p.m[3], 2.0 * p.m[2], p.m[1], from, to, [&](double x) { moment(x, p.at(x).moment); });
         all(p.at(to));
+        if (perArea > 0.0) fibres(p, from, to);
     }
     return out;
 }

@@ -52,6 +52,10 @@ struct PeakAlong {
 };
 struct BarPeaks {
     PeakAlong tension, compression, shear, moment;  // largest N > 0, most negative N, largest |V|, |M|
+    // A section bar's normal stress at its extreme fibres, σ = N/A ± M/Z
+    // (M > 0 puts the fibre on the n side in compression): the largest
+    // tension and compression, in Pa, over both fibres.
+    PeakAlong fibreTension, fibreCompression;
 };
 
 // The loads on one bar at one step, moved onto its line and sorted along
