@@ -12,15 +12,12 @@
 #include "core/solver/cycle_sweep.h"
 #include "core/solver/exact_position.h"
 #include "tests/mechanism_builders.h"
+#include "tests/sympy_bar_loads.h"
 
 #include <gtest/gtest.h>
 #include <nlohmann/json.hpp>
 
-#include <sys/wait.h>
-#include <unistd.h>
-#include <cstdio>
 #include <filesystem>
-#include <fstream>
 
 using namespace clevis;
 
@@ -374,35 +371,6 @@ TEST(ExactPosition, DriveAngleBetweenStepsIsSolvedExactly)
     EXPECT_GT(copy.steps[at + 1].t, *t);
 }
 
-#ifndef CLEVIS_SYMPY_INTERNAL_LOADS
-#error "CLEVIS_SYMPY_INTERNAL_LOADS must name tests/sympy_internal_loads.py"
-#endif
-
-nlohmann::json toJson(const Vec2& v) { return nlohmann::json::array({v.x(), v.y()}); }
-
-// Runs the script; fails (never skips) when python3 or sympy is missing.
-nlohmann::json runSympy(const nlohmann::json& input)
-{
-    const auto path = std::filesystem::temp_directory_path() /
-                      ("clevis_sympy_internal_loads_" + std::to_string(::getpid()) + ".json");
-    std::ofstream(path) << input.dump();
-    const std::string command =
-        std::string("/usr/bin/python3 '") + CLEVIS_SYMPY_INTERNAL_LOADS + "' '" + path.string() + "'";
-    std::string output;
-    int status = -1;
-    if (FILE* pipe = ::popen(command.c_str(), "r")) {
-        char buffer[4096];
-        while (std::size_t n = std::fread(buffer, 1, sizeof buffer, pipe)) output.append(buffer, n);
-        status = ::pclose(pipe);
-    }
-    std::filesystem::remove(path);
-    if (status != 0 || !WIFEXITED(status) || WEXITSTATUS(status) != 0) {
-        ADD_FAILURE() << command << " exited with status " << status << "; it needs python3-sympy";
-        return {};
-    }
-    return nlohmann::json::parse(output);
-}
-
 // The coupler of a loaded, accelerating four-bar whose mass centre is off
 // its line (typed-in mass: the idealised uniform bar, offset), with a force
 // on it off the line, at one step: symbolic integration agrees.
@@ -432,39 +400,18 @@ TEST(InternalLoads, FourBarCouplerMatchesSympyIntegration)
     const auto items = freeBodyItems(s.m, step)[b.body];
     const auto ours = internalLoads(s.m, b, step, items, 9);
 
-    nlohmann::json in;
-    const Vec2 a = pointPosition(step.q, b.ends[0].point);
-    in["a"] = toJson(a);
-    in["e"] = toJson((pointPosition(step.q, b.ends[1].point) - a) / b.length);
-    in["length"] = b.length;
-    in["g_centre"] = toJson(bodyOrigin(step.q, b.body));
-    in["a_centre"] = toJson(step.qdd.segment<2>(3 * b.body));
-    in["omega"] = step.qd[3 * b.body + 2];
-    in["alpha"] = step.qdd[3 * b.body + 2];
-    in["gravity"] = toJson(s.m.gravity);
-    in["spread"] = {{"mass", b.spread.mass},
-                    {"from", b.spread.from},
-                    {"to", b.spread.to},
-                    {"offset", b.spread.offset},
-                    {"rotary", b.spread.rotary}};
-    in["point_masses"] = nlohmann::json::array();
-    in["items"] = nlohmann::json::array();
-    for (const auto& item : items)
-        if (item.kind != FreeBodyItemKind::Weight)
-            in["items"].push_back({{"at", toJson(item.at)}, {"force", toJson(item.force)}, {"couple", item.couple}});
-    for (const auto& st : ours) in["stations"].push_back(st.s);
-    const nlohmann::json out = runSympy(in);
-    ASSERT_TRUE(out.contains("stations"));
+    std::vector<double> stations;
+    for (const auto& st : ours) stations.push_back(st.s);
+    const nlohmann::json rows = test::sympyBarLoads(s.m, b, step, items, stations);
+    ASSERT_EQ(rows.size(), ours.size());
     double scale = 0.0;
     for (const auto& st : ours) scale = std::max({scale, std::abs(st.axial), std::abs(st.shear)});
     for (std::size_t k = 0; k < ours.size(); ++k) {
-        const auto& row = out["stations"][k];
+        const auto& row = rows[k];
         EXPECT_NEAR(ours[k].axial, row[1].get<double>(), 1e-9 * scale) << "s = " << ours[k].s;
         EXPECT_NEAR(ours[k].shear, row[2].get<double>(), 1e-9 * scale) << "s = " << ours[k].s;
         EXPECT_NEAR(ours[k].moment, row[3].get<double>(), 1e-9 * scale * b.length) << "s = " << ours[k].s;
     }
-    std::printf("sympy %s: %zu stations of the coupler at t = %.4f s agree\n",
-                out.value("sympy", std::string("?")).c_str(), ours.size(), step.t);
 }
 
 }  // namespace

@@ -1,10 +1,13 @@
 // Sizing figures of bars: the exact envelopes of the internal loads (peaks
 // between stations found, not sampled), against beam tables and dense
-// sampling.
+// sampling; fibre stresses, utilisation and Euler loads against hand
+// calculations; one stress peak of a sample against symbolic integration.
 #include "core/file/mechanism_file.h"
 #include "core/results/bar_envelope.h"
+#include "core/results/bar_sizing.h"
 #include "core/solver/cycle_sweep.h"
 #include "tests/mechanism_builders.h"
+#include "tests/sympy_bar_loads.h"
 
 #include <gtest/gtest.h>
 
@@ -118,6 +121,116 @@ TEST(ExactEnvelope, DenseSamplingNeverExceedsAndApproachesThePeaks)
         }
     }
     EXPECT_GT(bars, 5);
+}
+
+// The held span (simply supported, its own weight w per length) pulled along
+// its line by P at its far pin, worked by hand (beam tables and σ = N/A ±
+// M/Z): N = P everywhere, M peaks at mid-span, wL²/8, so the fibre stresses
+// peak there at P/A ± wL²/(8Z), with A = w·t = 3e-4 m², Z = t·w²/6 = 1.5e-6 m³:
+//   w = 7850 · 0.03 · 0.01 · 9.80665 = 23.0947 N/m,  wL²/8 = 0.461894 N·m,
+//   P/A = 50 / 3e-4 = 0.166667 MPa,  M/Z = 0.307929 MPa,
+//   σ_tension = 0.474596 MPa, σ_compression = −0.141263 MPa;
+// allowable 1 MPa: utilisation 0.474596.
+TEST(BarSizing, FibreStressesAndUtilisationMatchAHandCalculation)
+{
+    BarSection section{kWidth, kThickness, kDensity, std::nullopt};
+    section.allowableStress = 1e6;
+    Mechanism doc = test::heldSpan(0.15, kL, section);
+    doc.loads.push_back(ForceLoad{"pull", {"coupler", Vec2(kL, 0.15)}, Vec2(50.0, 0), false, std::nullopt});
+    const Solved s = solve(doc);
+    ASSERT_TRUE(s.r.complete);
+    const SizingResult sized = sizeBars(s.doc, s.m, s.r);
+    const BarSizing& bar = sized.bars[barIndex(s, "coupler")];
+    ASSERT_TRUE(bar.section);
+    const SectionSizing& sec = *bar.section;
+    EXPECT_NEAR(bar.envelope.fibreTension.value, 0.474596e6, 1.0);
+    EXPECT_NEAR(bar.envelope.fibreTension.s, kL / 2, 1e-9);
+    EXPECT_NEAR(bar.envelope.fibreCompression.value, -0.141263e6, 1.0);
+    EXPECT_NEAR(bar.envelope.fibreCompression.s, kL / 2, 1e-9);
+    ASSERT_TRUE(sec.utilisation);
+    EXPECT_NEAR(*sec.utilisation, 0.474596, 1e-6);
+    EXPECT_EQ(*sec.utilisation, std::abs(sec.governing.value) / *sec.allowable);  // peak / allowable
+    // Mean shear: the supports carry wL/2 each (the pull adds none): 4.61894 N / 3e-4 m².
+    EXPECT_NEAR(std::abs(sec.shearStress.value), 23.0947 * kL / 2 / 3e-4, 0.1);
+}
+
+// Euler's load for pinned ends, P = π²EI/L², worked by hand for a 30 × 10 mm
+// steel bar 0.4 m long (E = 210 GPa):
+//   in plane I = 0.01 · 0.03³/12 = 2.25e-8 m⁴,   P = 9.8696 · 210e9 · 2.25e-8 / 0.16 = 291 462 N,
+//   out of plane I = 0.03 · 0.01³/12 = 2.5e-9 m⁴, P = 32 384.6 N;
+// slenderness L/r, r = 0.01/√12: 138.56; Johnson–Euler limit π√(2E/σ_y) =
+// π√(2 · 210e9 / 235e6) = 132.81 for S235, so Euler's range holds. Safety
+// factor 2 on yield: allowable 117.5 MPa.
+TEST(BarSizing, EulerLoadsAndSafetyFactorMatchAHandCalculation)
+{
+    BarSection section{kWidth, kThickness, kDensity, std::nullopt};
+    section.material = "steel";
+    section.safetyFactor = 2.0;
+    Mechanism doc = test::heldSpan(0.15, kL, section);
+    doc.loads.push_back(ForceLoad{"push", {"coupler", Vec2(kL, 0.15)}, Vec2(-1000.0, 0), false, std::nullopt});
+    const Solved s = solve(doc);
+    const SizingResult sized = sizeBars(s.doc, s.m, s.r);
+    const SectionSizing& sec = *sized.bars[barIndex(s, "coupler")].section;
+    ASSERT_TRUE(sec.eulerInPlane && sec.eulerOutOfPlane && sec.bucklingRatio && sec.eulerLimit);
+    EXPECT_NEAR(*sec.eulerInPlane, 291462.0, 1.0);
+    EXPECT_NEAR(*sec.eulerOutOfPlane, 32384.6, 0.1);
+    EXPECT_NEAR(sec.slenderness, 138.564, 1e-3);
+    EXPECT_NEAR(*sec.eulerLimit, 132.813, 1e-3);
+    EXPECT_NEAR(*sec.bucklingRatio, 1000.0 / 32384.6, 1e-6);
+    EXPECT_NEAR(*sec.allowable, 117.5e6, 1e-6);
+    EXPECT_TRUE(sized.bars[barIndex(s, "coupler")].notes.empty()) << "slender enough for Euler";
+}
+
+// A stocky bar (L/r below the Johnson–Euler limit) in compression is warned
+// about; a bar without a material gets no Euler load and says why.
+TEST(BarSizing, StockyBarsAreWarnedAndMissingFiguresExplained)
+{
+    BarSection stocky{0.03, 0.03, kDensity, std::nullopt};
+    stocky.material = "steel";
+    Mechanism doc = test::heldSpan(0.15, kL, stocky);
+    doc.loads.push_back(ForceLoad{"push", {"coupler", Vec2(kL, 0.15)}, Vec2(-1000.0, 0), false, std::nullopt});
+    const Solved s = solve(doc);
+    const auto notes = sizeBars(s.doc, s.m, s.r).bars[barIndex(s, "coupler")].notes;
+    const auto has = [&](const std::vector<std::string>& list, const char* text) {
+        return std::any_of(list.begin(), list.end(), [&](const std::string& n) { return n.find(text) != n.npos; });
+    };
+    EXPECT_TRUE(has(notes, "over-estimates")) << ::testing::PrintToString(notes);
+    EXPECT_TRUE(has(notes, "no utilisation"));
+
+    Mechanism unnamed = test::heldSpan(0.15, kL, BarSection{kWidth, kThickness, kDensity, std::nullopt});
+    const Solved u = solve(unnamed);
+    const auto sized = sizeBars(u.doc, u.m, u.r).bars[barIndex(u, "coupler")];
+    EXPECT_FALSE(sized.section->eulerInPlane);
+    EXPECT_TRUE(has(sized.notes, "no Euler load"));
+}
+
+// One stress peak of a sample, checked by symbolic integration: the punch
+// press's connecting rod at the step of its largest fibre compression. The
+// script's N and M at the peak's station give the same σ = N/A − |M|/Z, and
+// at stations just either side it is no more compressive.
+TEST(BarSizing, SamplePeakStressAgreesWithSympy)
+{
+    const Solved s = solve(loadMechanismFile(std::string(CLEVIS_SAMPLES_DIR) + "/punch_press.json").mechanism);
+    const SizingResult sized = sizeBars(s.doc, s.m, s.r);
+    const std::size_t b = barIndex(s, "connecting_rod");
+    const BarSizing& rod = sized.bars[b];
+    ASSERT_TRUE(rod.section);
+    const EnvelopePeak& peak = rod.envelope.fibreCompression;
+    ASSERT_GE(peak.step, 0);
+    const double h = 1e-4 * rod.length;
+    const StepResult& step = s.r.steps[std::size_t(peak.step)];
+    const auto items = freeBodyItems(s.m, step);
+    const nlohmann::json rows =
+        test::sympyBarLoads(s.m, s.bars.bars[b], step, items[std::size_t(rod.body)], {peak.s - h, peak.s, peak.s + h});
+    ASSERT_EQ(rows.size(), 3u);
+    const double area = rod.section->area,
+                 modulus = rod.section->width * rod.section->width * rod.section->thickness / 6.0;
+    const auto sigma = [&](const nlohmann::json& row) {
+        return row[1].get<double>() / area - std::abs(row[3].get<double>()) / modulus;
+    };
+    EXPECT_NEAR(sigma(rows[1]), peak.value, 1e-9 * std::abs(peak.value));
+    EXPECT_GE(sigma(rows[0]), peak.value - 1e-9 * std::abs(peak.value));
+    EXPECT_GE(sigma(rows[2]), peak.value - 1e-9 * std::abs(peak.value));
 }
 
 }  // namespace
