@@ -5,6 +5,8 @@
 #include "core/file/mechanism_file.h"
 #include "core/results/bar_envelope.h"
 #include "core/results/bar_sizing.h"
+#include "core/results/sizing_json.h"
+#include "core/results/sizing_text.h"
 #include "core/solver/cycle_sweep.h"
 #include "tests/mechanism_builders.h"
 #include "tests/sympy_bar_loads.h"
@@ -231,6 +233,25 @@ TEST(BarSizing, SamplePeakStressAgreesWithSympy)
     EXPECT_NEAR(sigma(rows[1]), peak.value, 1e-9 * std::abs(peak.value));
     EXPECT_GE(sigma(rows[0]), peak.value - 1e-9 * std::abs(peak.value));
     EXPECT_GE(sigma(rows[2]), peak.value - 1e-9 * std::abs(peak.value));
+}
+
+// A figure whose peak falls on a position flagged near singular carries the
+// flag, in the text and in the JSON.
+TEST(BarSizing, FiguresFromNearSingularPositionsAreMarked)
+{
+    Solved s = solve(loadMechanismFile(std::string(CLEVIS_SAMPLES_DIR) + "/punch_press.json").mechanism);
+    const auto clean = sizeBars(s.doc, s.m, s.r);
+    const std::size_t b = barIndex(s, "connecting_rod");
+    const int flagged = clean.bars[b].envelope.fibreCompression.step;
+    EXPECT_EQ(sizingText(s.m, s.r, clean).find("near a singular position"), std::string::npos);
+    s.r.steps[std::size_t(flagged)].nearSingular = true;
+    const auto sized = sizeBars(s.doc, s.m, s.r);
+    EXPECT_TRUE(nearSingular(s.r, sized.bars[b].envelope.fibreCompression));
+    EXPECT_NE(sizingText(s.m, s.r, sized).find("near a singular position: not trustworthy"), std::string::npos);
+    const nlohmann::json j = sizingToJson(s.m, s.r, sized);
+    EXPECT_TRUE(j["bars"][b]["section"]["fibre_compression"]["near_singular"].get<bool>());
+    EXPECT_TRUE(j["bars"][b]["compression"]["near_singular"].get<bool>() ==
+                (sized.bars[b].envelope.compression.step == flagged));
 }
 
 }  // namespace
