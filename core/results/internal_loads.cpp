@@ -185,21 +185,23 @@ BarPeaks BarLoads::peaks() const
         shear(st.s, st.shear);
         moment(st.s, st.moment);
     };
-    // σ = N/A ± M/Z, each a cubic on the piece like M.
+    // σ = N/A ± M/Z, each a cubic on the piece like M: its values at the
+    // piece's ends, and where dσ/dx = 0 between them.
     const double perArea = bar_->area > 0.0 ? 1.0 / bar_->area : 0.0;
     const double perModulus = bar_->area > 0.0 ? 1.0 / bar_->sectionModulus : 0.0;
-    const auto fibres = [&](const Piece& p, double from, double to) {
+    const auto fibre = [&](double x, double v) {
+        if (v > out.fibreTension.value) out.fibreTension = {v, x};
+        if (v < out.fibreCompression.value) out.fibreCompression = {v, x};
+    };
+    const auto fibres = [&](const Piece& p, const BarStation& a, const BarStation& b) {
         for (const double side : {1.0, -1.0}) {
-            double c[4];
-            for (int i = 0; i < 4; ++i) c[i] = (i < 3 ? p.n[i] * perArea : 0.0) + side * p.m[i] * perModulus;
-            const auto stress = [&](double x) {
-                const double v = c[0] + x * (c[1] + x * (c[2] + x * c[3]));
-                if (v > out.fibreTension.value) out.fibreTension = {v, x};
-                if (v < out.fibreCompression.value) out.fibreCompression = {v, x};
-            };
-            stress(from);
-            rootsBetween(3.0 * c[3], 2.0 * c[2], c[1], from, to, stress);
-            stress(to);
+            fibre(a.s, a.axial * perArea + side * a.moment * perModulus);
+            fibre(b.s, b.axial * perArea + side * b.moment * perModulus);
+            const double c0 = p.n[0] * perArea + side * p.m[0] * perModulus;
+            const double c1 = p.n[1] * perArea + side * p.m[1] * perModulus;
+            const double c2 = p.n[2] * perArea + side * p.m[2] * perModulus, c3 = side * p.m[3] * perModulus;
+            rootsBetween(3.0 * c3, 2.0 * c2, c1, a.s, b.s,
+                         [&](double x) { fibre(x, c0 + x * (c1 + x * (c2 + x * c3))); });
         }
     };
     Vec2 force = Vec2::Zero();
@@ -212,14 +214,15 @@ BarPeaks BarLoads::peaks() const
             sum += next->couple + next->s * next->force.dot(n_);
         }
         const Piece p = piece(0.5 * (from + to), force, sum);
-        all(p.at(from));
+        const BarStation atFrom = p.at(from), atTo = p.at(to);
+        all(atFrom);
         rootsBetween(0.0, 2.0 * p.n[2], p.n[1], from, to,
                      [&](double x) { axial(x, p.n[0] + x * (p.n[1] + x * p.n[2])); });
         rootsBetween(0.0, 2.0 * p.v[2], p.v[1], from, to,
                      [&](double x) { shear(x, p.v[0] + x * (p.v[1] + x * p.v[2])); });
         rootsBetween(3.0 * p.m[3], 2.0 * p.m[2], p.m[1], from, to, [&](double x) { moment(x, p.at(x).moment); });
-        all(p.at(to));
-        if (perArea > 0.0) fibres(p, from, to);
+        all(atTo);
+        if (perArea > 0.0) fibres(p, atFrom, atTo);
     }
     return out;
 }
