@@ -12,6 +12,7 @@
 #include "core/solver/cycle_sweep.h"
 #include "core/solver/exact_position.h"
 #include "tests/mechanism_builders.h"
+#include "tests/solved_bars.h"
 #include "tests/sympy_bar_loads.h"
 
 #include <gtest/gtest.h>
@@ -44,27 +45,10 @@ Mechanism bar(Motion motion, double duration)
     return m;
 }
 
-struct Solved {
-    Mechanism doc;
-    CompiledMechanism m;
-    CycleResult r;
-    BarList bars;
-};
+using test::solve;
+using test::Solved;
 
-Solved solve(const Mechanism& doc)
-{
-    Solved s{doc, compile(doc), {}, {}};
-    s.r = sweepCycle(s.m);
-    s.bars = findBars(s.doc, s.m);
-    return s;
-}
-
-const BarModel& barOf(const Solved& s, const std::string& name)
-{
-    for (const auto& b : s.bars.bars)
-        if (b.bodyName == name) return b;
-    throw std::runtime_error("no bar " + name);
-}
+const BarModel& barOf(const Solved& s, const std::string& name) { return s.bars.bars[test::barIndex(s, name)]; }
 
 std::vector<BarStation> loadsAt(const Solved& s, const BarModel& b, int step, int stations)
 {

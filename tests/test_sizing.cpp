@@ -9,6 +9,7 @@
 #include "core/results/sizing_text.h"
 #include "core/solver/cycle_sweep.h"
 #include "tests/mechanism_builders.h"
+#include "tests/solved_bars.h"
 #include "tests/sympy_bar_loads.h"
 
 #include <gtest/gtest.h>
@@ -23,27 +24,9 @@ namespace {
 
 constexpr double kL = 0.4, kWidth = 0.03, kThickness = 0.01, kDensity = 7850.0;
 
-struct Solved {
-    Mechanism doc;
-    CompiledMechanism m;
-    CycleResult r;
-    BarList bars;
-};
-
-Solved solve(const Mechanism& doc)
-{
-    Solved s{doc, compile(doc), {}, {}};
-    s.r = sweepCycle(s.m);
-    s.bars = findBars(s.doc, s.m);
-    return s;
-}
-
-std::size_t barIndex(const Solved& s, const std::string& name)
-{
-    for (std::size_t b = 0; b < s.bars.bars.size(); ++b)
-        if (s.bars.bars[b].bodyName == name) return b;
-    throw std::runtime_error("no bar " + name);
-}
+using test::barIndex;
+using test::solve;
+using test::Solved;
 
 // Beam tables, simply supported span with a uniform load w and a point load
 // P at x = a (superposition): R_A = wL/2 + P(L − a)/L; before the load
