@@ -33,11 +33,11 @@ struct BarSection {
     // The material named in the file (empty: density given as a number). It
     // counts only while `density` is still that material's, so that an edit
     // of the density alone never keeps another material's strength.
-    std::string material;
+    std::string material{};
     // What the bar's stress is measured against: a stress, or the material's
     // yield strength divided by a safety factor (at most one of the two).
-    std::optional<double> allowableStress;  // Pa
-    std::optional<double> safetyFactor;     // on yield, ≥ 1
+    std::optional<double> allowableStress{};  // Pa
+    std::optional<double> safetyFactor{};     // on yield, ≥ 1
 
     bool operator==(const BarSection&) const = default;
 };
@@ -48,7 +48,7 @@ struct PlateSection {
     double thickness = 0.0;                    // m, out of plane
     double density = 0.0;                      // kg/m³
     std::optional<std::vector<Vec2>> outline;  // m, corners in order, at the drawn pose
-    std::string material;                      // as for a bar section
+    std::string material{};                    // as for a bar section
 
     bool operator==(const PlateSection&) const = default;
 };
