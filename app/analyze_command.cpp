@@ -6,6 +6,8 @@
 #include "core/results/cycle_summary.h"
 #include "core/results/results_csv.h"
 #include "core/results/results_json.h"
+#include "core/results/sizing_json.h"
+#include "core/results/sizing_text.h"
 #include "core/results/summary_text.h"
 #include "core/solver/analysis_error.h"
 #include "core/solver/cycle_sweep.h"
@@ -33,12 +35,18 @@ bool writeOutput(const std::string& path, const std::function<void(std::ostream&
 }
 
 bool writeOutputs(const AnalyzeOptions& options, const CompiledMechanism& m, const CycleResult& r,
-                  const CycleSummary& s, std::ostream& err)
+                  const CycleSummary& s, const SizingResult& sizing, std::ostream& err)
 {
     bool ok = true;
     if (!options.jsonOut.empty())
         ok &= writeOutput(
-            options.jsonOut, [&](std::ostream& f) { f << resultsToJson(m, r, s).dump(2) << '\n'; }, err);
+            options.jsonOut,
+            [&](std::ostream& f) {
+                nlohmann::json results = resultsToJson(m, r, s);
+                results["sizing"] = sizingToJson(m, r, sizing);  // sizing of bars (docs/results-format.md)
+                f << results.dump(2) << '\n';
+            },
+            err);
     if (!options.csvOut.empty())
         ok &= writeOutput(
             options.csvOut, [&](std::ostream& f) { writeResultsCsv(f, m, r); }, err);
@@ -72,7 +80,10 @@ int runAnalyze(const AnalyzeOptions& options, std::ostream& out, std::ostream& e
         const CycleResult r = sweepCycle(m, sweep);
         const CycleSummary s = summarize(m, r);
         out << summaryText(m, r, s) << std::flush;
-        const bool written = writeOutputs(options, m, r, s, err);
+        // Sizing of bars: stresses, utilisation and buckling (core/results/bar_sizing.h).
+        const SizingResult sizing = sizeBars(loaded.mechanism, m, r);
+        out << '\n' << sizingText(m, r, sizing) << std::flush;
+        const bool written = writeOutputs(options, m, r, s, sizing, err);
         const bool trusted = trustworthy(m, r, s, options.file, err);
         return written && trusted ? kExitOk : kExitFailed;
     } catch (const ModelError& e) {

@@ -21,8 +21,8 @@ namespace {
 
 constexpr int kSteps = 360;
 
-// `withBars`: also the internal loads of every bar at every step (21
-// stations each) and their envelopes, the pass that sizing adds to a cycle.
+// `withBars`: also the internal loads of every bar at every step and their
+// exact envelopes, the pass that sizing adds to a cycle.
 void timeCycle(benchmark::State& state, const clevis::CompiledMechanism& m, const clevis::BarList* withBars = nullptr)
 {
     clevis::SweepOptions options;
@@ -34,7 +34,7 @@ void timeCycle(benchmark::State& state, const clevis::CompiledMechanism& m, cons
             break;
         }
         benchmark::DoNotOptimize(result);
-        if (withBars) benchmark::DoNotOptimize(clevis::barEnvelopes(m, result, withBars->bars, 21));
+        if (withBars) benchmark::DoNotOptimize(clevis::barEnvelopes(m, result, withBars->bars));
     }
     // A rate counter is divided by the CPU time; inverted, it is time per step.
     state.counters["time_per_step"] = benchmark::Counter(double(state.iterations()) * kSteps,
@@ -67,6 +67,22 @@ void FourBarChainCycleWithBarLoads(benchmark::State& state)
     state.counters["bars"] = double(bars.bars.size());
 }
 BENCHMARK(FourBarChainCycleWithBarLoads)->ArgName("bodies")->Arg(200)->Unit(benchmark::kMillisecond);
+
+// The sizing pass alone, on a cycle solved once: its cost without the
+// solver's noise around it.
+void FourBarChainBarLoadsOnly(benchmark::State& state)
+{
+    const clevis::Mechanism doc = clevis::test::fourBarChain(int(state.range(0)));
+    const clevis::CompiledMechanism m = clevis::compile(doc);
+    const clevis::BarList bars = clevis::findBars(doc, m);
+    clevis::SweepOptions options;
+    options.steps = kSteps;
+    const clevis::CycleResult result = clevis::sweepCycle(m, options);
+    for (auto _ : state) benchmark::DoNotOptimize(clevis::barEnvelopes(m, result, bars.bars));
+    state.counters["time_per_step"] = benchmark::Counter(double(state.iterations()) * kSteps,
+                                                         benchmark::Counter::kIsRate | benchmark::Counter::kInvert);
+}
+BENCHMARK(FourBarChainBarLoadsOnly)->ArgName("bodies")->Arg(200)->Unit(benchmark::kMillisecond);
 
 void FourBarFanCycle(benchmark::State& state)
 {

@@ -6,6 +6,7 @@
 #include "core/results/bar_envelope.h"
 #include "core/results/cycle_summary.h"
 #include "core/results/drive_units.h"
+#include "core/results/sizing_json.h"
 #include "core/solver/analysis_error.h"
 #include "core/solver/cycle_sweep.h"
 #include "core/solver/exact_position.h"
@@ -108,22 +109,6 @@ std::string massModelText(const BarModel& b)
     return s.str();
 }
 
-nlohmann::json drivesJson(const CompiledMechanism& m, const StepResult& s)
-{
-    nlohmann::json out = nlohmann::json::object();
-    for (std::size_t d = 0; d < m.drivers.size(); ++d)
-        out[m.drivers[d].name] = {{"position", driveDisplayValue(m.drivers[d].type, s.drivePosition[d])},
-                                  {"unit", driveDisplayUnit(m.drivers[d].type)}};
-    return out;
-}
-
-nlohmann::json peakJson(const CompiledMechanism& m, const CycleResult& r, const EnvelopePeak& p, const char* key)
-{
-    if (p.step < 0) return nullptr;
-    const StepResult& s = r.steps[std::size_t(p.step)];
-    return {{key, p.value}, {"s_m", p.s}, {"t", s.t}, {"drive", drivesJson(m, s)}};
-}
-
 nlohmann::json toJson(const CompiledMechanism& m, const CycleResult& r, const BarModel& b, const StepResult& s,
                       const std::vector<BarStation>& stations, const BarEnvelope& env)
 {
@@ -134,7 +119,7 @@ nlohmann::json toJson(const CompiledMechanism& m, const CycleResult& r, const Ba
                           {"from_joint", endJson(b.ends[0])},
                           {"to_joint", endJson(b.ends[1])},
                           {"length_m", b.length},
-                          {"drive", drivesJson(m, s)},
+                          {"drive", drivePositionsJson(m, s)},
                           {"t", s.t},
                           {"mass_along_bar",
                            {{"idealised", b.idealised},
@@ -188,7 +173,7 @@ void printText(std::ostream& out, const CompiledMechanism& m, const CycleResult&
     for (const auto& st : stations)
         out << std::setw(12) << st.s << std::setw(16) << st.axial << std::setw(16) << st.shear << std::setw(16)
             << st.moment << '\n';
-    out << "\nEnvelope over the cycle (" << r.steps.size() << " positions, " << stations.size() << " stations):\n";
+    out << "\nEnvelope over the cycle (" << r.steps.size() << " positions, exact peaks along the bar):\n";
     printPeak(out, m, r, "largest tension", env.tension, "N");
     printPeak(out, m, r, "largest compression", env.compression, "N");
     printPeak(out, m, r, "largest |V|", env.shear, "N");
@@ -223,7 +208,7 @@ int runInternalLoads(const InternalLoadsOptions& options, std::ostream& out, std
         const StepResult step = chooseStep(options.at, m, r);
         const auto stations =
             internalLoads(m, bar, step, freeBodyItems(m, step)[std::size_t(bar.body)], options.stations);
-        const BarEnvelope env = barEnvelopes(m, r, {bar}, options.stations).front();
+        const BarEnvelope env = barEnvelopes(m, r, {bar}).front();
         printText(out, m, r, bar, step, stations, env);
         out << std::flush;
         bool ok = true;

@@ -32,6 +32,26 @@ inline Driver rotary(const std::string& name, const std::string& joint, Motion m
     return d;
 }
 
+// A parallelogram held still (crank speed 0): massless upright crank and
+// rocker of height h carry a horizontal coupler A → B of the given section
+// and length between their top pins, a simply supported span (the rocker is
+// a two-force member, upright).
+inline Mechanism heldSpan(double h, double length, const BarSection& section)
+{
+    Mechanism m;
+    Body coupler;
+    coupler.name = "coupler";
+    coupler.section = section;
+    m.bodies = {pointBody("crank", 0.0, Vec2(0, h / 2), 0.0), coupler,
+                pointBody("rocker", 0.0, Vec2(length, h / 2), 0.0)};
+    m.joints = {pin("O", kGroundName, "crank", Vec2(0, 0)), pin("A", "crank", "coupler", Vec2(0, h)),
+                pin("B", "coupler", "rocker", Vec2(length, h)), pin("C", kGroundName, "rocker", Vec2(length, 0))};
+    m.drivers = {rotary("motor", "O", ConstantSpeed{0.0, 0.0}, kPi / 2)};
+    m.cycle.duration = 1.0;
+    m.cycle.steps = 2;
+    return m;
+}
+
 // In-line slider-crank: crank O→A of length r on a ground pin at the origin,
 // rod A→B of length l, piston at B sliding along +x. Drawn with the crank at
 // `theta0`; masses may be zero.

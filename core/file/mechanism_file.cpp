@@ -12,6 +12,7 @@
 #include <filesystem>
 #include <fstream>
 #include <map>
+#include <tuple>
 
 namespace clevis {
 namespace {
@@ -89,33 +90,82 @@ PointMass readPointMass(const JsonNode& node)
     return p;
 }
 
-double readDensity(const JsonNode& section)
+// The materials a file defines, each with its density and, for sizing, its
+// Young's modulus and yield strength. A built-in name cannot be taken, so
+// that "steel" means the same in every file.
+MaterialProperties readMaterial(const JsonNode& node)
 {
-    const std::string key = section.oneOf({"density", "material"});
-    if (key == "density") return section.at("density").number(Bound::Positive);
-    return section.at("material").choice(materials()).density;
+    node.object({"name", "density", "youngs_modulus", "yield_strength"});
+    MaterialProperties m;
+    const JsonNode name = node.at("name");
+    m.name = name.name();
+    if (materialDensity(m.name)) throw name.error("\"" + m.name + "\" is a built-in material; give yours another name");
+    m.density = node.at("density").number(Bound::Positive);
+    if (const auto e = node.find("youngs_modulus")) m.youngsModulus = e->number(Bound::Positive);
+    if (const auto y = node.find("yield_strength")) m.yieldStrength = y->number(Bound::Positive);
+    return m;
 }
 
-BarSection readSection(const JsonNode& node)
+// The density of a section or plate, given as a number or by a material's
+// name (one the file defines, or a built-in one); the name is kept.
+std::pair<double, std::string> readDensity(const JsonNode& section, const std::vector<MaterialProperties>& defined)
 {
-    node.object({"width", "thickness", "density", "material", "ends"});
+    const std::string key = section.oneOf({"density", "material"});
+    if (key == "density") return {section.at("density").number(Bound::Positive), ""};
+    const JsonNode material = section.at("material");
+    const std::string name = material.name();
+    if (const auto m = findMaterial(defined, name)) return {m->density, name};
+    std::string known;
+    for (const auto& m : materials()) known += (known.empty() ? "" : ", ") + std::string(m.name);
+    for (const auto& m : defined) known += ", " + m.name;
+    throw material.error("\"" + name + "\" is not one of: " + known +
+                         " (define others in the top-level \"materials\" list)");
+}
+
+// What a bar's stress is measured against: an allowable stress, or a safety
+// factor on its material's yield strength (which must then be known).
+void readAllowable(const JsonNode& node, BarSection& s, const std::vector<MaterialProperties>& defined)
+{
+    const auto stress = node.find("allowable_stress"), factor = node.find("safety_factor");
+    if (stress && factor) throw node.error("give either allowable_stress or safety_factor, not both");
+    if (stress) s.allowableStress = stress->number(Bound::Positive);
+    if (!factor) return;
+    const double f = factor->number(Bound::Positive);
+    if (f < 1.0)
+        throw factor->error("must be at least 1 (got " + shortestDecimal(f) +
+                            "): a factor below 1 allows more than the yield strength");
+    const auto material = namedMaterial(defined, s.material, s.density);
+    if (!material)
+        throw factor->error(
+            "a safety factor on yield needs the section's \"material\" (its density alone gives no "
+            "yield strength); or give allowable_stress");
+    if (!material->yieldStrength)
+        throw factor->error("material \"" + material->name +
+                            "\" has no yield strength (brittle, or none given): give allowable_stress instead");
+    s.safetyFactor = f;
+}
+
+BarSection readSection(const JsonNode& node, const std::vector<MaterialProperties>& defined)
+{
+    node.object({"width", "thickness", "density", "material", "ends", "allowable_stress", "safety_factor"});
     BarSection s;
     s.width = node.at("width").number(Bound::Positive);
     s.thickness = node.at("thickness").number(Bound::Positive);
-    s.density = readDensity(node);
+    std::tie(s.density, s.material) = readDensity(node, defined);
     if (const auto ends = node.find("ends")) {
         const std::vector<JsonNode> e = ends->elements(2);
         s.ends = std::pair{e[0].point(), e[1].point()};
     }
+    readAllowable(node, s, defined);
     return s;
 }
 
-PlateSection readPlate(const JsonNode& node)
+PlateSection readPlate(const JsonNode& node, const std::vector<MaterialProperties>& defined)
 {
     node.object({"thickness", "density", "material", "outline"});
     PlateSection p;
     p.thickness = node.at("thickness").number(Bound::Positive);
-    p.density = readDensity(node);
+    std::tie(p.density, p.material) = readDensity(node, defined);
     if (const auto outline = node.find("outline")) {
         const std::vector<JsonNode> corners = outline->elements();
         if (corners.size() < 3) throw outline->error("a plate outline needs at least three corners");
@@ -125,7 +175,7 @@ PlateSection readPlate(const JsonNode& node)
     return p;
 }
 
-Body readBody(const JsonNode& node)
+Body readBody(const JsonNode& node, const std::vector<MaterialProperties>& defined)
 {
     node.object({"name", "mass", "cg", "inertia", "section", "plate", "point_masses"});
     Body b;
@@ -139,12 +189,12 @@ Body readBody(const JsonNode& node)
     if (const auto n = node.find("section")) {
         if (b.mass || b.cg || b.inertia)
             throw n->error("a body takes either mass, cg and inertia or a section, not both");
-        b.section = readSection(*n);
+        b.section = readSection(*n, defined);
     }
     if (const auto n = node.find("plate")) {
         if (b.mass || b.cg || b.inertia || b.section)
             throw n->error("a body takes one of: mass, cg and inertia; a section; a plate");
-        b.plate = readPlate(*n);
+        b.plate = readPlate(*n, defined);
     }
     for (const JsonNode& p : listOf(node, "point_masses")) b.pointMasses.push_back(readPointMass(p));
     return b;
@@ -434,8 +484,8 @@ CycleSettings readCycle(const JsonNode& node)
     return c;
 }
 
-template <class Item>
-std::vector<Item> readNamedList(const JsonNode& root, const char* key, Item (*read)(const JsonNode&))
+template <class Item, class Read>
+std::vector<Item> readNamedList(const JsonNode& root, const char* key, Read read)
 {
     std::vector<Item> items;
     NameRegister names;
@@ -449,13 +499,14 @@ std::vector<Item> readNamedList(const JsonNode& root, const char* key, Item (*re
 Mechanism readMechanism(const JsonNode& root)
 {
     readVersion(root);
-    root.object({"clevis", "name", "gravity", "bodies", "joints", "drivers", "cycle", "loads"});
+    root.object({"clevis", "name", "gravity", "materials", "bodies", "joints", "drivers", "cycle", "loads"});
     Mechanism m;
     if (const auto name = root.find("name")) m.name = name->string();
     if (const auto gravity = root.find("gravity")) m.gravity = readGravity(*gravity);
-    m.bodies = readNamedList(root, "bodies", readBody);
-    m.joints = readNamedList(root, "joints", readJoint);
-    m.drivers = readNamedList(root, "drivers", readDriver);
+    m.materials = readNamedList<MaterialProperties>(root, "materials", readMaterial);
+    m.bodies = readNamedList<Body>(root, "bodies", [&](const JsonNode& n) { return readBody(n, m.materials); });
+    m.joints = readNamedList<Joint>(root, "joints", readJoint);
+    m.drivers = readNamedList<Driver>(root, "drivers", readDriver);
     if (const auto cycle = root.find("cycle")) m.cycle = readCycle(*cycle);
     m.loads = readLoads(root, m.drivers);
     return m;

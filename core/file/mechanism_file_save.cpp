@@ -34,16 +34,35 @@ Json pointMassJson(const PointMass& p)
     return out;
 }
 
-Json sectionJson(const BarSection& s)
+Json materialJson(const MaterialProperties& m)
 {
-    Json out{{"width", s.width}, {"thickness", s.thickness}, {"density", s.density}};
-    if (s.ends) out["ends"] = Json::array({point(s.ends->first), point(s.ends->second)});
+    Json out{{"name", m.name}, {"density", m.density}};
+    if (m.youngsModulus) out["youngs_modulus"] = *m.youngsModulus;
+    if (m.yieldStrength) out["yield_strength"] = *m.yieldStrength;
     return out;
 }
 
-Json plateJson(const PlateSection& p)
+// The material's name while it still gives the density, else the density.
+void putDensity(Json& out, const std::string& material, double density, const std::vector<MaterialProperties>& defined)
 {
-    Json out{{"thickness", p.thickness}, {"density", p.density}};
+    if (namedMaterial(defined, material, density)) out["material"] = material;
+    else out["density"] = density;
+}
+
+Json sectionJson(const BarSection& s, const std::vector<MaterialProperties>& defined)
+{
+    Json out{{"width", s.width}, {"thickness", s.thickness}};
+    putDensity(out, s.material, s.density, defined);
+    if (s.ends) out["ends"] = Json::array({point(s.ends->first), point(s.ends->second)});
+    if (s.allowableStress) out["allowable_stress"] = *s.allowableStress;
+    if (s.safetyFactor) out["safety_factor"] = *s.safetyFactor;
+    return out;
+}
+
+Json plateJson(const PlateSection& p, const std::vector<MaterialProperties>& defined)
+{
+    Json out{{"thickness", p.thickness}};
+    putDensity(out, p.material, p.density, defined);
     if (p.outline) {
         out["outline"] = Json::array();
         for (const Vec2& corner : *p.outline) out["outline"].push_back(point(corner));
@@ -51,14 +70,14 @@ Json plateJson(const PlateSection& p)
     return out;
 }
 
-Json bodyJson(const Body& b)
+Json bodyJson(const Body& b, const std::vector<MaterialProperties>& defined)
 {
     Json out{{"name", b.name}};
     if (b.mass) out["mass"] = *b.mass;
     if (b.cg) out["cg"] = point(*b.cg);
     if (b.inertia) out["inertia"] = *b.inertia;
-    if (b.section) out["section"] = sectionJson(*b.section);
-    if (b.plate) out["plate"] = plateJson(*b.plate);
+    if (b.section) out["section"] = sectionJson(*b.section, defined);
+    if (b.plate) out["plate"] = plateJson(*b.plate, defined);
     if (!b.pointMasses.empty()) {
         out["point_masses"] = Json::array();
         for (const PointMass& p : b.pointMasses) out["point_masses"].push_back(pointMassJson(p));
@@ -214,7 +233,8 @@ Json document(const Mechanism& m)
     Json out{{"clevis", kFileVersion}};
     if (!m.name.empty()) out["name"] = m.name;
     out["gravity"] = m.gravity == Vec2::Zero() ? Json(false) : point(m.gravity);
-    out["bodies"] = list(m.bodies, bodyJson);
+    if (!m.materials.empty()) out["materials"] = list(m.materials, materialJson);
+    out["bodies"] = list(m.bodies, [&](const Body& b) { return bodyJson(b, m.materials); });
     out["joints"] = list(m.joints, jointJson);
     out["drivers"] = list(m.drivers, driverJson);
     out["cycle"] = {{"steps", m.cycle.steps}};

@@ -4,6 +4,7 @@
 #pragma once
 
 #include "core/model/geometry.h"
+#include "core/model/materials.h"
 
 #include <optional>
 #include <string>
@@ -29,6 +30,14 @@ struct BarSection {
     double thickness = 0.0;                     // m, out of plane
     double density = 0.0;                       // kg/m³
     std::optional<std::pair<Vec2, Vec2>> ends;  // m
+    // The material named in the file (empty: density given as a number). It
+    // counts only while `density` is still that material's, so that an edit
+    // of the density alone never keeps another material's strength.
+    std::string material{};
+    // What the bar's stress is measured against: a stress, or the material's
+    // yield strength divided by a safety factor (at most one of the two).
+    std::optional<double> allowableStress{};  // Pa
+    std::optional<double> safetyFactor{};     // on yield, ≥ 1
 
     bool operator==(const BarSection&) const = default;
 };
@@ -39,6 +48,7 @@ struct PlateSection {
     double thickness = 0.0;                    // m, out of plane
     double density = 0.0;                      // kg/m³
     std::optional<std::vector<Vec2>> outline;  // m, corners in order, at the drawn pose
+    std::string material{};                    // as for a bar section
 
     bool operator==(const PlateSection&) const = default;
 };
@@ -181,8 +191,9 @@ struct CycleSettings {
 
 struct Mechanism {
     std::string name;
-    Vec2 gravity{0.0, -9.80665};  // m/s²
-    std::vector<Body> bodies;     // moving bodies; ground is implicit
+    Vec2 gravity{0.0, -9.80665};                // m/s²
+    std::vector<MaterialProperties> materials;  // defined by the file, besides the built-in ones
+    std::vector<Body> bodies;                   // moving bodies; ground is implicit
     std::vector<Joint> joints;
     std::vector<Driver> drivers;
     std::vector<Load> loads;

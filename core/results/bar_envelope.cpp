@@ -5,37 +5,44 @@
 namespace clevis {
 namespace {
 
-// Keeps `value` if it beats the peak by `larger` (ties keep the first found).
+// Keeps a step's peak along the bar if it beats the envelope's so far by
+// `larger` (ties keep the first found).
 template <class Larger>
-void keep(EnvelopePeak& peak, double value, double s, int step, Larger larger)
+void keep(EnvelopePeak& peak, const PeakAlong& along, int step, Larger larger)
 {
-    if (larger(value, peak.value)) peak = {value, s, step};
+    if (larger(along.value, peak.value)) peak = {along.value, along.s, step};
 }
 
-void update(BarEnvelope& envelope, const std::vector<BarStation>& stations, int step)
+void update(BarEnvelope& envelope, const BarPeaks& peaks, int step)
 {
     const auto above = [](double v, double best) { return v > best; };
     const auto below = [](double v, double best) { return v < best; };
     const auto bigger = [](double v, double best) { return std::abs(v) > std::abs(best); };
-    for (const auto& st : stations) {
-        keep(envelope.tension, st.axial, st.s, step, above);
-        keep(envelope.compression, st.axial, st.s, step, below);
-        keep(envelope.shear, st.shear, st.s, step, bigger);
-        keep(envelope.moment, st.moment, st.s, step, bigger);
-    }
+    keep(envelope.tension, peaks.tension, step, above);
+    keep(envelope.compression, peaks.compression, step, below);
+    keep(envelope.shear, peaks.shear, step, bigger);
+    keep(envelope.moment, peaks.moment, step, bigger);
+    keep(envelope.fibreTension, peaks.fibreTension, step, above);
+    keep(envelope.fibreCompression, peaks.fibreCompression, step, below);
 }
 
 }  // namespace
 
 std::vector<BarEnvelope> barEnvelopes(const CompiledMechanism& m, const CycleResult& r,
-                                      const std::vector<BarModel>& bars, int stations)
+                                      const std::vector<BarModel>& bars)
 {
     std::vector<BarEnvelope> out(bars.size());
     for (std::size_t b = 0; b < bars.size(); ++b) out[b].body = bars[b].body;
+    std::vector<std::vector<BodyLoad>> loads;
+    BarLoads along;
+    std::vector<Eigen::Matrix2d> rotations;
     for (std::size_t i = 0; i < r.steps.size(); ++i) {
-        const auto items = freeBodyItems(m, r.steps[i]);
-        for (std::size_t b = 0; b < bars.size(); ++b)
-            update(out[b], internalLoads(m, bars[b], r.steps[i], items[std::size_t(bars[b].body)], stations), int(i));
+        const Pose q(r.steps[i].q, rotations);
+        bodyLoads(m, r.steps[i], q, loads);
+        for (std::size_t b = 0; b < bars.size(); ++b) {
+            along.set(m, bars[b], r.steps[i], q, loads[std::size_t(bars[b].body)]);
+            update(out[b], along.peaks(), int(i));
+        }
     }
     return out;
 }

@@ -1,6 +1,9 @@
 // The envelope of a bar's internal loads over the cycle: the largest tension
-// and compression, and the largest |V| and |M|, over every station and every
-// solved step, each with the station and the step where it occurs.
+// and compression, and the largest |V| and |M|, anywhere along the bar at
+// every solved step, each with the station and the step where it occurs.
+// Along the bar the peaks are exact: between concentrated loads N and V are
+// quadratic and M cubic in s, so their extremes are found where the slopes
+// vanish (BarLoads::peaks), not by sampling.
 #pragma once
 
 #include "core/results/internal_loads.h"
@@ -17,16 +20,16 @@ struct EnvelopePeak {
 
 struct BarEnvelope {
     int body = kGround;
-    EnvelopePeak tension;      // largest N > 0
-    EnvelopePeak compression;  // most negative N
-    EnvelopePeak shear;        // largest |V|
-    EnvelopePeak moment;       // largest |M|
+    EnvelopePeak tension;                         // largest N > 0
+    EnvelopePeak compression;                     // most negative N
+    EnvelopePeak shear;                           // largest |V|
+    EnvelopePeak moment;                          // largest |M|
+    EnvelopePeak fibreTension, fibreCompression;  // Pa, section bars: σ = N/A ± M/Z at the extreme fibres
 };
 
-// One envelope per bar, in the order of `bars`, over `stations` stations per
-// bar (as internalLoads) at every step of `r`: one pass over the cycle, the
-// loads on all bodies gathered once per step.
+// One envelope per bar, in the order of `bars`, over every step of `r`: one
+// pass over the cycle, the loads on all bodies gathered once per step.
 std::vector<BarEnvelope> barEnvelopes(const CompiledMechanism& m, const CycleResult& r,
-                                      const std::vector<BarModel>& bars, int stations);
+                                      const std::vector<BarModel>& bars);
 
 }  // namespace clevis

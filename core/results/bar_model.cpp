@@ -90,6 +90,10 @@ BarList findBars(const Mechanism& doc, const CompiledMechanism& m)
         const Vec2 e = (at[1] - at[0]) / bar.length;
         bar.idealised = !body.section;
         bar.spread = body.section ? sectionSpread(*body.section, bar.length) : typedSpread(body, at[0], e, bar.length);
+        if (body.section) {
+            bar.area = body.section->width * body.section->thickness;
+            bar.sectionModulus = body.section->thickness * body.section->width * body.section->width / 6.0;
+        }
         for (const auto& pm : body.pointMasses) bar.pointMasses.push_back({pm.mass, {int(b), Vec2(pm.at - cg)}});
         list.bars.push_back(std::move(bar));
     }

@@ -52,6 +52,10 @@ struct BarModel {
     MassSpread spread;
     std::vector<std::pair<double, BodyPoint>> pointMasses;  // kg at a body point
     bool idealised = false;                                 // typed-in mass replaced by the uniform equivalent
+    // A section bar's A = w·t and elastic section modulus Z = t·w²/6 for
+    // bending in the plane (the extreme fibres at ±w/2); 0 without a section.
+    double area = 0.0;            // m²
+    double sectionModulus = 0.0;  // m³
 };
 
 struct NotABar {

@@ -7,21 +7,25 @@
 namespace clevis {
 namespace {
 
-// Moves a force-plus-couple to act through `point`: the couple changes so the
-// moment about every point stays the same.
-FreeBodyItem throughPoint(FreeBodyItem item, const Vec2& point)
-{
-    item.couple += cross(item.at - point, item.force);
-    item.at = point;
-    return item;
-}
-
 // Where a joint's pair touches: the second body's joint point.
-Vec2 contactPoint(const StepResult& s, const CompiledJoint& j) { return pointPosition(s.q, j.point[1]); }
+Vec2 contactPoint(const Pose& q, const CompiledJoint& j) { return q.point(j.point[1]); }
 
 Vec2 axisOf(const StepResult& s, const CompiledJoint& j)
 {
     return j.type == JointType::Pin ? Vec2::Zero() : Vec2(rotation(bodyAngle(s.q, j.body[0])) * j.axisLocal);
+}
+
+// Where constraint k acts on its body `side`, as a force through a point
+// plus a couple: a joint's (or a driver at a joint's) at the joint's contact
+// point, a driver between two points where it is attached.
+ConstraintAction placedAction(const CompiledMechanism& m, const StepResult& s, const Pose& q, std::size_t k, int side)
+{
+    const ConstraintAction& a = s.actions[side][k];
+    const std::size_t joints = m.joints.size();  // constraints: joints, then drivers
+    const int joint = k < joints ? int(k) : m.drivers[k - joints].joint;
+    if (joint < 0) return a;
+    const Vec2 at = contactPoint(q, m.joints[std::size_t(joint)]);
+    return {at, a.force, a.couple + cross(a.at - at, a.force), a.body};
 }
 
 FreeBodyItem fromAction(const ConstraintAction& a)
@@ -35,13 +39,13 @@ FreeBodyItem fromAction(const ConstraintAction& a)
 
 using ItemsPerBody = std::vector<std::vector<FreeBodyItem>>;
 
-void addJointReactions(const CompiledMechanism& m, const StepResult& s, ItemsPerBody& out)
+void addJointReactions(const CompiledMechanism& m, const StepResult& s, const Pose& q, ItemsPerBody& out)
 {
     for (std::size_t k = 0; k < m.joints.size(); ++k) {
         const CompiledJoint& j = m.joints[k];
         for (int side = 0; side < 2; ++side) {
             if (j.body[side] == kGround) continue;
-            FreeBodyItem item = throughPoint(fromAction(s.actions[side][k]), contactPoint(s, j));
+            FreeBodyItem item = fromAction(placedAction(m, s, q, k, side));
             item.kind = FreeBodyItemKind::JointReaction;
             item.name = j.name;
             item.otherBody = m.bodyName(j.body[1 - side]);
@@ -52,19 +56,18 @@ void addJointReactions(const CompiledMechanism& m, const StepResult& s, ItemsPer
     }
 }
 
-void addDriverActions(const CompiledMechanism& m, const StepResult& s, ItemsPerBody& out)
+void addDriverActions(const CompiledMechanism& m, const StepResult& s, const Pose& q, ItemsPerBody& out)
 {
     for (std::size_t d = 0; d < m.drivers.size(); ++d) {
         const CompiledDriver& driver = m.drivers[d];
-        const std::size_t k = m.joints.size() + d;  // constraints: joints, then drivers
+        const std::size_t k = m.joints.size() + d;
         for (int side = 0; side < 2; ++side) {
             const ConstraintAction& a = s.actions[side][k];
             if (a.body == kGround) continue;
-            FreeBodyItem item = fromAction(a);
+            FreeBodyItem item = fromAction(placedAction(m, s, q, k, side));
             int other = s.actions[1 - side][k].body;
             if (driver.joint >= 0) {
                 const CompiledJoint& j = m.joints[driver.joint];
-                item = throughPoint(item, contactPoint(s, j));
                 item.jointType = j.type;
                 item.axis = axisOf(s, j);
                 other = j.body[1 - side];
@@ -99,9 +102,9 @@ FreeBodyItemKind loadKind(const CompiledMechanism& m, std::string_view source)
     return FreeBodyItemKind::Weight;
 }
 
-void addAppliedLoads(const CompiledMechanism& m, const StepResult& s, ItemsPerBody& out)
+void addAppliedLoads(const CompiledMechanism& m, const StepResult& s, const Pose& q, ItemsPerBody& out)
 {
-    for (const AppliedLoad& l : appliedLoads(m, s.q, s.qd, s.t, s.drivePosition)) {
+    for (const AppliedLoad& l : appliedLoads(m, q, s.qd, s.t, s.drivePosition)) {
         if (l.body == kGround) continue;
         FreeBodyItem item;
         item.kind = loadKind(m, l.source);
@@ -120,10 +123,25 @@ FreeBodyEquation equation(double sum, double kinetic) { return {sum, kinetic, su
 std::vector<std::vector<FreeBodyItem>> freeBodyItems(const CompiledMechanism& m, const StepResult& s)
 {
     ItemsPerBody items(m.bodies.size());
-    addJointReactions(m, s, items);
-    addDriverActions(m, s, items);
-    addAppliedLoads(m, s, items);
+    const Pose q(s.q);
+    addJointReactions(m, s, q, items);
+    addDriverActions(m, s, q, items);
+    addAppliedLoads(m, s, q, items);
     return items;
+}
+
+void bodyLoads(const CompiledMechanism& m, const StepResult& s, const Pose& q, std::vector<std::vector<BodyLoad>>& out)
+{
+    out.resize(m.bodies.size());
+    for (auto& loads : out) loads.clear();
+    for (std::size_t k = 0; k < s.actions[0].size(); ++k)
+        for (int side = 0; side < 2; ++side) {
+            const ConstraintAction a = placedAction(m, s, q, k, side);
+            if (a.body != kGround) out[std::size_t(a.body)].push_back({a.at, a.force, a.couple});
+        }
+    for (const AppliedLoad& l : appliedLoads(m, q, s.qd, s.t, s.drivePosition))
+        if (l.body != kGround && loadKind(m, l.source) != FreeBodyItemKind::Weight)
+            out[std::size_t(l.body)].push_back({l.at, l.force, l.couple});
 }
 
 FreeBodyDiagram freeBodyDiagram(const CompiledMechanism& m, const CycleResult& r, int body, int step)

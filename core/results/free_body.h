@@ -6,6 +6,7 @@
 #pragma once
 
 #include "core/results/results.h"
+#include "core/solver/body_state.h"
 
 #include <string>
 #include <vector>
@@ -52,6 +53,17 @@ struct FreeBodyDiagram {
 // of the diagram: joint reactions, driver actions, then applied loads and
 // weight. One pass over the mechanism serves every body.
 std::vector<std::vector<FreeBodyItem>> freeBodyItems(const CompiledMechanism& m, const StepResult& s);
+
+// The same loads without names or kinds, and without the bodies' own
+// weight (a bar's mass is laid along it instead), for a pass over every step
+// of a cycle: `out[b]` (cleared first, its storage kept) gets what acts on
+// moving body b, in the order of freeBodyItems; `q` is the step's pose (s.q).
+struct BodyLoad {
+    Vec2 at = Vec2::Zero();     // m, global
+    Vec2 force = Vec2::Zero();  // N, global
+    double couple = 0.0;        // N·m, counter-clockwise
+};
+void bodyLoads(const CompiledMechanism& m, const StepResult& s, const Pose& q, std::vector<std::vector<BodyLoad>>& out);
 
 // The diagram of moving body `body` at steps[step]; throws std::out_of_range
 // for ground or an index outside the mechanism or the result.

@@ -26,7 +26,8 @@
 //   F(x) = Σ F_i + ∫ q ds,
 //   M_x(x) = Σ [C_i + (s_i − x)·(F_i·n)] + ∫ [(s − x)·(q·n) + c] ds,
 // and N = −F·e, V = F·n, M = −M_x. The integrals of the linear q are taken
-// in closed form (see internal_loads.cpp).
+// in closed form: between two concentrated loads N and V are quadratic and
+// M cubic in x (see internal_loads.cpp).
 #pragma once
 
 #include "core/results/bar_model.h"
@@ -41,6 +42,69 @@ struct BarStation {
     double axial = 0.0;   // N, tension positive
     double shear = 0.0;   // N
     double moment = 0.0;  // N·m
+};
+
+// A peak along the bar: the value (with its sign) and its station. A value
+// of 0 means none (a bar nowhere in tension, say).
+struct PeakAlong {
+    double value = 0.0;  // N or N·m
+    double s = 0.0;      // m from the first end
+};
+struct BarPeaks {
+    PeakAlong tension, compression, shear, moment;  // largest N > 0, most negative N, largest |V|, |M|
+    // A section bar's normal stress at its extreme fibres, σ = N/A ± M/Z
+    // (M > 0 puts the fibre on the n side in compression): the largest
+    // tension and compression, in Pa, over both fibres.
+    PeakAlong fibreTension, fibreCompression;
+};
+
+// The loads on one bar at one step, moved onto its line and sorted along
+// it, to be evaluated anywhere. One object serves a whole cycle: set() keeps
+// its storage.
+class BarLoads {
+public:
+    // `loads` is what acts on the bar's body but its weight (bodyLoads(m, s,
+    // q)[bar.body]): the mass along the line stands for it; `q` is s's pose.
+    void set(const CompiledMechanism& m, const BarModel& bar, const StepResult& s, const Pose& q,
+             const std::vector<BodyLoad>& loads);
+
+    // The loads at station x: just beyond a concentrated load there (towards
+    // the second end), or just before it when `before`.
+    BarStation at(double x, bool before) const;
+
+    // The exact peaks along the bar at this step: the largest tension and
+    // compression and the largest |V| and |M| (see internal_loads.cpp).
+    BarPeaks peaks() const;
+
+private:
+    struct LineLoad {
+        double s;
+        Vec2 force;
+        double couple;
+    };
+    // Near-side sums as polynomials in the cut's station x:
+    // F(x) = f₀ + f₁x + f₂x² and S(x) = s₀ + s₁x + s₂x² + s₃x³, where
+    // S = Σ [C_i + s_i·(F_i·n)] + ∫ [s·(q·n) + c] ds, so that M_x = S − x·(F·n).
+    struct Sums {
+        Vec2 f[3] = {Vec2::Zero(), Vec2::Zero(), Vec2::Zero()};
+        double s[4] = {0.0, 0.0, 0.0, 0.0};
+    };
+    // N, V and M on one piece between concentrated loads, as polynomials in x.
+    struct Piece {
+        double n[3], v[3], m[4];
+        BarStation at(double x) const;
+    };
+    Vec2 accel(const Vec2& p) const;
+    void add(const Vec2& p, const Vec2& force, double couple);
+    void setDistributed(const MassSpread& spread);
+    Piece piece(double x, const Vec2& force, double moment) const;
+
+    const BarModel* bar_ = nullptr;
+    Vec2 gravity_, a_, g_, aG_, e_, n_;
+    double omega_ = 0.0, alpha_ = 0.0;
+    Sums inside_, beyond_;  // the spread mass's share within it and beyond its end
+    std::vector<LineLoad> loads_;
+    mutable std::vector<double> breaks_;  // scratch for peaks()
 };
 
 // N equally spaced stations (N ≥ 2, both ends included) of `bar` at step

@@ -43,30 +43,46 @@ void switchSource(Mechanism& m, const std::string& name, int source)
         b.inertia = 0.0;
     }
     if (source == Section)
-        b.section = BarSection{0.02, 0.008, *materialDensity("steel"), std::nullopt};  // a 20 × 8 mm steel flat
-    if (source == Plate) b.plate = PlateSection{0.008, *materialDensity("steel"), std::nullopt};  // 8 mm steel plate
+        b.section =
+            BarSection{0.02, 0.008, *materialDensity("steel"), std::nullopt, "steel"};  // a 20 × 8 mm steel flat
+    if (source == Plate)
+        b.plate = PlateSection{0.008, *materialDensity("steel"), std::nullopt, "steel"};  // 8 mm steel plate
 }
 
-// The material list and the density it sets, for a bar or a plate.
-void materialFields(FormBuilder& f, double density, const std::function<double&(Mechanism&)>& target,
-                    const QString& undo)
+// The material a bar or plate is cut from: the built-in ones and those the
+// file defines. Choosing one sets its name and density; typing a density
+// leaves the list ("Other"), so no material's strength stays with it.
+template <class Section>
+void materialFields(FormBuilder& f, const Mechanism& m, const Section& current,
+                    const std::function<Section&(Mechanism&)>& target, const QString& undo)
 {
+    std::vector<MaterialProperties> choices;
+    for (const Material& mat : materials()) choices.push_back(*findMaterial({}, mat.name));
+    for (const MaterialProperties& mat : m.materials) choices.push_back(mat);  // never named like a built-in one
+    const std::optional<MaterialProperties> named = namedMaterial(m.materials, current.material, current.density);
     QStringList names;
-    int current = -1;
-    for (const auto& mat : materials()) {
-        if (mat.density == density) current = names.size();
-        names << QStringLiteral("%1 (%2 kg/m³)").arg(materialLabel(mat.name)).arg(mat.density, 0, 'f', 0);
+    int selected = -1;
+    for (const MaterialProperties& mat : choices) {
+        if (named && named->name == mat.name) selected = names.size();
+        names << QStringLiteral("%1 (%2 kg/m³)").arg(materialLabel(mat.name.c_str())).arg(mat.density, 0, 'f', 0);
     }
     names << QObject::tr("Other (density below)");
-    f.choice("material", QObject::tr("Material"), names, current < 0 ? names.size() - 1 : current, undo,
-             [target](Mechanism& m, int i) {
-                 if (i < int(materials().size())) target(m) = materials()[i].density;
+    f.choice("material", QObject::tr("Material"), names, selected < 0 ? names.size() - 1 : selected, undo,
+             [target, choices](Mechanism& doc, int i) {
+                 if (i >= int(choices.size())) return;
+                 target(doc).material = choices[std::size_t(i)].name;
+                 target(doc).density = choices[std::size_t(i)].density;
              });
-    f.number("density", QObject::tr("Density"), density, plainQuantity(QStringLiteral("kg/m³"), 1), undo,
-             [target](Mechanism& m, double v) { target(m) = v; });
+    f.number("density", QObject::tr("Density"), current.density, plainQuantity(QStringLiteral("kg/m³"), 1), undo,
+             [target](Mechanism& doc, double v) {
+                 if (v == target(doc).density) return;
+                 target(doc).density = v;
+                 target(doc).material.clear();
+             });
 }
 
-void sectionFields(FormBuilder& f, const Body& body, const std::function<Body&(Mechanism&)>& self, const QString& undo)
+void sectionFields(FormBuilder& f, const Mechanism& m, const Body& body, const std::function<Body&(Mechanism&)>& self,
+                   const QString& undo)
 {
     const BarSection& s = *body.section;
     const auto section = [self](Mechanism& m) -> BarSection& { return *self(m).section; };
@@ -74,18 +90,17 @@ void sectionFields(FormBuilder& f, const Body& body, const std::function<Body&(M
              [section](Mechanism& m, double v) { section(m).width = v; });
     f.number("thickness", QObject::tr("Thickness"), s.thickness, lengthQuantity(), undo,
              [section](Mechanism& m, double v) { section(m).thickness = v; });
-    materialFields(
-        f, s.density, [section](Mechanism& m) -> double& { return section(m).density; }, undo);
+    materialFields<BarSection>(f, m, s, section, undo);
     f.info({}, QObject::tr("A solid bar between the body's two farthest pins."));
 }
 
-void plateFields(FormBuilder& f, const Body& body, const std::function<Body&(Mechanism&)>& self, const QString& undo)
+void plateFields(FormBuilder& f, const Mechanism& m, const Body& body, const std::function<Body&(Mechanism&)>& self,
+                 const QString& undo)
 {
     const auto plate = [self](Mechanism& m) -> PlateSection& { return *self(m).plate; };
     f.number("thickness", QObject::tr("Thickness"), body.plate->thickness, lengthQuantity(), undo,
              [plate](Mechanism& m, double v) { plate(m).thickness = v; });
-    materialFields(
-        f, body.plate->density, [plate](Mechanism& m) -> double& { return plate(m).density; }, undo);
+    materialFields<PlateSection>(f, m, *body.plate, plate, undo);
     f.info({}, body.plate->outline ? QObject::tr("A flat plate with the outline given in the file.")
                                    : QObject::tr("A flat plate through the body's pins (the metal round the pins "
                                                  "is not counted: add point masses for it)."));
@@ -165,8 +180,8 @@ void bodyForm(FormBuilder& f, const Mechanism& m, const Body& body)
              {QObject::tr("nothing (massless)"), QObject::tr("typed values"), QObject::tr("bar section"),
               QObject::tr("plate")},
              sourceOf(body), undo, [name](Mechanism& m, int i) { switchSource(m, name, i); });
-    if (sourceOf(body) == Section) sectionFields(f, body, self, undo);
-    if (sourceOf(body) == Plate) plateFields(f, body, self, undo);
+    if (sourceOf(body) == Section) sectionFields(f, m, body, self, undo);
+    if (sourceOf(body) == Plate) plateFields(f, m, body, self, undo);
     if (sourceOf(body) == Typed) typedFields(f, body, self, undo);
     pointMassFields(f, body, self, undo);
     computedFields(f, m, body);
