@@ -1,9 +1,11 @@
 // The property editor across edits: the form is rebuilt after each one, but
 // it stays scrolled where the user was and a renamed part stays selected.
 #include "core/file/mechanism_file.h"
+#include "core/model/materials.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/panels/property_editor.h"
 
+#include <QComboBox>
 #include <QLineEdit>
 #include <QScrollBar>
 #include <QTest>
@@ -58,6 +60,35 @@ TEST_F(PropertyEditorTest, ARenamedPartStaysSelected)
     EXPECT_EQ(doc.selection().name, QStringLiteral("coupler"));
     ASSERT_NE(editor.findChild<QLineEdit*>(QStringLiteral("name")), nullptr);
     EXPECT_EQ(editor.findChild<QLineEdit*>(QStringLiteral("name"))->text(), QStringLiteral("coupler"));
+}
+
+// Choosing a material keeps its name, so its strength reaches the sizing;
+// typing a density of one's own leaves the material behind.
+TEST_F(PropertyEditorTest, TheMaterialChosenIsKeptByName)
+{
+    doc.setSelection({Selection::Kind::Body, QStringLiteral("coupler_plate"), -1});
+    editor.rebuildNow();
+    auto* source = editor.findChild<QComboBox*>(QStringLiteral("massSource"));
+    ASSERT_NE(source, nullptr);
+    source->setCurrentIndex(2);  // bar section
+    emit source->activated(2);
+    QCoreApplication::processEvents();
+    editor.rebuildNow();
+    const auto section = [&] { return *doc.mechanism().bodies[1].section; };
+    EXPECT_EQ(section().material, "steel");
+    auto* material = editor.findChild<QComboBox*>(QStringLiteral("material"));
+    ASSERT_NE(material, nullptr);
+    const int aluminium = material->findText(QStringLiteral("Aluminium alloy"), Qt::MatchStartsWith);
+    ASSERT_GE(aluminium, 0);
+    material->setCurrentIndex(aluminium);
+    emit material->activated(aluminium);
+    QCoreApplication::processEvents();
+    editor.rebuildNow();
+    EXPECT_EQ(section().material, "aluminium_alloy");
+    EXPECT_EQ(section().density, *materialDensity("aluminium_alloy"));
+    type("density", QStringLiteral("2800"));
+    EXPECT_EQ(section().density, 2800.0);
+    EXPECT_EQ(section().material, "");
 }
 
 }  // namespace
