@@ -1,7 +1,7 @@
 #include "app/analyze_command.h"
 
-#include "core/file/atomic_file.h"
-#include "core/file/mechanism_file.h"
+#include "app/solved_file.h"
+
 #include "core/model/model_error.h"
 #include "core/results/cycle_summary.h"
 #include "core/results/results_csv.h"
@@ -18,20 +18,11 @@
 namespace clevis::cli {
 namespace {
 
-// Writes a result file atomically, so a failed run never leaves half a file
-// in place of the last good one; false (with a message naming it and the
-// reason) if it cannot be written.
 bool writeOutput(const std::string& path, const std::function<void(std::ostream&)>& write, std::ostream& err)
 {
     std::ostringstream text;
     write(text);
-    try {
-        writeFileAtomically(path, text.str(), false);
-        return true;
-    } catch (const FileWriteError& e) {
-        err << e.what() << '\n';
-        return false;
-    }
+    return writeOutputFile(path, text.str(), err);
 }
 
 bool writeOutputs(const AnalyzeOptions& options, const CompiledMechanism& m, const CycleResult& r,
@@ -72,16 +63,13 @@ bool trustworthy(const CompiledMechanism& m, const CycleResult& r, const CycleSu
 int runAnalyze(const AnalyzeOptions& options, std::ostream& out, std::ostream& err)
 {
     try {
-        const LoadedMechanism loaded = loadMechanismFile(options.file);
-        for (const auto& w : loaded.warnings) err << options.file << ": warning: " << w << '\n';
-        const CompiledMechanism m = compile(loaded.mechanism);
-        SweepOptions sweep;
-        sweep.steps = options.steps;
-        const CycleResult r = sweepCycle(m, sweep);
+        const SolvedFile solved = solveFile(options.file, options.steps, err);
+        const CompiledMechanism& m = solved.m;
+        const CycleResult& r = solved.r;
         const CycleSummary s = summarize(m, r);
         out << summaryText(m, r, s) << std::flush;
         // Sizing of bars: stresses, utilisation and buckling (core/results/bar_sizing.h).
-        const SizingResult sizing = sizeBars(loaded.mechanism, m, r);
+        const SizingResult sizing = sizeBars(solved.mechanism, m, r);
         out << '\n' << sizingText(m, r, sizing) << std::flush;
         const bool written = writeOutputs(options, m, r, s, sizing, err);
         const bool trusted = trustworthy(m, r, s, options.file, err);

@@ -1,5 +1,7 @@
 #include "app/cli_render_commands.h"
 
+#include "app/solved_file.h"
+
 #include "core/file/mechanism_file.h"
 #include "core/model/model_error.h"
 #include "core/results/cycle_summary.h"
@@ -93,17 +95,16 @@ struct Solved {
 
 std::unique_ptr<Solved> solve(const Parsed& p)
 {
-    const LoadedMechanism loaded = loadMechanismFile(p.file);
-    for (const auto& w : loaded.warnings) std::cerr << p.file << ": warning: " << w << '\n';
-    auto out = std::make_unique<Solved>();
-    out->m = compile(loaded.mechanism);
-    SweepOptions sweep;
+    int steps = 0;
     if (p.options.count("--steps")) {
-        const double steps = number(p, "--steps");
-        if (steps < 1 || steps != std::floor(steps)) throw Usage("--steps must be a whole number of at least 1");
-        sweep.steps = int(steps);
+        const double typed = number(p, "--steps");
+        if (typed < 1 || typed != std::floor(typed)) throw Usage("--steps must be a whole number of at least 1");
+        steps = int(typed);
     }
-    out->r = sweepCycle(out->m, sweep);
+    SolvedFile solved = solveFile(p.file, steps, std::cerr);
+    auto out = std::make_unique<Solved>();
+    out->m = std::move(solved.m);
+    out->r = std::move(solved.r);
     if (out->r.steps.empty()) throw AnalysisError("no position of the cycle could be solved", {});
     out->s = summarize(out->m, out->r);
     return out;

@@ -1,7 +1,7 @@
 #include "app/internal_loads_command.h"
 
-#include "core/file/atomic_file.h"
-#include "core/file/mechanism_file.h"
+#include "app/solved_file.h"
+
 #include "core/model/model_error.h"
 #include "core/results/bar_envelope.h"
 #include "core/results/cycle_summary.h"
@@ -180,30 +180,16 @@ void printText(std::ostream& out, const CompiledMechanism& m, const CycleResult&
     printPeak(out, m, r, "largest |M|", env.moment, "N·m");
 }
 
-bool writeOutput(const std::string& path, const std::string& text, std::ostream& err)
-{
-    try {
-        writeFileAtomically(path, text, false);
-        return true;
-    } catch (const FileWriteError& e) {
-        err << e.what() << '\n';
-        return false;
-    }
-}
-
 }  // namespace
 
 int runInternalLoads(const InternalLoadsOptions& options, std::ostream& out, std::ostream& err)
 {
     try {
-        const LoadedMechanism loaded = loadMechanismFile(options.file);
-        for (const auto& w : loaded.warnings) err << options.file << ": warning: " << w << '\n';
-        const CompiledMechanism m = compile(loaded.mechanism);
-        const BarList bars = findBars(loaded.mechanism, m);
+        const SolvedFile solved = solveFile(options.file, options.steps, err);
+        const CompiledMechanism& m = solved.m;
+        const CycleResult& r = solved.r;
+        const BarList bars = findBars(solved.mechanism, m);
         const BarModel& bar = chooseBar(bars, options.body);
-        SweepOptions sweep;
-        sweep.steps = options.steps;
-        const CycleResult r = sweepCycle(m, sweep);
         if (r.steps.empty()) throw AnalysisError("no position of the cycle could be solved", {});
         const StepResult step = chooseStep(options.at, m, r);
         const auto stations =
@@ -213,11 +199,11 @@ int runInternalLoads(const InternalLoadsOptions& options, std::ostream& out, std
         out << std::flush;
         bool ok = true;
         if (!options.jsonOut.empty())
-            ok &= writeOutput(options.jsonOut, toJson(m, r, bar, step, stations, env).dump(2) + "\n", err);
+            ok &= writeOutputFile(options.jsonOut, toJson(m, r, bar, step, stations, env).dump(2) + "\n", err);
         if (!options.csvOut.empty()) {
             std::ostringstream csv;
             writeCsv(csv, stations);
-            ok &= writeOutput(options.csvOut, csv.str(), err);
+            ok &= writeOutputFile(options.csvOut, csv.str(), err);
         }
         for (const auto& w : r.warnings) err << options.file << ": warning: " << w.message << '\n';
         if (!r.complete || step.nearSingular) {
