@@ -25,6 +25,7 @@ Usage:
 
 Commands:
   analyze    solve the mechanism in FILE over its cycle and print a summary
+             and the sizing of every bar
   fbd        draw one body's free-body diagram at one position (with numbers):
              --at-deg A  at the first rotary driver's angle A (degrees, modulo
                          360°), --at-t T at time T s, or
@@ -49,7 +50,14 @@ const char* const kAnalyzeHelp = R"(Usage: clevis-cli analyze FILE [--steps N] [
 Solves the mechanism in FILE (a Clevis mechanism file, docs/file-format.md)
 over its whole cycle and prints a summary: peak and RMS joint loads, driver
 effort, power and work, the load on the frame, transmission angles and an
-energy-balance check.
+energy-balance check. A value from a position near a toggle is shown apart,
+marked, with the part that locks named. Then, for every bar: the largest
+axial force, shear force and bending moment, the fibre stresses, the
+utilisation against the allowable the file gives, and the Euler loads.
+Utilisation is a figure to compare, not a verdict that a part is safe: rigid
+bodies and ideal joints; no service or dynamic factors, fatigue or stress
+concentrations. Check each part under the codes that apply and have the
+design reviewed by a licensed engineer.
 
 Options:
   --steps N    intervals over the cycle, N >= 1 (N+1 positions are solved);
