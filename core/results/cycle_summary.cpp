@@ -176,7 +176,8 @@ void nameLockingPart(const CompiledMechanism& m, const StepResult& step, NearTog
     Eigen::SparseMatrix<double> sparse(system.rows(), system.coordinates());
     sparse.setFromTriplets(entries.begin(), entries.end());
     const Eigen::MatrixXd jacobian(sparse);
-    const Eigen::JacobiSVD<Eigen::MatrixXd> svd(jacobian, Eigen::ComputeFullV);
+    // Divide and conquer: the same vectors as one-sided Jacobi, far faster on large machines.
+    const Eigen::BDCSVD<Eigen::MatrixXd> svd(jacobian, Eigen::ComputeFullV);
     const Eigen::VectorXd v = svd.matrixV().col(std::min(jacobian.rows(), jacobian.cols()) - 1);
     std::vector<std::pair<double, int>> share;
     for (std::size_t b = 0; b < m.bodies.size(); ++b)

@@ -23,6 +23,9 @@ struct PaintContext {
     // Labels are placed clear of each other, of the pins and of the bars, and
     // inside the canvas; paintSketch paints them last, over everything.
     LabelPlacer& labels;
+    // Each body's outline (bodyOutline), in the order of mechanism.bodies;
+    // paintSketch finds them once for all the painters.
+    std::vector<std::vector<Vec2>> outlines{};
 
     // A part's label beside `anchor`, pushed away from it along `push`.
     void label(const QString& text, QPointF anchor, QPointF push, const QColor& colour);

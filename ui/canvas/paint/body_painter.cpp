@@ -2,7 +2,6 @@
 #include "render/palette.h"
 #include "ui/canvas/sketch_painter.h"
 #include "ui/canvas/sketch_style.h"
-#include "ui/document/sketch_geometry.h"
 
 #include <QPainterPath>
 
@@ -39,8 +38,9 @@ void paintBodies(PaintContext& c)
 {
     QPainter& p = c.painter;
     p.save();
-    for (const auto& body : c.mechanism.bodies) {
-        const std::vector<Vec2> outline = bodyOutline(c.mechanism, body.name);
+    for (std::size_t b = 0; b < c.mechanism.bodies.size(); ++b) {
+        const Body& body = c.mechanism.bodies[b];
+        const std::vector<Vec2>& outline = c.outlines[b];
         if (outline.empty()) continue;
         const QPainterPath shape = bodyShape(outline, c.view);
         p.setBrush(Qt::NoBrush);

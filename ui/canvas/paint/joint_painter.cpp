@@ -122,10 +122,11 @@ void paintJoints(PaintContext& c)
         }
         switch (j.type) {
         case JointType::Pin: {
-            const bool anyGround = std::any_of(stack.begin(), stack.end(), [&](int i) {
-                return m.joints[i].bodies[0] == kGroundName || m.joints[i].bodies[1] == kGroundName;
-            });
-            if (ground || anyGround) drawGroundBracket(p, at);
+            // Any of the pins there on the frame puts the bracket under them all.
+            if (std::any_of(stack.begin(), stack.end(), [&](int i) {
+                    return m.joints[i].bodies[0] == kGroundName || m.joints[i].bodies[1] == kGroundName;
+                }))
+                drawGroundBracket(p, at);
             drawPinRing(p, at, std::any_of(stack.begin(), stack.end(), [&](int i) { return open(m.joints[i]); }));
             drawExtraBodies(p, at, int(bodiesOf(m, stack).size()) - 2);
             break;

@@ -1,7 +1,6 @@
 #include "render/drawing_symbols.h"
 #include "render/palette.h"
 #include "ui/canvas/sketch_painter.h"
-#include "ui/document/sketch_geometry.h"
 
 #include <algorithm>
 #include <limits>
@@ -30,12 +29,11 @@ Vec2 nearestOnOutline(const std::vector<Vec2>& outline, const Vec2& p)
 
 // A centre of mass typed in stays where it was typed when the pins move. When
 // it has been left well away from its part, a dashed tether and a note say so.
-void paintTypedCentre(PaintContext& c, const Body& body)
+void paintTypedCentre(PaintContext& c, const Body& body, const std::vector<Vec2>& outline)
 {
     QPainter& p = c.painter;
     const QPointF at = c.view.toScreen(*body.cg);
     drawCentreOfMass(p, at, 5.5, palette::ink(), palette::paper(), 1.2);
-    const std::vector<Vec2> outline = bodyOutline(c.mechanism, body.name);
     if (outline.empty()) return;
     const QPointF near = c.view.toScreen(nearestOnOutline(outline, *body.cg));
     const QPointF gap = at - near;
@@ -51,8 +49,9 @@ void paintMasses(PaintContext& c)
 {
     QPainter& p = c.painter;
     p.save();
-    for (const auto& body : c.mechanism.bodies) {
-        if (body.cg && body.mass && !body.section && !body.plate) paintTypedCentre(c, body);
+    for (std::size_t b = 0; b < c.mechanism.bodies.size(); ++b) {
+        const Body& body = c.mechanism.bodies[b];
+        if (body.cg && body.mass && !body.section && !body.plate) paintTypedCentre(c, body, c.outlines[b]);
         for (const auto& pm : body.pointMasses) {
             const QPointF at = c.view.toScreen(pm.at);
             p.setPen(QPen(palette::ink(), 1.2));

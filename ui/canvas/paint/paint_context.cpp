@@ -59,8 +59,7 @@ void addObstacles(PaintContext& c)
         const double r = style::kMotorRadius;
         c.labels.addObstacle(QRectF(at - QPointF(r, r), at + QPointF(r, r)));
     }
-    for (const Body& b : c.mechanism.bodies) {
-        const std::vector<Vec2> outline = bodyOutline(c.mechanism, b.name);
+    for (const std::vector<Vec2>& outline : c.outlines) {
         if (outline.size() < 2) continue;
         const std::size_t edges = outline.size() == 2 ? 1 : outline.size();
         for (std::size_t i = 0; i < edges; ++i)
@@ -73,6 +72,8 @@ void addObstacles(PaintContext& c)
 
 void paintSketch(PaintContext& c)
 {
+    c.outlines.clear();
+    for (const Body& b : c.mechanism.bodies) c.outlines.push_back(bodyOutline(c.mechanism, b.name));
     addObstacles(c);
     paintBodies(c);
     paintLoads(c);
