@@ -12,35 +12,19 @@
 #include "core/solver/analysis_error.h"
 #include "core/solver/cycle_sweep.h"
 
-#include <functional>
-#include <sstream>
-
 namespace clevis::cli {
 namespace {
-
-bool writeOutput(const std::string& path, const std::function<void(std::ostream&)>& write, std::ostream& err)
-{
-    std::ostringstream text;
-    write(text);
-    return writeOutputFile(path, text.str(), err);
-}
 
 bool writeOutputs(const AnalyzeOptions& options, const CompiledMechanism& m, const CycleResult& r,
                   const CycleSummary& s, const SizingResult& sizing, std::ostream& err)
 {
     bool ok = true;
     if (!options.jsonOut.empty())
-        ok &= writeOutput(
+        ok &= writeOutputFile(
             options.jsonOut,
-            [&](std::ostream& f) {
-                nlohmann::json results = resultsToJson(m, r, s);
-                results["sizing"] = sizingToJson(m, r, sizing);  // sizing of bars (docs/results-format.md)
-                f << results.dump(2) << '\n';
-            },
+            resultsJsonText(m, r, s, {{"sizing", sizingToJson(m, r, sizing)}}),  // docs/results-format.md
             err);
-    if (!options.csvOut.empty())
-        ok &= writeOutput(
-            options.csvOut, [&](std::ostream& f) { writeResultsCsv(f, m, r); }, err);
+    if (!options.csvOut.empty()) ok &= writeOutputFile(options.csvOut, resultsCsvText(m, r), err);
     return ok;
 }
 

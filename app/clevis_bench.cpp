@@ -6,10 +6,13 @@
 // LU path against the band path (jacobian_factor.h). The mobility check
 // that starts every cycle is also timed on its own, since its dense rank
 // tests grow with the cube of the size. The 200-body chain is timed again
-// with the internal loads and envelopes of every bar added.
+// with the internal loads and envelopes of every bar added, and its results
+// written as the --json and --csv files are.
 #include "app/heap_reuse.h"
 #include "core/file/mechanism_file.h"
 #include "core/results/bar_envelope.h"
+#include "core/results/results_csv.h"
+#include "core/results/results_json.h"
 #include "core/solver/cycle_sweep.h"
 #include "core/solver/mobility_check.h"
 #include "core/solver/step_solver.h"
@@ -105,6 +108,26 @@ void FourBarChainMobilityCheck(benchmark::State& state)
     }
 }
 BENCHMARK(FourBarChainMobilityCheck)->ArgName("bodies")->Arg(10)->Arg(50)->Arg(200)->Unit(benchmark::kMillisecond);
+
+// Writing the results of the 200-body chain's cycle (about 25 MB of JSON):
+// bytes_per_second is the writing speed.
+void ResultsFileText(benchmark::State& state, bool json)
+{
+    const clevis::CompiledMechanism m = clevis::compile(clevis::test::fourBarChain(200));
+    clevis::SweepOptions options;
+    options.steps = kSteps;
+    const clevis::CycleResult result = clevis::sweepCycle(m, options);
+    const clevis::CycleSummary summary = clevis::summarize(m, result);
+    std::size_t bytes = 0;
+    for (auto _ : state) {
+        const std::string text = json ? clevis::resultsJsonText(m, result, summary) : clevis::resultsCsvText(m, result);
+        bytes += text.size();
+        benchmark::DoNotOptimize(text.data());
+    }
+    state.SetBytesProcessed(std::int64_t(bytes));
+}
+BENCHMARK_CAPTURE(ResultsFileText, json, true)->Unit(benchmark::kMillisecond);
+BENCHMARK_CAPTURE(ResultsFileText, csv, false)->Unit(benchmark::kMillisecond);
 
 }  // namespace
 

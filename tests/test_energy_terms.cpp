@@ -103,7 +103,7 @@ TEST(EnergyTerms, TextAndJsonCarryThePutInAndTakenBackWork)
     EXPECT_NE(text.find(significant(s.drivers[0].workIn) + " J"), std::string::npos) << text;
     EXPECT_NE(text.find(significant(s.drivers[0].workOut) + " J"), std::string::npos) << text;
     EXPECT_NE(text.find("Kinetic energy gained           ≈ 0 J"), std::string::npos) << text;
-    const nlohmann::json json = resultsToJson(m, r, s)["summary"];
+    const nlohmann::json json = summaryToJson(m, r, s);
     EXPECT_DOUBLE_EQ(json["drivers"]["motor"]["work_in_j"].get<double>(), s.drivers[0].workIn);
     EXPECT_DOUBLE_EQ(json["drivers"]["motor"]["work_out_j"].get<double>(), s.drivers[0].workOut);
     EXPECT_DOUBLE_EQ(json["energy_balance"]["throughput_j"].get<double>(), s.energy.throughput);

@@ -127,7 +127,7 @@ TEST(FlaggedNumbers, TextAndJsonMarkTheFlaggedValueAndNameThePart)
     const std::string lockUp = significant(x.s.joints[joint(x, "B")].peak.flagged.value) + " N " + kNearToggleMark;
     EXPECT_NE(text.find(lockUp), std::string::npos) << lockUp << "\n" << text;
 
-    const nlohmann::json json = resultsToJson(x.m, x.r, x.s)["summary"];
+    const nlohmann::json json = summaryToJson(x.m, x.r, x.s);
     const auto& b = json["joints"]["B"];
     EXPECT_EQ(b["peak_near_singular"], false);
     ASSERT_TRUE(b["peak_near_toggle"].is_object());

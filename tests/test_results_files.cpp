@@ -1,6 +1,7 @@
 // The JSON and CSV result files: their shape, units and the bearing-frame
 // reactions, on a link whose pin load is known in closed form.
 #include "core/results/cycle_summary.h"
+#include "core/results/json_writer.h"
 #include "core/results/results_csv.h"
 #include "core/results/results_json.h"
 #include "core/solver/compiled_mechanism.h"
@@ -10,6 +11,8 @@
 
 #include <gtest/gtest.h>
 
+#include <cmath>
+#include <limits>
 #include <sstream>
 
 using namespace clevis;
@@ -53,7 +56,7 @@ std::vector<std::string> csvFields(const std::string& line)
 TEST(ResultsJson, HasTheDocumentedShape)
 {
     const Solved x = solve(spinningLink(24));
-    const json j = resultsToJson(x.m, x.r, x.s);
+    const json j = json::parse(resultsJsonText(x.m, x.r, x.s));
     for (const char* key : {"steps", "summary", "warnings", "complete", "duration_s", "planned_steps"})
         EXPECT_TRUE(j.contains(key)) << key;
     EXPECT_EQ(j["steps"].size(), 25u);
@@ -98,7 +101,7 @@ TEST(ResultsJson, HasTheDocumentedShape)
 TEST(ResultsJson, BearingReactionsAreInEachBodysFrame)
 {
     const Solved x = solve(spinningLink(24));
-    const json j = resultsToJson(x.m, x.r, x.s);
+    const json j = json::parse(resultsJsonText(x.m, x.r, x.s));
     const double f = kMass * kOmega * kOmega * kArm;
     for (const json& step : j["steps"]) {
         const double theta = kOmega * step["t"].get<double>();
@@ -118,7 +121,7 @@ TEST(ResultsJson, AMissingStepIsNull)
     mech.loads = {TorqueLoad{"brake", "arm, left", -2.0, std::nullopt}};
     const Solved x = solve(mech);
     ASSERT_EQ(x.s.drivers[0].peakRegenerative.step, -1);
-    const json j = resultsToJson(x.m, x.r, x.s);
+    const json j = json::parse(resultsJsonText(x.m, x.r, x.s));
     EXPECT_TRUE(j["summary"]["drivers"]["motor"]["peak_regen_step"].is_null());
     EXPECT_EQ(j["summary"]["drivers"]["motor"]["peak_regen_w"], 0.0);
     EXPECT_TRUE(j["summary"]["drivers"]["motor"]["peak_power_step"].is_number_integer());
@@ -127,9 +130,7 @@ TEST(ResultsJson, AMissingStepIsNull)
 TEST(ResultsCsv, HeaderCarriesUnitsAndEveryRowMatchesIt)
 {
     const Solved x = solve(spinningLink(24));
-    std::ostringstream out;
-    writeResultsCsv(out, x.m, x.r);
-    std::istringstream in(out.str());
+    std::istringstream in(resultsCsvText(x.m, x.r));
     std::string line;
     std::getline(in, line);
     EXPECT_EQ(line.rfind("t [s],motor [deg],\"arm, left.x [m]\",", 0), 0u) << line;
@@ -148,9 +149,7 @@ TEST(ResultsCsv, HeaderCarriesUnitsAndEveryRowMatchesIt)
 TEST(ResultsCsv, ValuesAreTheStepResultsInDisplayUnits)
 {
     const Solved x = solve(spinningLink(8));
-    std::ostringstream out;
-    writeResultsCsv(out, x.m, x.r);
-    std::istringstream in(out.str());
+    std::istringstream in(resultsCsvText(x.m, x.r));
     std::string line;
     std::getline(in, line);
     const std::vector<std::string> header = csvFields(line);
@@ -160,12 +159,87 @@ TEST(ResultsCsv, ValuesAreTheStepResultsInDisplayUnits)
     for (const StepResult& s : x.r.steps) {
         std::getline(in, line);
         const std::vector<std::string> v = csvFields(line);
-        EXPECT_NEAR(std::stod(v[column("t [s]")]), s.t, 1e-11);
-        EXPECT_NEAR(std::stod(v[column("motor [deg]")]), radToDeg(s.drivePosition[0]), 1e-9);
-        EXPECT_NEAR(std::stod(v[column("arm, left.angle [deg]")]), radToDeg(s.q[2]), 1e-9);
-        EXPECT_NEAR(std::stod(v[column("O.fy [N]")]), s.joints[0].force.y(), 1e-9);
+        // Shortest round-trip formatting: every number reads back bit for bit.
+        EXPECT_EQ(std::stod(v[column("t [s]")]), s.t);
+        EXPECT_EQ(std::stod(v[column("motor [deg]")]), radToDeg(s.drivePosition[0]));
+        EXPECT_EQ(std::stod(v[column("arm, left.angle [deg]")]), radToDeg(s.q[2]));
+        EXPECT_EQ(std::stod(v[column("arm, left.alpha [rad/s²]")]), s.qdd[2]);
+        EXPECT_EQ(std::stod(v[column("O.fx [N]")]), s.joints[0].force.x());
+        EXPECT_EQ(std::stod(v[column("O.fy [N]")]), s.joints[0].force.y());
         EXPECT_EQ(v[column("near_singular")], s.nearSingular ? "1" : "0");
     }
+}
+
+// Shortest round-trip formatting: every number of every step reads back bit
+// for bit, on a link whose values are not round (gravity off the axes).
+TEST(ResultsJson, EveryNumberReadsBackBitForBit)
+{
+    Mechanism mech = spinningLink(36);
+    mech.gravity = Vec2(0.3, -9.80665);
+    const Solved x = solve(mech);
+    const json j = json::parse(resultsJsonText(x.m, x.r, x.s));
+    ASSERT_EQ(j["steps"].size(), x.r.steps.size());
+    for (std::size_t k = 0; k < x.r.steps.size(); ++k) {
+        const StepResult& s = x.r.steps[k];
+        const json& step = j["steps"][k];
+        EXPECT_EQ(step["t"].get<double>(), s.t);
+        const json& body = step["bodies"]["arm, left"];
+        EXPECT_EQ(body["x"].get<double>(), s.q[0]);
+        EXPECT_EQ(body["y"].get<double>(), s.q[1]);
+        EXPECT_EQ(body["angle_deg"].get<double>(), radToDeg(s.q[2]));
+        EXPECT_EQ(body["vx"].get<double>(), s.qd[0]);
+        EXPECT_EQ(body["alpha"].get<double>(), s.qdd[2]);
+        EXPECT_EQ(step["joints"]["O"]["fx"].get<double>(), s.joints[0].force.x());
+        EXPECT_EQ(step["joints"]["O"]["fy"].get<double>(), s.joints[0].force.y());
+        EXPECT_EQ(step["drivers"]["motor"]["effort"].get<double>(), s.effort[0]);
+        EXPECT_EQ(step["ground"]["moment"].get<double>(), s.groundMoment);
+        EXPECT_EQ(step["energy"]["gravity"].get<double>(), s.gravityPotential);
+    }
+}
+
+// The streamed text is laid out as a document tree's two-space dump, so a
+// small tree written through it reads the same; escapes and non-finite
+// numbers follow RFC 8259 (NaN has no JSON form: null).
+TEST(JsonWriter, WritesWhatATreeDumpWrites)
+{
+    const json tree = {{"a", {1, 2.5, -0.125, 1e-300}},
+                       {"empty", json::object()},
+                       {"none", json::array()},
+                       {"nested", {{"name", "quote \" back\\ tab\t nl\n ctl\x01 µ"}, {"ok", true}, {"n", nullptr}}},
+                       {"big", 123456789012LL}};
+    std::string text;
+    JsonWriter w(text);
+    w.value(tree);
+    EXPECT_EQ(json::parse(text), tree);
+    EXPECT_EQ(text, tree.dump(2));
+
+    std::string special;
+    JsonWriter s(special);
+    s.beginArray();
+    s.value(std::nan(""));
+    s.value(-std::numeric_limits<double>::infinity());
+    s.value(0.1);
+    s.endArray();
+    EXPECT_EQ(special, "[\n  null,\n  null,\n  0.1\n]");
+
+    // A compact container is one line, whatever it holds; its neighbours are not.
+    std::string mixed;
+    JsonWriter m(mixed);
+    m.beginObject();
+    m.key("steps").beginArray();
+    m.beginObject(true);
+    m.field("t", 0.5);
+    m.key("xy").beginArray();
+    m.value(1);
+    m.value(2);
+    m.endArray();
+    m.endObject();
+    m.beginObject(true);
+    m.endObject();
+    m.endArray();
+    m.field("n", 3);
+    m.endObject();
+    EXPECT_EQ(mixed, "{\n  \"steps\": [\n    {\"t\":0.5,\"xy\":[1,2]},\n    {}\n  ],\n  \"n\": 3\n}");
 }
 
 }  // namespace

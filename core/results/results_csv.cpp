@@ -2,8 +2,7 @@
 
 #include "core/results/drive_units.h"
 
-#include <locale>
-#include <sstream>
+#include <charconv>
 #include <string>
 #include <vector>
 
@@ -49,15 +48,16 @@ std::vector<std::string> header(const CompiledMechanism& m, const CycleResult& r
     return h;
 }
 
-void writeRow(std::ostream& out, const std::vector<double>& values, bool nearSingular)
+// Shortest form that reads back to the same double.
+void appendNumber(std::string& out, double v)
 {
-    for (const double v : values) out << v << ',';
-    out << (nearSingular ? 1 : 0) << '\n';
+    char text[32];
+    out.append(text, std::to_chars(text, text + sizeof text, v).ptr);
 }
 
-std::vector<double> rowValues(const CompiledMechanism& m, const StepResult& s)
+void rowValues(std::vector<double>& v, const CompiledMechanism& m, const StepResult& s)
 {
-    std::vector<double> v{s.t};
+    v.assign(1, s.t);
     for (std::size_t d = 0; d < m.drivers.size(); ++d)
         v.push_back(driveDisplayValue(m.drivers[d].type, s.drivePosition[d]));
     for (Eigen::Index i = 0; i < s.q.size(); i += 3) {
@@ -70,22 +70,27 @@ std::vector<double> rowValues(const CompiledMechanism& m, const StepResult& s)
     v.insert(v.end(),
              {s.groundForce.x(), s.groundForce.y(), s.groundMoment, s.kinetic, s.gravityPotential, s.springPotential});
     v.insert(v.end(), s.transmissionDeg.begin(), s.transmissionDeg.end());
-    return v;
 }
 
 }  // namespace
 
-void writeResultsCsv(std::ostream& out, const CompiledMechanism& m, const CycleResult& r)
+std::string resultsCsvText(const CompiledMechanism& m, const CycleResult& r)
 {
-    // Built in the classic locale so the decimal point is always '.'.
-    std::ostringstream text;
-    text.imbue(std::locale::classic());
-    text.precision(12);
+    std::string text;
     const std::vector<std::string> h = header(m, r);
-    for (std::size_t i = 0; i < h.size(); ++i) text << (i ? "," : "") << csvField(h[i]);
-    text << '\n';
-    for (const auto& s : r.steps) writeRow(text, rowValues(m, s), s.nearSingular);
-    out << text.str();
+    for (std::size_t i = 0; i < h.size(); ++i) text += (i ? "," : "") + csvField(h[i]);
+    text += '\n';
+    text.reserve(text.size() * (r.steps.size() + 1));
+    std::vector<double> row;
+    for (const auto& s : r.steps) {
+        rowValues(row, m, s);
+        for (const double v : row) {
+            appendNumber(text, v);
+            text += ',';
+        }
+        text += s.nearSingular ? "1\n" : "0\n";
+    }
+    return text;
 }
 
 }  // namespace clevis

@@ -5,10 +5,12 @@
 
 #include "core/results/results.h"
 
-#include <ostream>
+#include <string>
 
 namespace clevis {
 
-void writeResultsCsv(std::ostream& out, const CompiledMechanism& m, const CycleResult& r);
+// Numbers in the shortest form that reads back to the same double, with a
+// '.' whatever the locale.
+std::string resultsCsvText(const CompiledMechanism& m, const CycleResult& r);
 
 }  // namespace clevis

@@ -1,14 +1,13 @@
 #include "core/results/results_json.h"
 
 #include "core/results/drive_units.h"
+#include "core/results/json_writer.h"
 #include "core/solver/body_state.h"
 
 namespace clevis {
 namespace {
 
 using nlohmann::json;
-
-json xy(const Vec2& v) { return {{"fx", v.x()}, {"fy", v.y()}}; }
 
 // -1 (no such step) becomes null.
 json stepIndex(int step) { return step < 0 ? json(nullptr) : json(step); }
@@ -21,50 +20,102 @@ json drivePositions(const CompiledMechanism& m, const StepResult& s)
     return out;
 }
 
-json bodyState(const StepResult& s, int b)
-{
-    const int i = coordinateIndex(b, 0);
-    return {{"x", s.q[i]},    {"y", s.q[i + 1]},    {"angle_deg", radToDeg(s.q[i + 2])},
-            {"vx", s.qd[i]},  {"vy", s.qd[i + 1]},  {"omega", s.qd[i + 2]},
-            {"ax", s.qdd[i]}, {"ay", s.qdd[i + 1]}, {"alpha", s.qdd[i + 2]}};
-}
+// The steps are streamed: one object per step on a line of its own, in the
+// order of docs/results-format.md, bodies and joints in the file's order.
+class StepWriter {
+public:
+    StepWriter(JsonWriter& w, const CompiledMechanism& m, const CycleResult& r) : w_(w), m_(m), r_(r) {}
 
-// The reaction as a bearing fixed in each body feels it: the force on the
-// second body in its own frame, the opposite force on the first body in the
-// first body's frame (ground's frame is the global one).
-json bearingForces(const CompiledJoint& j, const StepResult& s, const Reaction& reaction)
-{
-    const auto inFrame = [&](int body, const Vec2& global) -> Vec2 { return rotation(-bodyAngle(s.q, body)) * global; };
-    return {{"first", xy(inFrame(j.body[0], -reaction.force))}, {"second", xy(inFrame(j.body[1], reaction.force))}};
-}
-
-json stepToJson(const CompiledMechanism& m, const CycleResult& r, const StepResult& s)
-{
-    json bodies = json::object(), joints = json::object(), drivers = json::object(), transmission = json::object();
-    for (std::size_t b = 0; b < m.bodies.size(); ++b) bodies[m.bodies[b].name] = bodyState(s, int(b));
-    for (std::size_t j = 0; j < m.joints.size(); ++j) {
-        const Reaction& reaction = s.joints[j];
-        json entry = xy(reaction.force);
-        entry["moment"] = reaction.moment;
-        entry["local"] = bearingForces(m.joints[j], s, reaction);
-        joints[m.joints[j].name] = entry;
+    void write(const StepResult& s)
+    {
+        w_.beginObject(true);
+        w_.field("t", s.t);
+        w_.key("drive").beginObject();
+        for (std::size_t d = 0; d < m_.drivers.size(); ++d)
+            w_.field(m_.drivers[d].name, driveDisplayValue(m_.drivers[d].type, s.drivePosition[d]));
+        w_.endObject();
+        w_.key("bodies").beginObject();
+        for (std::size_t b = 0; b < m_.bodies.size(); ++b) body(s, int(b));
+        w_.endObject();
+        w_.key("joints").beginObject();
+        for (std::size_t j = 0; j < m_.joints.size(); ++j) joint(s, int(j));
+        w_.endObject();
+        w_.key("drivers").beginObject();
+        for (std::size_t d = 0; d < m_.drivers.size(); ++d) {
+            w_.key(m_.drivers[d].name).beginObject();
+            w_.field("effort", s.effort[d]);
+            w_.field("power", s.power[d]);
+            w_.endObject();
+        }
+        w_.endObject();
+        w_.key("ground").beginObject();
+        force(s.groundForce);
+        w_.field("moment", s.groundMoment);
+        w_.endObject();
+        w_.key("energy").beginObject();
+        w_.field("kinetic", s.kinetic);
+        w_.field("gravity", s.gravityPotential);
+        w_.field("spring", s.springPotential);
+        w_.endObject();
+        w_.key("transmission_deg").beginObject();
+        for (std::size_t k = 0; k < r_.transmissionPins.size(); ++k)
+            w_.field(m_.joints[r_.transmissionPins[k].joint].name, s.transmissionDeg[k]);
+        w_.endObject();
+        w_.field("near_singular", s.nearSingular);
+        w_.endObject();
     }
-    for (std::size_t d = 0; d < m.drivers.size(); ++d)
-        drivers[m.drivers[d].name] = {{"effort", s.effort[d]}, {"power", s.power[d]}};
-    for (std::size_t k = 0; k < r.transmissionPins.size(); ++k)
-        transmission[m.joints[r.transmissionPins[k].joint].name] = s.transmissionDeg[k];
-    json ground = xy(s.groundForce);
-    ground["moment"] = s.groundMoment;
-    return {{"t", s.t},
-            {"drive", drivePositions(m, s)},
-            {"bodies", bodies},
-            {"joints", joints},
-            {"drivers", drivers},
-            {"ground", ground},
-            {"energy", {{"kinetic", s.kinetic}, {"gravity", s.gravityPotential}, {"spring", s.springPotential}}},
-            {"transmission_deg", transmission},
-            {"near_singular", s.nearSingular}};
-}
+
+private:
+    void force(const Vec2& f)
+    {
+        w_.field("fx", f.x());
+        w_.field("fy", f.y());
+    }
+
+    void body(const StepResult& s, int b)
+    {
+        const int i = coordinateIndex(b, 0);
+        w_.key(m_.bodies[b].name).beginObject();
+        w_.field("x", s.q[i]);
+        w_.field("y", s.q[i + 1]);
+        w_.field("angle_deg", radToDeg(s.q[i + 2]));
+        w_.field("vx", s.qd[i]);
+        w_.field("vy", s.qd[i + 1]);
+        w_.field("omega", s.qd[i + 2]);
+        w_.field("ax", s.qdd[i]);
+        w_.field("ay", s.qdd[i + 1]);
+        w_.field("alpha", s.qdd[i + 2]);
+        w_.endObject();
+    }
+
+    // With the reaction as a bearing fixed in each body feels it: the force
+    // on the second body in its own frame, the opposite force on the first
+    // body in the first body's frame (ground's frame is the global one).
+    void joint(const StepResult& s, int j)
+    {
+        const CompiledJoint& cj = m_.joints[j];
+        const Reaction& reaction = s.joints[j];
+        const auto inFrame = [&](int body, const Vec2& global) -> Vec2 {
+            return rotation(-bodyAngle(s.q, body)) * global;
+        };
+        w_.key(cj.name).beginObject();
+        force(reaction.force);
+        w_.field("moment", reaction.moment);
+        w_.key("local").beginObject();
+        w_.key("first").beginObject();
+        force(inFrame(cj.body[0], -reaction.force));
+        w_.endObject();
+        w_.key("second").beginObject();
+        force(inFrame(cj.body[1], reaction.force));
+        w_.endObject();
+        w_.endObject();
+        w_.endObject();
+    }
+
+    JsonWriter& w_;
+    const CompiledMechanism& m_;
+    const CycleResult& r_;
+};
 
 // `<key>_near_singular`: the peak's step is flagged; `<key>_near_toggle`: a
 // larger value at a flagged step, kept apart ({value, step}, or null).
@@ -136,6 +187,8 @@ json toggleJson(const CompiledMechanism& m, const NearToggle& t)
             {"joint", t.joint < 0 ? json(nullptr) : json(m.joints[t.joint].name)}};
 }
 
+}  // namespace
+
 json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s)
 {
     json joints = json::object(), drivers = json::object(), transmission = json::object(), toggles = json::array();
@@ -163,18 +216,34 @@ json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const Cycle
             {"toggles", toggles}};
 }
 
-}  // namespace
-
-json resultsToJson(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& summary)
+std::string resultsJsonText(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& summary,
+                            const nlohmann::json& sections)
 {
-    json steps = json::array();
-    for (const auto& s : r.steps) steps.push_back(stepToJson(m, r, s));
-    json warnings = json::array();
-    for (const auto& w : r.warnings)
-        warnings.push_back({{"code", w.code}, {"message", w.message}, {"step", stepIndex(w.step)}});
-    return {{"steps", std::move(steps)},       {"summary", summaryToJson(m, r, summary)},
-            {"warnings", std::move(warnings)}, {"complete", r.complete},
-            {"duration_s", r.duration},        {"planned_steps", r.plannedSteps}};
+    std::string text;
+    text.reserve(std::size_t(r.steps.size()) * (600 + 400 * (m.bodies.size() + m.joints.size())));
+    JsonWriter w(text);
+    w.beginObject();
+    w.key("summary").value(summaryToJson(m, r, summary));
+    for (const auto& [name, section] : sections.items()) w.key(name).value(section);
+    w.key("warnings").beginArray();
+    for (const auto& warning : r.warnings) {
+        w.beginObject();
+        w.field("code", warning.code);
+        w.field("message", warning.message);
+        w.key("step").value(stepIndex(warning.step));
+        w.endObject();
+    }
+    w.endArray();
+    w.field("complete", r.complete);
+    w.field("duration_s", r.duration);
+    w.field("planned_steps", r.plannedSteps);
+    w.key("steps").beginArray();
+    StepWriter steps(w, m, r);
+    for (const auto& s : r.steps) steps.write(s);
+    w.endArray();
+    w.endObject();
+    text += '\n';
+    return text;
 }
 
 }  // namespace clevis

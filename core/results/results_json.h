@@ -7,8 +7,16 @@
 
 #include <nlohmann/json.hpp>
 
+#include <string>
+
 namespace clevis {
 
-nlohmann::json resultsToJson(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& summary);
+// The figures over the cycle (the "summary" key).
+nlohmann::json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& summary);
+
+// The whole results file, streamed step by step. `sections` (an object)
+// adds top-level keys after the summary, e.g. "sizing".
+std::string resultsJsonText(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& summary,
+                            const nlohmann::json& sections = nlohmann::json::object());
 
 }  // namespace clevis

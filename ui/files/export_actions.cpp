@@ -1,5 +1,6 @@
 #include "ui/files/export_actions.h"
 
+#include "core/file/atomic_file.h"
 #include "core/results/results_csv.h"
 #include "render/free_body_painter.h"
 #include "render/review_report.h"
@@ -19,7 +20,6 @@
 #include <QMessageBox>
 #include <QProgressDialog>
 
-#include <fstream>
 #include <set>
 
 namespace clevis::ui {
@@ -139,10 +139,11 @@ void ExportActions::exportCsv()
     if (!ready()) return;
     const QString path = QFileDialog::getSaveFileName(window_, tr("Export step data"), "steps.csv", tr("CSV (*.csv)"));
     if (path.isEmpty()) return;
-    std::ofstream out(path.toStdString(), std::ios::binary);
-    if (out) writeResultsCsv(out, analysis_->compiled(), analysis_->result());
-    out.close();
-    if (!out) failed(tr("%1: could not be written").arg(path));
+    try {
+        writeFileAtomically(path.toStdString(), resultsCsvText(analysis_->compiled(), analysis_->result()), false);
+    } catch (const FileWriteError& e) {
+        failed(QString::fromStdString(e.what()));
+    }
 }
 
 void ExportActions::exportReport()
