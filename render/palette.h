@@ -25,6 +25,20 @@ inline QColor inertia() { return {0x56, 0xB4, 0xE9}; }    // sky blue, dashed: m
 inline QColor selection() { return {0xF0, 0xE4, 0x42}; }  // yellow halo behind the selected part
 inline QColor problem() { return {0xB0, 0x00, 0x20}; }    // the part an error names
 
+// The background of a utilisation figure (window and report alike): the
+// nearer the part is to its limit, the deeper the shade of one hue
+// (vermillion), so the order reads in grey-scale print and without telling
+// hues apart. Far from the limit there is little shade; at or over it the
+// deepest, still light enough for black text.
+inline QColor utilisationShade(double utilisation)
+{
+    const double t = utilisation < 0.0 ? 0.0 : (utilisation > 1.0 ? 1.0 : utilisation);
+    const double mix = 0.65 * t * t;
+    const QColor deep(0xD5, 0x5E, 0x00);
+    return QColor::fromRgbF(float(1.0 - mix * (1.0 - deep.redF())), float(1.0 - mix * (1.0 - deep.greenF())),
+                            float(1.0 - mix * (1.0 - deep.blueF())));
+}
+
 // The style of the n-th curve on a chart (window and report alike): a colour
 // of the Okabe–Ito set (its yellow is left out, too pale on white) and a dash pattern, in pen widths, empty for a solid
 // line. The twelve styles differ pairwise in colour or dash, consecutive

@@ -24,6 +24,7 @@
 
 #include <gtest/gtest.h>
 
+#include <map>
 #include <memory>
 #include <set>
 
@@ -134,12 +135,61 @@ TEST(ResultsWidgets, PeakTableRowJumpsToThePeak)
     table.resize(700, 300);
     table.show();
     QCoreApplication::processEvents();
-    const int row = 1;  // crank_pin, the second joint
+    int row = 0;  // crank_pin, the second joint
+    while (row < table.rowCount() && table.item(row, PeakTable::kPartColumn)->text() != "joint crank_pin") ++row;
+    ASSERT_LT(row, table.rowCount());
     const int expected = s.analysis->summary().joints[1].peak.step;
     ASSERT_GT(expected, 0);
     QTest::mouseClick(table.viewport(), Qt::LeftButton, Qt::NoModifier,
                       table.visualRect(table.model()->index(row, 0)).center());
     EXPECT_EQ(s.analysis->currentStep(), expected);
+}
+
+// With allowables set, each bar's utilisation is the larger of its stress
+// against the allowable and its compression against the Euler load, as the
+// sizing computes them; the most loaded part is at the top, the shade deepens
+// (darker in grey) towards the limit, and a bar with no allowable says why.
+TEST(ResultsWidgets, PeakTableSortsPartsByUtilisation)
+{
+    MechanismDocument doc;
+    Mechanism mech = loadMechanismFile(std::string(CLEVIS_SAMPLES_DIR) + "/dwell_six_bar.json").mechanism;
+    int withSection = 0;
+    for (auto& b : mech.bodies)
+        if (b.section && withSection++ > 0) b.section->safetyFactor = 2.0;  // the first keeps none
+    ASSERT_GE(withSection, 3);
+    doc.reset(mech, "six_bar.json");
+    AnalysisState analysis(&doc);
+    analysis.waitForIdle();
+    ASSERT_TRUE(analysis.hasResult());
+    PeakTable table(&analysis);
+
+    std::map<QString, double> expected;  // part -> utilisation
+    QString unrated;                     // the bar without an allowable: rated on buckling only
+    for (const auto& bar : analysis.sizing().bars) {
+        if (!bar.section) continue;
+        const QString part = "link " + QString::fromStdString(bar.name);
+        if (!bar.section->utilisation) unrated = part;
+        expected[part] = std::max(bar.section->utilisation.value_or(0.0), bar.section->bucklingRatio.value_or(0.0));
+    }
+    ASSERT_EQ(expected.size(), std::size_t(withSection));
+    ASSERT_FALSE(unrated.isEmpty());
+
+    double previous = 2.0, previousLightness = 0.0;
+    for (int row = 0; row < int(expected.size()); ++row) {
+        const QString part = table.item(row, PeakTable::kPartColumn)->text();
+        ASSERT_TRUE(expected.count(part)) << part.toStdString() << " is not among the rated bars at the top";
+        const double u = expected[part];
+        EXPECT_LE(u, previous);
+        const QTableWidgetItem* cell = table.item(row, PeakTable::kUtilisationColumn);
+        EXPECT_TRUE(cell->text().startsWith(QString("%1 %").arg(100.0 * u, 0, 'f', 0))) << cell->text().toStdString();
+        EXPECT_EQ(cell->text().endsWith("buckling"), part == unrated) << cell->text().toStdString();
+        const double lightness = cell->background().color().lightnessF();
+        if (row > 0) EXPECT_GE(lightness, previousLightness);  // less loaded: lighter
+        previous = u;
+        previousLightness = lightness;
+        // Without an allowable, the tooltip says why there is no stress figure.
+        if (part == unrated) EXPECT_TRUE(cell->toolTip().contains("allowable")) << cell->toolTip().toStdString();
+    }
 }
 
 TEST(ResultsWidgets, PlotsShowThePanesOfTheReportAndKeepTheChoice)

@@ -82,6 +82,8 @@ const CycleResult& AnalysisState::result() const { return outcome_->result; }
 
 const CycleSummary& AnalysisState::summary() const { return outcome_->summary; }
 
+const SizingResult& AnalysisState::sizing() const { return outcome_->sizing; }
+
 QString AnalysisState::errorText() const { return outcome_->error; }
 
 QStringList AnalysisState::offendingItems() const { return outcome_->offendingItems; }

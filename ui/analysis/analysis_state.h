@@ -3,6 +3,7 @@
 // views always show the mechanism as it is now.
 #pragma once
 
+#include "core/results/bar_sizing.h"
 #include "core/results/cycle_summary.h"
 #include "core/results/results.h"
 #include "core/solver/compiled_mechanism.h"
@@ -34,6 +35,7 @@ public:
     const clevis::CompiledMechanism& compiled() const;  // valid when hasResult()
     const clevis::CycleResult& result() const;
     const clevis::CycleSummary& summary() const;
+    const clevis::SizingResult& sizing() const;  // every bar's stresses, utilisation and buckling
     QString errorText() const;  // empty when the last solve succeeded (ModelError/AnalysisError text otherwise)
     QStringList offendingItems() const;
     bool nothingDrawn() const;  // the drawing has no moving part yet

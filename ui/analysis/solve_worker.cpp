@@ -54,7 +54,10 @@ SolveOutcome solveMechanism(const Mechanism& m, const std::function<bool()>& sti
         SweepOptions options;
         options.progress = [&](int, int) { return stillWanted(); };
         out.result = sweepCycle(*out.compiled, options);
-        if (!out.result.steps.empty()) out.summary = summarize(*out.compiled, out.result);
+        if (!out.result.steps.empty()) {
+            out.summary = summarize(*out.compiled, out.result);
+            out.sizing = sizeBars(m, *out.compiled, out.result);
+        }
     } catch (const ModelError& e) {
         out.compiled.reset();
         out.error = QString::fromStdString(describeModelError(m, e));

@@ -4,6 +4,7 @@
 #pragma once
 
 #include "core/model/mechanism.h"
+#include "core/results/bar_sizing.h"
 #include "core/results/cycle_summary.h"
 #include "core/solver/compiled_mechanism.h"
 #include "core/solver/mobility_check.h"
@@ -24,12 +25,13 @@ struct SolveOutcome {
     std::optional<MobilityReport> mobility;     // degrees of freedom at the drawn pose
     CycleResult result;
     CycleSummary summary;
+    SizingResult sizing;        // stresses and utilisations of every bar
     bool nothingDrawn = false;  // a blank drawing: not a fault, only nothing to solve
     QString error;              // empty when the cycle solved (possibly only in part)
     QStringList offendingItems;
 };
 
-// Runs the whole analysis of one mechanism: compile, mobility, sweep, summary.
+// Runs the whole analysis of one mechanism: compile, mobility, sweep, summary, sizing.
 SolveOutcome solveMechanism(const Mechanism& m, const std::function<bool()>& stillWanted);
 
 class SolveWorker : public QObject {

@@ -2,10 +2,13 @@
 
 #include "core/results/summary_text.h"
 #include "render/cycle_axis.h"
+#include "render/palette.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/shell/display_units.h"
 
 #include <QHeaderView>
+
+#include <algorithm>
 
 namespace clevis::ui {
 namespace {
@@ -19,14 +22,32 @@ QString marked(const QString& value, const PeakAt& p)
     return p.nearSingular ? QString("%1 %2 near toggle").arg(value, kNearToggleMark) : value;
 }
 
+QString percent(double fraction) { return QString("%1 %").arg(100.0 * fraction, 0, 'f', 0); }
+
+// Shaded by how near the limit (render/palette.h); bold at or over it.
+void shadeByUtilisation(QTableWidgetItem& item, double utilisation)
+{
+    item.setBackground(palette::utilisationShade(utilisation));
+    item.setForeground(Qt::black);
+    if (utilisation >= 1.0) {
+        QFont bold = item.font();
+        bold.setBold(true);
+        item.setFont(bold);
+    }
+}
+
 }  // namespace
 
 PeakTable::PeakTable(AnalysisState* analysis, QWidget* parent) : QTableWidget(parent), analysis_(analysis)
 {
     setObjectName("peakTable");
-    setColumnCount(8);
-    setHorizontalHeaderLabels({tr("Part"), tr("Peak"), tr("Where"), tr("RMS"), tr("Mean"), tr("Peak power"),
-                               tr("Work per cycle"), tr("Larger, near a toggle")});
+    setColumnCount(kLargerColumn + 1);
+    setHorizontalHeaderLabels({tr("Part"), tr("Utilisation"), tr("Peak"), tr("Where"), tr("RMS"), tr("Mean"),
+                               tr("Peak power"), tr("Work per cycle"), tr("Larger, near a toggle")});
+    horizontalHeaderItem(kUtilisationColumn)
+        ->setToolTip(tr("Peak over the cycle as a fraction of your allowable (or, in compression, of the Euler load); "
+                        "not a verdict of safety: dynamic and service factors, fatigue and stress concentrations "
+                        "are not included"));
     setEditTriggers(NoEditTriggers);
     setSelectionBehavior(SelectRows);
     setSelectionMode(SingleSelection);
@@ -42,7 +63,7 @@ PeakTable::PeakTable(AnalysisState* analysis, QWidget* parent) : QTableWidget(pa
 
 int PeakTable::stepOfRow(int row) const
 {
-    const QTableWidgetItem* i = item(row, 0);
+    const QTableWidgetItem* i = item(row, kPartColumn);
     return i ? i->data(kStepRole).toInt() : -1;
 }
 
@@ -69,27 +90,17 @@ void PeakTable::rebuild()
     const auto overCycle = [&](const QString& value) {
         return s.nearSingularSteps > 0 ? QString("%1 %2").arg(value, kNearToggleMark) : value;
     };
+    std::vector<Row> rows;
     bool anyLarger = false;
     const auto addRow = [&](const QString& part, const Peak& peak, const QString& value, const QStringList& cells,
                             const QString& flaggedValue) {
-        const int row = rowCount();
-        insertRow(row);
-        auto* first = new QTableWidgetItem(part);
-        first->setData(kStepRole, peak.step);
-        first->setToolTip(tr("Click to go to this peak"));
-        setItem(row, 0, first);
-        auto* peakItem = new QTableWidgetItem(marked(value, peak));
-        peakItem->setToolTip(note(peak));
-        setItem(row, 1, peakItem);
-        setItem(row, 2, new QTableWidgetItem(where(peak.step)));
-        for (int c = 0; c < cells.size(); ++c) setItem(row, c + 3, new QTableWidgetItem(cells[c]));
+        Row row{part, peak.step, {}, "", "", marked(value, peak), note(peak), where(peak.step), cells, "", ""};
         if (peak.flagged.step >= 0) {
             anyLarger = true;
-            auto* larger = new QTableWidgetItem(
-                QString("%1 %2 near toggle, %3").arg(flaggedValue, kNearToggleMark, where(peak.flagged.step)));
-            larger->setToolTip(note(peak.flagged));
-            setItem(row, 7, larger);
+            row.larger = QString("%1 %2 near toggle, %3").arg(flaggedValue, kNearToggleMark, where(peak.flagged.step));
+            row.largerTip = note(peak.flagged);
         }
+        rows.push_back(std::move(row));
     };
     for (const auto& j : s.joints)
         addRow(tr("joint %1").arg(QString::fromStdString(j.name)), j.peak, u.force(j.peak.value),
@@ -106,6 +117,14 @@ void PeakTable::rebuild()
            u.force(s.groundForce.flagged.value));
     addRow(tr("shaking moment"), s.groundMoment, u.torque(s.groundMoment.value), {"", "", "", ""},
            u.torque(s.groundMoment.flagged.value));
+    for (const auto& bar : analysis_->sizing().bars) rows.push_back(barRow(bar, where));
+
+    // The part closest to a limit first; parts without a figure keep their order below.
+    std::stable_sort(rows.begin(), rows.end(), [](const Row& a, const Row& b) {
+        return a.utilisation.value_or(-1.0) > b.utilisation.value_or(-1.0);
+    });
+    for (const Row& r : rows) addRowItems(r);
+
     // The footnotes: each run of flagged steps and the part that locks there.
     for (const auto& t : s.toggles) {
         const int row = rowCount();
@@ -114,10 +133,79 @@ void PeakTable::rebuild()
                                               .arg(kNearToggleMark, QString::fromStdString(toggleText(m, t))));
         item->setData(kStepRole, t.worst);
         item->setToolTip(tr("Click to go to the worst step of this toggle"));
-        setItem(row, 0, item);
+        setItem(row, kPartColumn, item);
         setSpan(row, 0, 1, columnCount());
     }
-    setColumnHidden(7, !anyLarger);
+    setColumnHidden(kLargerColumn, !anyLarger);
+}
+
+// A bar's row: its peak fibre stress, and its utilisation, the larger of the
+// stress against the user's allowable and the compression against the Euler
+// load, so that a slender link in compression is not hidden by a low stress.
+PeakTable::Row PeakTable::barRow(const BarSizing& bar, const std::function<QString(int)>& where) const
+{
+    const CycleResult& r = analysis_->result();
+    Row row;
+    row.part = tr("link %1").arg(QString::fromStdString(bar.name));
+    QStringList why;
+    for (const auto& n : bar.notes) why << QString::fromStdString(n);
+    if (!bar.section) {
+        row.step = -1;
+        row.peak = "–";
+        row.utilisationText = "–";
+        row.utilisationTip = why.join('\n');
+        row.where = where(-1);
+        return row;
+    }
+    const SectionSizing& sec = *bar.section;
+    row.step = sec.governing.step;
+    const bool flagged = nearSingular(r, sec.governing);
+    row.peak = formatQuantity(sec.governing.value / 1e6, "MPa") +
+               (flagged ? QString(" %1 near toggle").arg(kNearToggleMark) : "");
+    row.where = where(sec.governing.step);
+    QStringList figures;
+    if (sec.utilisation)
+        figures << tr("fibre stress %1 of the allowable %2")
+                       .arg(percent(*sec.utilisation), formatQuantity(*sec.allowable / 1e6, "MPa"));
+    if (sec.bucklingRatio)
+        figures << tr("compression %1 of the Euler load %2")
+                       .arg(percent(*sec.bucklingRatio),
+                            formatQuantity(std::min(sec.eulerInPlane.value_or(0.0), sec.eulerOutOfPlane.value_or(0.0)),
+                                           "N"));
+    const double stress = sec.utilisation.value_or(-1.0), buckling = sec.bucklingRatio.value_or(-1.0);
+    if (stress >= 0.0 || buckling > 0.0) {
+        row.utilisation = std::max(stress, buckling);
+        row.utilisationText =
+            QString("%1 %2").arg(percent(*row.utilisation), buckling > stress ? tr("buckling") : tr("stress"));
+    } else {
+        row.utilisationText = "–";
+    }
+    row.utilisationTip = (figures + why).join('\n');
+    return row;
+}
+
+void PeakTable::addRowItems(const Row& r)
+{
+    const int row = rowCount();
+    insertRow(row);
+    auto* first = new QTableWidgetItem(r.part);
+    first->setData(kStepRole, r.step);
+    first->setToolTip(r.step >= 0 ? tr("Click to go to this peak") : QString());
+    setItem(row, kPartColumn, first);
+    auto* use = new QTableWidgetItem(r.utilisationText);
+    use->setToolTip(r.utilisationTip);
+    if (r.utilisation) shadeByUtilisation(*use, *r.utilisation);
+    setItem(row, kUtilisationColumn, use);
+    auto* peakItem = new QTableWidgetItem(r.peak);
+    peakItem->setToolTip(r.peakTip);
+    setItem(row, kPeakColumn, peakItem);
+    setItem(row, kWhereColumn, new QTableWidgetItem(r.where));
+    for (int c = 0; c < r.cells.size(); ++c) setItem(row, kWhereColumn + 1 + c, new QTableWidgetItem(r.cells[c]));
+    if (!r.larger.isEmpty()) {
+        auto* larger = new QTableWidgetItem(r.larger);
+        larger->setToolTip(r.largerTip);
+        setItem(row, kLargerColumn, larger);
+    }
 }
 
 }  // namespace clevis::ui

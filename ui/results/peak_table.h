@@ -1,12 +1,19 @@
 // The peak loads of the cycle, as summarize() reports them: per joint the
 // peak reaction, where it occurs and the RMS; per driver the peak, RMS and
-// mean effort and the peak power. A value from a step near a singular
+// mean effort and the peak power; per bar the peak fibre stress. Parts with
+// a utilisation come first, the most loaded at the top, shaded by how near
+// their limit they are. A value from a step near a singular
 // position is marked, a larger one there is shown apart, and a note under the
 // table names the part that locks. Clicking a row moves the current step to
 // where that peak occurs.
 #pragma once
 
+#include "core/results/bar_sizing.h"
+
 #include <QTableWidget>
+
+#include <functional>
+#include <optional>
 
 namespace clevis::ui {
 
@@ -19,8 +26,22 @@ public:
 
     int stepOfRow(int row) const;
 
+    static constexpr int kPartColumn = 0, kUtilisationColumn = 1, kPeakColumn = 2, kWhereColumn = 3, kLargerColumn = 8;
+
 private:
+    struct Row {
+        QString part;
+        int step = -1;  // where the row's peak is, -1: none
+        std::optional<double> utilisation;
+        QString utilisationText, utilisationTip;
+        QString peak, peakTip, where;
+        QStringList cells;  // RMS, mean, peak power, work
+        QString larger, largerTip;
+    };
+
     void rebuild();
+    Row barRow(const BarSizing& bar, const std::function<QString(int)>& where) const;
+    void addRowItems(const Row& row);
 
     AnalysisState* analysis_;
 };
