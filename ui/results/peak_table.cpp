@@ -22,7 +22,15 @@ QString marked(const QString& value, const PeakAt& p)
     return p.nearSingular ? QString("%1 %2 near toggle").arg(value, kNearToggleMark) : value;
 }
 
-QString percent(double fraction) { return QString("%1 %").arg(100.0 * fraction, 0, 'f', 0); }
+// Two significant figures at most, and no "0 %" for a figure that is small
+// but there.
+QString percent(double fraction)
+{
+    const double p = 100.0 * fraction;
+    if (p <= 0.0) return QStringLiteral("0 %");
+    if (p < 0.995) return QStringLiteral("<1 %");
+    return QString("%1 %").arg(p, 0, 'f', p < 9.95 ? 1 : 0);
+}
 
 // Shaded by how near the limit (render/palette.h); bold at or over it.
 void shadeByUtilisation(QTableWidgetItem& item, double utilisation)
