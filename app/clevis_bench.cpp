@@ -109,7 +109,7 @@ void FourBarChainMobilityCheck(benchmark::State& state)
 }
 BENCHMARK(FourBarChainMobilityCheck)->ArgName("bodies")->Arg(10)->Arg(50)->Arg(200)->Unit(benchmark::kMillisecond);
 
-// Writing the results of the 200-body chain's cycle (about 25 MB of JSON):
+// Writing the results of the 200-body chain's cycle (about 40 MB of JSON):
 // bytes_per_second is the writing speed.
 void ResultsFileText(benchmark::State& state, bool json)
 {

@@ -1,0 +1,135 @@
+// clevis-ui-bench: the desktop's latency as a user feels it, through the real
+// code path. One edit is a pin dragged one pixel on the canvas (a mouse move
+// with the button held): the document takes the edit, the worker thread
+// solves the whole cycle, the results views and the canvas take the new
+// result and repaint. Timed in wall-clock time from the mouse move until the
+// solve is published and no repaint is pending (the work spans two threads,
+// so CPU time of one would miss part of it). Also timed: from an empty window
+// to the first frame painted with the mechanism open and solved.
+//
+// Cases: the six-bar sample and a generated 20-body four-bar chain. Run under
+// the offscreen platform (set QT_QPA_PLATFORM=offscreen, done by main when
+// no platform is set).
+#include "app/heap_reuse.h"
+#include "core/file/mechanism_file.h"
+#include "tests/chain_generator.h"
+#include "ui/analysis/analysis_state.h"
+#include "ui/canvas/canvas_view.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/shell/main_window.h"
+
+#include <QApplication>
+#include <QMouseEvent>
+#include <QUndoStack>
+#include <QTemporaryDir>
+
+#include <benchmark/benchmark.h>
+
+#include <chrono>
+#include <cstdlib>
+
+namespace {
+
+using clevis::ui::MainWindow;
+using Clock = std::chrono::steady_clock;
+
+clevis::Mechanism sample(int which)
+{
+    if (which == 0) return clevis::loadMechanismFile(CLEVIS_SAMPLES_DIR "/dwell_six_bar.json").mechanism;
+    return clevis::test::fourBarChain(20);
+}
+
+const char* sampleName(int which) { return which == 0 ? "six_bar" : "chain20"; }
+
+// Until the newest solve is published and every posted event (repaints
+// included) has been handled.
+void settle(MainWindow& w)
+{
+    w.analysis()->waitForIdle();
+    QCoreApplication::sendPostedEvents();
+    QCoreApplication::processEvents();
+}
+
+// With Alt held, as a user does for a fine move: no snapping to the grid.
+void mouse(QWidget* target, QEvent::Type type, const QPointF& at, Qt::MouseButtons held)
+{
+    const Qt::MouseButton button = type == QEvent::MouseMove ? Qt::NoButton : Qt::LeftButton;
+    QMouseEvent e(type, at, target->mapToGlobal(at), button, held, Qt::AltModifier);
+    QApplication::sendEvent(target, &e);
+}
+
+// A moving pin of the mechanism, on screen: the first pin both of whose
+// bodies move (dragging it changes the linkage's dimensions).
+QPointF movingPin(MainWindow& w)
+{
+    const clevis::Mechanism& m = w.document()->mechanism();
+    for (const auto& j : m.joints)
+        if (j.type == clevis::JointType::Pin && j.bodies[0] != clevis::kGroundName &&
+            j.bodies[1] != clevis::kGroundName)
+            return w.canvas()->view().toScreen(j.at);
+    return {};
+}
+
+void EditLatency(benchmark::State& state)
+{
+    const int which = int(state.range(0));
+    QTemporaryDir recovery;
+    MainWindow w(recovery.path());
+    w.resize(1600, 1000);
+    w.show();
+    w.document()->reset(sample(which), sampleName(which));
+    settle(w);
+    w.canvas()->fitToView();
+    settle(w);
+    QWidget* canvas = w.canvas();
+    const QPointF pin = movingPin(w);
+    mouse(canvas, QEvent::MouseButtonPress, pin, Qt::LeftButton);
+    settle(w);
+    int step = 0;
+    for (auto _ : state) {
+        const QPointF to = pin + QPointF((++step % 2) ? 1.0 : 0.0, 0.0);  // one pixel there and back
+        const auto start = Clock::now();
+        mouse(canvas, QEvent::MouseMove, to, Qt::LeftButton);
+        settle(w);
+        state.SetIterationTime(std::chrono::duration<double>(Clock::now() - start).count());
+    }
+    mouse(canvas, QEvent::MouseButtonRelease, pin, Qt::NoButton);
+    if (w.document()->undoStack()->count() == 0)
+        state.SkipWithError("the drag did not reach the document: nothing was timed");
+    else if (w.analysis()->errorText().size())
+        state.SkipWithError(("the edited mechanism did not solve: " + w.analysis()->errorText()).toStdString().c_str());
+    state.SetLabel(sampleName(which));
+}
+BENCHMARK(EditLatency)->ArgName("mechanism")->Arg(0)->Arg(1)->UseManualTime()->Unit(benchmark::kMillisecond);
+
+void OpenToFirstFrame(benchmark::State& state)
+{
+    const int which = int(state.range(0));
+    const clevis::Mechanism m = sample(which);
+    for (auto _ : state) {
+        QTemporaryDir recovery;
+        const auto start = Clock::now();
+        MainWindow w(recovery.path());
+        w.resize(1600, 1000);
+        w.show();
+        w.document()->reset(m, sampleName(which));
+        settle(w);
+        state.SetIterationTime(std::chrono::duration<double>(Clock::now() - start).count());
+    }
+    state.SetLabel(sampleName(which));
+}
+BENCHMARK(OpenToFirstFrame)->ArgName("mechanism")->Arg(0)->Arg(1)->UseManualTime()->Unit(benchmark::kMillisecond);
+
+}  // namespace
+
+int main(int argc, char** argv)
+{
+    clevis::app::keepFreedHeapForReuse();
+    if (!std::getenv("QT_QPA_PLATFORM")) setenv("QT_QPA_PLATFORM", "offscreen", 1);
+    QApplication app(argc, argv);
+    benchmark::Initialize(&argc, argv);
+    if (benchmark::ReportUnrecognizedArguments(argc, argv)) return 1;
+    benchmark::RunSpecifiedBenchmarks();
+    benchmark::Shutdown();
+    return 0;
+}
