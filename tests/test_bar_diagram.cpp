@@ -12,9 +12,19 @@
 #include "tests/cli_runner.h"
 #include "tests/recording_device.h"
 #include "tests/solved_mechanism.h"
+#include "ui/analysis/analysis_state.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/document/mechanism_edits.h"
+#include "ui/files/file_actions.h"
+#include "ui/results/bar_load_view.h"
+#include "ui/shell/main_window.h"
 
+#include <QAction>
+#include <QCoreApplication>
+#include <QDockWidget>
 #include <QImage>
 #include <QPainter>
+#include <QTemporaryDir>
 #include <QXmlStreamReader>
 
 #include <gtest/gtest.h>
@@ -300,6 +310,99 @@ TEST_F(CliScratch, RefusesWhatIsNotABarAndBadCommandLines)
     r = run("bar-diagram --help");
     EXPECT_EQ(r.exitCode, 0);
     EXPECT_TRUE(contains(r.out, "Usage: clevis-cli bar-diagram FILE --body NAME")) << r.out;
+}
+
+// ---- The desktop view -----------------------------------------------------
+
+class BarLoadViewTest : public ::testing::Test {
+protected:
+    QTemporaryDir recovery;
+    ui::MainWindow window{recovery.path()};
+
+    void settle()
+    {
+        window.analysis()->waitForIdle();
+        QCoreApplication::processEvents();
+    }
+    ui::BarLoadView* view() const { return window.findChild<ui::BarLoadView*>(); }
+    void select(const char* body) { window.document()->setSelection({ui::Selection::Kind::Body, body, -1}); }
+    QAction* action(const QString& text) const
+    {
+        for (QAction* a : window.findChildren<QAction*>())
+            if (a->text() == text) return a;
+        ADD_FAILURE() << "no action " << text.toStdString();
+        return nullptr;
+    }
+};
+
+// The rocker selected and the cycle scrubbed: the view draws the rocker at
+// that step (the same figures a diagram made apart from the window has) and
+// lists its sizing; a plate says why it is not a bar; New leaves nothing.
+TEST_F(BarLoadViewTest, ShowsTheSelectedBarAndClearsOnNew)
+{
+    ASSERT_TRUE(recovery.isValid());
+    QString error;
+    ASSERT_TRUE(window.files()->open(QString::fromStdString(kSixBar), &error)) << error.toStdString();
+    settle();
+    ASSERT_NE(view(), nullptr);
+    const auto* dock = qobject_cast<QDockWidget*>(view()->parentWidget());
+    ASSERT_NE(dock, nullptr);
+    EXPECT_EQ(dock->windowTitle(), "Loads along the link");
+    EXPECT_EQ(view()->figure(), nullptr);
+    EXPECT_TRUE(view()->message().startsWith("Select a link")) << view()->message().toStdString();
+
+    select("rocker");
+    window.analysis()->setCurrentStep(123);
+    QCoreApplication::processEvents();
+    ASSERT_NE(view()->figure(), nullptr) << view()->message().toStdString();
+    const Solved s = solveSample("dwell_six_bar.json");
+    const BarModel& rocker = s.bars.bars[barIndex(s, "rocker")];
+    const auto apart = barAtStep(s.m, rocker, s.r.steps[123], barEnvelopeBand(s.m, s.r, rocker, 101));
+    ASSERT_EQ(view()->figure()->atStep().values.size(), apart.values.size());
+    for (std::size_t i = 0; i < apart.values.size(); ++i)
+        EXPECT_NEAR(view()->figure()->atStep().values[i].moment, apart.values[i].moment, 1e-9);
+    const auto texts = textsOf(*view()->figure());
+    EXPECT_TRUE(std::any_of(texts.begin(), texts.end(),
+                            [](const RecordedText& t) { return t.text == "Internal loads along rocker"; }));
+    EXPECT_TRUE(std::any_of(texts.begin(), texts.end(),
+                            [](const RecordedText& t) { return t.text.contains("(step 123 of 360)"); }));
+    const QString sizing = view()->sizingText();
+    EXPECT_TRUE(sizing.contains("At this position: fibre stress")) << sizing.toStdString();
+    EXPECT_TRUE(sizing.contains("\"rocker\", L = ")) << sizing.toStdString();
+    EXPECT_TRUE(sizing.contains("utilisation")) << sizing.toStdString();
+
+    select("coupler_plate");
+    EXPECT_EQ(view()->figure(), nullptr);
+    EXPECT_TRUE(view()->message().startsWith("coupler_plate is not a bar: a plate with 3 joints"))
+        << view()->message().toStdString();
+
+    select("rocker");
+    ASSERT_NE(view()->figure(), nullptr);
+    action("&New")->trigger();
+    QCoreApplication::processEvents();
+    EXPECT_EQ(view()->figure(), nullptr);
+    EXPECT_TRUE(view()->sizingText().isEmpty());
+    EXPECT_FALSE(view()->message().contains("rocker")) << view()->message().toStdString();
+    settle();
+    EXPECT_EQ(view()->figure(), nullptr);
+}
+
+// A rename: the new name is drawn once the edit is solved, and the old never.
+TEST_F(BarLoadViewTest, FollowsARename)
+{
+    QString error;
+    ASSERT_TRUE(window.files()->open(QString::fromStdString(kSixBar), &error)) << error.toStdString();
+    settle();
+    select("rocker");
+    ASSERT_NE(view()->figure(), nullptr);
+    ASSERT_EQ(window.document()->apply("Rename", [](Mechanism& m) { ui::edits::renameBody(m, "rocker", "arm"); }), QString());
+    select("arm");
+    EXPECT_EQ(view()->figure(), nullptr) << "nothing drawn under the old name while the edit is solved";
+    settle();
+    ASSERT_NE(view()->figure(), nullptr) << view()->message().toStdString();
+    const auto texts = textsOf(*view()->figure());
+    EXPECT_TRUE(std::any_of(texts.begin(), texts.end(),
+                            [](const RecordedText& t) { return t.text == "Internal loads along arm"; }));
 }
 
 }  // namespace
