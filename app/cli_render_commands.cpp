@@ -275,8 +275,8 @@ int runReportCommand(const std::vector<std::string>& args)
         const auto solved = solve(p);
         ensureGuiApplication();
         QString error;
-        const ui::ReviewReportInput in{solved->m, solved->r, solved->s, QString::fromStdString(p.file),
-                                       ui::RenderUnits{}};
+        const ui::ReviewReportInput in{solved->m,         solved->r,   solved->s, QString::fromStdString(p.file),
+                                       ui::RenderUnits{}, &solved->doc};
         if (!ui::writeReviewReport(in, QString::fromStdString(out), &error)) {
             std::cerr << error.toStdString() << '\n';
             return kFailed;
