@@ -6,6 +6,7 @@
 #include "ui/document/mechanism_document.h"
 #include "ui/shell/display_units.h"
 
+#include <QEvent>
 #include <QFontDatabase>
 #include <QLabel>
 #include <QPainter>
@@ -52,7 +53,7 @@ BarLoadView::BarLoadView(MechanismDocument* doc, AnalysisState* analysis, QWidge
     auto* page = new QWidget;
     canvas_ = new DiagramCanvas(figure_, page);
     sizing_->setParent(page);
-    sizing_->setWordWrap(true);
+    sizing_->setWordWrap(false);  // a table in columns: the view scrolls sideways rather than break its lines
     sizing_->setTextInteractionFlags(Qt::TextSelectableByMouse);
     sizing_->setFont(QFontDatabase::systemFont(QFontDatabase::FixedFont));
     sizing_->setContentsMargins(4, 4, 4, 4);
@@ -64,6 +65,7 @@ BarLoadView::BarLoadView(MechanismDocument* doc, AnalysisState* analysis, QWidge
     scroll_->setWidget(page);
     scroll_->setWidgetResizable(true);
     scroll_->setFrameShape(QFrame::NoFrame);
+    scroll_->viewport()->installEventFilter(this);
     message_->setAlignment(Qt::AlignCenter);
     message_->setWordWrap(true);
     message_->setMargin(12);
@@ -103,7 +105,7 @@ QString BarLoadView::stepStresses(const BarModel& bar) const
 {
     if (bar.area <= 0 || !figure_) return {};
     const BarPeaks& p = figure_->atStep().peaks;
-    const auto mpa = [](double pa) { return formatQuantity(pa * 1e-6, "MPa"); };
+    const auto mpa = [](double pa) { return pa == 0.0 ? tr("none") : formatQuantity(pa * 1e-6, "MPa"); };
     return tr("At this position: fibre stress σ = N/A ± M/Z up to %1 in tension and %2 in compression; mean shear "
               "V/A up to %3.")
         .arg(mpa(p.fibreTension.value), mpa(p.fibreCompression.value), mpa(std::abs(p.shear.value) / bar.area));
@@ -161,12 +163,12 @@ void BarLoadView::layOutFigure()
     canvas_->update();
 }
 
-void BarLoadView::resizeEvent(QResizeEvent* event)
+bool BarLoadView::eventFilter(QObject* watched, QEvent* event)
 {
-    QWidget::resizeEvent(event);
-    if (figure_ && std::abs(scroll_->viewport()->width() - figure_->size().width()) > 1 &&
-        scroll_->viewport()->width() > kNarrowest)
+    if (watched == scroll_->viewport() && event->type() == QEvent::Resize && figure_ &&
+        std::abs(std::max(kNarrowest, double(scroll_->viewport()->width())) - figure_->size().width()) > 1)
         layOutFigure();
+    return QWidget::eventFilter(watched, event);
 }
 
 }  // namespace clevis::ui

@@ -36,7 +36,8 @@ public:
     QString sizingText() const;
 
 protected:
-    void resizeEvent(QResizeEvent* event) override;
+    // The viewport's resizes (the dock's, a scroll bar coming or going) lay the diagram out again.
+    bool eventFilter(QObject* watched, QEvent* event) override;
 
 private:
     void forgetCycle();  // a new result (or none): the cached band and sizing go
