@@ -7,6 +7,7 @@
 #include "app/cli_render_commands.h"
 #endif
 
+#include <algorithm>
 #include <iostream>
 
 namespace {
@@ -32,6 +33,15 @@ int main(int argc, char** argv)
     // The drawing commands parse their own options (they need Qt's renderer).
     const std::string first = argc > 1 ? argv[1] : "";
     if (first == "fbd") return runFbdCommand({argv + 2, argv + argc});
+    if (first == "bar-diagram") {
+        const std::vector<std::string> rest(argv + 2, argv + argc);
+        const auto help = [](const std::string& a) { return a == "--help" || a == "-h"; };
+        if (std::any_of(rest.begin(), rest.end(), help)) {
+            std::cout << helpText("bar-diagram");
+            return kExitOk;
+        }
+        return runBarDiagramCommand(rest);
+    }
     if (first == "report") return runReportCommand({argv + 2, argv + argc});
 #endif
     try {

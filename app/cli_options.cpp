@@ -18,8 +18,11 @@ Usage:
   clevis-cli report FILE --out review.pdf [--steps N]
   clevis-cli internal-loads FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)
                  [--stations N] [--steps N] [--json OUT] [--csv OUT]
+  clevis-cli bar-diagram FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)
+                 --out F.svg|F.pdf|F.png [--steps N]
   clevis-cli analyze --help
   clevis-cli internal-loads --help
+  clevis-cli bar-diagram --help
   clevis-cli --help
   clevis-cli --version
 
@@ -37,7 +40,11 @@ Commands:
   internal-loads
              axial force, shear force and bending moment along one bar at
              one position, and their envelope over the cycle
-  (fbd and report are present in builds that include the desktop app.)
+  bar-diagram
+             draw the axial force, shear force and bending moment along one
+             bar at one position over their range over the cycle
+  (fbd, bar-diagram and report are present in builds that include the
+  desktop app.)
 
 Run "clevis-cli analyze --help" for the options, units, sign conventions and
 exit codes. Documentation: docs/file-format.md (mechanism files),
@@ -124,6 +131,40 @@ Exit status:
      output cannot be written; or the results are not trustworthy (the
      loads are still printed)
   2  wrong command line
+)";
+
+const char* const kBarDiagramHelp =
+    R"(Usage: clevis-cli bar-diagram FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)
+                 --out F.svg|F.pdf|F.png [--steps N]
+
+Draws the internal loads of the bar NAME at one position: three diagrams
+along it, the axial force N, shear force V and bending moment M against s
+from its first end to its second (the joints named at the ends), each over a
+shaded band: the largest and smallest value at each station over the whole
+cycle. Under each diagram, the peaks at this position and over the cycle,
+with their station and drive position. Lengths in mm, forces in N, moments
+in N·m. A bar is a body with a section, or a body with exactly two joints.
+
+Options:
+  --body NAME      the bar
+  --at-deg A       where the first rotary driver is at A degrees (modulo
+                   360°), solved at exactly that angle
+  --at-t T         at time T s, solved at exactly that time
+  --at-peak JOINT  at the solved position where that joint's load peaks
+  --out F          the drawing, as SVG, PDF or PNG by its suffix
+  --steps N        intervals over the cycle (default: the file's setting)
+
+Signs (docs/method.md, "Internal loads along a bar"): N > 0 is tension. Look
+along the bar from its first end to its second with its left side up: V and M
+then have the beam-table signs (V > 0 at a left-hand support, M > 0 sagging).
+
+Exit status:
+  0  done, and the cycle is trustworthy
+  1  FILE cannot be read or analysed; NAME is not a body or not a bar (the
+     message says why); the drawing cannot be written; or the results are not
+     trustworthy (the drawing is still written)
+  2  wrong command line: an unknown option, a joint the file does not have,
+     or a position the solved cycle does not reach
 )";
 
 bool isHelp(const std::string& arg) { return arg == "--help" || arg == "-h"; }
@@ -245,6 +286,7 @@ std::string helpText(const std::string& topic)
 {
     if (topic == "analyze") return kAnalyzeHelp;
     if (topic == "internal-loads") return kInternalLoadsHelp;
+    if (topic == "bar-diagram") return kBarDiagramHelp;
     return kOverview;
 }
 

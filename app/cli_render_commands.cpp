@@ -1,5 +1,6 @@
 #include "app/cli_render_commands.h"
 
+#include "app/bar_choice.h"
 #include "app/solved_file.h"
 
 #include "core/file/mechanism_file.h"
@@ -9,6 +10,7 @@
 #include "core/solver/analysis_error.h"
 #include "core/solver/cycle_sweep.h"
 #include "core/solver/exact_position.h"
+#include "render/bar_load_diagram.h"
 #include "render/free_body_painter.h"
 #include "render/review_report.h"
 
@@ -27,6 +29,9 @@ namespace clevis::cli {
 const char* const kFbdUsage =
     "usage: clevis-cli fbd FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT) --out F.svg|F.pdf|F.png\n"
     "                  [--steps N] [--dalembert]\n";
+const char* const kBarDiagramUsage =
+    "usage: clevis-cli bar-diagram FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)\n"
+    "                  --out F.svg|F.pdf|F.png [--steps N]\n";
 const char* const kReportUsage = "usage: clevis-cli report FILE --out review.pdf [--steps N]\n";
 
 namespace {
@@ -76,6 +81,20 @@ double number(const Parsed& p, const std::string& option)
     throw Usage(option + ": \"" + text + "\" is not a number");
 }
 
+// What the drawings of one body at one position (fbd, bar-diagram) take:
+// FILE, --body, one of --at-deg, --at-t, --at-peak, --out (.svg, .pdf or
+// .png) and --steps, and any `flags` of their own.
+Parsed parseFigureAtPosition(const std::vector<std::string>& args, const std::vector<std::string>& flags)
+{
+    Parsed p = parse(args, {"--body", "--at-deg", "--at-t", "--at-peak", "--out", "--steps"}, flags);
+    const std::string& out = p.options.at("--out");
+    const QString suffix = QString::fromStdString(out).section('.', -1).toLower();
+    if (suffix != "svg" && suffix != "pdf" && suffix != "png")
+        throw Usage("--out " + out + ": use a .svg, .pdf or .png file");
+    if (!p.options.count("--body")) throw Usage("--body is missing");
+    return p;
+}
+
 // QtGui needs an application object; the command line has none of its own.
 void ensureGuiApplication()
 {
@@ -88,6 +107,7 @@ void ensureGuiApplication()
 }
 
 struct Solved {
+    Mechanism doc;
     CompiledMechanism m;
     CycleResult r;
     CycleSummary s;
@@ -103,6 +123,7 @@ std::unique_ptr<Solved> solve(const Parsed& p)
     }
     SolvedFile solved = solveFile(p.file, steps, std::cerr);
     auto out = std::make_unique<Solved>();
+    out->doc = std::move(solved.mechanism);
     out->m = std::move(solved.m);
     out->r = std::move(solved.r);
     if (out->r.steps.empty()) throw AnalysisError("no position of the cycle could be solved", {});
@@ -156,7 +177,6 @@ int chooseStep(const Parsed& p, Solved& s)
 
 int chooseBody(const Parsed& p, const Solved& s)
 {
-    if (!p.options.count("--body")) throw Usage("--body is missing");
     const std::string& name = p.options.at("--body");
     const int body = findBody(s.m, name);
     if (body >= 0) return body;
@@ -175,6 +195,8 @@ int guarded(const char* usage, const std::string& file, Work&& work)
     } catch (const Usage& e) {
         std::cerr << "clevis-cli: " << e.what() << '\n' << usage;
         return kUsage;
+    } catch (const Refused& e) {
+        std::cerr << file << ": " << e.what() << '\n';
     } catch (const ModelError& e) {
         std::cerr << file << ": " << e.what() << '\n';
     } catch (const AnalysisError& e) {
@@ -204,12 +226,8 @@ std::string fileOf(const std::vector<std::string>& args)
 int runFbdCommand(const std::vector<std::string>& args)
 {
     return guarded(kFbdUsage, fileOf(args), [&] {
-        const Parsed p =
-            parse(args, {"--body", "--at-deg", "--at-t", "--at-peak", "--out", "--steps"}, {"--dalembert"});
+        const Parsed p = parseFigureAtPosition(args, {"--dalembert"});
         const std::string& out = p.options.at("--out");
-        const QString suffix = QString::fromStdString(out).section('.', -1).toLower();
-        if (suffix != "svg" && suffix != "pdf" && suffix != "png")
-            throw Usage("--out " + out + ": use a .svg, .pdf or .png file");
         const auto solved = solve(p);
         const int body = chooseBody(p, *solved);
         const int step = chooseStep(p, *solved);
@@ -218,6 +236,27 @@ int runFbdCommand(const std::vector<std::string>& args)
                                          {ui::RenderUnits{}, p.options.count("--dalembert") > 0});
         QString error;
         const QString title = QString("Free-body diagram: %1").arg(QString::fromStdString(solved->m.bodies[body].name));
+        if (!ui::exportFigure(figure, QString::fromStdString(out), title, &error)) {
+            std::cerr << error.toStdString() << '\n';
+            return kFailed;
+        }
+        return trustworthy(*solved, p.file) ? kOk : kFailed;
+    });
+}
+
+int runBarDiagramCommand(const std::vector<std::string>& args)
+{
+    return guarded(kBarDiagramUsage, fileOf(args), [&] {
+        const Parsed p = parseFigureAtPosition(args, {});
+        const std::string& out = p.options.at("--out");
+        const auto solved = solve(p);
+        const BarModel bar = chooseBar(findBars(solved->doc, solved->m), p.options.at("--body"));
+        const int step = chooseStep(p, *solved);
+        ensureGuiApplication();
+        const ui::BarCycleLoads cycle = ui::barCycleLoads(solved->m, solved->r, bar);
+        const ui::BarLoadDiagram figure(solved->m, solved->r, cycle, step, ui::RenderUnits{});
+        QString error;
+        const QString title = QString("Internal loads: %1").arg(QString::fromStdString(bar.bodyName));
         if (!ui::exportFigure(figure, QString::fromStdString(out), title, &error)) {
             std::cerr << error.toStdString() << '\n';
             return kFailed;
@@ -236,8 +275,8 @@ int runReportCommand(const std::vector<std::string>& args)
         const auto solved = solve(p);
         ensureGuiApplication();
         QString error;
-        const ui::ReviewReportInput in{solved->m, solved->r, solved->s, QString::fromStdString(p.file),
-                                       ui::RenderUnits{}};
+        const ui::ReviewReportInput in{solved->m,         solved->r,   solved->s, QString::fromStdString(p.file),
+                                       ui::RenderUnits{}, &solved->doc};
         if (!ui::writeReviewReport(in, QString::fromStdString(out), &error)) {
             std::cerr << error.toStdString() << '\n';
             return kFailed;

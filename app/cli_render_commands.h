@@ -1,5 +1,6 @@
-// `clevis-cli fbd` and `clevis-cli report`: the free-body diagram of one body
-// at one position (SVG, PDF or PNG) and the design-review PDF, rendered
+// `clevis-cli fbd`, `clevis-cli bar-diagram` and `clevis-cli report`: the
+// free-body diagram of one body or the N/V/M diagram of one bar at one
+// position (SVG, PDF or PNG) and the design-review PDF, rendered
 // headless. `args` are the words after the subcommand. Exit codes: 0 done,
 // 1 the model cannot be analysed (or its results are not trustworthy),
 // 2 wrong command line; messages on stderr name the offending item.
@@ -11,9 +12,11 @@
 namespace clevis::cli {
 
 int runFbdCommand(const std::vector<std::string>& args);
+int runBarDiagramCommand(const std::vector<std::string>& args);
 int runReportCommand(const std::vector<std::string>& args);
 
 extern const char* const kFbdUsage;
+extern const char* const kBarDiagramUsage;
 extern const char* const kReportUsage;
 
 }  // namespace clevis::cli

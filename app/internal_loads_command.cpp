@@ -1,5 +1,6 @@
 #include "app/internal_loads_command.h"
 
+#include "app/bar_choice.h"
 #include "app/solved_file.h"
 
 #include "core/model/model_error.h"
@@ -19,31 +20,6 @@
 
 namespace clevis::cli {
 namespace {
-
-// A request that names something the file does not have, or a position the
-// cycle never reaches: exit 1 with this message.
-struct Refused : std::runtime_error {
-    using std::runtime_error::runtime_error;
-};
-
-std::string listOf(const std::vector<std::string>& names)
-{
-    std::string text;
-    for (const auto& n : names) text += (text.empty() ? "" : ", ") + n;
-    return text;
-}
-
-const BarModel& chooseBar(const BarList& bars, const std::string& name)
-{
-    for (const auto& b : bars.bars)
-        if (b.bodyName == name) return b;
-    for (const auto& b : bars.others)
-        if (b.bodyName == name) throw Refused("body \"" + name + "\" is not a bar: " + b.reason);
-    std::vector<std::string> names;
-    for (const auto& b : bars.bars) names.push_back(b.bodyName);
-    if (name == kGroundName) throw Refused("ground is the frame, not a bar; bars: " + listOf(names));
-    throw Refused("no body \"" + name + "\" (bars: " + listOf(names) + ")");
-}
 
 std::string timeText(double t)
 {

@@ -2,9 +2,11 @@
 
 #include "core/model/materials.h"
 #include "core/model/type_names.h"
+#include "core/results/bar_sizing.h"
 #include "core/results/drive_units.h"
 #include "core/results/summary_text.h"
 #include "core/solver/body_state.h"
+#include "render/bar_load_diagram.h"
 #include "render/cycle_axis.h"
 #include "render/cycle_chart.h"
 #include "render/energy_balance_figure.h"
@@ -255,6 +257,53 @@ void peakSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis
         f.paragraph(QString("Warning (%1): %2").arg(qs(w.code), qs(w.message)), palette::problem());
 }
 
+// The step at which a bar is drawn: where its utilisation peaks, or, without
+// a section and allowable to give one, where its |M| peaks.
+int criticalStep(const BarSizing& b)
+{
+    if (b.section && b.section->utilisation && b.section->governing.step >= 0) return b.section->governing.step;
+    return b.envelope.moment.step;
+}
+
+// The N/V/M diagram of every bar at its critical position, one to a page
+// where they fit; `advance` reports each and may cancel.
+bool barDiagramsSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis,
+                        const std::function<bool()>& advance)
+{
+    const auto& m = in.mechanism;
+    const auto& r = in.result;
+    if (!in.document) {
+        f.paragraph(
+            "The bars are not known for this result (the mechanism changed while it was being solved): "
+            "write the report again once it is solved.",
+            palette::problem());
+        return true;
+    }
+    f.paragraph(
+        "Each bar below is drawn at its critical position: where its utilisation peaks, or, for a bar "
+        "without a section and an allowable, where its bending moment |M| peaks. Utilisations are "
+        "fractions of the allowables given, not a verdict that a part is safe.");
+    const SizingResult sizing = sizeBars(*in.document, m, r);
+    const BarList bars = findBars(*in.document, m);
+    for (std::size_t b = 0; b < sizing.bars.size(); ++b) {
+        if (!advance()) return false;
+        const BarSizing& sized = sizing.bars[b];
+        const int step = criticalStep(sized);
+        if (step < 0) continue;
+        const BarCycleLoads cycle = barCycleLoads(m, r, bars.bars[b]);
+        const BarLoadDiagram figure(m, r, cycle, step, in.units);
+        const QString why = sized.section && sized.section->utilisation
+                                ? QString("utilisation %1 peaks").arg(*sized.section->utilisation, 0, 'f', 3)
+                                : QString("|M| peaks");
+        f.keep(figure.size().height() * f.width() / figure.size().width() + 26);
+        f.subheading(QString("%1: %2 at %3").arg(qs(sized.name), why, at(axis, step)));
+        f.figure(figure, std::min(f.width(), figure.size().width() * (f.pageHeight() - 40) / figure.size().height()));
+    }
+    for (const NotABar& o : sizing.others)
+        f.paragraph(QString("%1 is not a bar: %2.").arg(qs(o.bodyName), qs(o.reason)));
+    return true;
+}
+
 }  // namespace
 
 const std::vector<QString>& reviewReportSections()
@@ -265,7 +314,8 @@ const std::vector<QString>& reviewReportSections()
                                                "4 Peak loads",
                                                "5 Free-body diagrams at the critical positions",
                                                "6 Energy balance",
-                                               "7 Cautions and assumptions"};
+                                               "7 Sizing of the bars",
+                                               "8 Cautions and assumptions"};
     return sections;
 }
 
@@ -306,7 +356,8 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
     painter.setRenderHint(QPainter::Antialiasing);
     const auto& sections = reviewReportSections();
     const std::vector<CriticalPosition> critical = criticalPositions(m, in.summary);
-    const int total = 6 + int(critical.size());
+    const int bars = in.document ? int(findBars(*in.document, m).bars.size()) : 0;
+    const int total = 7 + int(critical.size()) + bars;
     int done = 0;
     const auto advance = [&] { return !progress || progress(++done, total); };
     const CycleAxis axis = cycleAxis(m, r);
@@ -374,6 +425,10 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
     }
     if (ok) {
         f.heading(sections[6]);
+        ok = barDiagramsSection(f, in, axis, advance) && advance();
+    }
+    if (ok) {
+        f.heading(sections[7]);
         for (const QString& c :
              {QString("Rigid bodies and ideal joints: no clearance, no elasticity, no friction unless it is modelled "
                       "as a load; "

@@ -1,7 +1,8 @@
 // The design-review report (PDF): the mechanism drawing, the inputs, the
 // loads over the cycle, the peak-load table (the numbers of summarize(), as
 // the command-line summary prints them), free-body diagrams at the critical
-// positions, the energy balance, and the cautions. Needs QtGui only, so it
+// positions, the energy balance, the sizing of the bars (the N/V/M diagram
+// of each at its critical position), and the cautions. Needs QtGui only, so it
 // runs headless.
 #pragma once
 
@@ -21,6 +22,10 @@ struct ReviewReportInput {
     const CycleSummary& summary;
     QString sourceName;  // the file the mechanism came from
     RenderUnits units;
+    // The mechanism as described, which `mechanism` was compiled from: it
+    // tells which bodies are bars and their sections. None: the sizing
+    // chapter says it cannot be drawn.
+    const Mechanism* document = nullptr;
 };
 
 // The report's numbered section titles, in order (tests look for them).

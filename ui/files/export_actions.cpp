@@ -157,8 +157,13 @@ void ExportActions::exportReport()
     progress.setMinimumDuration(300);
     const QString source =
         doc_->filePath().isEmpty() ? tr("unsaved mechanism") : QFileInfo(doc_->filePath()).fileName();
-    const ReviewReportInput in{analysis_->compiled(), analysis_->result(), analysis_->summary(), source,
-                               renderUnits(DisplayUnits::instance())};
+    // The document is the solved mechanism unless an edit is being solved.
+    const ReviewReportInput in{analysis_->compiled(),
+                               analysis_->result(),
+                               analysis_->summary(),
+                               source,
+                               renderUnits(DisplayUnits::instance()),
+                               analysis_->busy() ? nullptr : &doc_->mechanism()};
     QString error;
     const bool ok = writeReviewReport(in, path, &error, [&](int done, int total) {
         progress.setMaximum(total);

@@ -33,14 +33,15 @@ void arrangePanels(QMainWindow* window)
     QDockWidget* cycle = panel("cycleDock");
     QDockWidget* plots = panel("plotsDock");
     QDockWidget* peaks = panel("peaksDock");
-    if (!parts || !properties || !diagram || !cycle || !plots || !peaks) return;  // not all installed yet
+    QDockWidget* barLoads = panel("barLoadsDock");
+    if (!parts || !properties || !diagram || !cycle || !plots || !peaks || !barLoads) return;  // not all installed yet
 
     // The editing column runs the full height; the bottom results span the canvas and the diagram.
     window->setCorner(Qt::TopLeftCorner, Qt::LeftDockWidgetArea);
     window->setCorner(Qt::BottomLeftCorner, Qt::LeftDockWidgetArea);
     window->setCorner(Qt::TopRightCorner, Qt::RightDockWidgetArea);
     window->setCorner(Qt::BottomRightCorner, Qt::BottomDockWidgetArea);
-    for (QDockWidget* d : {parts, properties, diagram, cycle, plots, peaks}) {
+    for (QDockWidget* d : {parts, properties, diagram, cycle, plots, peaks, barLoads}) {
         d->setFloating(false);
         window->removeDockWidget(d);
     }
@@ -50,8 +51,10 @@ void arrangePanels(QMainWindow* window)
     window->addDockWidget(Qt::BottomDockWidgetArea, cycle);
     window->splitDockWidget(cycle, plots, Qt::Vertical);
     window->tabifyDockWidget(plots, peaks);
-    for (QDockWidget* d : {parts, properties, diagram, cycle, plots, peaks}) d->show();
+    window->tabifyDockWidget(diagram, barLoads);  // the loads along the selected link beside its free body
+    for (QDockWidget* d : {parts, properties, diagram, cycle, plots, peaks, barLoads}) d->show();
     plots->raise();
+    diagram->raise();
 
     const QSize size = window->size();
     const int column = share(size.width(), 0.2, 240, 360), diagramWidth = share(size.width(), 0.34, 300, 640);
