@@ -34,7 +34,7 @@ bool writeOutputs(const AnalyzeOptions& options, const CompiledMechanism& m, con
             options.jsonOut,
             [&](std::ostream& f) {
                 nlohmann::json results = resultsToJson(m, r, s);
-                results["sizing"] = sizingToJson(m, r, sizing);  // sizing of bars (docs/results-format.md)
+                results["sizing"] = sizingToJson(m, r, sizing);  // sizing of bars and pins (docs/results-format.md)
                 f << results.dump(2) << '\n';
             },
             err);
@@ -68,8 +68,10 @@ int runAnalyze(const AnalyzeOptions& options, std::ostream& out, std::ostream& e
         const CycleResult& r = solved.r;
         const CycleSummary s = summarize(m, r);
         out << summaryText(m, r, s) << std::flush;
-        // Sizing of bars: stresses, utilisation and buckling (core/results/bar_sizing.h).
-        const SizingResult sizing = sizeBars(solved.mechanism, m, r);
+        // Sizing of bars: stresses, utilisation and buckling (core/results/bar_sizing.h);
+        // of pins: shear, bearing pressure and p·v (core/results/pin_sizing.h).
+        SizingResult sizing = sizeBars(solved.mechanism, m, r);
+        sizing.pins = sizePins(solved.mechanism, m, r);
         out << '\n' << sizingText(m, r, sizing) << std::flush;
         const bool written = writeOutputs(options, m, r, s, sizing, err);
         const bool trusted = trustworthy(m, r, s, options.file, err);
