@@ -22,7 +22,7 @@ bool writeOutputs(const AnalyzeOptions& options, const CompiledMechanism& m, con
     if (!options.jsonOut.empty())
         ok &= writeOutputFile(
             options.jsonOut,
-            resultsJsonText(m, r, s, {{"sizing", sizingToJson(m, r, sizing)}}),  // docs/results-format.md
+            resultsJsonText(m, r, s, {{"sizing", sizingToJson(m, r, sizing)}}),  // bars and pins (docs/results-format.md)
             err);
     if (!options.csvOut.empty()) ok &= writeOutputFile(options.csvOut, resultsCsvText(m, r), err);
     return ok;
@@ -52,8 +52,10 @@ int runAnalyze(const AnalyzeOptions& options, std::ostream& out, std::ostream& e
         const CycleResult& r = solved.r;
         const CycleSummary s = summarize(m, r);
         out << summaryText(m, r, s) << std::flush;
-        // Sizing of bars: stresses, utilisation and buckling (core/results/bar_sizing.h).
-        const SizingResult sizing = sizeBars(solved.mechanism, m, r);
+        // Sizing of bars: stresses, utilisation and buckling (core/results/bar_sizing.h);
+        // of pins: shear, bearing pressure and p·v (core/results/pin_sizing.h).
+        SizingResult sizing = sizeBars(solved.mechanism, m, r);
+        sizing.pins = sizePins(solved.mechanism, m, r);
         out << '\n' << sizingText(m, r, sizing) << std::flush;
         const bool written = writeOutputs(options, m, r, s, sizing, err);
         const bool trusted = trustworthy(m, r, s, options.file, err);

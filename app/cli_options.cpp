@@ -28,7 +28,7 @@ Usage:
 
 Commands:
   analyze    solve the mechanism in FILE over its cycle and print a summary
-             and the sizing of every bar
+             and the sizing of every bar and pin
   fbd        draw one body's free-body diagram at one position (with numbers):
              --at-deg A  at the first rotary driver's angle A (degrees, modulo
                          360°), --at-t T at time T s, or
@@ -60,11 +60,14 @@ effort, power and work, the load on the frame, transmission angles and an
 energy-balance check. A value from a position near a toggle is shown apart,
 marked, with the part that locks named. Then, for every bar: the largest
 axial force, shear force and bending moment, the fibre stresses, the
-utilisation against the allowable the file gives, and the Euler loads.
+utilisation against the allowable the file gives, and the Euler loads. Then,
+for every pin and pin-in-slot joint: the peak force, and for one with pin
+data (its "pin" in the file) the mean pin shear stress, the bearing pressure
+and p·v, with their utilisations against the allowables the file gives.
 Utilisation is a figure to compare, not a verdict that a part is safe: rigid
-bodies and ideal joints; no service or dynamic factors, fatigue or stress
-concentrations. Check each part under the codes that apply and have the
-design reviewed by a licensed engineer.
+bodies and ideal joints; no service or dynamic factors, fatigue, stress
+concentrations or pin bending. Check each part under the codes that apply
+and have the design reviewed by a licensed engineer.
 
 Options:
   --steps N    intervals over the cycle, N >= 1 (N+1 positions are solved);

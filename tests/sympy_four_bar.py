@@ -2,8 +2,8 @@
 
 Reads a JSON description (drawn pin positions, mass properties, gravity, the
 crank's motion, a point force on the coupler, a torque on the rocker and the
-times wanted) and prints, for each time, the link rotations, the four pin
-reactions and the crank torque as JSON on stdout.
+times wanted) and prints, for each time, the link rotations and their rates,
+the four pin reactions and the crank torque as JSON on stdout.
 
 Nothing here comes from the C++ solver: the loop closure is solved with
 nsolve, velocities and accelerations by differentiating it in time, and the
@@ -148,6 +148,7 @@ def solve(spec):
         results.append({
             "t": float(tk),
             "phi": [float(phi2.subs(t, tk)), float(state[0]), float(state[1])],
+            "rates": [float(phi2.diff(t).subs(t, tk)), float(state[2]), float(state[3])],
             "reactions": {"O2": values[0:2], "A": values[2:4], "B": values[4:6], "O4": values[6:8]},
             "torque": values[8],
         })

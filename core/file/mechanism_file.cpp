@@ -216,9 +216,39 @@ void readJointBodies(const JsonNode& bodies, Joint& j)
         throw bodies.error("joins \"" + j.bodies[0] + "\" to itself");
 }
 
+// The pin of a pin or pin-in-slot joint and the user's allowables on it. A
+// slider has no pin: its load is carried by a sliding face, which this data
+// does not describe.
+PinData readPin(const JsonNode& node, JointType type)
+{
+    if (type == JointType::Slider)
+        throw node.error(
+            "a slider has no pin: its load is carried by its sliding faces, not a pin (pin data applies to pin "
+            "and pin_in_slot joints)");
+    node.object(
+        {"diameter", "shear_planes", "bearing_length", "allowable_shear_stress", "allowable_pressure", "allowable_pv"});
+    PinData p;
+    p.diameter = node.at("diameter").number(Bound::Positive);
+    if (const auto planes = node.find("shear_planes")) {
+        const double n = planes->number();
+        if (n != 1.0 && n != 2.0)
+            throw planes->error("must be 1 (single shear) or 2 (double shear) (got " + shortestDecimal(n) + ")");
+        p.shearPlanes = int(n);
+    }
+    const auto optionalPositive = [&](const char* key) -> std::optional<double> {
+        if (const auto v = node.find(key)) return v->number(Bound::Positive);
+        return std::nullopt;
+    };
+    p.bearingLength = optionalPositive("bearing_length");
+    p.allowableShear = optionalPositive("allowable_shear_stress");
+    p.allowablePressure = optionalPositive("allowable_pressure");
+    p.allowablePv = optionalPositive("allowable_pv");
+    return p;
+}
+
 Joint readJoint(const JsonNode& node)
 {
-    node.object({"name", "type", "bodies", "at", "axis_deg"});
+    node.object({"name", "type", "bodies", "at", "axis_deg", "pin"});
     Joint j;
     j.name = node.at("name").name();
     j.type = node.at("type").choice(kJointTypes).value;
@@ -228,6 +258,7 @@ Joint readJoint(const JsonNode& node)
         if (j.type == JointType::Pin) axis->warn("applies only to slider and pin_in_slot joints (ignored)");
         else j.axisDeg = axis->number();
     }
+    if (const auto pin = node.find("pin")) j.pin = readPin(*pin, j.type);
     return j;
 }
 

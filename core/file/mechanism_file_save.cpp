@@ -85,6 +85,18 @@ Json bodyJson(const Body& b, const std::vector<MaterialProperties>& defined)
     return out;
 }
 
+// Shear planes are written even at their default of 1, as the house writes
+// defaults out; an absent bearing length stays absent (it follows the bodies).
+Json pinJson(const PinData& p)
+{
+    Json out{{"diameter", p.diameter}, {"shear_planes", p.shearPlanes}};
+    if (p.bearingLength) out["bearing_length"] = *p.bearingLength;
+    if (p.allowableShear) out["allowable_shear_stress"] = *p.allowableShear;
+    if (p.allowablePressure) out["allowable_pressure"] = *p.allowablePressure;
+    if (p.allowablePv) out["allowable_pv"] = *p.allowablePv;
+    return out;
+}
+
 Json jointJson(const Joint& j)
 {
     Json out{{"name", j.name},
@@ -92,6 +104,7 @@ Json jointJson(const Joint& j)
              {"bodies", Json::array({j.bodies[0], j.bodies[1]})},
              {"at", point(j.at)}};
     if (j.type != JointType::Pin) out["axis_deg"] = j.axisDeg;
+    if (j.pin) out["pin"] = pinJson(*j.pin);  // on a slider too, for the reader to refuse
     return out;
 }
 

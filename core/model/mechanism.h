@@ -69,6 +69,20 @@ struct Body {
 
 enum class JointType { Pin, Slider, PinInSlot };
 
+// The pin through a joint and the bearing it turns in, for sizing: its size
+// and what the user allows it (each allowable optional; without one the
+// figure is reported but no utilisation).
+struct PinData {
+    double diameter = 0.0;                      // m
+    int shearPlanes = 1;                        // 1: single shear, 2: double shear
+    std::optional<double> bearingLength{};      // m; default: the thinner body's thickness
+    std::optional<double> allowableShear{};     // Pa, on the pin's mean shear stress
+    std::optional<double> allowablePressure{};  // Pa, on the projected bearing pressure
+    std::optional<double> allowablePv{};        // Pa·m/s, on pressure × sliding speed
+
+    bool operator==(const PinData&) const = default;
+};
+
 // `bodies[0]` is the first-listed body: reactions are the force it exerts on
 // `bodies[1]`. For sliders and pin-in-slot joints the axis is fixed in the
 // first body; the pin of a pin-in-slot belongs to the second.
@@ -76,8 +90,9 @@ struct Joint {
     std::string name;
     JointType type = JointType::Pin;
     std::string bodies[2];
-    Vec2 at = Vec2::Zero();  // m, global at the drawn pose
-    double axisDeg = 0.0;    // slide or slot direction at the drawn pose
+    Vec2 at = Vec2::Zero();        // m, global at the drawn pose
+    double axisDeg = 0.0;          // slide or slot direction at the drawn pose
+    std::optional<PinData> pin{};  // pin and pin-in-slot joints only
 
     bool operator==(const Joint&) const = default;
 };

@@ -20,6 +20,7 @@
 #pragma once
 
 #include "core/results/bar_envelope.h"
+#include "core/results/pin_sizing.h"
 
 #include <optional>
 #include <string>
@@ -56,6 +57,7 @@ struct BarSizing {
 struct SizingResult {
     std::vector<BarSizing> bars;
     std::vector<NotABar> others;
+    std::vector<PinSizing> pins;  // filled by sizePins (pin_sizing.h)
 };
 
 // Every bar of `doc` (compiled as `m`, solved as `r`).

@@ -36,6 +36,46 @@ json sectionJson(const CompiledMechanism& m, const CycleResult& r, const BarEnve
     return out;
 }
 
+// A pin peak's value under `key`, with its time, drive positions and flag;
+// null when there is none.
+json pinPeakJson(const CompiledMechanism& m, const CycleResult& r, const EnvelopePeak& p, const char* key)
+{
+    json out = peakJson(m, r, p, key);
+    if (out.is_object()) out.erase("s_m");  // a pin has no station along a bar
+    return out;
+}
+
+json pinDataJson(const PinSizing& p)
+{
+    if (!p.pin) return nullptr;
+    return {{"diameter_m", p.pin->diameter},
+            {"shear_planes", p.pin->shearPlanes},
+            {"bearing_length_m", p.bearing ? json(p.bearing->length) : json(nullptr)},
+            {"bearing_length_from_body",
+             p.bearing && !p.bearing->fromBody.empty() ? json(p.bearing->fromBody) : json(nullptr)},
+            {"allowable_shear_stress_Pa", optional(p.pin->allowableShear)},
+            {"allowable_pressure_Pa", optional(p.pin->allowablePressure)},
+            {"allowable_pv_Pa_m_s", optional(p.pin->allowablePv)}};
+}
+
+json pinJson(const CompiledMechanism& m, const CycleResult& r, const PinSizing& p)
+{
+    json pv = pinPeakJson(m, r, p.pv, "pv_Pa_m_s");
+    if (pv.is_object()) pv["speed_m_s"] = p.speedAtPv;
+    return {{"joint", p.name},
+            {"pin", pinDataJson(p)},
+            {"force", pinPeakJson(m, r, p.force, "force_N")},
+            {"shear_stress", pinPeakJson(m, r, p.shearStress, "stress_Pa")},
+            {"bearing_pressure", pinPeakJson(m, r, p.pressure, "pressure_Pa")},
+            {"sliding_speed", pinPeakJson(m, r, p.slidingSpeed, "speed_m_s")},
+            {"pv", pv},
+            {"utilisation",
+             {{"shear", optional(p.shearUtilisation)},
+              {"pressure", optional(p.pressureUtilisation)},
+              {"pv", optional(p.pvUtilisation)}}},
+            {"notes", p.notes}};
+}
+
 }  // namespace
 
 json drivePositionsJson(const CompiledMechanism& m, const StepResult& s)
@@ -75,7 +115,9 @@ json sizingToJson(const CompiledMechanism& m, const CycleResult& r, const Sizing
     }
     json others = json::array();
     for (const NotABar& o : s.others) others.push_back({{"body", o.bodyName}, {"reason", o.reason}});
-    return {{"bars", bars}, {"not_bars", others}};
+    json pins = json::array();
+    for (const PinSizing& p : s.pins) pins.push_back(pinJson(m, r, p));
+    return {{"bars", bars}, {"not_bars", others}, {"pins", pins}};
 }
 
 }  // namespace clevis

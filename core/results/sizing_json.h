@@ -1,4 +1,4 @@
-// The sizing of every bar as JSON (docs/results-format.md, "Sizing"): SI
+// The sizing of every bar and pin as JSON (docs/results-format.md, "Sizing"): SI
 // values with the unit in each key, and for every peak its station, time,
 // drive positions and whether it comes from a near-singular position.
 #pragma once

@@ -78,17 +78,18 @@ void FormBuilder::number(const QString& key, const QString& label, double si, co
 
 void FormBuilder::optionalNumber(const QString& key, const QString& label, std::optional<double> si,
                                  const DisplayQuantity& q, const QString& undo,
-                                 std::function<void(Mechanism&, std::optional<double>)> set)
+                                 std::function<void(Mechanism&, std::optional<double>)> set, const QString& placeholder)
 {
     const QString shown = si ? show(*si, q) : QString();
     QLineEdit* edit = withUnit(form_, key, label, shown, q.unit);
-    edit->setPlaceholderText(QObject::tr("default"));
+    const QString empty = placeholder.isEmpty() ? QObject::tr("default") : placeholder;
+    edit->setPlaceholderText(empty);
     QObject::connect(edit, &QLineEdit::editingFinished, edit, [=, doc = doc_, refused = refused_] {
         if (edit->text() == shown) return;
         std::optional<double> value;
         if (!edit->text().trimmed().isEmpty()) {
             const auto v = parseNumber(edit->text());
-            if (!v) return refused(QObject::tr("Type a number in %1, or leave it empty for the default.").arg(q.unit));
+            if (!v) return refused(QObject::tr("Type a number in %1, or leave it empty (%2).").arg(q.unit, empty));
             value = q.toSi(*v);
         }
         commit(

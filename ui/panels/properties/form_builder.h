@@ -33,9 +33,11 @@ public:
     // tests and accessibility) come from `key`.
     void number(const QString& key, const QString& label, double si, const DisplayQuantity& q, const QString& undo,
                 Setter set);
-    // An empty field means "not given" (nullopt).
+    // An empty field means "not given" (nullopt); `placeholder` says what that
+    // means (by default, "default").
     void optionalNumber(const QString& key, const QString& label, std::optional<double> si, const DisplayQuantity& q,
-                        const QString& undo, std::function<void(Mechanism&, std::optional<double>)> set);
+                        const QString& undo, std::function<void(Mechanism&, std::optional<double>)> set,
+                        const QString& placeholder = {});
     // A list of numbers separated by commas or spaces.
     void numberList(const QString& key, const QString& label, const std::vector<double>& si, const DisplayQuantity& q,
                     const QString& undo, std::function<void(Mechanism&, std::vector<double>)> set);
