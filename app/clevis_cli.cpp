@@ -33,6 +33,7 @@ int main(int argc, char** argv)
     const std::string first = argc > 1 ? argv[1] : "";
     if (first == "fbd") return runFbdCommand({argv + 2, argv + argc});
     if (first == "report") return runReportCommand({argv + 2, argv + argc});
+    if (first == "bearing-polar") return runBearingPolarCommand({argv + 2, argv + argc});
 #endif
     try {
         return run(parseCommandLine({argv + 1, argv + argc}));
