@@ -4,18 +4,24 @@
 // line fixed in the body); the frame's side is the global reaction; the two
 // bodies of a pin get opposite loads; the peak is the summary's; the sector
 // the load sweeps on two cases worked by hand; the drawing, its exports and
-// the command line.
+// the command line; the desktop view.
 #include "app/cli_render_commands.h"
 #include "core/file/mechanism_file.h"
 #include "core/results/bearing_polar.h"
 #include "core/results/body_points_at_step.h"
 #include "core/results/free_body.h"
 #include "render/bearing_polar_diagram.h"
+#include "render/palette.h"
 #include "tests/mechanism_builders.h"
 #include "tests/recording_device.h"
 #include "tests/solved_mechanism.h"
+#include "ui/analysis/analysis_state.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/results/bearing_polar_view.h"
 
 #include <QApplication>
+#include <QComboBox>
+#include <QCoreApplication>
 #include <QFile>
 #include <QImage>
 #include <QPainter>
@@ -372,6 +378,62 @@ TEST(BearingPolarCommand, NamesTheJointOrTheBodyThatIsWrong)
     fails({kPress, "--out", "/tmp/x.svg"}, 2, "--joint is missing");
     fails({kPress, "--joint", "crank_pin", "--out", "/tmp/x.txt"}, 2, ".svg, .pdf or .png");
     fails({"/nonexistent/press.json", "--joint", "crank_pin", "--out", "/tmp/x.svg"}, 1, "press.json");
+}
+
+// The view in the window, offscreen: a message until a joint is selected;
+// then the joint's second body's frame, or its first's when chosen; the
+// scrubbed step pointed out by the blue arrow along that step's force; and
+// nothing of the old mechanism after another is opened.
+TEST(BearingPolarView, ShowsTheSelectedJointAtTheScrubbedStep)
+{
+    using namespace clevis::ui;
+    MechanismDocument doc;
+    doc.reset(loadMechanismFile(kPress).mechanism, "punch_press.json");
+    AnalysisState analysis(&doc);
+    analysis.waitForIdle();
+    QCoreApplication::processEvents();
+    ASSERT_TRUE(analysis.hasResult());
+    BearingPolarView view(&doc, &analysis);
+    view.resize(420, 560);
+    EXPECT_EQ(view.figure(), nullptr);
+    EXPECT_TRUE(view.message().contains("Select a joint")) << view.message().toStdString();
+
+    doc.setSelection({Selection::Kind::Joint, "crank_pin", -1});
+    ASSERT_NE(view.figure(), nullptr);
+    const int rod = findBody(analysis.compiled(), "connecting_rod");
+    EXPECT_EQ(view.figure()->polar().body, rod);
+    EXPECT_EQ(view.frameChoice()->count(), 2);
+    view.frameChoice()->setCurrentIndex(1);
+    ASSERT_NE(view.figure(), nullptr);
+    EXPECT_EQ(view.figure()->polar().body, findBody(analysis.compiled(), "crankshaft"));
+    view.frameChoice()->setCurrentIndex(0);
+
+    analysis.setCurrentStep(160);  // in the press stroke: a long arrow
+    ASSERT_NE(view.figure(), nullptr);
+    EXPECT_EQ(view.figure()->options().currentStep, 160);
+    const Vec2 now = view.figure()->polar().force[160];
+    int arrows = 0;
+    for (const auto& line : recorded(*view.figure()).lines)
+        if (line.pen.color() == palette::link() && line.pen.widthF() > 1) {  // the arrow's shaft, not a leader
+            ++arrows;
+            // Page y runs down: the drawn direction is the force's with y turned over.
+            const double drawn = std::atan2(-line.line.dy(), line.line.dx());
+            EXPECT_NEAR(std::remainder(drawn - std::atan2(now.y(), now.x()), 2 * kPi), 0.0, 1e-6);
+        }
+    EXPECT_EQ(arrows, 1);
+
+    doc.setSelection({Selection::Kind::Body, "ram", -1});
+    EXPECT_EQ(view.figure(), nullptr);
+    EXPECT_TRUE(view.message().contains("Select a joint"));
+
+    doc.setSelection({Selection::Kind::Joint, "crank_pin", -1});
+    ASSERT_NE(view.figure(), nullptr);
+    doc.reset(loadMechanismFile(kSixBar).mechanism, "dwell_six_bar.json");
+    EXPECT_EQ(view.figure(), nullptr);
+    EXPECT_EQ(view.frameChoice()->count(), 0);
+    analysis.waitForIdle();
+    QCoreApplication::processEvents();
+    EXPECT_EQ(view.figure(), nullptr);  // nothing selected in the new mechanism
 }
 
 }  // namespace

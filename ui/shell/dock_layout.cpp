@@ -52,6 +52,13 @@ void arrangePanels(QMainWindow* window)
     window->tabifyDockWidget(plots, peaks);
     for (QDockWidget* d : {parts, properties, diagram, cycle, plots, peaks}) d->show();
     plots->raise();
+    // The bearing load shares the diagram's place, as a tab behind it.
+    if (QDockWidget* polar = panel("bearingPolarDock")) {
+        polar->setFloating(false);
+        window->tabifyDockWidget(diagram, polar);
+        polar->show();
+        diagram->raise();
+    }
 
     const QSize size = window->size();
     const int column = share(size.width(), 0.2, 240, 360), diagramWidth = share(size.width(), 0.34, 300, 640);
