@@ -5,6 +5,7 @@
 #include "core/results/drive_units.h"
 #include "core/results/summary_text.h"
 #include "core/solver/body_state.h"
+#include "render/bearing_polar_report.h"
 #include "render/cycle_axis.h"
 #include "render/cycle_chart.h"
 #include "render/energy_balance_figure.h"
@@ -264,8 +265,9 @@ const std::vector<QString>& reviewReportSections()
                                                "3 Loads over the cycle",
                                                "4 Peak loads",
                                                "5 Free-body diagrams at the critical positions",
-                                               "6 Energy balance",
-                                               "7 Cautions and assumptions"};
+                                               "6 Sizing",
+                                               "7 Energy balance",
+                                               "8 Cautions and assumptions"};
     return sections;
 }
 
@@ -306,7 +308,7 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
     painter.setRenderHint(QPainter::Antialiasing);
     const auto& sections = reviewReportSections();
     const std::vector<CriticalPosition> critical = criticalPositions(m, in.summary);
-    const int total = 6 + int(critical.size());
+    const int total = 7 + int(critical.size());
     int done = 0;
     const auto advance = [&] { return !progress || progress(++done, total); };
     const CycleAxis axis = cycleAxis(m, r);
@@ -362,6 +364,11 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
     }
     if (ok) {
         f.heading(sections[5]);
+        bearingPolarPages(f, in);
+        ok = advance();
+    }
+    if (ok) {
+        f.heading(sections[6]);
         f.paragraph(
             "Energy put into the mechanism (right) and taken out of it (left) over the solved span: by each driver "
             "(positive and negative power apart), the net work of the applied loads, the kinetic and potential "
@@ -373,7 +380,7 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
         ok = advance();
     }
     if (ok) {
-        f.heading(sections[6]);
+        f.heading(sections[7]);
         for (const QString& c :
              {QString("Rigid bodies and ideal joints: no clearance, no elasticity, no friction unless it is modelled "
                       "as a load; "

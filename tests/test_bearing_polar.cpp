@@ -25,6 +25,7 @@
 #include <QFile>
 #include <QImage>
 #include <QPainter>
+#include <QProcess>
 #include <QStandardPaths>
 #include <QSvgRenderer>
 #include <QTemporaryDir>
@@ -378,6 +379,25 @@ TEST(BearingPolarCommand, NamesTheJointOrTheBodyThatIsWrong)
     fails({kPress, "--out", "/tmp/x.svg"}, 2, "--joint is missing");
     fails({kPress, "--joint", "crank_pin", "--out", "/tmp/x.txt"}, 2, ".svg, .pdf or .png");
     fails({"/nonexistent/press.json", "--joint", "crank_pin", "--out", "/tmp/x.svg"}, 1, "press.json");
+}
+
+// The review report's sizing chapter draws every pin's diagram (the press
+// has three pins and a slider): each title once, after the chapter's heading.
+TEST(BearingPolarReport, TheSizingChapterHasEveryPin)
+{
+    QTemporaryDir dir;
+    const QString pdf = dir.filePath("review.pdf");
+    ASSERT_EQ(cli::runReportCommand({kPress, "--out", pdf.toStdString()}), 0);
+    QProcess text;
+    text.start("pdftotext", {pdf, "-"});
+    ASSERT_TRUE(text.waitForFinished(60000));
+    const QString all = QString::fromUtf8(text.readAllStandardOutput()).simplified();
+    const qsizetype chapter = all.indexOf("6 Sizing");
+    ASSERT_GE(chapter, 0);
+    for (const char* pin : {"main_bearing on crankshaft", "crank_pin on connecting_rod", "wrist_pin on ram"})
+        EXPECT_EQ(all.count(QString("Bearing load at %1").arg(pin)), 1) << pin;
+    EXPECT_GT(all.indexOf("Bearing load at main_bearing"), chapter);
+    EXPECT_EQ(all.count("Bearing load at ram_guide"), 0);  // a slider: no bearing
 }
 
 // The view in the window, offscreen: a message until a joint is selected;
