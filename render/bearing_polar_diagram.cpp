@@ -194,8 +194,20 @@ BearingPolarDiagram::BearingPolarDiagram(const CompiledMechanism& m, const Cycle
     y = notesTop_;
     for (const auto& n : notes_) y += paragraphHeight(n.text, textWidth) + 3;
     size_ = QSizeF(kWidth, y + kMargin);
-    const double radius = plot_.width() / 2 - kRingRoom;
+    if (options_.plotOnly) {
+        plot_.moveTopLeft(QPointF(0, 0));
+        size_ = plot_.size();
+    }
+    const double radius = std::max(plot_.width() / 4, plot_.width() / 2 - kRingRoom * options_.textScale);
     pagePerNewton_ = radius / rings_.back();
+}
+
+QStringList BearingPolarDiagram::paragraphs() const
+{
+    QStringList all;
+    for (const auto* list : {&caption_, &notes_})
+        for (const Paragraph& p : *list) all << p.text;
+    return all;
 }
 
 QPointF BearingPolarDiagram::tip(const Vec2& force) const
@@ -208,6 +220,11 @@ void BearingPolarDiagram::paint(QPainter& p, const QRectF& target) const
     p.save();
     fitFigure(p, size_, target);
     p.fillRect(QRectF(QPointF(0, 0), size_), palette::paper());
+    if (options_.plotOnly) {
+        paintPlot(p);
+        p.restore();
+        return;
+    }
     const double textWidth = kWidth - 2 * kMargin;
     p.setPen(palette::ink());
     p.setFont(font(kTitlePixels, true));
@@ -232,7 +249,7 @@ void BearingPolarDiagram::paintPlot(QPainter& p) const
     const RenderUnits& u = options_.units;
     const QPointF centre = plot_.center();
     const double outer = rings_.back() * pagePerNewton_;
-    LabelPlacer labels(plot_, font(kLabelPixels));
+    LabelPlacer labels(plot_, font(kLabelPixels * options_.textScale));
 
     // Rings, light, the outer one a shade darker.
     p.setBrush(Qt::NoBrush);
@@ -245,7 +262,7 @@ void BearingPolarDiagram::paintPlot(QPainter& p) const
     // The body-frame axes through the pin, named at their positive ends.
     const QString frame = polar_.body == kGround ? QString("global") : qs(mechanism_.bodyName(polar_.body));
     const ArrowStyle axisArrow = figureArrow(palette::groundHatch(), 0.8);
-    const double reach = outer + 12;
+    const double reach = outer + 12 * options_.textScale;
     const QPointF xEnd = centre + QPointF(reach, 0), yEnd = centre + QPointF(0, -reach);
     drawArrow(p, centre - QPointF(reach, 0), xEnd, axisArrow);
     drawArrow(p, centre + QPointF(0, reach), yEnd, axisArrow);

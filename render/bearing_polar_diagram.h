@@ -14,6 +14,7 @@
 
 #include <QFont>
 #include <QString>
+#include <QStringList>
 
 #include <vector>
 
@@ -22,6 +23,11 @@ namespace clevis::ui {
 struct BearingPolarOptions {
     RenderUnits units;
     int currentStep = -1;  // a step to point out on the curve (the desktop's scrubbed position); −1: none
+    // The plot alone, its title and paragraphs shown apart (a window sets them
+    // in its own font beside it); its labels `textScale` times their size
+    // against the plot, so they stay legible when the plot is drawn small.
+    bool plotOnly = false;
+    double textScale = 1.0;
 };
 
 class BearingPolarDiagram final : public Figure {
@@ -35,6 +41,9 @@ public:
 
     const BearingPolar& polar() const { return polar_; }
     const BearingPolarOptions& options() const { return options_; }
+    const QString& title() const { return title_; }
+    // The caption, then the notes under the plot (peak, sector, marks and rings).
+    QStringList paragraphs() const;
     // The marked drive positions (the axis's unit) and their points on the curve.
     const std::vector<PolarMark>& marks() const { return marks_; }
     // The axis value between marks: 30° for a crank, a round step otherwise.

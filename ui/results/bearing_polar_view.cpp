@@ -7,13 +7,32 @@
 
 #include <QComboBox>
 #include <QEvent>
+#include <QFontInfo>
+#include <QLabel>
 #include <QPainter>
+#include <QScrollArea>
 #include <QVBoxLayout>
 
+#include <algorithm>
+
 namespace clevis::ui {
+namespace {
+
+constexpr double kPlotSide = 312;     // the plot's own side, page units (bearing_polar_diagram.cpp)
+constexpr double kPlotLabel = 9;      // its labels' size there
+constexpr double kLabelShare = 0.85;  // the labels against the window's font: a little smaller, as on a chart
+
+}  // namespace
 
 BearingPolarView::BearingPolarView(MechanismDocument* doc, AnalysisState* analysis, QWidget* parent)
-    : QWidget(parent), doc_(doc), analysis_(analysis), frame_(new QComboBox(this)), drawing_(new QWidget(this))
+    : QWidget(parent)
+    , doc_(doc)
+    , analysis_(analysis)
+    , frame_(new QComboBox(this))
+    , drawing_(new QWidget(this))
+    , notes_(new QLabel(this))
+    , notesArea_(new QScrollArea(this))
+    , split_(new QBoxLayout(QBoxLayout::LeftToRight))
 {
     setObjectName("bearingPolarView");
     frame_->setToolTip(tr("Whose frame the load is seen in: either body of the joint"));
@@ -21,11 +40,22 @@ BearingPolarView::BearingPolarView(MechanismDocument* doc, AnalysisState* analys
     frame_->setMinimumContentsLength(12);
     drawing_->setMinimumSize(120, 120);
     drawing_->installEventFilter(this);
+    notes_->setWordWrap(true);
+    notes_->setAlignment(Qt::AlignTop | Qt::AlignLeft);
+    notes_->setTextInteractionFlags(Qt::TextSelectableByMouse);
+    auto* scroll = notesArea_;
+    scroll->setWidget(notes_);
+    scroll->setWidgetResizable(true);
+    scroll->setFrameShape(QFrame::NoFrame);
+    scroll->setMinimumWidth(120);
+    split_->setContentsMargins(0, 0, 0, 0);
+    split_->addWidget(drawing_, 3);
+    split_->addWidget(scroll, 2);
     auto* layout = new QVBoxLayout(this);
     layout->setContentsMargins(2, 2, 2, 2);
     layout->setSpacing(2);
     layout->addWidget(frame_);
-    layout->addWidget(drawing_, 1);
+    layout->addLayout(split_, 1);
     connect(doc_, &MechanismDocument::selectionChanged, this, &BearingPolarView::refresh);
     connect(doc_, &MechanismDocument::documentReset, this, &BearingPolarView::refresh);
     connect(analysis_, &AnalysisState::resultChanged, this, &BearingPolarView::refresh);
@@ -74,20 +104,41 @@ void BearingPolarView::refresh()
         fillFrameChoice(joint);
         const auto& m = analysis_->compiled();
         const int body = m.joints[joint].body[frame_->currentIndex() == 1 ? 0 : 1];
+        // The plot fits the drawing area; its labels are set at the window's font size.
+        const double side = std::max(1, std::min(drawing_->width(), drawing_->height()));
+        const double textScale =
+            std::max(1.0, kLabelShare * QFontInfo(font()).pixelSize() / (kPlotLabel * side / kPlotSide));
         figure_ = std::make_unique<BearingPolarDiagram>(
             m, analysis_->result(), bearingPolar(m, analysis_->result(), analysis_->summary(), joint, body),
-            BearingPolarOptions{renderUnits(DisplayUnits::instance()), analysis_->currentStep()});
+            BearingPolarOptions{renderUnits(DisplayUnits::instance()), analysis_->currentStep(), true, textScale});
     } else {
         const QSignalBlocker quiet(frame_);
         frame_->clear();
         frameJoint_.clear();
     }
     frame_->setEnabled(figure_ != nullptr);
+    notes_->setText(notesText());
+    notesArea_->setVisible(figure_ != nullptr);
     drawing_->update();
+}
+
+QString BearingPolarView::notesText() const
+{
+    if (!figure_) return {};
+    QString html = QString("<b>%1</b>").arg(figure_->title().toHtmlEscaped());
+    for (const QString& p : figure_->paragraphs()) html += QString("<p>%1</p>").arg(p.toHtmlEscaped());
+    return html;
+}
+
+void BearingPolarView::resizeEvent(QResizeEvent* event)
+{
+    QWidget::resizeEvent(event);
+    split_->setDirection(width() > 1.2 * height() ? QBoxLayout::LeftToRight : QBoxLayout::TopToBottom);
 }
 
 bool BearingPolarView::eventFilter(QObject* watched, QEvent* event)
 {
+    if (watched == drawing_ && event->type() == QEvent::Resize) refresh();
     if (watched != drawing_ || event->type() != QEvent::Paint) return QWidget::eventFilter(watched, event);
     QPainter p(drawing_);
     p.fillRect(drawing_->rect(), palette::paper());
@@ -98,7 +149,8 @@ bool BearingPolarView::eventFilter(QObject* watched, QEvent* event)
     }
     p.setRenderHint(QPainter::Antialiasing);
     p.setRenderHint(QPainter::TextAntialiasing);
-    figure_->paint(p, QRectF(drawing_->rect()));
+    const double side = std::min(drawing_->width(), drawing_->height());
+    figure_->paint(p, QRectF(drawing_->rect().center() - QPointF(side, side) / 2, QSizeF(side, side)));
     return true;
 }
 

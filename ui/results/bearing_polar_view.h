@@ -1,7 +1,8 @@
 // The polar diagram of the selected joint's bearing load over the cycle, in
 // the frame of one of its two bodies (a choice above the drawing; the
 // joint's second body first, the one its reaction acts on), with the
-// scrubbed position pointed out on the curve. Redrawn when the selection, the
+// scrubbed position pointed out on the curve, and the diagram's notes in the
+// window's font beside it. Redrawn when the selection, the
 // result, the step or the display units change; a message in its place when
 // no joint is selected or nothing is solved.
 #pragma once
@@ -12,7 +13,10 @@
 
 #include <memory>
 
+class QBoxLayout;
 class QComboBox;
+class QLabel;
+class QScrollArea;
 
 namespace clevis::ui {
 
@@ -30,10 +34,15 @@ public:
     const QString& message() const { return message_; }
     // Whose frame: the joint's second body (index 0) or its first (index 1).
     QComboBox* frameChoice() const { return frame_; }
+    // The diagram's title and notes, beside or under the plot.
+    QString notesText() const;
 
 protected:
-    // Paints the drawing area: the figure fitted to it, or the message.
+    // Paints the drawing area: the plot fitted to it, or the message; a new
+    // size lays the plot out again (its labels keep the window's font size).
     bool eventFilter(QObject* watched, QEvent* event) override;
+    // The notes beside the plot in a wide panel, under it in a tall one.
+    void resizeEvent(QResizeEvent* event) override;
 
 private:
     void refresh();
@@ -43,6 +52,9 @@ private:
     AnalysisState* analysis_;
     QComboBox* frame_;
     QWidget* drawing_;
+    QLabel* notes_;
+    QScrollArea* notesArea_;  // the notes' scroll area, hidden with no diagram
+    QBoxLayout* split_;
     QString frameJoint_;  // the joint the choice was filled for
     std::unique_ptr<BearingPolarDiagram> figure_;
     QString message_;
