@@ -20,7 +20,8 @@ namespace {
 // Layout in page units (pt on paper).
 constexpr double kWidth = 340, kMargin = 14;
 constexpr double kTitlePixels = 13, kTextPixels = 10, kLabelPixels = 9;
-constexpr double kRingRoom = 24;  // between the outer ring and the plot's edge, for the axes' names
+constexpr double kRingRoom = 24;               // between the outer ring and the plot's edge, for the axes' names
+constexpr std::size_t kCompactMarkLabels = 3;  // a compact plot names every third mark (every 90° of a crank)
 constexpr double kMarkRadius = 2.4, kPeakMark = 4.2, kPinRadius = 4, kNowRing = 5.5;
 
 QFont font(double pixels, bool bold = false)
@@ -322,9 +323,9 @@ void BearingPolarDiagram::paintPlot(QPainter& p) const
 
     // Each ring's value, along the side the load leaves most free.
     const double ringDeg = polar_.sector.defined && !polar_.sector.reverses ? polar_.sector.quietDeg : -45.0;
-    for (const double ring : rings_)
-        labels.add(ringText(u, ring), centre + pageDirection(ringDeg) * ring * pagePerNewton_, pageDirection(ringDeg),
-                   palette::groundHatch());
+    for (std::size_t k = options_.compact ? rings_.size() - 1 : 0; k < rings_.size(); ++k)
+        labels.add(ringText(u, rings_[k]), centre + pageDirection(ringDeg) * rings_[k] * pagePerNewton_,
+                   pageDirection(ringDeg), palette::groundHatch());
 
     // The drive position at each mark.
     p.setPen(QPen(palette::paper(), 0.8));
@@ -334,9 +335,9 @@ void BearingPolarDiagram::paintPlot(QPainter& p) const
         p.drawEllipse(at, kMarkRadius, kMarkRadius);
         labels.addObstacle(QRectF(at - QPointF(kMarkRadius, kMarkRadius), QSizeF(2, 2) * kMarkRadius));
     }
-    for (const PolarMark& mark : marks_) {
-        const QPointF at = tip(mark.force);
-        labels.add(markText(axis_, mark.position), at, unit(at - centre));
+    for (std::size_t k = 0; k < marks_.size(); k += options_.compact ? kCompactMarkLabels : 1) {
+        const QPointF at = tip(marks_[k].force);
+        labels.add(markText(axis_, marks_[k].position), at, unit(at - centre));
     }
 
     // The scrubbed position.

@@ -28,6 +28,8 @@ struct BearingPolarOptions {
     // against the plot, so they stay legible when the plot is drawn small.
     bool plotOnly = false;
     double textScale = 1.0;
+    // Fewer labels for a plot drawn small: every third mark and the outer ring only.
+    bool compact = false;
 };
 
 class BearingPolarDiagram final : public Figure {

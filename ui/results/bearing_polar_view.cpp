@@ -18,9 +18,11 @@
 namespace clevis::ui {
 namespace {
 
-constexpr double kPlotSide = 312;     // the plot's own side, page units (bearing_polar_diagram.cpp)
-constexpr double kPlotLabel = 9;      // its labels' size there
-constexpr double kLabelShare = 0.85;  // the labels against the window's font: a little smaller, as on a chart
+constexpr double kPlotSide = 312;  // the plot's own side, page units (bearing_polar_diagram.cpp)
+constexpr double kPlotLabel = 9;   // its labels' size there
+constexpr double kLabelShare = 0.85;
+constexpr double kRoomyPlot = 300;  // pixels: a smaller plot gets the compact labelling  // the labels against the
+                                    // window's font: a little smaller, as on a chart
 
 }  // namespace
 
@@ -38,7 +40,7 @@ BearingPolarView::BearingPolarView(MechanismDocument* doc, AnalysisState* analys
     frame_->setToolTip(tr("Whose frame the load is seen in: either body of the joint"));
     frame_->setSizeAdjustPolicy(QComboBox::AdjustToMinimumContentsLengthWithIcon);
     frame_->setMinimumContentsLength(12);
-    drawing_->setMinimumSize(120, 120);
+    drawing_->setMinimumSize(80, 80);
     drawing_->installEventFilter(this);
     notes_->setWordWrap(true);
     notes_->setAlignment(Qt::AlignTop | Qt::AlignLeft);
@@ -47,7 +49,7 @@ BearingPolarView::BearingPolarView(MechanismDocument* doc, AnalysisState* analys
     scroll->setWidget(notes_);
     scroll->setWidgetResizable(true);
     scroll->setFrameShape(QFrame::NoFrame);
-    scroll->setMinimumWidth(120);
+    scroll->setMinimumSize(100, 40);  // small: the panel must fit a laptop screen beside the others
     split_->setContentsMargins(0, 0, 0, 0);
     split_->addWidget(drawing_, 3);
     split_->addWidget(scroll, 2);
@@ -110,7 +112,8 @@ void BearingPolarView::refresh()
             std::max(1.0, kLabelShare * QFontInfo(font()).pixelSize() / (kPlotLabel * side / kPlotSide));
         figure_ = std::make_unique<BearingPolarDiagram>(
             m, analysis_->result(), bearingPolar(m, analysis_->result(), analysis_->summary(), joint, body),
-            BearingPolarOptions{renderUnits(DisplayUnits::instance()), analysis_->currentStep(), true, textScale});
+            BearingPolarOptions{renderUnits(DisplayUnits::instance()), analysis_->currentStep(), true, textScale,
+                                side < kRoomyPlot});
     } else {
         const QSignalBlocker quiet(frame_);
         frame_->clear();
@@ -133,7 +136,10 @@ QString BearingPolarView::notesText() const
 void BearingPolarView::resizeEvent(QResizeEvent* event)
 {
     QWidget::resizeEvent(event);
-    split_->setDirection(width() > 1.2 * height() ? QBoxLayout::LeftToRight : QBoxLayout::TopToBottom);
+    const bool wide = width() > 1.2 * height();
+    split_->setDirection(wide ? QBoxLayout::LeftToRight : QBoxLayout::TopToBottom);
+    // Beside the notes the square plot needs no more width than it has height; the notes take the rest.
+    drawing_->setMaximumWidth(wide ? std::max(drawing_->minimumWidth(), height() - frame_->height()) : QWIDGETSIZE_MAX);
 }
 
 bool BearingPolarView::eventFilter(QObject* watched, QEvent* event)

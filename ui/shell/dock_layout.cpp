@@ -52,12 +52,13 @@ void arrangePanels(QMainWindow* window)
     window->tabifyDockWidget(plots, peaks);
     for (QDockWidget* d : {parts, properties, diagram, cycle, plots, peaks}) d->show();
     plots->raise();
-    // The bearing load shares the diagram's place, as a tab behind it.
+    // The bearing load is a tab beside the plots and the peak table (a tab bar
+    // of its own over the diagram would cost a laptop screen the height it has not got).
     if (QDockWidget* polar = panel("bearingPolarDock")) {
         polar->setFloating(false);
-        window->tabifyDockWidget(diagram, polar);
+        window->tabifyDockWidget(peaks, polar);
         polar->show();
-        diagram->raise();
+        plots->raise();
     }
 
     const QSize size = window->size();
