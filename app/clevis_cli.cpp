@@ -43,6 +43,7 @@ int main(int argc, char** argv)
         return runBarDiagramCommand(rest);
     }
     if (first == "report") return runReportCommand({argv + 2, argv + argc});
+    if (first == "bearing-polar") return runBearingPolarCommand({argv + 2, argv + argc});
 #endif
     try {
         return run(parseCommandLine({argv + 1, argv + argc}));

@@ -16,6 +16,8 @@ Usage:
   clevis-cli fbd FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT) --out F.svg|F.pdf|F.png
                  [--steps N] [--dalembert]
   clevis-cli report FILE --out review.pdf [--steps N]
+  clevis-cli bearing-polar FILE --joint NAME [--body NAME] --out F.svg|F.pdf|F.png
+                 [--steps N]
   clevis-cli internal-loads FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)
                  [--stations N] [--steps N] [--json OUT] [--csv OUT]
   clevis-cli bar-diagram FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)
@@ -34,6 +36,15 @@ Commands:
                          360°), --at-t T at time T s, or
                          --at-peak JOINT where that joint's load peaks;
              --dalembert draws the inertia force and couple on the body
+  bearing-polar
+             draw the load one joint puts on one of its bodies over the whole
+             cycle, in that body's own frame (x and y are the global x and y
+             at the drawn pose, turning with the body; the frame's are global):
+             the curve the force's tip traces, the drive position marked every
+             30° (a round step for other drives), the peak, and whether the
+             load reverses on the bearing; --body NAME chooses which of the
+             joint's two bodies (default: its second, on which the reaction
+             acts); exit 2 naming the joint or body when either is wrong
   report     write the design-review PDF: drawing, inputs, plots, peak loads,
              free-body diagrams at the critical positions, energy balance,
              cautions
@@ -43,7 +54,7 @@ Commands:
   bar-diagram
              draw the axial force, shear force and bending moment along one
              bar at one position over their range over the cycle
-  (fbd, bar-diagram and report are present in builds that include the
+  (fbd, bar-diagram, bearing-polar and report are present in builds that include the
   desktop app.)
 
 Run "clevis-cli analyze --help" for the options, units, sign conventions and

@@ -5,12 +5,14 @@
 
 #include "core/file/mechanism_file.h"
 #include "core/model/model_error.h"
+#include "core/results/bearing_polar.h"
 #include "core/results/cycle_summary.h"
 #include "core/results/free_body.h"
 #include "core/solver/analysis_error.h"
 #include "core/solver/cycle_sweep.h"
 #include "core/solver/exact_position.h"
 #include "render/bar_load_diagram.h"
+#include "render/bearing_polar_diagram.h"
 #include "render/free_body_painter.h"
 #include "render/review_report.h"
 
@@ -33,6 +35,8 @@ const char* const kBarDiagramUsage =
     "usage: clevis-cli bar-diagram FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)\n"
     "                  --out F.svg|F.pdf|F.png [--steps N]\n";
 const char* const kReportUsage = "usage: clevis-cli report FILE --out review.pdf [--steps N]\n";
+const char* const kBearingPolarUsage =
+    "usage: clevis-cli bearing-polar FILE --joint NAME [--body NAME] --out F.svg|F.pdf|F.png [--steps N]\n";
 
 namespace {
 
@@ -81,16 +85,23 @@ double number(const Parsed& p, const std::string& option)
     throw Usage(option + ": \"" + text + "\" is not a number");
 }
 
+// --out, a figure file.
+const std::string& figureOut(const Parsed& p)
+{
+    const std::string& out = p.options.at("--out");
+    const QString suffix = QString::fromStdString(out).section('.', -1).toLower();
+    if (suffix != "svg" && suffix != "pdf" && suffix != "png")
+        throw Usage("--out " + out + ": use a .svg, .pdf or .png file");
+    return out;
+}
+
 // What the drawings of one body at one position (fbd, bar-diagram) take:
 // FILE, --body, one of --at-deg, --at-t, --at-peak, --out (.svg, .pdf or
 // .png) and --steps, and any `flags` of their own.
 Parsed parseFigureAtPosition(const std::vector<std::string>& args, const std::vector<std::string>& flags)
 {
     Parsed p = parse(args, {"--body", "--at-deg", "--at-t", "--at-peak", "--out", "--steps"}, flags);
-    const std::string& out = p.options.at("--out");
-    const QString suffix = QString::fromStdString(out).section('.', -1).toLower();
-    if (suffix != "svg" && suffix != "pdf" && suffix != "png")
-        throw Usage("--out " + out + ": use a .svg, .pdf or .png file");
+    figureOut(p);
     if (!p.options.count("--body")) throw Usage("--body is missing");
     return p;
 }
@@ -186,6 +197,28 @@ int chooseBody(const Parsed& p, const Solved& s)
     throw Usage("--body: no body \"" + name + "\" (bodies: " + names + ")");
 }
 
+// The joint named by --joint and the side named by --body (default: the
+// joint's second body, the one its reaction acts on).
+std::pair<int, int> chooseJointSide(const Parsed& p, const Solved& s)
+{
+    if (!p.options.count("--joint")) throw Usage("--joint is missing");
+    const std::string& name = p.options.at("--joint");
+    const auto& joints = s.m.joints;
+    const auto found = std::find_if(joints.begin(), joints.end(), [&](const auto& j) { return j.name == name; });
+    if (found == joints.end()) {
+        std::string names;
+        for (const auto& j : joints) names += (names.empty() ? "" : ", ") + j.name;
+        throw Usage("--joint: no joint \"" + name + "\" (joints: " + names + ")");
+    }
+    if (!p.options.count("--body")) return {int(found - joints.begin()), found->body[1]};
+    const std::string& body = p.options.at("--body");
+    const int index = findBody(s.m, body);
+    if (index == -2 || (index != found->body[0] && index != found->body[1]))
+        throw Usage("--body " + body + ": not a body of joint \"" + name +
+                    "\" (its bodies: " + s.m.bodyName(found->body[0]) + ", " + s.m.bodyName(found->body[1]) + ")");
+    return {int(found - joints.begin()), index};
+}
+
 // Runs `work`, turning the documented failures into exit codes and messages.
 template <class Work>
 int guarded(const char* usage, const std::string& file, Work&& work)
@@ -214,6 +247,18 @@ bool trustworthy(const Solved& s, const std::string& file)
     return false;
 }
 
+// Writes the figure; the exit code says whether it was written and the results can be trusted.
+int exported(const ui::Figure& figure, const std::string& out, const QString& title, const Solved& s,
+             const std::string& file)
+{
+    QString error;
+    if (!ui::exportFigure(figure, QString::fromStdString(out), title, &error)) {
+        std::cerr << error.toStdString() << '\n';
+        return kFailed;
+    }
+    return trustworthy(s, file) ? kOk : kFailed;
+}
+
 std::string fileOf(const std::vector<std::string>& args)
 {
     for (const auto& a : args)
@@ -227,20 +272,32 @@ int runFbdCommand(const std::vector<std::string>& args)
 {
     return guarded(kFbdUsage, fileOf(args), [&] {
         const Parsed p = parseFigureAtPosition(args, {"--dalembert"});
-        const std::string& out = p.options.at("--out");
+        const std::string& out = figureOut(p);
         const auto solved = solve(p);
         const int body = chooseBody(p, *solved);
         const int step = chooseStep(p, *solved);
         ensureGuiApplication();
         const ui::FreeBodyPainter figure(solved->m, solved->r, freeBodyDiagram(solved->m, solved->r, body, step),
                                          {ui::RenderUnits{}, p.options.count("--dalembert") > 0});
-        QString error;
         const QString title = QString("Free-body diagram: %1").arg(QString::fromStdString(solved->m.bodies[body].name));
-        if (!ui::exportFigure(figure, QString::fromStdString(out), title, &error)) {
-            std::cerr << error.toStdString() << '\n';
-            return kFailed;
-        }
-        return trustworthy(*solved, p.file) ? kOk : kFailed;
+        return exported(figure, out, title, *solved, p.file);
+    });
+}
+
+int runBearingPolarCommand(const std::vector<std::string>& args)
+{
+    return guarded(kBearingPolarUsage, fileOf(args), [&] {
+        const Parsed p = parse(args, {"--joint", "--body", "--out", "--steps"}, {});
+        const std::string& out = figureOut(p);
+        const auto solved = solve(p);
+        const auto [joint, body] = chooseJointSide(p, *solved);
+        ensureGuiApplication();
+        const ui::BearingPolarDiagram figure(
+            solved->m, solved->r, bearingPolar(solved->m, solved->r, solved->s, joint, body), {ui::RenderUnits{}});
+        const QString title = QString("Bearing load at %1 on %2")
+                                  .arg(QString::fromStdString(solved->m.joints[joint].name),
+                                       QString::fromStdString(solved->m.bodyName(body)));
+        return exported(figure, out, title, *solved, p.file);
     });
 }
 
@@ -248,20 +305,15 @@ int runBarDiagramCommand(const std::vector<std::string>& args)
 {
     return guarded(kBarDiagramUsage, fileOf(args), [&] {
         const Parsed p = parseFigureAtPosition(args, {});
-        const std::string& out = p.options.at("--out");
+        const std::string& out = figureOut(p);
         const auto solved = solve(p);
         const BarModel bar = chooseBar(findBars(solved->doc, solved->m), p.options.at("--body"));
         const int step = chooseStep(p, *solved);
         ensureGuiApplication();
         const ui::BarCycleLoads cycle = ui::barCycleLoads(solved->m, solved->r, bar);
         const ui::BarLoadDiagram figure(solved->m, solved->r, cycle, step, ui::RenderUnits{});
-        QString error;
         const QString title = QString("Internal loads: %1").arg(QString::fromStdString(bar.bodyName));
-        if (!ui::exportFigure(figure, QString::fromStdString(out), title, &error)) {
-            std::cerr << error.toStdString() << '\n';
-            return kFailed;
-        }
-        return trustworthy(*solved, p.file) ? kOk : kFailed;
+        return exported(figure, out, title, *solved, p.file);
     });
 }
 

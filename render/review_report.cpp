@@ -7,6 +7,7 @@
 #include "core/results/summary_text.h"
 #include "core/solver/body_state.h"
 #include "render/bar_load_diagram.h"
+#include "render/bearing_polar_report.h"
 #include "render/cycle_axis.h"
 #include "render/cycle_chart.h"
 #include "render/energy_balance_figure.h"
@@ -272,6 +273,7 @@ bool barDiagramsSection(PageFlow& f, const ReviewReportInput& in, const CycleAxi
 {
     const auto& m = in.mechanism;
     const auto& r = in.result;
+    f.subheading("Internal loads of the bars");
     if (!in.document) {
         f.paragraph(
             "The bars are not known for this result (the mechanism changed while it was being solved): "
@@ -313,8 +315,8 @@ const std::vector<QString>& reviewReportSections()
                                                "3 Loads over the cycle",
                                                "4 Peak loads",
                                                "5 Free-body diagrams at the critical positions",
-                                               "6 Energy balance",
-                                               "7 Sizing of the bars",
+                                               "6 Sizing",
+                                               "7 Energy balance",
                                                "8 Cautions and assumptions"};
     return sections;
 }
@@ -413,6 +415,12 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
     }
     if (ok) {
         f.heading(sections[5]);
+        ok = barDiagramsSection(f, in, axis, advance);
+        if (ok) bearingPolarPages(f, in);
+        ok = ok && advance();
+    }
+    if (ok) {
+        f.heading(sections[6]);
         f.paragraph(
             "Energy put into the mechanism (right) and taken out of it (left) over the solved span: by each driver "
             "(positive and negative power apart), the net work of the applied loads, the kinetic and potential "
@@ -422,10 +430,6 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
             "the step count is too coarse or the cycle passes a singular position.");
         f.figure(EnergyBalanceFigure(in.summary), f.width());
         ok = advance();
-    }
-    if (ok) {
-        f.heading(sections[6]);
-        ok = barDiagramsSection(f, in, axis, advance) && advance();
     }
     if (ok) {
         f.heading(sections[7]);

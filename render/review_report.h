@@ -1,8 +1,9 @@
 // The design-review report (PDF): the mechanism drawing, the inputs, the
 // loads over the cycle, the peak-load table (the numbers of summarize(), as
 // the command-line summary prints them), free-body diagrams at the critical
-// positions, the energy balance, the sizing of the bars (the N/V/M diagram
-// of each at its critical position), and the cautions. Needs QtGui only, so it
+// positions, the sizing chapter (the N/V/M diagram of each bar at its
+// critical position, the bearing loads in the body frame), the energy
+// balance, and the cautions. Needs QtGui only, so it
 // runs headless.
 #pragma once
 

@@ -2,6 +2,7 @@
 
 #include "ui/files/export_actions.h"
 #include "ui/results/bar_load_view.h"
+#include "ui/results/bearing_polar_view.h"
 #include "ui/results/drive_scrubber.h"
 #include "ui/results/free_body_view.h"
 #include "ui/results/peak_table.h"
@@ -26,6 +27,7 @@ void installResultsViews(QMainWindow* window, MechanismDocument* doc, AnalysisSt
     addPanel(window, QObject::tr("Peak loads"), "peaksDock", peaks, {240, 100});
     addPanel(window, QObject::tr("Free-body diagram"), "freeBodyDock", diagram, {260, 200});
     addPanel(window, QObject::tr("Loads along the link"), "barLoadsDock", barLoads, {260, 200});
+    addPanel(window, QObject::tr("Bearing load"), "bearingPolarDock", new BearingPolarView(doc, analysis), {260, 200});
     auto* exports = new ExportActions(window, doc, analysis, diagram, plots);
     exports->fill(window->menuBar()->addMenu(QObject::tr("E&xport")));
 }

@@ -55,6 +55,14 @@ void arrangePanels(QMainWindow* window)
     for (QDockWidget* d : {parts, properties, diagram, cycle, plots, peaks, barLoads}) d->show();
     plots->raise();
     diagram->raise();
+    // The bearing load is a tab beside the plots and the peak table (a tab bar
+    // of its own over the diagram would cost a laptop screen the height it has not got).
+    if (QDockWidget* polar = panel("bearingPolarDock")) {
+        polar->setFloating(false);
+        window->tabifyDockWidget(peaks, polar);
+        polar->show();
+        plots->raise();
+    }
 
     const QSize size = window->size();
     const int column = share(size.width(), 0.2, 240, 360), diagramWidth = share(size.width(), 0.34, 300, 640);

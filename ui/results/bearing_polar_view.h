@@ -1,0 +1,63 @@
+// The polar diagram of the selected joint's bearing load over the cycle, in
+// the frame of one of its two bodies (a choice above the drawing; the
+// joint's second body first, the one its reaction acts on), with the
+// scrubbed position pointed out on the curve, and the diagram's notes in the
+// window's font beside it. Redrawn when the selection, the
+// result, the step or the display units change; a message in its place when
+// no joint is selected or nothing is solved.
+#pragma once
+
+#include "render/bearing_polar_diagram.h"
+
+#include <QWidget>
+
+#include <memory>
+
+class QBoxLayout;
+class QComboBox;
+class QLabel;
+class QScrollArea;
+
+namespace clevis::ui {
+
+class AnalysisState;
+class MechanismDocument;
+
+class BearingPolarView : public QWidget {
+    Q_OBJECT
+public:
+    BearingPolarView(MechanismDocument* doc, AnalysisState* analysis, QWidget* parent = nullptr);
+
+    // The diagram on show; null when there is none (see message()).
+    const BearingPolarDiagram* figure() const { return figure_.get(); }
+    // Why there is no diagram; empty while one is shown.
+    const QString& message() const { return message_; }
+    // Whose frame: the joint's second body (index 0) or its first (index 1).
+    QComboBox* frameChoice() const { return frame_; }
+    // The diagram's title and notes, beside or under the plot.
+    QString notesText() const;
+
+protected:
+    // Paints the drawing area: the plot fitted to it, or the message; a new
+    // size lays the plot out again (its labels keep the window's font size).
+    bool eventFilter(QObject* watched, QEvent* event) override;
+    // The notes beside the plot in a wide panel, under it in a tall one.
+    void resizeEvent(QResizeEvent* event) override;
+
+private:
+    void refresh();
+    void fillFrameChoice(int joint);
+
+    MechanismDocument* doc_;
+    AnalysisState* analysis_;
+    QComboBox* frame_;
+    QWidget* drawing_;
+    QLabel* notes_;
+    QScrollArea* notesArea_;  // the notes' scroll area, hidden with no diagram
+    QBoxLayout* split_;
+    QString frameJoint_;  // the joint the choice was filled for
+    std::unique_ptr<BearingPolarDiagram> figure_;
+    QString message_;
+};
+
+}  // namespace clevis::ui
