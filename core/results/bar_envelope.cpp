@@ -34,14 +34,16 @@ std::vector<BarEnvelope> barEnvelopes(const CompiledMechanism& m, const CycleRes
     std::vector<BarEnvelope> out(bars.size());
     for (std::size_t b = 0; b < bars.size(); ++b) out[b].body = bars[b].body;
     std::vector<std::vector<BodyLoad>> loads;
-    BarLoads along;
+    std::vector<BarLoads> along;
+    along.reserve(bars.size());
+    for (const BarModel& bar : bars) along.emplace_back(bar);
     std::vector<Eigen::Matrix2d> rotations;
     for (std::size_t i = 0; i < r.steps.size(); ++i) {
         const Pose q(r.steps[i].q, rotations);
         bodyLoads(m, r.steps[i], q, loads);
         for (std::size_t b = 0; b < bars.size(); ++b) {
-            along.set(m, bars[b], r.steps[i], q, loads[std::size_t(bars[b].body)]);
-            update(out[b], along.peaks(), int(i));
+            along[b].set(m, r.steps[i], q, loads[std::size_t(bars[b].body)]);
+            update(out[b], along[b].peaks(), int(i));
         }
     }
     return out;

@@ -2,6 +2,7 @@
 
 #include "core/solver/applied_loads.h"
 
+#include <optional>
 #include <stdexcept>
 
 namespace clevis {
@@ -15,17 +16,26 @@ Vec2 axisOf(const StepResult& s, const CompiledJoint& j)
     return j.type == JointType::Pin ? Vec2::Zero() : Vec2(rotation(bodyAngle(s.q, j.body[0])) * j.axisLocal);
 }
 
-// Where constraint k acts on its body `side`, as a force through a point
-// plus a couple: a joint's (or a driver at a joint's) at the joint's contact
-// point, a driver between two points where it is attached.
-ConstraintAction placedAction(const CompiledMechanism& m, const StepResult& s, const Pose& q, std::size_t k, int side)
+// Where constraint k acts on its bodies, as a force through a point plus a
+// couple: a joint's (or a driver at a joint's) at the joint's contact point
+// (returned), a driver between two points where it is attached (none).
+std::optional<Vec2> actionPoint(const CompiledMechanism& m, const Pose& q, std::size_t k)
 {
-    const ConstraintAction& a = s.actions[side][k];
     const std::size_t joints = m.joints.size();  // constraints: joints, then drivers
     const int joint = k < joints ? int(k) : m.drivers[k - joints].joint;
-    if (joint < 0) return a;
-    const Vec2 at = contactPoint(q, m.joints[std::size_t(joint)]);
-    return {at, a.force, a.couple + cross(a.at - at, a.force), a.body};
+    if (joint < 0) return std::nullopt;
+    return contactPoint(q, m.joints[std::size_t(joint)]);
+}
+
+ConstraintAction placedAt(const ConstraintAction& a, const std::optional<Vec2>& at)
+{
+    if (!at) return a;
+    return {*at, a.force, a.couple + cross(a.at - *at, a.force), a.body};
+}
+
+ConstraintAction placedAction(const CompiledMechanism& m, const StepResult& s, const Pose& q, std::size_t k, int side)
+{
+    return placedAt(s.actions[side][k], actionPoint(m, q, k));
 }
 
 FreeBodyItem fromAction(const ConstraintAction& a)
@@ -134,11 +144,13 @@ void bodyLoads(const CompiledMechanism& m, const StepResult& s, const Pose& q, s
 {
     out.resize(m.bodies.size());
     for (auto& loads : out) loads.clear();
-    for (std::size_t k = 0; k < s.actions[0].size(); ++k)
+    for (std::size_t k = 0; k < s.actions[0].size(); ++k) {
+        const std::optional<Vec2> at = actionPoint(m, q, k);  // once for both sides
         for (int side = 0; side < 2; ++side) {
-            const ConstraintAction a = placedAction(m, s, q, k, side);
+            const ConstraintAction a = placedAt(s.actions[side][k], at);
             if (a.body != kGround) out[std::size_t(a.body)].push_back({a.at, a.force, a.couple});
         }
+    }
     for (const AppliedLoad& l : appliedLoads(m, q, s.qd, s.t, s.drivePosition))
         if (l.body != kGround && loadKind(m, l.source) != FreeBodyItemKind::Weight)
             out[std::size_t(l.body)].push_back({l.at, l.force, l.couple});

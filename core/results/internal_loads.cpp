@@ -35,6 +35,29 @@ void rootsBetween(double a, double b, double c, double from, double to, Keep kee
     if (q != 0.0) inside(c / q);
 }
 
+// rootsBetween for a = 0 (a linear b·x + c): the same root, found the same way.
+template <class Keep>
+void linearRootBetween(double b, double c, double from, double to, Keep keep)
+{
+    const double atFrom = b * from + c, atTo = b * to + c;
+    if ((atFrom < 0.0) == (atTo < 0.0) || atFrom == 0.0 || atTo == 0.0) return;
+    const double x = -c / b;
+    if (x > from && x < to) keep(x);
+}
+
+// The foot s of P on the line from A along e (0 ≤ s ≤ L), and the couple
+// of a force F with couple C through P moved there; s is called for every
+// load on every bar at every step.
+std::pair<double, double> foot(const Vec2& a, const Vec2& e, double length, const Vec2& p, const Vec2& force,
+                               double couple)
+{
+    const double snap = 1e-9 * length;
+    double s = std::clamp((p - a).dot(e), 0.0, length);
+    if (s < snap) s = 0.0;
+    if (s > length - snap) s = length;
+    return {s, couple + cross(p - (a + s * e), force)};
+}
+
 }  // namespace
 
 // a(P) = a_G + α·(P − G)⊥ − ω²·(P − G)
@@ -43,17 +66,30 @@ Vec2 BarLoads::accel(const Vec2& p) const { return aG_ + alpha_ * perp(p - g_) -
 // Force F (with couple C) through P, moved to the foot of P on the line.
 void BarLoads::add(const Vec2& p, const Vec2& force, double couple)
 {
-    const double length = bar_->length, snap = 1e-9 * length;
-    double s = std::clamp((p - a_).dot(e_), 0.0, length);
-    if (s < snap) s = 0.0;
-    if (s > length - snap) s = length;
-    loads_.push_back({s, force, couple + cross(p - (a_ + s * e_), force)});
+    const auto [s, moved] = foot(a_, e_, bar_->length, p, force, couple);
+    loads_.push_back({s, force, moved});
 }
 
-void BarLoads::set(const CompiledMechanism& m, const BarModel& bar, const StepResult& s, const Pose& q,
-                   const std::vector<BodyLoad>& loads)
+void BarLoads::prepare(const BarModel& bar)
 {
     bar_ = &bar;
+    const MassSpread& spread = bar.spread;
+    const double span = spread.to - spread.from;
+    perLength_ = span > 0.0 ? spread.mass / span : 0.0;
+    rotaryPerLength_ = span > 0.0 ? -spread.rotary / span : 0.0;
+    perArea_ = bar.area > 0.0 ? 1.0 / bar.area : 0.0;
+    perModulus_ = bar.area > 0.0 ? 1.0 / bar.sectionModulus : 0.0;
+    // The pieces' fixed ends: 0, the spread's ends (0 ≤ from ≤ to ≤ L) and L,
+    // each kept only beyond the one before (as peaks() merges them).
+    const bool spreadOut = spread.to > spread.from;
+    fixedCount_ = 0;
+    for (const double x : {0.0, spreadOut ? spread.from : 0.0, spreadOut ? spread.to : 0.0, bar.length})
+        if (fixedCount_ == 0 || x > fixed_[fixedCount_ - 1]) fixed_[fixedCount_++] = x;
+}
+
+void BarLoads::set(const CompiledMechanism& m, const StepResult& s, const Pose& q, const std::vector<BodyLoad>& loads)
+{
+    const BarModel& bar = *bar_;
     gravity_ = m.gravity;
     a_ = q.point(bar.ends[0].point);
     g_ = bodyOrigin(s.q, bar.body);
@@ -65,7 +101,10 @@ void BarLoads::set(const CompiledMechanism& m, const BarModel& bar, const StepRe
     setDistributed(bar.spread);
 
     loads_.clear();
-    for (const auto& l : loads) add(l.at, l.force, l.couple);
+    for (const auto& l : loads) {
+        const auto [at, moved] = foot(a_, e_, bar.length, l.at, l.force, l.couple);
+        loads_.push_back({at, l.force, moved});
+    }
     for (const auto& [mass, point] : bar.pointMasses) {
         const Vec2 p = q.point(point);
         add(p, mass * (gravity_ - accel(p)), 0.0);
@@ -93,11 +132,11 @@ void BarLoads::setDistributed(const MassSpread& spread)
     inside_ = beyond_ = Sums{};
     const double span = spread.to - spread.from;
     if (span <= 0.0) return;
-    const double mu = spread.mass / span, u0 = spread.from, d = spread.offset, w2 = omega_ * omega_;
+    const double mu = perLength_, u0 = spread.from, d = spread.offset, w2 = omega_ * omega_;
     const Vec2 free = gravity_ - accel(a_ + d * n_);
     const Vec2 k = alpha_ * n_ - w2 * e_;
     const double p = free.dot(e_), b = free.dot(n_);
-    const double a0 = -spread.rotary / span * alpha_ - d * mu * p, a1 = mu * (b - d * w2), a3 = -mu * alpha_ / 3.0;
+    const double a0 = rotaryPerLength_ * alpha_ - d * mu * p, a1 = mu * (b - d * w2), a3 = -mu * alpha_ / 3.0;
     inside_.f[0] = mu * (-free * u0 + k * (0.5 * u0 * u0));
     inside_.f[1] = mu * free;
     inside_.f[2] = -0.5 * mu * k;
@@ -147,84 +186,106 @@ BarStation BarLoads::at(double x, bool before) const
     return piece(x, force, moment).at(x);
 }
 
+namespace {
+
+// The running peaks of peaks(): a value replaces the one kept only when it
+// is larger, so of equal values the first found stays.
+template <class Larger>
+void keepIf(PeakAlong& peak, double value, double x, Larger larger)
+{
+    if (larger(value, peak.value)) peak = {value, x};
+}
+const auto above = [](double v, double best) { return v > best; };
+const auto below = [](double v, double best) { return v < best; };
+const auto bigger = [](double v, double best) { return std::abs(v) > std::abs(best); };
+
+struct RunningPeaks {
+    PeakAlong tension, compression, shear, moment, fibreTension, fibreCompression;
+
+    void axial(double x, double n)
+    {
+        keepIf(tension, n, x, above);
+        keepIf(compression, n, x, below);
+    }
+    void shearAt(double x, double v) { keepIf(shear, v, x, bigger); }
+    void momentAt(double x, double m) { keepIf(moment, m, x, bigger); }
+    void all(const BarStation& st)
+    {
+        axial(st.s, st.axial);
+        shearAt(st.s, st.shear);
+        momentAt(st.s, st.moment);
+    }
+    void fibre(double x, double v)
+    {
+        keepIf(fibreTension, v, x, above);
+        keepIf(fibreCompression, v, x, below);
+    }
+};
+
+}  // namespace
+
 // On each piece the peaks lie at its ends or where a derivative vanishes:
 // dN/dx = n₁ + 2n₂x, dV/dx = v₁ + 2v₂x, dM/dx = m₁ + 2m₂x + 3m₃x². (dM/dx =
 // V − c, the shear less the distributed couple, as beam theory has it.)
-// Pieces are taken from the first end on; of equal values the first found stays.
+// Pieces are taken from the first end on; of equal values the first found
+// stays. This runs for every bar at every step: the pieces' ends are merged
+// as they are walked, not stored.
 BarPeaks BarLoads::peaks() const
 {
-    // The pieces' ends: 0, L, the spread's ends (0 ≤ from ≤ to ≤ L) and the
-    // loads' stations (in order already), merged without repeats.
-    const MassSpread& spread = bar_->spread;
-    const bool spreadOut = spread.to > spread.from;
-    const double fixed[4] = {0.0, spreadOut ? spread.from : 0.0, spreadOut ? spread.to : 0.0, bar_->length};
-    breaks_.clear();
-    const auto put = [&](double x) {
-        if (breaks_.empty() || x > breaks_.back()) breaks_.push_back(x);
-    };
-    int f = 0;
-    for (const auto& l : loads_) {
-        for (; f < 4 && fixed[f] <= l.s; ++f) put(fixed[f]);
-        put(l.s);
-    }
-    for (; f < 4; ++f) put(fixed[f]);
-
-    BarPeaks out;
-    const auto axial = [&](double x, double n) {
-        if (n > out.tension.value) out.tension = {n, x};
-        if (n < out.compression.value) out.compression = {n, x};
-    };
-    const auto shear = [&](double x, double v) {
-        if (std::abs(v) > std::abs(out.shear.value)) out.shear = {v, x};
-    };
-    const auto moment = [&](double x, double m) {
-        if (std::abs(m) > std::abs(out.moment.value)) out.moment = {m, x};
-    };
-    const auto all = [&](const BarStation& st) {
-        axial(st.s, st.axial);
-        shear(st.s, st.shear);
-        moment(st.s, st.moment);
-    };
-    // σ = N/A ± M/Z, each a cubic on the piece like M: its values at the
-    // piece's ends, and where dσ/dx = 0 between them.
-    const double perArea = bar_->area > 0.0 ? 1.0 / bar_->area : 0.0;
-    const double perModulus = bar_->area > 0.0 ? 1.0 / bar_->sectionModulus : 0.0;
-    const auto fibre = [&](double x, double v) {
-        if (v > out.fibreTension.value) out.fibreTension = {v, x};
-        if (v < out.fibreCompression.value) out.fibreCompression = {v, x};
-    };
-    const auto fibres = [&](const Piece& p, const BarStation& a, const BarStation& b) {
-        for (const double side : {1.0, -1.0}) {
-            fibre(a.s, a.axial * perArea + side * a.moment * perModulus);
-            fibre(b.s, b.axial * perArea + side * b.moment * perModulus);
-            const double c0 = p.n[0] * perArea + side * p.m[0] * perModulus;
-            const double c1 = p.n[1] * perArea + side * p.m[1] * perModulus;
-            const double c2 = p.n[2] * perArea + side * p.m[2] * perModulus, c3 = side * p.m[3] * perModulus;
-            rootsBetween(3.0 * c3, 2.0 * c2, c1, a.s, b.s,
-                         [&](double x) { fibre(x, c0 + x * (c1 + x * (c2 + x * c3))); });
-        }
-    };
+    RunningPeaks out;
+    const double perArea = perArea_, perModulus = perModulus_;
     Vec2 force = Vec2::Zero();
     double sum = 0.0;
     auto next = loads_.begin();
-    for (std::size_t k = 0; k + 1 < breaks_.size(); ++k) {
-        const double from = breaks_[k], to = breaks_[k + 1];
+    // The pieces' ends: the bar's own (prepare) and the loads' stations, both
+    // in order, merged without repeats.
+    const double* fixed = fixed_.data();
+    const double* const fixedEnd = fixed + fixedCount_;
+    auto load = loads_.begin();
+    bool started = false;
+    double from = 0.0;
+    while (fixed != fixedEnd || load != loads_.end()) {
+        const double to = load == loads_.end() || (fixed != fixedEnd && *fixed <= load->s) ? *fixed++ : (load++)->s;
+        if (!started || !(to > from)) {
+            if (!started) from = to;
+            started = true;
+            continue;
+        }
         for (; next != loads_.end() && next->s <= from; ++next) {
             force += next->force;
             sum += next->couple + next->s * next->force.dot(n_);
         }
         const Piece p = piece(0.5 * (from + to), force, sum);
         const BarStation atFrom = p.at(from), atTo = p.at(to);
-        all(atFrom);
-        rootsBetween(0.0, 2.0 * p.n[2], p.n[1], from, to,
-                     [&](double x) { axial(x, p.n[0] + x * (p.n[1] + x * p.n[2])); });
-        rootsBetween(0.0, 2.0 * p.v[2], p.v[1], from, to,
-                     [&](double x) { shear(x, p.v[0] + x * (p.v[1] + x * p.v[2])); });
-        rootsBetween(3.0 * p.m[3], 2.0 * p.m[2], p.m[1], from, to, [&](double x) { moment(x, p.at(x).moment); });
-        all(atTo);
-        if (perArea > 0.0) fibres(p, atFrom, atTo);
+        out.all(atFrom);
+        linearRootBetween(2.0 * p.n[2], p.n[1], from, to,
+                          [&](double x) { out.axial(x, p.n[0] + x * (p.n[1] + x * p.n[2])); });
+        linearRootBetween(2.0 * p.v[2], p.v[1], from, to,
+                          [&](double x) { out.shearAt(x, p.v[0] + x * (p.v[1] + x * p.v[2])); });
+        rootsBetween(3.0 * p.m[3], 2.0 * p.m[2], p.m[1], from, to, [&](double x) { out.momentAt(x, p.at(x).moment); });
+        out.all(atTo);
+        if (perArea > 0.0) {
+            // σ = N/A ± M/Z, each a cubic on the piece like M: its values at
+            // the piece's ends, and where dσ/dx = 0 between them. (±1·M/Z is
+            // ±(M/Z) exactly, so both fibres share the products.)
+            const double na = atFrom.axial * perArea, ma = atFrom.moment * perModulus;
+            const double nb = atTo.axial * perArea, mb = atTo.moment * perModulus;
+            double n[3], m[4];
+            for (int i = 0; i < 3; ++i) n[i] = p.n[i] * perArea;
+            for (int i = 0; i < 4; ++i) m[i] = p.m[i] * perModulus;
+            for (const double side : {1.0, -1.0}) {
+                const bool plus = side > 0.0;
+                out.fibre(from, plus ? na + ma : na - ma);
+                out.fibre(to, plus ? nb + mb : nb - mb);
+                const double c0 = plus ? n[0] + m[0] : n[0] - m[0], c1 = plus ? n[1] + m[1] : n[1] - m[1];
+                const double c2 = plus ? n[2] + m[2] : n[2] - m[2], c3 = side * m[3];
+                rootsBetween(3.0 * c3, 2.0 * c2, c1, from, to,
+                             [&](double x) { out.fibre(x, c0 + x * (c1 + x * (c2 + x * c3))); });
+            }
+        }
+        from = to;
     }
-    return out;
+    return {out.tension, out.compression, out.shear, out.moment, out.fibreTension, out.fibreCompression};
 }
 
 std::vector<BarStation> internalLoads(const CompiledMechanism& m, const BarModel& bar, const StepResult& s,

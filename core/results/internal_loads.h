@@ -33,6 +33,7 @@
 #include "core/results/bar_model.h"
 #include "core/results/free_body.h"
 
+#include <array>
 #include <vector>
 
 namespace clevis {
@@ -63,10 +64,21 @@ struct BarPeaks {
 // its storage.
 class BarLoads {
 public:
+    BarLoads() = default;
+    // Ready for `bar` (which must outlive it), its figures that do not
+    // change from step to step worked out once.
+    explicit BarLoads(const BarModel& bar) { prepare(bar); }
+
     // `loads` is what acts on the bar's body but its weight (bodyLoads(m, s,
     // q)[bar.body]): the mass along the line stands for it; `q` is s's pose.
     void set(const CompiledMechanism& m, const BarModel& bar, const StepResult& s, const Pose& q,
-             const std::vector<BodyLoad>& loads);
+             const std::vector<BodyLoad>& loads)
+    {
+        prepare(bar);
+        set(m, s, q, loads);
+    }
+    // The same for the bar it was made or last set for.
+    void set(const CompiledMechanism& m, const StepResult& s, const Pose& q, const std::vector<BodyLoad>& loads);
 
     // The loads at station x: just beyond a concentrated load there (towards
     // the second end), or just before it when `before`.
@@ -94,17 +106,22 @@ private:
         double n[3], v[3], m[4];
         BarStation at(double x) const;
     };
+    void prepare(const BarModel& bar);
     Vec2 accel(const Vec2& p) const;
     void add(const Vec2& p, const Vec2& force, double couple);
     void setDistributed(const MassSpread& spread);
     Piece piece(double x, const Vec2& force, double moment) const;
 
     const BarModel* bar_ = nullptr;
+    // The bar's own figures (prepare): the spread's μ = m/ℓ and −J/ℓ, and
+    // 1/A and 1/Z (0 without a section).
+    double perLength_ = 0.0, rotaryPerLength_ = 0.0, perArea_ = 0.0, perModulus_ = 0.0;
     Vec2 gravity_, a_, g_, aG_, e_, n_;
     double omega_ = 0.0, alpha_ = 0.0;
     Sums inside_, beyond_;  // the spread mass's share within it and beyond its end
     std::vector<LineLoad> loads_;
-    mutable std::vector<double> breaks_;  // scratch for peaks()
+    std::array<double, 4> fixed_{};  // the pieces' ends that are the bar's own (prepare)
+    int fixedCount_ = 0;
 };
 
 // N equally spaced stations (N ≥ 2, both ends included) of `bar` at step
