@@ -225,7 +225,7 @@ TEST(Diagnostics, PistonDrivenFromDeadCentreIsRefusedClearly)
     EXPECT_FALSE(contains(message, "Add a driver")) << message;
     EXPECT_FALSE(contains(message, "Remove one")) << message;
     // Drawn a little off dead centre it runs, flagging the start (there
-    // rcond is proportional to the crank's angle, about 3e-6 at 1e-5 rad).
+    // the near-singular measure is proportional to the crank's angle, about 2e-6 at 1e-5 rad).
     spec.theta0 = 1e-5;
     mech = test::sliderCrank(spec);
     mech.drivers = {test::linearAtSlider("ram", "S", Rise{CamLaw::Cycloidal, 0.0, -0.1, 0.0, 1.0})};

@@ -217,9 +217,9 @@ std::vector<NearToggle> findToggles(const CompiledMechanism& m, const Steps& in)
 // A step flagged near singular by the solver is unreliable. So are the last
 // steps of a cycle that stops where the links cannot be joined: that end is a
 // limit (toggle) position, and approaching it the reactions grow far faster
-// than the condition number falls, so they can be huge before any step is
-// flagged. The steps from the end back to where the reciprocal condition is
-// still at least half its median over the cycle are taken as ill-conditioned
+// than the near-singular measure falls, so they can be huge before any step
+// is flagged. The steps from the end back to where the measure is still at
+// least half its median over the cycle are taken as ill-conditioned
 // (a judgement: half the mechanism's own typical conditioning).
 std::vector<bool> unreliableSteps(const CycleResult& r)
 {

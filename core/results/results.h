@@ -50,6 +50,7 @@ struct StepResult {
     double kinetic = 0.0, gravityPotential = 0.0, springPotential = 0.0;  // J
     double damperDissipation = 0.0, appliedPower = 0.0;                   // W
     std::vector<double> transmissionDeg;                                  // per transmission pin
+    // The near-singular measure μ (core/solver/near_singular_measure.h).
     double reciprocalCondition = 1.0;
     int jacobianSign = 1;       // sign of det Φ_q; a change between steps means a singular position was crossed
     bool nearSingular = false;  // close to, or just past, a singular position

@@ -6,6 +6,7 @@
 #include "core/model/model_error.h"
 #include "core/model/model_limits.h"
 #include "core/model/type_names.h"
+#include "core/solver/degenerate_geometry.h"
 
 #include <Eigen/Geometry>
 #include <algorithm>
@@ -332,6 +333,7 @@ CompiledMechanism Compiler::run()
     compileJoints();
     compileDrivers();
     compileLoads();
+    checkGeometryDefined(in_, out_);
     chooseDuration();
     chooseLengthScale();
     return out_;

@@ -170,9 +170,14 @@ void Sweeper::warnNearSingular()
         if (!steps[i].nearSingular) continue;
         std::size_t last = i;
         while (last + 1 < steps.size() && steps[last + 1].nearSingular) ++last;
+        // From the first step to the last of a full cycle both ends show the
+        // same drive position, which would read as a range of nothing.
+        const bool everyStep = i == 0 && last + 1 == steps.size();
         std::ostringstream s;
-        s << "Near a singular position (dead centre or toggle) from " << drivePositions(steps[i]) << " to "
-          << drivePositions(steps[last]) << " (steps " << i << "–" << last
+        s << "Near a singular position (dead centre or toggle) ";
+        if (everyStep) s << (result_.complete ? "over the whole cycle" : "at every step solved");
+        else s << "from " << drivePositions(steps[i]) << " to " << drivePositions(steps[last]);
+        s << " (steps " << i << "–" << last
           << "): the linkage locks up or loses control there and the reactions are unreliable.";
         result_.warnings.push_back({"near_singular", withGrashofNote(s.str()), int(i)});
         i = last;

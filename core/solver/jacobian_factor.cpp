@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <limits>
 
 namespace clevis {
 
@@ -11,11 +12,10 @@ JacobianFactor::JacobianFactor(const Eigen::VectorXd& rowScale, const Eigen::Vec
 
 bool JacobianFactor::factor(int size, const std::vector<Eigen::Triplet<double>>& entries)
 {
-    columnSums_.setZero(size);
     if (!samePattern(size, entries)) learnPattern(size, entries);
-    if (!(method_ == Method::Band ? factorBand(entries) : factorSparse(entries))) return false;
-    norm1_ = size ? columnSums_.maxCoeff() : 0.0;
-    return std::isfinite(norm1_);
+    double sum = 0.0;  // not finite when an entry is not
+    for (const auto& e : entries) sum += std::abs(e.value());
+    return std::isfinite(sum) && (method_ == Method::Band ? factorBand(entries) : factorSparse(entries));
 }
 
 bool JacobianFactor::factorBand(const std::vector<Eigen::Triplet<double>>& entries)
@@ -23,13 +23,6 @@ bool JacobianFactor::factorBand(const std::vector<Eigen::Triplet<double>>& entri
     bandLu_.setZero();
     double* values = bandLu_.values();
     for (std::size_t i = 0; i < entries.size(); ++i) values[pattern_[i].slot] += entries[i].value();
-    const int n = bandLu_.size();
-    for (int k = 0; k < n; ++k) {
-        double sum = 0.0;
-        for (int i = std::max(0, k - bandLu_.upper()); i <= std::min(n - 1, k + bandLu_.lower()); ++i)
-            sum += std::abs(values[bandLu_.slot(i, k)]);
-        columnSums_[order_.columnAt[k]] = sum;
-    }
     return bandLu_.factor() && bandLu_.minPivot() > 1e-14 * bandLu_.maxPivot();
 }
 
@@ -38,9 +31,6 @@ bool JacobianFactor::factorSparse(const std::vector<Eigen::Triplet<double>>& ent
     double* values = sparseMatrix_.valuePtr();
     std::fill(values, values + sparseMatrix_.nonZeros(), 0.0);
     for (std::size_t i = 0; i < entries.size(); ++i) values[pattern_[i].slot] += entries[i].value();
-    for (int k = 0; k < sparseMatrix_.outerSize(); ++k)
-        for (Eigen::SparseMatrix<double>::InnerIterator it(sparseMatrix_, k); it; ++it)
-            columnSums_[it.col()] += std::abs(it.value());
     sparseLu_.factorize(sparseMatrix_);
     return sparseLu_.info() == Eigen::Success;
 }
@@ -150,13 +140,13 @@ int JacobianFactor::determinantSign() const
 }
 
 // Estimate of ‖J̃⁻¹‖₁ by Hager's method as refined by Higham (the estimator
-// LAPACK's xGECON uses): at most five solve pairs, then 1/(‖J̃‖₁ ‖J̃⁻¹‖₁).
-// Each iterate ‖J̃⁻¹x‖₁ with ‖x‖₁ = 1 is a lower bound of ‖J̃⁻¹‖₁ whatever
-// the start, so the largest one seen is kept.
-double JacobianFactor::reciprocalCondition()
+// LAPACK's xGECON uses): at most five solve pairs. Each iterate ‖J̃⁻¹x‖₁
+// with ‖x‖₁ = 1 is a lower bound of ‖J̃⁻¹‖₁ whatever the start, so the
+// largest one seen is kept.
+double JacobianFactor::inverseNorm1()
 {
     const Eigen::Index n = columnScale_.size();
-    if (n == 0 || norm1_ == 0.0) return 0.0;
+    if (n == 0) return 0.0;
     if (worstColumn_ >= 0 && worstColumn_ < n) {
         x_.setZero(n);
         x_[worstColumn_] = 1.0;
@@ -176,8 +166,7 @@ double JacobianFactor::reciprocalCondition()
         x_[j] = 1.0;
         worstColumn_ = j;
     }
-    if (!std::isfinite(estimate)) return 0.0;
-    return estimate > 0.0 ? 1.0 / (norm1_ * estimate) : 0.0;
+    return std::isfinite(estimate) ? estimate : std::numeric_limits<double>::infinity();
 }
 
 }  // namespace clevis

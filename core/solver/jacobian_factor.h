@@ -38,11 +38,11 @@ public:
     Eigen::VectorXd solve(const Eigen::VectorXd& b) const;            // x with Φ_q x = b
     Eigen::VectorXd solveTransposed(const Eigen::VectorXd& f) const;  // y with Φ_qᵀ y = f
     void solveInPlace(Eigen::VectorXd& b) const;
-    // Reciprocal 1-norm condition number estimate of J̃ (Hager–Higham).
-    // It starts from the column that was worst in the previous estimate: from
-    // one step of a cycle to the next that column rarely changes, and the
-    // estimate then needs one solve pair instead of two.
-    double reciprocalCondition();
+    // Estimate of ‖J̃⁻¹‖₁ (Hager–Higham), a lower bound good to a small
+    // factor. It starts from the column that was worst in the previous
+    // estimate: from one step of a cycle to the next that column rarely
+    // changes, and the estimate then needs one solve pair instead of two.
+    double inverseNorm1();
     // Sign of det J̃ (the scaling is positive, so also of det Φ_q): it flips
     // only where the Jacobian passes through a singular position.
     int determinantSign() const;
@@ -64,9 +64,8 @@ private:
 
     Eigen::VectorXd rowScale_, columnScale_;
     Method method_ = Method::Band;
-    double norm1_ = 0.0;
-    Eigen::Index worstColumn_ = -1;           // of the last condition estimate
-    Eigen::VectorXd columnSums_, x_, y_, z_;  // scratch, kept to avoid allocations
+    Eigen::Index worstColumn_ = -1;  // of the last estimate of ‖J̃⁻¹‖₁
+    Eigen::VectorXd x_, y_, z_;      // scratch, kept to avoid allocations
     int patternSize_ = -1;
     std::vector<EntrySlot> pattern_;
     BandOrdering order_;

@@ -41,9 +41,9 @@ StepSolver::StepSolver(const CompiledMechanism& mechanism)
     : mechanism_(mechanism)
     , system_(mechanism)
     , factor_(system_.rowScale(), system_.columnScale())
+    , nearSingular_(system_.coordinates())
     , transmission_(findTransmissionPins(mechanism))
     , tolerance_(1e-11 * mechanism.lengthScale)
-    , nearSingular_(1e-3 * std::min(1.0, 10.0 / double(std::max<std::size_t>(mechanism.bodies.size(), 1))))
 {
     const auto& constraints = system_.constraints();
     ownerOfRow_.resize(system_.rows());
@@ -73,7 +73,8 @@ bool StepSolver::regularAt(const VectorXd& q, double t)
 {
     if (system_.rows() != system_.coordinates()) return false;
     evaluate(Pose(q, rotations_), t);
-    return factor_.factor(system_.coordinates(), entries_) && factor_.reciprocalCondition() >= nearSingular_;
+    return factor_.factor(system_.coordinates(), entries_) &&
+           nearSingular_.reciprocalCondition(entries_) >= nearSingular_.threshold();
 }
 
 double StepSolver::residual(const VectorXd& q, double t, int* worstRow) const
@@ -144,9 +145,9 @@ StepResult StepSolver::analyse(double t, const VectorXd& q)
     const Pose pose(q, rotations_);
     if (!(t == entriesTime_ && q == entriesPose_)) evaluate(pose, t);
     const bool factored = factor_.factor(n, entries_);
-    r.reciprocalCondition = factored ? factor_.reciprocalCondition() : 0.0;
+    r.reciprocalCondition = factored ? nearSingular_.reciprocalCondition(entries_) : 0.0;
     r.jacobianSign = factored ? factor_.determinantSign() : 0;
-    r.nearSingular = r.reciprocalCondition < nearSingular_;
+    r.nearSingular = r.reciprocalCondition < nearSingular_.threshold();
     keepFactor_ = factored && !r.nearSingular;  // a near-singular Jacobian would mislead the next assembly
 
     zeroRates_.setZero(n);

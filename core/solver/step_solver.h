@@ -7,6 +7,7 @@
 #include "core/solver/applied_loads.h"
 #include "core/solver/constraint_system.h"
 #include "core/solver/jacobian_factor.h"
+#include "core/solver/near_singular_measure.h"
 
 #include <array>
 #include <limits>
@@ -24,7 +25,7 @@ public:
     // converge: the mechanism cannot be assembled at time t near that pose.
     bool assemble(double t, VectorXd& q);
 
-    // True when the constraint Jacobian at q is square and well conditioned:
+    // True when the constraint Jacobian at q is square and not near singular:
     // then no joint is redundant, no body moves freely and no driver
     // conflicts, and the dense mobility diagnosis can be skipped.
     bool regularAt(const VectorXd& q, double t);
@@ -37,13 +38,6 @@ public:
 
     const ConstraintSystem& system() const { return system_; }
     const std::vector<TransmissionPin>& transmissionPins() const { return transmission_; }
-
-    // Steps whose reciprocal condition number of J̃ falls below this are
-    // flagged near singular: 10⁻³ for up to ten bodies (a crank-slider is then
-    // within about 0.2° of a driven dead centre), falling in proportion for
-    // larger mechanisms, since the condition of a long chain of sound links
-    // grows with its length.
-    double nearSingularThreshold() const { return nearSingular_; }
 
     // A body a constraint acts on and the point (possibly fixed in the other
     // body) through which its force on that body is reported.
@@ -62,6 +56,7 @@ private:
     const CompiledMechanism& mechanism_;
     ConstraintSystem system_;
     JacobianFactor factor_;
+    NearSingularMeasure nearSingular_;  // judges each step (flagged below its threshold)
     std::vector<Eigen::Triplet<double>> entries_;
     VectorXd phi_, nu_, gamma_, zeroRates_;   // scratch, kept to avoid allocations
     std::vector<Eigen::Matrix2d> rotations_;  // of the one Pose alive at a time (evaluate, analyse)
@@ -72,7 +67,6 @@ private:
     std::vector<std::array<ActionPoint, 2>> actionPoints_;  // per constraint
     std::vector<int> ownerOfRow_;                           // constraint of each row
     double tolerance_;
-    double nearSingular_;
 };
 
 }  // namespace clevis
