@@ -22,7 +22,8 @@ bool writeOutputs(const AnalyzeOptions& options, const CompiledMechanism& m, con
     if (!options.jsonOut.empty())
         ok &= writeOutputFile(
             options.jsonOut,
-            resultsJsonText(m, r, s, {{"sizing", sizingToJson(m, r, sizing)}}),  // bars and pins (docs/results-format.md)
+            resultsJsonText(m, r, s,
+                            {{"sizing", sizingToJson(m, r, sizing)}}),  // bars and pins (docs/results-format.md)
             err);
     if (!options.csvOut.empty()) ok &= writeOutputFile(options.csvOut, resultsCsvText(m, r), err);
     return ok;
@@ -54,8 +55,7 @@ int runAnalyze(const AnalyzeOptions& options, std::ostream& out, std::ostream& e
         out << summaryText(m, r, s) << std::flush;
         // Sizing of bars: stresses, utilisation and buckling (core/results/bar_sizing.h);
         // of pins: shear, bearing pressure and p·v (core/results/pin_sizing.h).
-        SizingResult sizing = sizeBars(solved.mechanism, m, r);
-        sizing.pins = sizePins(solved.mechanism, m, r);
+        const SizingResult sizing = sizeParts(solved.mechanism, m, r);
         out << '\n' << sizingText(m, r, sizing) << std::flush;
         const bool written = writeOutputs(options, m, r, s, sizing, err);
         const bool trusted = trustworthy(m, r, s, options.file, err);

@@ -89,14 +89,18 @@ void PageFlow::paragraph(const QString& text, const QColor& colour, bool bold)
     y_ += box.height() + 6;
 }
 
-void PageFlow::table(const std::vector<QStringList>& rows, const std::vector<double>& columns)
+void PageFlow::table(const std::vector<QStringList>& rows, const std::vector<double>& columns,
+                     const std::function<QColor(int, int)>& shade)
 {
     constexpr double kRow = 13.0;
-    const auto drawRow = [&](const QStringList& row, bool head) {
+    const auto drawRow = [&](const QStringList& row, int index) {
+        const bool head = index == 0;
         painter_.setFont(reportFont(8, head));
         painter_.setPen(palette::ink());
         double x = kMargin;
         for (int c = 0; c < row.size() && c < int(columns.size()); ++c) {
+            if (const QColor fill = shade ? shade(index, c) : QColor(); fill.isValid())
+                painter_.fillRect(QRectF(x - 2, y_ + 0.5, columns[c] * width(), kRow - 1), fill);
             painter_.drawText(QRectF(x, y_, columns[c] * width() - 4, kRow), Qt::AlignLeft | Qt::AlignVCenter, row[c]);
             x += columns[c] * width();
         }
@@ -106,13 +110,13 @@ void PageFlow::table(const std::vector<QStringList>& rows, const std::vector<dou
     };
     if (rows.empty()) return;
     ensure(3 * kRow);
-    drawRow(rows.front(), true);
+    drawRow(rows.front(), 0);
     for (std::size_t i = 1; i < rows.size(); ++i) {
         if (y_ + kRow > bottom()) {
             newPage();
-            drawRow(rows.front(), true);  // repeat the heading on the new page
+            drawRow(rows.front(), 0);  // repeat the heading on the new page
         }
-        drawRow(rows[i], false);
+        drawRow(rows[i], int(i));
     }
     y_ += 8;
 }

@@ -9,6 +9,7 @@
 #include <QPainter>
 #include <QStringList>
 
+#include <functional>
 #include <vector>
 
 class QPdfWriter;
@@ -25,7 +26,10 @@ public:
     void subheading(const QString& text);
     void paragraph(const QString& text, const QColor& colour = QColor(), bool bold = false);
     // Columns as fractions of the content width; the first row is the heading.
-    void table(const std::vector<QStringList>& rows, const std::vector<double>& columns);
+    // `shade` (row, column), row 0 the heading, gives a cell's background;
+    // an invalid colour leaves it plain.
+    void table(const std::vector<QStringList>& rows, const std::vector<double>& columns,
+               const std::function<QColor(int, int)>& shade = {});
     void figure(const Figure& f, double width);
     void space(double points) { y_ += points; }
     void newPage();

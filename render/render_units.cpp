@@ -24,4 +24,12 @@ QString RenderUnits::torque(double newtonMetres) const
     return formatQuantity(newtonMetres * torquePerNewtonMetre, torqueSymbol);
 }
 
+QString formatUtilisation(double fraction)
+{
+    const double p = 100.0 * fraction;
+    if (p <= 0.0) return QStringLiteral("0 %");
+    if (p < 0.995) return QStringLiteral("<1 %");
+    return QString("%1 %").arg(p, 0, 'f', p < 9.95 ? 1 : 0);
+}
+
 }  // namespace clevis::ui

@@ -25,6 +25,10 @@ struct RenderUnits {
 // the magnitudes a machine carries), with `unit`.
 QString formatQuantity(double value, const QString& unit);
 
+// A utilisation (a fraction) as a percentage: two significant figures at
+// most, and "<1 %" rather than "0 %" for a figure that is small but there.
+QString formatUtilisation(double fraction);
+
 // An angle in degrees as "37.2°", measured counter-clockwise from +x.
 QString formatDirection(double degrees);
 

@@ -5,6 +5,7 @@
 #include "core/results/bar_sizing.h"
 #include "core/results/drive_units.h"
 #include "core/results/summary_text.h"
+#include "core/results/utilisation_ranking.h"
 #include "core/solver/body_state.h"
 #include "render/bar_load_diagram.h"
 #include "render/bearing_polar_report.h"
@@ -266,26 +267,48 @@ int criticalStep(const BarSizing& b)
     return b.envelope.moment.step;
 }
 
+// Every sized link and pin, the one nearest a limit first, shaded as the
+// window's peak table is (utilisation_ranking.h, palette.h).
+void utilisationTable(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis, const SizingResult& sizing)
+{
+    f.subheading("Utilisation, the most loaded part first");
+    const std::vector<PartUtilisation> ranked = rankByUtilisation(in.result, sizing);
+    if (ranked.empty()) {
+        f.paragraph(
+            "No part has a utilisation: give the bars a section with an allowable stress or a safety factor, and "
+            "the pins a diameter and allowables, to rank them here.");
+        return;
+    }
+    f.paragraph(
+        "Each part's largest figure: a bar's peak fibre stress over its allowable, or its peak compression over "
+        "its Euler load (pinned ends), whichever is nearer; a pin's shear stress, bearing pressure or p·v over the "
+        "allowables given. These are fractions of your allowables, not a verdict that a part is safe: dynamic and "
+        "service factors, fatigue, stress concentrations and wear are not included.");
+    std::vector<QStringList> rows{{"Part", "Utilisation", "Governed by", "Where"}};
+    std::vector<QColor> shades{QColor()};
+    for (const PartUtilisation& p : ranked) {
+        const QString kind = p.kind == PartUtilisation::Kind::Bar ? "link" : "pin";
+        rows.push_back({QString("%1 %2").arg(kind, qs(p.name)),
+                        formatUtilisation(p.value) + (p.nearSingular ? QString(" ") + kNearToggleMark : QString()),
+                        qs(p.governs), at(axis, p.step)});
+        shades.push_back(palette::utilisationShade(p.value));
+    }
+    f.table(rows, {0.3, 0.2, 0.22, 0.28},
+            [&](int row, int column) { return column == 1 ? shades[std::size_t(row)] : QColor(); });
+}
+
 // The N/V/M diagram of every bar at its critical position, one to a page
 // where they fit; `advance` reports each and may cancel.
-bool barDiagramsSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis,
+bool barDiagramsSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis, const SizingResult& sizing,
                         const std::function<bool()>& advance)
 {
     const auto& m = in.mechanism;
     const auto& r = in.result;
     f.subheading("Internal loads of the bars");
-    if (!in.document) {
-        f.paragraph(
-            "The bars are not known for this result (the mechanism changed while it was being solved): "
-            "write the report again once it is solved.",
-            palette::problem());
-        return true;
-    }
     f.paragraph(
         "Each bar below is drawn at its critical position: where its utilisation peaks, or, for a bar "
         "without a section and an allowable, where its bending moment |M| peaks. Utilisations are "
         "fractions of the allowables given, not a verdict that a part is safe.");
-    const SizingResult sizing = sizeBars(*in.document, m, r);
     const BarList bars = findBars(*in.document, m);
     for (std::size_t b = 0; b < sizing.bars.size(); ++b) {
         if (!advance()) return false;
@@ -415,7 +438,16 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
     }
     if (ok) {
         f.heading(sections[5]);
-        ok = barDiagramsSection(f, in, axis, advance);
+        if (in.document) {
+            const SizingResult sizing = sizeParts(*in.document, m, r);
+            utilisationTable(f, in, axis, sizing);
+            ok = barDiagramsSection(f, in, axis, sizing, advance);
+        } else {
+            f.paragraph(
+                "The parts are not known for this result (the mechanism changed while it was being solved): "
+                "write the report again once it is solved.",
+                palette::problem());
+        }
         if (ok) bearingPolarPages(f, in);
         ok = ok && advance();
     }

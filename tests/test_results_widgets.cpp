@@ -194,6 +194,33 @@ TEST(ResultsWidgets, PeakTableSortsPartsByUtilisation)
     }
 }
 
+// A sized pin's joint row carries the pin's largest utilisation and names the
+// figure; the tooltip lists each figure. The press sample sizes three pins.
+TEST(ResultsWidgets, PeakTableShowsEachSizedPinsUtilisation)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult());
+    PeakTable table(s.analysis.get());
+    const SizingResult& sizing = s.analysis->sizing();
+    int sized = 0;
+    for (const PinSizing& pin : sizing.pins) {
+        if (!pin.pin) continue;
+        ++sized;
+        double largest = 0.0;
+        for (const auto& u : {pin.shearUtilisation, pin.pressureUtilisation, pin.pvUtilisation})
+            largest = std::max(largest, u.value_or(0.0));
+        int row = 0;
+        while (row < table.rowCount() &&
+               table.item(row, PeakTable::kPartColumn)->text() != "joint " + QString::fromStdString(pin.name))
+            ++row;
+        ASSERT_LT(row, table.rowCount()) << pin.name;
+        const QTableWidgetItem* cell = table.item(row, PeakTable::kUtilisationColumn);
+        EXPECT_NEAR(cell->text().section(' ', 0, 0).toDouble(), 100.0 * largest, 0.5) << cell->text().toStdString();
+        EXPECT_TRUE(cell->toolTip().contains("pin shear")) << cell->toolTip().toStdString();
+    }
+    EXPECT_EQ(sized, 3);
+}
+
 TEST(ResultsWidgets, PlotsShowThePanesOfTheReportAndKeepTheChoice)
 {
     Session s;

@@ -94,4 +94,11 @@ SizingResult sizeBars(const Mechanism& doc, const CompiledMechanism& m, const Cy
     return out;
 }
 
+SizingResult sizeParts(const Mechanism& doc, const CompiledMechanism& m, const CycleResult& r)
+{
+    SizingResult out = sizeBars(doc, m, r);
+    out.pins = sizePins(doc, m, r);
+    return out;
+}
+
 }  // namespace clevis

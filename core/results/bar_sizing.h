@@ -60,8 +60,11 @@ struct SizingResult {
     std::vector<PinSizing> pins;  // filled by sizePins (pin_sizing.h)
 };
 
-// Every bar of `doc` (compiled as `m`, solved as `r`).
+// Every bar of `doc` (compiled as `m`, solved as `r`); `pins` left empty.
 SizingResult sizeBars(const Mechanism& doc, const CompiledMechanism& m, const CycleResult& r);
+
+// Every bar and every pin: what the CLI, the desktop and the report show.
+SizingResult sizeParts(const Mechanism& doc, const CompiledMechanism& m, const CycleResult& r);
 
 // True when the peak comes from a step flagged near a singular position.
 bool nearSingular(const CycleResult& r, const EnvelopePeak& peak);

@@ -35,7 +35,7 @@ public:
     const clevis::CompiledMechanism& compiled() const;  // valid when hasResult()
     const clevis::CycleResult& result() const;
     const clevis::CycleSummary& summary() const;
-    const clevis::SizingResult& sizing() const;  // every bar's stresses, utilisation and buckling
+    const clevis::SizingResult& sizing() const;  // every bar's and pin's stresses and utilisations
     QString errorText() const;  // empty when the last solve succeeded (ModelError/AnalysisError text otherwise)
     QStringList offendingItems() const;
     bool nothingDrawn() const;  // the drawing has no moving part yet

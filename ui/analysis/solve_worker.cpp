@@ -56,7 +56,7 @@ SolveOutcome solveMechanism(const Mechanism& m, const std::function<bool()>& sti
         out.result = sweepCycle(*out.compiled, options);
         if (!out.result.steps.empty()) {
             out.summary = summarize(*out.compiled, out.result);
-            out.sizing = sizeBars(m, *out.compiled, out.result);
+            out.sizing = sizeParts(m, *out.compiled, out.result);
         }
     } catch (const ModelError& e) {
         out.compiled.reset();

@@ -25,7 +25,7 @@ struct SolveOutcome {
     std::optional<MobilityReport> mobility;     // degrees of freedom at the drawn pose
     CycleResult result;
     CycleSummary summary;
-    SizingResult sizing;        // stresses and utilisations of every bar
+    SizingResult sizing;        // stresses and utilisations of every bar and pin
     bool nothingDrawn = false;  // a blank drawing: not a fault, only nothing to solve
     QString error;              // empty when the cycle solved (possibly only in part)
     QStringList offendingItems;

@@ -95,10 +95,8 @@ void BarLoadView::forgetCycle()
 {
     cycle_.reset();
     bars_.reset();
-    sizingResult_.reset();
     if (!analysis_->hasResult()) return;
     bars_ = findBars(doc_->mechanism(), analysis_->compiled());
-    sizingResult_ = sizeBars(doc_->mechanism(), analysis_->compiled(), analysis_->result());
 }
 
 QString BarLoadView::stepStresses(const BarModel& bar) const
@@ -145,7 +143,7 @@ void BarLoadView::refresh()
         cycle_ = barCycleLoads(analysis_->compiled(), analysis_->result(), *bar);
     layOutFigure();
     std::string cycleText;
-    for (const auto& b : sizingResult_->bars)
+    for (const auto& b : analysis_->sizing().bars)
         if (b.body == bar->body) cycleText = clevis::sizingText(analysis_->compiled(), analysis_->result(), {{b}, {}});
     sizing_->setText(stepStresses(*bar) + (bar->area > 0 ? "\n\n" : "") + QString::fromStdString(cycleText));
     message_->hide();

@@ -52,7 +52,6 @@ private:
     QLabel* message_;
     QLabel* sizing_;
     // Found from the solved mechanism when its result arrives.
-    std::optional<SizingResult> sizingResult_;
     std::optional<BarList> bars_;
     std::optional<BarCycleLoads> cycle_;  // the selected bar's
     std::unique_ptr<BarLoadDiagram> figure_;

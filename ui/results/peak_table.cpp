@@ -1,6 +1,7 @@
 #include "ui/results/peak_table.h"
 
 #include "core/results/summary_text.h"
+#include "core/results/utilisation_ranking.h"
 #include "render/cycle_axis.h"
 #include "render/palette.h"
 #include "ui/analysis/analysis_state.h"
@@ -20,16 +21,6 @@ constexpr int kStepRole = Qt::UserRole + 1;
 QString marked(const QString& value, const PeakAt& p)
 {
     return p.nearSingular ? QString("%1 %2 near toggle").arg(value, kNearToggleMark) : value;
-}
-
-// Two significant figures at most, and no "0 %" for a figure that is small
-// but there.
-QString percent(double fraction)
-{
-    const double p = 100.0 * fraction;
-    if (p <= 0.0) return QStringLiteral("0 %");
-    if (p < 0.995) return QStringLiteral("<1 %");
-    return QString("%1 %").arg(p, 0, 'f', p < 9.95 ? 1 : 0);
 }
 
 // Shaded by how near the limit (render/palette.h); bold at or over it.
@@ -110,9 +101,14 @@ void PeakTable::rebuild()
         }
         rows.push_back(std::move(row));
     };
-    for (const auto& j : s.joints)
-        addRow(tr("joint %1").arg(QString::fromStdString(j.name)), j.peak, u.force(j.peak.value),
-               {overCycle(u.force(j.rms)), "", "", ""}, u.force(j.peak.flagged.value));
+    const SizingResult& sizing = analysis_->sizing();
+    for (std::size_t j = 0; j < s.joints.size(); ++j) {
+        const JointSummary& joint = s.joints[j];
+        addRow(tr("joint %1").arg(QString::fromStdString(joint.name)), joint.peak, u.force(joint.peak.value),
+               {overCycle(u.force(joint.rms)), "", "", ""}, u.force(joint.peak.flagged.value));
+        for (int p = 0; p < int(sizing.pins.size()); ++p)
+            if (sizing.pins[std::size_t(p)].joint == int(j)) pinFigures(rows.back(), p);
+    }
     for (const auto& d : s.drivers) {
         const auto effort = [&](double v) { return d.type == DriverType::Rotary ? u.torque(v) : u.force(v); };
         addRow(tr("driver %1").arg(QString::fromStdString(d.name)), d.peak, effort(d.peak.value),
@@ -125,7 +121,7 @@ void PeakTable::rebuild()
            u.force(s.groundForce.flagged.value));
     addRow(tr("shaking moment"), s.groundMoment, u.torque(s.groundMoment.value), {"", "", "", ""},
            u.torque(s.groundMoment.flagged.value));
-    for (const auto& bar : analysis_->sizing().bars) rows.push_back(barRow(bar, where));
+    for (int b = 0; b < int(analysis_->sizing().bars.size()); ++b) rows.push_back(barRow(b, where));
 
     // The part closest to a limit first; parts without a figure keep their order below.
     std::stable_sort(rows.begin(), rows.end(), [](const Row& a, const Row& b) {
@@ -150,9 +146,10 @@ void PeakTable::rebuild()
 // A bar's row: its peak fibre stress, and its utilisation, the larger of the
 // stress against the user's allowable and the compression against the Euler
 // load, so that a slender link in compression is not hidden by a low stress.
-PeakTable::Row PeakTable::barRow(const BarSizing& bar, const std::function<QString(int)>& where) const
+PeakTable::Row PeakTable::barRow(int index, const std::function<QString(int)>& where) const
 {
     const CycleResult& r = analysis_->result();
+    const BarSizing& bar = analysis_->sizing().bars[std::size_t(index)];
     Row row;
     row.part = tr("link %1").arg(QString::fromStdString(bar.name));
     QStringList why;
@@ -174,22 +171,47 @@ PeakTable::Row PeakTable::barRow(const BarSizing& bar, const std::function<QStri
     QStringList figures;
     if (sec.utilisation)
         figures << tr("fibre stress %1 of the allowable %2")
-                       .arg(percent(*sec.utilisation), formatQuantity(*sec.allowable / 1e6, "MPa"));
+                       .arg(formatUtilisation(*sec.utilisation), formatQuantity(*sec.allowable / 1e6, "MPa"));
     if (sec.bucklingRatio)
         figures << tr("compression %1 of the Euler load %2")
-                       .arg(percent(*sec.bucklingRatio),
+                       .arg(formatUtilisation(*sec.bucklingRatio),
                             formatQuantity(std::min(sec.eulerInPlane.value_or(0.0), sec.eulerOutOfPlane.value_or(0.0)),
                                            "N"));
-    const double stress = sec.utilisation.value_or(-1.0), buckling = sec.bucklingRatio.value_or(-1.0);
-    if (stress >= 0.0 || buckling > 0.0) {
-        row.utilisation = std::max(stress, buckling);
-        row.utilisationText =
-            QString("%1 %2").arg(percent(*row.utilisation), buckling > stress ? tr("buckling") : tr("stress"));
-    } else {
-        row.utilisationText = "–";
-    }
+    setUtilisation(row, barUtilisation(r, analysis_->sizing(), index));
     row.utilisationTip = (figures + why).join('\n');
     return row;
+}
+
+// The part's one figure (utilisation_ranking.h) and what it is.
+void PeakTable::setUtilisation(Row& row, const std::optional<PartUtilisation>& u) const
+{
+    if (!u) {
+        row.utilisationText = "–";
+        return;
+    }
+    row.utilisation = u->value;
+    row.utilisationText = QString("%1 %2").arg(formatUtilisation(u->value), QString::fromStdString(u->governs));
+    if (u->nearSingular) row.utilisationText += QString(" %1").arg(kNearToggleMark);
+}
+
+// A sized pin's utilisations, in the row of its joint.
+void PeakTable::pinFigures(Row& row, int index) const
+{
+    const PinSizing& pin = analysis_->sizing().pins[std::size_t(index)];
+    if (!pin.pin) return;  // no pin data: the joint's load only
+    QStringList figures;
+    const auto figure = [&](const QString& what, const std::optional<double>& u, const QString& value) {
+        figures << (u ? tr("%1 %2 of the allowable (%3)").arg(what, formatUtilisation(*u), value)
+                      : tr("%1 %2").arg(what, value));
+    };
+    figure(tr("pin shear"), pin.shearUtilisation, formatQuantity(pin.shearStress.value / 1e6, "MPa"));
+    if (pin.bearing) {
+        figure(tr("bearing pressure"), pin.pressureUtilisation, formatQuantity(pin.pressure.value / 1e6, "MPa"));
+        figure(tr("p·v"), pin.pvUtilisation, formatQuantity(pin.pv.value / 1e6, "MPa·m/s"));
+    }
+    for (const auto& n : pin.notes) figures << QString::fromStdString(n);
+    setUtilisation(row, pinUtilisation(analysis_->result(), analysis_->sizing(), index));
+    row.utilisationTip = figures.join('\n');
 }
 
 void PeakTable::addRowItems(const Row& r)

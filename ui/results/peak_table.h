@@ -8,7 +8,7 @@
 // where that peak occurs.
 #pragma once
 
-#include "core/results/bar_sizing.h"
+#include "core/results/utilisation_ranking.h"
 
 #include <QTableWidget>
 
@@ -40,7 +40,9 @@ private:
     };
 
     void rebuild();
-    Row barRow(const BarSizing& bar, const std::function<QString(int)>& where) const;
+    Row barRow(int index, const std::function<QString(int)>& where) const;
+    void pinFigures(Row& row, int index) const;
+    void setUtilisation(Row& row, const std::optional<PartUtilisation>& u) const;
     void addRowItems(const Row& row);
 
     AnalysisState* analysis_;
