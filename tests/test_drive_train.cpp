@@ -196,9 +196,17 @@ TEST(RatioStudy, FindsTheInertiaMatchingRatioWithinTheGridSpacing)
     const double spacing = std::pow(range.to / range.from, 1.0 / (range.count - 1));
     const double best = study.points[study.best].ratio;
     EXPECT_LE(std::max(best / matched, matched / best), spacing);
-    // The study at the gearbox's own ratio gives the duty's RMS: one formula.
-    const RatioStudy one = ratioStudy(x.m, x.r, x.s.unreliable, 0, g, {1.0, 2.0, 2});
-    EXPECT_NEAR(one.points[0].torqueRms, x.drive.motors.at(0).torqueRms, 1e-12);
+    // The study at the gearbox's own ratio gives the duty's RMS and peak.
+    for (const double ratio : {1.0, 37.0}) {
+        Gearbox own = g;
+        own.ratio = ratio;
+        const DriveRun at = run(withGearbox(doc, own));
+        const MotorDuty& duty = at.drive.motors.at(0);
+        const RatioPoint p = ratioStudy(x.m, x.r, x.s.unreliable, 0, g, {ratio, 2 * ratio, 2}).points[0];
+        EXPECT_NEAR(p.torqueRms, duty.torqueRms, 1e-12 * duty.torqueRms);
+        EXPECT_NEAR(p.torquePeak.value, duty.torquePeak.value, 1e-12 * std::abs(duty.torquePeak.value));
+        EXPECT_EQ(p.torquePeak.step, duty.torquePeak.step);
+    }
 }
 
 // A cylinder lifting a mass up a vertical slider at constant speed, then
