@@ -62,7 +62,7 @@ Mechanism withGearbox(Mechanism m, const Gearbox& g)
 
 // A massless bar at constant speed against a constant torque load on it:
 // the driver's effort is −load. The gear-train relations of machine-design
-// texts (e.g. Shigley's Mechanical Engineering Design, gear trains): driving,
+// texts: driving,
 // T_m = T/(i·η); with power flowing back, T_m = T·η/i; ω_m = i·ω.
 TEST(DriveTrain, MotorTorqueFollowsTheDirectionOfPowerFlow)
 {

@@ -12,8 +12,6 @@
 namespace clevis {
 namespace {
 
-const Driver* documentDriver(const Mechanism& doc, const std::string& name) { return findDriver(doc.drivers, name); }
-
 // The motor shaft turns i times as fast as the output (driven joint):
 //   ω_m = i·ω,  α_m = i·α.
 // The gearbox loses (1 − η) of the power that passes through it, in the
@@ -23,7 +21,7 @@ const Driver* documentDriver(const Mechanism& doc, const std::string& name) { re
 //   regenerating (P < 0): T_m·ω_m = η·T·ω  ⇒  T_m = T·η/i
 // and the motor also accelerates its rotor and the gearbox (J_m + J_g at the
 // motor shaft): + (J_m + J_g)·α_m = (J_m + J_g)·i·α.
-// (Gear-train relations: any machine-design text, e.g. Shigley's, ch. on gears.)
+// (The gear-train relations of machine-design texts.)
 double outputToMotor(const Gearbox& g, double ratio, double torque, double speed)
 {
     return torque * speed >= 0.0 ? torque / (ratio * g.efficiency) : torque * g.efficiency / ratio;
@@ -180,7 +178,7 @@ DriveResults driveResults(const Mechanism& doc, const CompiledMechanism& m, cons
     DriveResults out;
     const Steps steps{r.steps, unreliable};
     for (std::size_t d = 0; d < m.drivers.size(); ++d) {
-        const Driver* driver = documentDriver(doc, m.drivers[d].name);
+        const Driver* driver = findDriver(doc.drivers, m.drivers[d].name);
         if (!driver) continue;
         if (driver->gearbox) {
             out.motors.push_back(motorDuty(m, r, steps, int(d), *driver->gearbox));
