@@ -4,6 +4,9 @@
 
 #include "core/model/model_error.h"
 #include "core/results/cycle_summary.h"
+#include "core/results/drive_text.h"
+#include "core/results/drive_train.h"
+#include "core/results/ratio_study.h"
 #include "core/results/results_csv.h"
 #include "core/results/results_json.h"
 #include "core/results/sizing_json.h"
@@ -16,31 +19,53 @@ namespace clevis::cli {
 namespace {
 
 bool writeOutputs(const AnalyzeOptions& options, const CompiledMechanism& m, const CycleResult& r,
-                  const CycleSummary& s, const SizingResult& sizing, std::ostream& err)
+                  const CycleSummary& s, const DriveResults& drive, const SizingResult& sizing, std::ostream& err)
 {
     bool ok = true;
     if (!options.jsonOut.empty())
-        ok &= writeOutputFile(
-            options.jsonOut,
-            resultsJsonText(m, r, s,
-                            {{"sizing", sizingToJson(m, r, sizing)}}),  // bars and pins (docs/results-format.md)
-            err);
+        ok &= writeOutputFile(options.jsonOut,
+                              resultsJsonText(m, r, s, {{"sizing", sizingToJson(m, r, sizing)}},  // bars and pins
+                                              &drive),  // (docs/results-format.md)
+                              err);
     if (!options.csvOut.empty()) ok &= writeOutputFile(options.csvOut, resultsCsvText(m, r), err);
     return ok;
 }
 
 // Incomplete cycles and near-singular positions make the figures unreliable;
 // the part that locks is named.
-bool trustworthy(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s, const std::string& file,
-                 std::ostream& err)
+// Drive data that cannot be used yet leaves the results at a speed other
+// than the one the file describes: not trustworthy either.
+bool trustworthy(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s, const DriveResults& drive,
+                 const std::string& file, std::ostream& err)
 {
-    const bool trusted = r.complete && s.nearSingularSteps == 0;
+    bool unused = false;
+    for (const auto& w : drive.warnings) unused |= w.code == kDriveNotIntegrated;
+    const bool trusted = r.complete && s.nearSingularSteps == 0 && !unused;
     if (!trusted)
         err << file << ": the results are not trustworthy: "
-            << (r.complete ? "some positions are near singular" : "the cycle could not be completed") << '\n';
+            << (!r.complete               ? "the cycle could not be completed"
+                : s.nearSingularSteps > 0 ? "some positions are near singular"
+                                          : "they are not at the speed the drive would give")
+            << '\n';
     for (const auto& t : s.toggles) err << file << ": warning: " << toggleText(m, t) << '\n';
     for (const auto& w : r.warnings) err << file << ": warning: " << w.message << '\n';
+    for (const auto& w : drive.warnings) err << file << ": warning: " << w.message << '\n';
     return trusted;
+}
+
+// The asked-for ratio study of every rotary driver with a gearbox; false
+// (with the reason) when there is none.
+bool studyRatios(const AnalyzeOptions& options, const SolvedFile& solved, const CycleSummary& s, DriveResults& drive,
+                 std::ostream& err)
+{
+    if (!options.ratioStudy) return true;
+    const RatioRange range{options.ratioStudy->from, options.ratioStudy->to, options.ratioStudy->count};
+    for (const MotorDuty& motor : drive.motors)
+        drive.studies.push_back(ratioStudy(solved.m, solved.r, s.unreliable, motor.driver, motor.gearbox, range));
+    if (!drive.studies.empty()) return true;
+    err << options.file
+        << ": --ratio-study needs a rotary driver with a \"gearbox\" (its efficiency and inertias); there is none\n";
+    return false;
 }
 
 }  // namespace
@@ -52,13 +77,15 @@ int runAnalyze(const AnalyzeOptions& options, std::ostream& out, std::ostream& e
         const CompiledMechanism& m = solved.m;
         const CycleResult& r = solved.r;
         const CycleSummary s = summarize(m, r);
-        out << summaryText(m, r, s) << std::flush;
+        DriveResults drive = driveResults(solved.mechanism, m, r, s.unreliable);
+        if (!studyRatios(options, solved, s, drive, err)) return kExitFailed;
+        out << summaryText(m, r, s) << driveText(m, r, drive) << std::flush;
         // Sizing of bars: stresses, utilisation and buckling (core/results/bar_sizing.h);
         // of pins: shear, bearing pressure and p·v (core/results/pin_sizing.h).
         const SizingResult sizing = sizeParts(solved.mechanism, m, r);
         out << '\n' << sizingText(m, r, sizing) << std::flush;
-        const bool written = writeOutputs(options, m, r, s, sizing, err);
-        const bool trusted = trustworthy(m, r, s, options.file, err);
+        const bool written = writeOutputs(options, m, r, s, drive, sizing, err);
+        const bool trusted = trustworthy(m, r, s, drive, options.file, err);
         return written && trusted ? kExitOk : kExitFailed;
     } catch (const ModelError& e) {
         err << options.file << ": " << e.what() << '\n';

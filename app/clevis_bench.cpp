@@ -7,10 +7,12 @@
 // that starts every cycle is also timed on its own, since its dense rank
 // tests grow with the cube of the size. The 200-body chain is timed again
 // with the internal loads and envelopes of every bar added, and its results
-// written as the --json and --csv files are.
+// written as the --json and --csv files are. The gear ratio study of the
+// punch press at 200 ratios is timed beside that mechanism's cycle.
 #include "app/heap_reuse.h"
 #include "core/file/mechanism_file.h"
 #include "core/results/bar_envelope.h"
+#include "core/results/ratio_study.h"
 #include "core/results/results_csv.h"
 #include "core/results/results_json.h"
 #include "core/solver/cycle_sweep.h"
@@ -128,6 +130,31 @@ void ResultsFileText(benchmark::State& state, bool json)
 }
 BENCHMARK_CAPTURE(ResultsFileText, json, true)->Unit(benchmark::kMillisecond);
 BENCHMARK_CAPTURE(ResultsFileText, csv, false)->Unit(benchmark::kMillisecond);
+
+// The gear ratio study of the punch press (its gearbox from the sample) at
+// 200 ratios, on one solved cycle, against solving that cycle: the study
+// must cost less than the cycle.
+void PunchPressCycle(benchmark::State& state)
+{
+    const clevis::CompiledMechanism m =
+        clevis::compile(clevis::loadMechanismFile(CLEVIS_SAMPLES_DIR "/punch_press.json").mechanism);
+    timeCycle(state, m);
+}
+BENCHMARK(PunchPressCycle)->Unit(benchmark::kMicrosecond);
+
+void PunchPressRatioStudy(benchmark::State& state)
+{
+    const clevis::Mechanism doc = clevis::loadMechanismFile(CLEVIS_SAMPLES_DIR "/punch_press.json").mechanism;
+    const clevis::CompiledMechanism m = clevis::compile(doc);
+    clevis::SweepOptions options;
+    options.steps = kSteps;
+    const clevis::CycleResult result = clevis::sweepCycle(m, options);
+    const std::vector<bool> unreliable = clevis::unreliableSteps(result);
+    const clevis::RatioRange range{2.0, 200.0, int(state.range(0))};
+    for (auto _ : state)
+        benchmark::DoNotOptimize(clevis::ratioStudy(m, result, unreliable, 0, doc.drivers[0].gearbox.value(), range));
+}
+BENCHMARK(PunchPressRatioStudy)->ArgName("ratios")->Arg(200)->Unit(benchmark::kMicrosecond);
 
 }  // namespace
 

@@ -9,10 +9,13 @@
 namespace clevis::cli {
 namespace {
 
+// More ratios than anyone reads in a table; the study costs little per ratio.
+constexpr int kMaxRatioStudyPoints = 10000;
+
 const char* const kOverview = R"(clevis-cli: the forces in a planar linkage over its whole cycle, without the GUI.
 
 Usage:
-  clevis-cli analyze FILE [--steps N] [--json OUT] [--csv OUT]
+  clevis-cli analyze FILE [--steps N] [--json OUT] [--csv OUT] [--ratio-study FROM:TO:N]
   clevis-cli fbd FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT) --out F.svg|F.pdf|F.png
                  [--steps N] [--dalembert]
   clevis-cli report FILE --out review.pdf [--steps N]
@@ -29,7 +32,8 @@ Usage:
   clevis-cli --version
 
 Commands:
-  analyze    solve the mechanism in FILE over its cycle and print a summary
+  analyze    solve the mechanism in FILE over its cycle and print a summary,
+             what it asks of each motor (through its gearbox) and cylinder,
              and the sizing of every bar and pin
   fbd        draw one body's free-body diagram at one position (with numbers):
              --at-deg A  at the first rotary driver's angle A (degrees, modulo
@@ -64,12 +68,17 @@ solver and its sign conventions).
 )";
 
 const char* const kAnalyzeHelp = R"(Usage: clevis-cli analyze FILE [--steps N] [--json OUT] [--csv OUT]
+                         [--ratio-study FROM:TO:N]
 
 Solves the mechanism in FILE (a Clevis mechanism file, docs/file-format.md)
 over its whole cycle and prints a summary: peak and RMS joint loads, driver
 effort, power and work, the load on the frame, transmission angles and an
 energy-balance check. A value from a position near a toggle is shown apart,
-marked, with the part that locks named. Then, for every bar: the largest
+marked, with the part that locks named. Then the drive: for a rotary
+driver with a gearbox, the motor's torque (peak, RMS, mean), speed, power,
+the energy it takes back per cycle and the load inertia it sees; for a
+linear driver with a cylinder, the pressure and flow and whether the supply
+pressure suffices. Then, for every bar: the largest
 axial force, shear force and bending moment, the fibre stresses, the
 utilisation against the allowable the file gives, and the Euler loads. Then,
 for every pin and pin-in-slot joint: the peak force, and for one with pin
@@ -85,11 +94,19 @@ Options:
                default: the file's "cycle.steps", else 360
   --json OUT   write every step and the summary as JSON to the file OUT
   --csv OUT    write one row per step as CSV to the file OUT
+  --ratio-study FROM:TO:N
+               for every rotary driver with a gearbox, the RMS and peak motor
+               torque at N gear ratios from FROM to TO (0 < FROM < TO,
+               2 <= N <= 10000), spaced evenly on a logarithmic scale, with
+               the gearbox's own efficiency and inertias; the ratio needing
+               the least RMS torque is marked. The motion at the output is
+               the same at every ratio: the cycle is solved once.
   -h, --help   show this help
-  (--steps=N, --json=OUT and --csv=OUT work too)
+  (--steps=N, --json=OUT, --csv=OUT and --ratio-study=FROM:TO:N work too)
 
 Units: SI (m, s, kg, N, N·m, W, J), except angles: degrees. Rotary driver
-positions are in degrees, linear ones in metres.
+positions are in degrees, linear ones in metres. In the drive section, motor
+speeds are in rpm, pressures in MPa and flows in L/min.
 
 Signs: a joint's reaction is the force its first-listed body exerts on its
 second, in global axes; a driver's effort is the torque (N·m) or force (N) it
@@ -103,8 +120,12 @@ Exit status:
   1  FILE cannot be read or is not a valid mechanism (the message on stderr
      starts with FILE), an output cannot be written, or the results are not
      trustworthy: the cycle could not be completed or some positions are near
-     singular (dead centre, toggle). In that last case the summary is still
-     printed and the outputs written; the warnings follow on stderr.
+     singular (dead centre, toggle), or a driver's motor characteristic,
+     flywheel or fluctuation target cannot be used yet (the cycle is solved
+     at its prescribed speed instead). In those last cases the summary is
+     still printed and the outputs written; the warnings follow on stderr.
+     --ratio-study on a file with no rotary driver with a gearbox also
+     exits 1.
   2  wrong command line
 )";
 
@@ -211,6 +232,27 @@ private:
     std::size_t next_ = 0;
 };
 
+double parseNumber(const std::string& option, const std::string& text);
+
+// FROM:TO:N with 0 < FROM < TO and N from 2 to kMaxRatioStudyPoints.
+RatioStudyOption parseRatioStudy(const std::string& text)
+{
+    const std::size_t first = text.find(':'), second = first == std::string::npos ? first : text.find(':', first + 1);
+    if (second == std::string::npos)
+        throw UsageError("--ratio-study needs FROM:TO:N (e.g. 2:100:50), not \"" + text + "\"");
+    RatioStudyOption o;
+    o.from = parseNumber("--ratio-study FROM", text.substr(0, first));
+    o.to = parseNumber("--ratio-study TO", text.substr(first + 1, second - first - 1));
+    const std::string count = text.substr(second + 1);
+    const auto [end, error] = std::from_chars(count.data(), count.data() + count.size(), o.count);
+    if (error != std::errc() || end != count.data() + count.size() || o.count < 2 || o.count > kMaxRatioStudyPoints)
+        throw UsageError("--ratio-study: N must be a whole number from 2 to " + std::to_string(kMaxRatioStudyPoints) +
+                         ", not \"" + count + "\"");
+    if (!(o.from > 0.0 && o.to > o.from))
+        throw UsageError("--ratio-study: the ratios must satisfy 0 < FROM < TO (got " + text.substr(0, second) + ")");
+    return o;
+}
+
 Command parseAnalyze(ArgumentReader& in)
 {
     AnalyzeOptions options;
@@ -225,6 +267,7 @@ Command parseAnalyze(ArgumentReader& in)
             if (name == "--steps") options.steps = parseSteps(in.valueOf(name, value));
             else if (name == "--json") options.jsonOut = in.valueOf(name, value);
             else if (name == "--csv") options.csvOut = in.valueOf(name, value);
+            else if (name == "--ratio-study") options.ratioStudy = parseRatioStudy(in.valueOf(name, value));
             else throw UsageError("unknown option \"" + arg + "\" for analyze");
         } else if (options.file.empty()) options.file = arg;
         else throw UsageError("analyze takes one FILE; \"" + arg + "\" is a second one");

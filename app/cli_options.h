@@ -20,10 +20,17 @@ struct HelpRequest {
     std::string topic;  // empty: the overview; else a subcommand
 };
 struct VersionRequest {};
+// --ratio-study FROM:TO:N: N gear ratios from FROM to TO, spaced evenly on
+// a logarithmic scale.
+struct RatioStudyOption {
+    double from = 0, to = 0;
+    int count = 0;
+};
 struct AnalyzeOptions {
     std::string file;
     int steps = 0;                // 0: the file's own setting
     std::string jsonOut, csvOut;  // empty: not written
+    std::optional<RatioStudyOption> ratioStudy;
 };
 // Where `internal-loads` looks: exactly one of the three is set.
 struct PositionChoice {

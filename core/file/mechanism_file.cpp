@@ -328,6 +328,103 @@ void readLinearPlace(const JsonNode& node, Driver& d)
         position->warn("applies only to a linear driver at a slider joint (ignored)");
 }
 
+// ---- what drives a driver ----
+
+Gearbox readGearbox(const JsonNode& node)
+{
+    node.object({"ratio", "efficiency", "motor_inertia", "gearbox_inertia"});
+    Gearbox g;
+    g.ratio = node.at("ratio").number(Bound::Positive);
+    if (const auto eta = node.find("efficiency")) {
+        g.efficiency = eta->number(Bound::Positive);
+        if (g.efficiency > 1.0)
+            throw eta->error("must be in (0, 1] (got " + shortestDecimal(g.efficiency) +
+                             "): a gearbox cannot give out more power than it takes in");
+    }
+    if (const auto j = node.find("motor_inertia")) g.motorInertia = j->number(Bound::NonNegative);
+    if (const auto j = node.find("gearbox_inertia")) g.gearboxInertia = j->number(Bound::NonNegative);
+    return g;
+}
+
+MotorCharacteristic readMotor(const JsonNode& node)
+{
+    if (std::string(node.oneOf({"stall_torque", "table"})) == "stall_torque") {
+        node.object({"stall_torque", "no_load_rpm"});
+        return MotorLine{node.at("stall_torque").number(Bound::Positive),
+                         toSi(kMotorNoLoadSpeed.unit, node.at(kMotorNoLoadSpeed.name).number(Bound::Positive))};
+    }
+    node.object({"table"});
+    const JsonNode table = node.at("table");
+    table.object({kMotorSpeed.name, "torque"});
+    MotorTable t;
+    t.speed = increasingQuantities(table.at(kMotorSpeed.name), kMotorSpeed.unit);
+    if (t.speed.front() < 0.0)
+        throw table.at(kMotorSpeed.name)
+            .error("speeds must be >= 0 (the motor turns one way; got " +
+                   shortestDecimal(fromSi(kMotorSpeed.unit, t.speed.front())) + ")");
+    t.torque = pairedColumn(table, "torque", kMotorSpeed.name, t.speed.size(), FileUnit::Si);
+    return t;
+}
+
+Flywheel readFlywheel(const JsonNode& node)
+{
+    node.object({"inertia", "on"});
+    Flywheel f;
+    f.inertia = node.at("inertia").number(Bound::NonNegative);
+    if (const auto on = node.find("on")) f.on = on->choice(kFlywheelShafts).value;
+    return f;
+}
+
+Cylinder readCylinder(const JsonNode& node)
+{
+    node.object({"bore", "rod", "supply_pressure"});
+    Cylinder c;
+    c.bore = node.at("bore").number(Bound::Positive);
+    const JsonNode rod = node.at("rod");
+    c.rod = rod.number(Bound::Positive);
+    if (c.rod >= c.bore)
+        throw rod.error("must be smaller than the bore (" + shortestDecimal(c.bore) + " m; got " +
+                        shortestDecimal(c.rod) + " m): the rod side would have no area to pull with");
+    if (const auto p = node.find("supply_pressure")) c.supplyPressure = p->number(Bound::Positive);
+    return c;
+}
+
+// A motor characteristic replaces the prescribed motion, whose constant speed
+// stays as the expected output speed (the start of an integration): any other
+// motion, or an acceleration, would contradict the motor.
+void checkMotorMotion(const JsonNode& node, const Driver& d)
+{
+    const auto* c = std::get_if<ConstantSpeed>(&d.motion);
+    if (!c || c->accel != 0.0 || c->speed == 0.0)
+        throw ModelError(node.keyPath("motor"),
+                         "a motor sets its own speed: give the driver a constant, non-zero speed_rpm without "
+                         "acceleration, the output speed expected");
+}
+
+// Gearbox, motor, flywheel and fluctuation target belong to rotary drivers,
+// cylinders to linear ones.
+void readDriveTrain(const JsonNode& node, Driver& d)
+{
+    const bool rotary = d.type == DriverType::Rotary;
+    for (const char* key : {"gearbox", "motor", "flywheel", "fluctuation_target"})
+        if (!rotary && node.has(key))
+            throw ModelError(node.keyPath(key), "applies only to a rotary driver (a linear one may have a cylinder)");
+    if (rotary && node.has("cylinder")) throw ModelError(node.keyPath("cylinder"), "applies only to a linear driver");
+    if (const auto g = node.find("gearbox")) d.gearbox = readGearbox(*g);
+    if (const auto motor = node.find("motor")) {
+        d.motor = readMotor(*motor);
+        checkMotorMotion(node, d);
+    }
+    if (const auto f = node.find("flywheel")) d.flywheel = readFlywheel(*f);
+    if (const auto target = node.find("fluctuation_target")) {
+        d.fluctuationTarget = target->number(Bound::Positive);
+        if (*d.fluctuationTarget >= 2.0)
+            throw target->error("must be below 2 (got " + shortestDecimal(*d.fluctuationTarget) +
+                                "): (ω_max − ω_min)/ω_mean reaches 2 only when the driver stops");
+    }
+    if (const auto c = node.find("cylinder")) d.cylinder = readCylinder(*c);
+}
+
 Driver readDriver(const JsonNode& node)
 {
     Driver d;
@@ -336,7 +433,7 @@ Driver readDriver(const JsonNode& node)
     const bool linear = d.type == DriverType::Linear;
     // "between" is known to linear drivers only; "joint" stands in for it otherwise.
     node.object({"name", "type", "joint", linear ? "between" : "joint", "motion", keys.offset.name, keys.speed.name,
-                 keys.accel.name});
+                 keys.accel.name, "gearbox", "motor", "flywheel", "fluctuation_target", "cylinder"});
     d.name = node.at("name").name();
     if (linear) {
         readLinearPlace(node, d);
@@ -345,7 +442,24 @@ Driver readDriver(const JsonNode& node)
         d.offset = quantityOr(node, keys.offset, 0.0);
     }
     d.motion = readDriverMotion(node, keys);
+    readDriveTrain(node, d);
     return d;
+}
+
+// The speed of a mechanism with a motor characteristic or a flywheel follows
+// from one equation of motion in one coordinate: another driver would fix
+// the motion instead.
+void checkSingleDriver(const JsonNode& root, const std::vector<Driver>& drivers)
+{
+    if (drivers.size() < 2) return;
+    const std::vector<JsonNode> nodes = root.at("drivers").elements();
+    for (std::size_t i = 0; i < drivers.size(); ++i)
+        for (const char* key : {"motor", "flywheel", "fluctuation_target"})
+            if (nodes[i].has(key))
+                throw ModelError(nodes[i].keyPath(key),
+                                 "needs the driver to be the mechanism's only one (there are " +
+                                     std::to_string(drivers.size()) +
+                                     "): with a second driver the speed is prescribed, not found");
 }
 
 // ---- loads ----
@@ -538,6 +652,7 @@ Mechanism readMechanism(const JsonNode& root)
     m.bodies = readNamedList<Body>(root, "bodies", [&](const JsonNode& n) { return readBody(n, m.materials); });
     m.joints = readNamedList<Joint>(root, "joints", readJoint);
     m.drivers = readNamedList<Driver>(root, "drivers", readDriver);
+    checkSingleDriver(root, m.drivers);
     if (const auto cycle = root.find("cycle")) m.cycle = readCycle(*cycle);
     m.loads = readLoads(root, m.drivers);
     return m;

@@ -34,6 +34,13 @@ inline constexpr DriverKeys kLinearKeys{{"position", FileUnit::Si}, {"speed", Fi
 
 inline constexpr KeyWithUnit kTorsionFreeAngle{"free_angle_deg", FileUnit::Degree};
 
+// A motor's speeds, at the motor shaft: "no_load_rpm" and a table's "rpm".
+inline constexpr KeyWithUnit kMotorSpeed{"rpm", FileUnit::Rpm};
+inline constexpr KeyWithUnit kMotorNoLoadSpeed{"no_load_rpm", FileUnit::Rpm};
+
+inline constexpr Named<FlywheelShaft> kFlywheelShafts[] = {{"output", FlywheelShaft::Output},
+                                                           {"motor", FlywheelShaft::Motor}};
+
 inline const DriverKeys& driverKeysOf(DriverType type)
 {
     return type == DriverType::Rotary ? kRotaryKeys : kLinearKeys;

@@ -130,6 +130,45 @@ Json motionJson(const Motion& motion, const DriverKeys& keys)
     return out;
 }
 
+// Efficiency and inertias are written even at their defaults, as the house
+// writes defaults out.
+Json gearboxJson(const Gearbox& g)
+{
+    return {{"ratio", g.ratio},
+            {"efficiency", g.efficiency},
+            {"motor_inertia", g.motorInertia},
+            {"gearbox_inertia", g.gearboxInertia}};
+}
+
+Json motorJson(const MotorCharacteristic& motor)
+{
+    if (const auto* line = std::get_if<MotorLine>(&motor)) {
+        Json out{{"stall_torque", line->stallTorque}};
+        put(out, kMotorNoLoadSpeed, line->noLoadSpeed);
+        return out;
+    }
+    const auto& t = std::get<MotorTable>(motor);
+    return {{"table", {{kMotorSpeed.name, values(t.speed, kMotorSpeed.unit)}, {"torque", t.torque}}}};
+}
+
+Json cylinderJson(const Cylinder& c)
+{
+    Json out{{"bore", c.bore}, {"rod", c.rod}};
+    if (c.supplyPressure) out["supply_pressure"] = *c.supplyPressure;
+    return out;
+}
+
+// Written whatever the driver's type, for the reader to refuse what does not apply.
+void putDriveTrain(Json& out, const Driver& d)
+{
+    if (d.gearbox) out["gearbox"] = gearboxJson(*d.gearbox);
+    if (d.motor) out["motor"] = motorJson(*d.motor);
+    if (d.flywheel)
+        out["flywheel"] = {{"inertia", d.flywheel->inertia}, {"on", nameOf(kFlywheelShafts, d.flywheel->on)}};
+    if (d.fluctuationTarget) out["fluctuation_target"] = *d.fluctuationTarget;
+    if (d.cylinder) out["cylinder"] = cylinderJson(*d.cylinder);
+}
+
 Json driverJson(const Driver& d)
 {
     const DriverKeys& keys = driverKeysOf(d.type);
@@ -141,6 +180,7 @@ Json driverJson(const Driver& d)
         put(out, keys.offset, d.offset);
     }
     out["motion"] = motionJson(d.motion, keys);
+    putDriveTrain(out, d);
     return out;
 }
 

@@ -131,9 +131,63 @@ struct BodyPointRef {
 
 enum class DriverType { Rotary, Linear };
 
+// A gearbox between a rotary driver's motor and the driven joint (the
+// output): the motor turns `ratio` times per output turn. The efficiency is
+// applied in the direction of power flow; both inertias are referred to the
+// motor shaft.
+struct Gearbox {
+    double ratio = 1.0;           // i, motor turns per output turn, > 0
+    double efficiency = 1.0;      // η, in (0, 1]
+    double motorInertia = 0.0;    // J_m, kg·m², the rotor
+    double gearboxInertia = 0.0;  // J_g, kg·m², referred to the motor shaft
+
+    bool operator==(const Gearbox&) const = default;
+};
+
+// A motor's torque against its speed, both at the motor shaft: a straight
+// line from the stall torque at rest to zero at the no-load speed ...
+struct MotorLine {
+    double stallTorque = 0.0;  // N·m, > 0
+    double noLoadSpeed = 0.0;  // rad/s, > 0
+
+    bool operator==(const MotorLine&) const = default;
+};
+// ... or a table, joined by straight lines.
+struct MotorTable {
+    std::vector<double> speed;   // rad/s, strictly increasing
+    std::vector<double> torque;  // N·m, one per speed
+
+    bool operator==(const MotorTable&) const = default;
+};
+using MotorCharacteristic = std::variant<MotorLine, MotorTable>;
+
+enum class FlywheelShaft { Output, Motor };
+
+struct Flywheel {
+    double inertia = 0.0;  // kg·m², ≥ 0
+    FlywheelShaft on = FlywheelShaft::Output;
+
+    bool operator==(const Flywheel&) const = default;
+};
+
+// A hydraulic or pneumatic cylinder doing a linear driver's work: it pushes
+// on its cap side (the full bore) and pulls on its rod side (the annulus).
+struct Cylinder {
+    double bore = 0.0;                       // m, D > 0
+    double rod = 0.0;                        // m, 0 < d < D
+    std::optional<double> supplyPressure{};  // Pa, > 0; without it, no comparison
+
+    bool operator==(const Cylinder&) const = default;
+};
+
 // Rotary: at a pin, rotation of its second body relative to its first.
 // Linear: at a slider (displacement of its second body along the axis) or
 // between two points (a cylinder's length).
+// What drives it, for sizing the drive: a rotary driver may have a gearbox, a
+// motor characteristic (whose constant `motion` speed is then the expected
+// output speed), a flywheel and a target speed fluctuation; a linear one a
+// cylinder. The reader allows the last three only where the driver is the
+// mechanism's one driver.
 struct Driver {
     std::string name;
     DriverType type = DriverType::Rotary;
@@ -141,6 +195,11 @@ struct Driver {
     std::optional<BodyPointRef> ends[2];  // linear between two points
     double offset = 0.0;                  // position at the drawn pose, rad (rotary) or m (slider)
     Motion motion = ConstantSpeed{};
+    std::optional<Gearbox> gearbox{};            // rotary
+    std::optional<MotorCharacteristic> motor{};  // rotary
+    std::optional<Flywheel> flywheel{};          // rotary
+    std::optional<double> fluctuationTarget{};   // rotary: C_s = (ω_max − ω_min)/ω_mean, in (0, 2)
+    std::optional<Cylinder> cylinder{};          // linear
 
     bool operator==(const Driver&) const = default;
 };

@@ -14,14 +14,6 @@
 namespace clevis {
 namespace {
 
-using StepValue = std::function<double(const StepResult&)>;
-
-// The solved steps and which of them are unreliable (see unreliableSteps).
-struct Steps {
-    const std::vector<StepResult>& all;
-    const std::vector<bool>& flagged;
-};
-
 // The step among those flagged (or not) where `key` is largest (first such
 // step); value is f there.
 PeakAt peakAmong(const Steps& in, const StepValue& f, const StepValue& key, bool flagged)
@@ -52,6 +44,8 @@ Peak peakBy(const Steps& steps, const StepValue& f, const StepValue& key)
     return p;
 }
 
+}  // namespace
+
 Peak largest(const Steps& steps, const StepValue& f) { return peakBy(steps, f, f); }
 
 Peak smallest(const Steps& steps, const StepValue& f)
@@ -59,15 +53,11 @@ Peak smallest(const Steps& steps, const StepValue& f)
     return peakBy(steps, f, [&](const StepResult& s) { return -f(s); });
 }
 
-// Signed value of largest magnitude.
 Peak largestMagnitude(const Steps& steps, const StepValue& f)
 {
     return peakBy(steps, f, [&](const StepResult& s) { return std::abs(f(s)); });
 }
 
-// ∫ max(f, 0) dt and ∫ min(f, 0) dt by the trapezoid rule, each interval
-// where f changes sign split at the zero of the straight line between its
-// ends, so that the two parts add up to trapezoid(steps, f) exactly.
 std::pair<double, double> positiveAndNegative(const std::vector<StepResult>& steps, const StepValue& f)
 {
     double positive = 0.0, negative = 0.0;
@@ -83,6 +73,8 @@ std::pair<double, double> positiveAndNegative(const std::vector<StepResult>& ste
     }
     return {positive, negative};
 }
+
+namespace {
 
 JointSummary summarizeJoint(const CompiledMechanism& m, const Steps& steps, std::size_t j)
 {

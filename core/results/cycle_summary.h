@@ -9,6 +9,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <functional>
 #include <string>
 #include <vector>
 
@@ -26,6 +27,26 @@ struct PeakAt {
 struct Peak : PeakAt {
     PeakAt flagged;
 };
+
+using StepValue = std::function<double(const StepResult&)>;
+
+// The solved steps and which of them are unreliable (see unreliableSteps).
+struct Steps {
+    const std::vector<StepResult>& all;
+    const std::vector<bool>& flagged;
+};
+
+// Peaks of a value over the steps, kept apart from the unreliable ones as
+// Peak describes: the largest value, the smallest, and the signed value of
+// largest magnitude.
+Peak largest(const Steps& steps, const StepValue& f);
+Peak smallest(const Steps& steps, const StepValue& f);
+Peak largestMagnitude(const Steps& steps, const StepValue& f);
+
+// ∫ max(f, 0) dt and ∫ min(f, 0) dt by the trapezoid rule, each interval
+// where f changes sign split at the zero of the straight line between its
+// ends, so that the two parts add up to trapezoid(steps, f) exactly.
+std::pair<double, double> positiveAndNegative(const std::vector<StepResult>& steps, const StepValue& f);
 
 struct JointSummary {
     std::string name;

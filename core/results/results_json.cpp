@@ -1,5 +1,6 @@
 #include "core/results/results_json.h"
 
+#include "core/file/file_units.h"
 #include "core/results/drive_units.h"
 #include "core/results/json_writer.h"
 #include "core/solver/body_state.h"
@@ -24,10 +25,13 @@ json drivePositions(const CompiledMechanism& m, const StepResult& s)
 // order of docs/results-format.md, bodies and joints in the file's order.
 class StepWriter {
 public:
-    StepWriter(JsonWriter& w, const CompiledMechanism& m, const CycleResult& r) : w_(w), m_(m), r_(r) {}
+    StepWriter(JsonWriter& w, const CompiledMechanism& m, const CycleResult& r, const DriveResults* drive)
+        : w_(w), m_(m), r_(r), drive_(drive)
+    {}
 
     void write(const StepResult& s)
     {
+        const std::size_t step = std::size_t(&s - r_.steps.data());
         w_.beginObject(true);
         w_.field("t", s.t);
         w_.key("drive").beginObject();
@@ -45,6 +49,7 @@ public:
             w_.key(m_.drivers[d].name).beginObject();
             w_.field("effort", s.effort[d]);
             w_.field("power", s.power[d]);
+            if (drive_) driveFields(int(d), step);
             w_.endObject();
         }
         w_.endObject();
@@ -66,6 +71,21 @@ public:
     }
 
 private:
+    // The motor behind a gearbox, or the cylinder, of driver `d` at `step`.
+    void driveFields(int d, std::size_t step)
+    {
+        for (const MotorDuty& motor : drive_->motors)
+            if (motor.driver == d) {
+                w_.field("motor_speed_rpm", fromSi(FileUnit::Rpm, motor.speed[step]));
+                w_.field("motor_torque_Nm", motor.torque[step]);
+            }
+        for (const CylinderDuty& c : drive_->cylinders)
+            if (c.driver == d) {
+                w_.field("pressure_Pa", c.pressure[step]);
+                w_.field("flow_m3_s", c.flow[step]);
+            }
+    }
+
     void force(const Vec2& f)
     {
         w_.field("fx", f.x());
@@ -115,6 +135,7 @@ private:
     JsonWriter& w_;
     const CompiledMechanism& m_;
     const CycleResult& r_;
+    const DriveResults* drive_;
 };
 
 // `<key>_near_singular`: the peak's step is flagged; `<key>_near_toggle`: a
@@ -187,9 +208,78 @@ json toggleJson(const CompiledMechanism& m, const NearToggle& t)
             {"joint", t.joint < 0 ? json(nullptr) : json(m.joints[t.joint].name)}};
 }
 
+// `<name><unit>` the value, `<name>_step` and the flags of summary peaks.
+json peakJson(const std::string& name, const char* unit, const Peak& p)
+{
+    json out = {{name + unit, p.value}, {name + "_step", stepIndex(p.step)}};
+    addFlags(out, name, p);
+    return out;
+}
+
+json reflectedJson(const std::optional<ReflectedInertia>& j)
+{
+    if (!j) return nullptr;
+    return {{"min_kgm2", j->smallest.value},
+            {"min_step", j->smallest.step},
+            {"max_kgm2", j->largest.value},
+            {"max_step", j->largest.step},
+            {"ratio_to_rotor", j->ratioToRotor ? json(*j->ratioToRotor) : json(nullptr)}};
+}
+
+json studyJson(const RatioStudy& s)
+{
+    json ratios = json::array(), rms = json::array(), peak = json::array();
+    for (const RatioPoint& p : s.points) {
+        ratios.push_back(p.ratio);
+        rms.push_back(p.torqueRms);
+        peak.push_back(std::abs(p.torquePeak.value));
+    }
+    return {{"ratios", ratios},
+            {"torque_rms_Nm", rms},
+            {"torque_peak_Nm", peak},
+            {"best_ratio", s.points[s.best].ratio},
+            {"best_index", s.best}};
+}
+
+// The drive's figures, added to each driver's summary (docs/results-format.md).
+void addDriveSummary(json& drivers, const CompiledMechanism& m, const DriveResults& drive)
+{
+    for (const MotorDuty& d : drive.motors) {
+        json& out = drivers[m.drivers[d.driver].name];
+        out.update(peakJson("motor_torque_peak", "_Nm", d.torquePeak));
+        out["motor_torque_rms_Nm"] = d.torqueRms;
+        out["motor_torque_mean_Nm"] = d.torqueMean;
+        Peak speed = d.speedPeak;
+        speed.value = fromSi(FileUnit::Rpm, speed.value);
+        speed.flagged.value = fromSi(FileUnit::Rpm, speed.flagged.value);
+        out.update(peakJson("motor_speed_peak", "_rpm", speed));
+        out.update(peakJson("motor_power_peak", "_W", d.powerPeak));
+        out["motor_power_rms_W"] = d.powerRms;
+        out["regenerated_J_per_cycle"] = d.regenerated;
+        out["reflected_inertia"] = reflectedJson(d.reflected);
+    }
+    for (const RatioStudy& s : drive.studies) drivers[m.drivers[s.driver].name]["ratio_study"] = studyJson(s);
+    for (const CylinderDuty& c : drive.cylinders) {
+        json& out = drivers[m.drivers[c.driver].name];
+        out.update(peakJson("pressure_peak", "_Pa", c.pressurePeak));
+        out.update(peakJson("flow_peak", "_m3_s", c.flowPeak));
+        out["supply_pressure_Pa"] = c.cylinder.supplyPressure ? json(*c.cylinder.supplyPressure) : json(nullptr);
+        out["steps_over_supply"] = c.stepsOverSupply;
+    }
+}
+
+void writeWarning(JsonWriter& w, const Warning& warning)
+{
+    w.beginObject();
+    w.field("code", warning.code);
+    w.field("message", warning.message);
+    w.key("step").value(stepIndex(warning.step));
+    w.endObject();
+}
+
 }  // namespace
 
-json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s)
+json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s, const DriveResults* drive)
 {
     json joints = json::object(), drivers = json::object(), transmission = json::object(), toggles = json::array();
     for (const auto& t : s.toggles) toggles.push_back(toggleJson(m, t));
@@ -202,6 +292,7 @@ json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const Cycle
     for (std::size_t j = 0; j < s.joints.size(); ++j)
         joints[s.joints[j].name] = jointSummary(m, r, s.joints[j], m.joints[j].type);
     for (const auto& d : s.drivers) drivers[d.name] = driverSummary(d);
+    if (drive) addDriveSummary(drivers, m, *drive);
     for (const auto& t : s.transmission)
         transmission[t.joint] = {{"min_deg", t.minimum.value},
                                  {"min_step", stepIndex(t.minimum.step)},
@@ -217,28 +308,24 @@ json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const Cycle
 }
 
 std::string resultsJsonText(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& summary,
-                            const nlohmann::json& sections)
+                            const nlohmann::json& sections, const DriveResults* drive)
 {
     std::string text;
     text.reserve(std::size_t(r.steps.size()) * (600 + 400 * (m.bodies.size() + m.joints.size())));
     JsonWriter w(text);
     w.beginObject();
-    w.key("summary").value(summaryToJson(m, r, summary));
+    w.key("summary").value(summaryToJson(m, r, summary, drive));
     for (const auto& [name, section] : sections.items()) w.key(name).value(section);
     w.key("warnings").beginArray();
-    for (const auto& warning : r.warnings) {
-        w.beginObject();
-        w.field("code", warning.code);
-        w.field("message", warning.message);
-        w.key("step").value(stepIndex(warning.step));
-        w.endObject();
-    }
+    for (const auto& warning : r.warnings) writeWarning(w, warning);
+    if (drive)
+        for (const auto& warning : drive->warnings) writeWarning(w, warning);
     w.endArray();
     w.field("complete", r.complete);
     w.field("duration_s", r.duration);
     w.field("planned_steps", r.plannedSteps);
     w.key("steps").beginArray();
-    StepWriter steps(w, m, r);
+    StepWriter steps(w, m, r, drive);
     for (const auto& s : r.steps) steps.write(s);
     w.endArray();
     w.endObject();

@@ -4,6 +4,7 @@
 #pragma once
 
 #include "core/results/cycle_summary.h"
+#include "core/results/drive_train.h"
 
 #include <nlohmann/json.hpp>
 
@@ -11,12 +12,16 @@
 
 namespace clevis {
 
-// The figures over the cycle (the "summary" key).
-nlohmann::json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& summary);
+// The figures over the cycle (the "summary" key), with the drive's figures
+// under each driver's name when `drive` is given.
+nlohmann::json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& summary,
+                             const DriveResults* drive = nullptr);
 
 // The whole results file, streamed step by step. `sections` (an object)
-// adds top-level keys after the summary, e.g. "sizing".
+// adds top-level keys after the summary, e.g. "sizing"; `drive` adds the
+// motor and cylinder figures to the summary, each step and the warnings.
 std::string resultsJsonText(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& summary,
-                            const nlohmann::json& sections = nlohmann::json::object());
+                            const nlohmann::json& sections = nlohmann::json::object(),
+                            const DriveResults* drive = nullptr);
 
 }  // namespace clevis

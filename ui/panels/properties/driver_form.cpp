@@ -41,6 +41,71 @@ DisplayQuantity positionQuantity(const Driver& d)
     return d.type == DriverType::Rotary ? angleQuantity() : lengthQuantity();
 }
 
+// Pressures in bar as cylinder catalogues give them;
+// rotor and gearbox inertias in kg·cm² as motor and gearbox data sheets do.
+DisplayQuantity barQuantity()
+{
+    return {QStringLiteral("bar"), [](double si) { return si * 1e-5; }, [](double v) { return v * 1e5; }, 1};
+}
+
+DisplayQuantity smallInertiaQuantity()
+{
+    return {QStringLiteral("kg·cm²"), [](double si) { return si * 1e4; }, [](double v) { return v * 1e-4; }, 3};
+}
+
+DisplayQuantity percentQuantity()
+{
+    return {QStringLiteral("%"), [](double si) { return si * 100.0; }, [](double v) { return v / 100.0; }, 1};
+}
+
+// The gearbox between a rotary driver's motor and its joint; the document
+// checks each value by the file reader's rules.
+void gearboxFields(FormBuilder& f, const Driver& driver, const std::function<Driver&(Mechanism&)>& self)
+{
+    const QString undo = QObject::tr("Set %1 gearbox").arg(QString::fromStdString(driver.name));
+    f.heading(QObject::tr("Gearbox and motor"));
+    f.check("gearbox", QObject::tr("Size the motor through a gearbox"), driver.gearbox.has_value(), undo,
+            [self](Mechanism& m, bool on) {
+                if (!on) self(m).gearbox.reset();
+                else if (!self(m).gearbox) self(m).gearbox = Gearbox{10.0};  // a ratio to start from
+            });
+    if (!driver.gearbox) return;
+    const Gearbox& g = *driver.gearbox;
+    const auto gearbox = [self](Mechanism& m) -> Gearbox& { return *self(m).gearbox; };
+    f.number("gearRatio", QObject::tr("Ratio (motor turns per output turn)"), g.ratio, plainQuantity({}, 3), undo,
+             [gearbox](Mechanism& m, double v) { gearbox(m).ratio = v; });
+    f.number("gearEfficiency", QObject::tr("Efficiency"), g.efficiency, percentQuantity(), undo,
+             [gearbox](Mechanism& m, double v) { gearbox(m).efficiency = v; });
+    f.number("motorInertia", QObject::tr("Rotor inertia"), g.motorInertia, smallInertiaQuantity(), undo,
+             [gearbox](Mechanism& m, double v) { gearbox(m).motorInertia = v; });
+    f.number("gearboxInertia", QObject::tr("Gearbox inertia at the motor"), g.gearboxInertia, smallInertiaQuantity(),
+             undo, [gearbox](Mechanism& m, double v) { gearbox(m).gearboxInertia = v; });
+    f.info({}, QObject::tr("Efficiency counts in the direction power flows; inertias at the motor shaft."));
+}
+
+// The cylinder doing a linear driver's work.
+void cylinderFields(FormBuilder& f, const Driver& driver, const std::function<Driver&(Mechanism&)>& self)
+{
+    const QString undo = QObject::tr("Set %1 cylinder").arg(QString::fromStdString(driver.name));
+    f.heading(QObject::tr("Cylinder"));
+    f.check("cylinder", QObject::tr("Size a hydraulic or pneumatic cylinder"), driver.cylinder.has_value(), undo,
+            [self](Mechanism& m, bool on) {
+                if (!on) self(m).cylinder.reset();
+                else if (!self(m).cylinder) self(m).cylinder = Cylinder{0.05, 0.028};  // a common bore and rod
+            });
+    if (!driver.cylinder) return;
+    const Cylinder& c = *driver.cylinder;
+    const auto cylinder = [self](Mechanism& m) -> Cylinder& { return *self(m).cylinder; };
+    f.number("cylinderBore", QObject::tr("Bore"), c.bore, lengthQuantity(), undo,
+             [cylinder](Mechanism& m, double v) { cylinder(m).bore = v; });
+    f.number("cylinderRod", QObject::tr("Rod"), c.rod, lengthQuantity(), undo,
+             [cylinder](Mechanism& m, double v) { cylinder(m).rod = v; });
+    f.optionalNumber(
+        "supplyPressure", QObject::tr("Supply pressure"), c.supplyPressure, barQuantity(), undo,
+        [cylinder](Mechanism& m, std::optional<double> v) { cylinder(m).supplyPressure = v; }, QObject::tr("none"));
+    f.info({}, QObject::tr("Pushes on the full bore, pulls on the ring round the rod."));
+}
+
 }  // namespace
 
 void driverForm(FormBuilder& f, const Mechanism& /*every form takes it; a motion needs no other part*/,
@@ -48,7 +113,9 @@ void driverForm(FormBuilder& f, const Mechanism& /*every form takes it; a motion
 {
     const std::string name = driver.name;
     const QString qname = QString::fromStdString(name);
-    const auto self = [name](Mechanism& m) -> Driver& { return m.drivers[driverIndex(m, name)]; };
+    const std::function<Driver&(Mechanism&)> self = [name](Mechanism& m) -> Driver& {
+        return m.drivers[driverIndex(m, name)];
+    };
     const bool rotary = driver.type == DriverType::Rotary;
     const QString undo = QObject::tr("Set %1 motion").arg(qname);
     f.partHeading(rotary ? QObject::tr("Motor") : QObject::tr("Linear drive"), qname);
@@ -104,6 +171,8 @@ void driverForm(FormBuilder& f, const Mechanism& /*every form takes it; a motion
                QObject::tr(
                    "Times increase strictly; one position per time. Between them the motion follows a smooth curve."));
     }
+    if (rotary) gearboxFields(f, driver, self);
+    else cylinderFields(f, driver, self);
 }
 
 }  // namespace clevis::ui
