@@ -12,6 +12,8 @@
 
 #include <gtest/gtest.h>
 
+#include <stdexcept>
+
 using namespace clevis;
 using namespace clevis::ui;
 
@@ -89,6 +91,33 @@ TEST_F(PropertyEditorTest, TheMaterialChosenIsKeptByName)
     type("density", QStringLiteral("2800"));
     EXPECT_EQ(section().density, 2800.0);
     EXPECT_EQ(section().material, "");
+}
+
+// A bar's allowable is typed in MPa and kept in Pa; a safety factor on yield
+// takes its place (the file allows one of the two), and a value the reader
+// refuses leaves the document as it was.
+TEST_F(PropertyEditorTest, ABarsAllowableOrSafetyFactorIsTypedInItsUnits)
+{
+    doc.setSelection({Selection::Kind::Body, QStringLiteral("rocker"), -1});
+    editor.rebuildNow();
+    const auto section = [&] {
+        for (const auto& b : doc.mechanism().bodies)
+            if (b.name == "rocker") return *b.section;
+        throw std::runtime_error("no rocker");
+    };
+    type("allowableStress", QStringLiteral("160"));
+    EXPECT_DOUBLE_EQ(*section().allowableStress, 160e6);
+    EXPECT_FALSE(section().safetyFactor.has_value());
+    editor.rebuildNow();
+    type("safetyFactor", QStringLiteral("1.5"));
+    EXPECT_EQ(section().safetyFactor, 1.5);
+    EXPECT_FALSE(section().allowableStress.has_value());
+    editor.rebuildNow();
+    type("safetyFactor", QStringLiteral("0.5"));  // below 1: the reader's rule refuses it
+    EXPECT_EQ(section().safetyFactor, 1.5);
+    editor.rebuildNow();
+    type("safetyFactor", QString());  // empty: none
+    EXPECT_FALSE(section().safetyFactor.has_value());
 }
 
 }  // namespace

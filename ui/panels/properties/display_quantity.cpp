@@ -52,6 +52,11 @@ DisplayQuantity linearSpeedQuantity()
     return {l.unit + QStringLiteral("/s"), l.fromSi, l.toSi, l.decimals};
 }
 
+DisplayQuantity megaQuantity(const QString& unit, int decimals)
+{
+    return {unit, [](double si) { return si * 1e-6; }, [](double v) { return v * 1e6; }, decimals};
+}
+
 DisplayQuantity plainQuantity(const QString& unit, int decimals)
 {
     return {unit, [](double v) { return v; }, [](double v) { return v; }, decimals};

@@ -18,9 +18,12 @@ DisplayQuantity lengthQuantity();
 DisplayQuantity forceQuantity();
 DisplayQuantity torqueQuantity();
 DisplayQuantity stiffnessQuantity();
-DisplayQuantity angleQuantity();                                       // degrees, SI radians
-DisplayQuantity rotarySpeedQuantity();                                 // rpm, SI rad/s
-DisplayQuantity linearSpeedQuantity();                                 // length per second
+DisplayQuantity angleQuantity();        // degrees, SI radians
+DisplayQuantity rotarySpeedQuantity();  // rpm, SI rad/s
+DisplayQuantity linearSpeedQuantity();  // length per second
+// Stresses and pressures in MPa, p·v in MPa·m/s, as handbooks and bearing
+// tables give them (`unit` names the SI quantity times 10⁻⁶).
+DisplayQuantity megaQuantity(const QString& unit, int decimals);
 DisplayQuantity plainQuantity(const QString& unit, int decimals = 4);  // already SI (kg, kg·m², s)
 
 }  // namespace clevis::ui

@@ -58,12 +58,6 @@ void compoundPinRows(FormBuilder& f, const Mechanism& m, const Joint& joint, con
     }
 }
 
-// Stresses and pressures in MPa, p·v in MPa·m/s, as bearing tables give them.
-DisplayQuantity megaQuantity(const QString& unit, int decimals)
-{
-    return {unit, [](double si) { return si * 1e-6; }, [](double v) { return v * 1e6; }, decimals};
-}
-
 // Where the bearing length comes from when none is typed (pin_sizing.h).
 QString defaultBearingText(const Mechanism& m, Joint joint)
 {
