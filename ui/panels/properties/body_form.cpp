@@ -92,19 +92,27 @@ void sectionFields(FormBuilder& f, const Mechanism& m, const Body& body, const s
              [section](Mechanism& m, double v) { section(m).thickness = v; });
     materialFields<BarSection>(f, m, s, section, undo);
     // At most one of the two (the file's rule): giving one clears the other.
-    f.optionalNumber("allowableStress", QObject::tr("Allowable stress"), s.allowableStress,
-                     megaQuantity(QStringLiteral("MPa"), 1), undo, [section](Mechanism& m, std::optional<double> v) {
-                         section(m).allowableStress = v;
-                         if (v) section(m).safetyFactor.reset();
-                     });
-    f.optionalNumber("safetyFactor", QObject::tr("or safety factor on yield"), s.safetyFactor, plainQuantity({}, 2),
-                     undo, [section](Mechanism& m, std::optional<double> v) {
-                         section(m).safetyFactor = v;
-                         if (v) section(m).allowableStress.reset();
-                     });
-    f.info({}, QObject::tr("A solid bar between the body's two farthest pins. Its utilisation is its peak fibre "
-                           "stress over the allowable (or yield / factor): a fraction of your allowable, not a "
-                           "verdict of safety."));
+    f.optionalNumber(
+        "allowableStress", QObject::tr("Allowable stress"), s.allowableStress, megaQuantity(QStringLiteral("MPa"), 1),
+        undo,
+        [section](Mechanism& m, std::optional<double> v) {
+            section(m).allowableStress = v;
+            if (v) section(m).safetyFactor.reset();
+        },
+        QObject::tr("none"));
+    f.optionalNumber(
+        "safetyFactor", QObject::tr("Safety factor"), s.safetyFactor, plainQuantity({}, 2), undo,
+        [section](Mechanism& m, std::optional<double> v) {
+            section(m).safetyFactor = v;
+            if (v) section(m).allowableStress.reset();
+        },
+        QObject::tr("none"));
+    f.info({},
+           QObject::tr(
+               "A solid bar between the body's two farthest pins. Give an allowable stress or a safety factor on the "
+               "material's yield (one or the other). Its utilisation is its peak fibre "
+               "stress over the allowable (or yield / factor): a fraction of your allowable, not a "
+               "verdict of safety."));
 }
 
 void plateFields(FormBuilder& f, const Mechanism& m, const Body& body, const std::function<Body&(Mechanism&)>& self,

@@ -33,6 +33,11 @@ QLineEdit* withUnit(QFormLayout* form, const QString& key, const QString& label,
     auto* edit = new QLineEdit(value);
     edit->setObjectName(key);
     edit->setAlignment(Qt::AlignRight);
+    // Wide enough for the whole value: a narrow panel must never show "850.0"
+    // of 7850.0 (it scrolls sideways instead).
+    const QString widest = value.size() > 7 ? value : QStringLiteral("0000.000");
+    edit->setMinimumWidth(edit->fontMetrics().horizontalAdvance(widest) + 2 * edit->fontMetrics().averageCharWidth() +
+                          8);
     layout->addWidget(edit, 1);
     auto* u = new QLabel(unit);
     u->setMinimumWidth(44);
