@@ -57,13 +57,25 @@ TEST(ResultsWidgets, ScrubberMovesThePlotCursorAndTheStep)
     scrubber.slider()->setValue(90);
     EXPECT_EQ(s.analysis->currentStep(), 90);
     EXPECT_DOUBLE_EQ(plots.cursorX(), axis.values[90]);
-    // The exact box takes the driver's unit and lands on the nearest step.
+    // The box takes the driver's unit and solves exactly there: 200.2° is a
+    // step of its own between steps 200 and 201, shown everywhere.
+    const std::size_t before = s.analysis->result().steps.size();
     scrubber.positionBox()->setValue(200.2);
-    EXPECT_EQ(s.analysis->currentStep(), 200);
-    EXPECT_EQ(scrubber.slider()->value(), 200);
-    EXPECT_DOUBLE_EQ(plots.cursorX(), axis.values[200]);
-    QTest::keyClick(scrubber.slider(), Qt::Key_Right);
+    ASSERT_EQ(s.analysis->result().steps.size(), before + 1);
     EXPECT_EQ(s.analysis->currentStep(), 201);
+    const StepResult& exact = s.analysis->result().steps[201];
+    EXPECT_NEAR(radToDeg(exact.drivePosition[0]), 200.2, 1e-9);
+    EXPECT_GT(exact.t, s.analysis->result().steps[200].t);
+    EXPECT_LT(exact.t, s.analysis->result().steps[202].t);
+    EXPECT_EQ(scrubber.slider()->value(), 201);
+    EXPECT_NEAR(plots.cursorX(), 200.2, 1e-9);
+    EXPECT_NEAR(scrubber.positionBox()->value(), 200.2, 1e-9);
+    QTest::keyClick(scrubber.slider(), Qt::Key_Right);
+    EXPECT_EQ(s.analysis->currentStep(), 202);
+    // A position on a step adds none.
+    scrubber.positionBox()->setValue(axis.values[90]);
+    EXPECT_EQ(s.analysis->result().steps.size(), before + 1);
+    EXPECT_EQ(s.analysis->currentStep(), 90);
 }
 
 TEST(ResultsWidgets, ClickOnAPlotMovesTheScrubber)

@@ -7,6 +7,8 @@ namespace clevis {
 
 double driveDisplayValue(DriverType type, double si) { return type == DriverType::Rotary ? radToDeg(si) : si; }
 
+double driveSiValue(DriverType type, double shown) { return type == DriverType::Rotary ? degToRad(shown) : shown; }
+
 const char* driveDisplayUnit(DriverType type) { return type == DriverType::Rotary ? "°" : "m"; }
 
 const char* effortUnit(DriverType type) { return type == DriverType::Rotary ? "N·m" : "N"; }

@@ -10,6 +10,7 @@
 namespace clevis {
 
 double driveDisplayValue(DriverType type, double si);
+double driveSiValue(DriverType type, double shown);  // the inverse: degrees back to radians
 const char* driveDisplayUnit(DriverType type);
 const char* effortUnit(DriverType type);  // "N·m" or "N"
 // e.g. "motor = 123.40°"; constant-speed cranks are shown modulo one revolution.

@@ -1,5 +1,6 @@
 #include "ui/analysis/analysis_state.h"
 
+#include "core/solver/exact_position.h"
 #include "ui/analysis/solve_worker.h"
 #include "ui/document/mechanism_document.h"
 
@@ -103,6 +104,25 @@ void AnalysisState::setCurrentStep(int step)
     if (step == currentStep_) return;
     currentStep_ = step;
     emit currentStepChanged(step);
+}
+
+bool AnalysisState::goToTime(double t)
+{
+    if (!hasResult() || busy()) return false;  // when busy, the document is not the result's mechanism
+    auto next = std::make_shared<SolveOutcome>(*outcome_);
+    int step = 0;
+    try {
+        step = insertStep(next->result, solveAtTime(*next->compiled, next->result, t));
+    } catch (const std::exception&) {  // out of range, or no assembly there
+        return false;
+    }
+    next->summary = summarize(*next->compiled, next->result);
+    next->sizing = sizeParts(doc_->mechanism(), *next->compiled, next->result);
+    outcome_ = std::move(next);
+    currentStep_ = step;  // before the views read it, since indices after it moved on by one
+    emit resultChanged();
+    emit currentStepChanged(step);
+    return true;
 }
 
 void AnalysisState::waitForIdle()

@@ -42,7 +42,13 @@ public:
     bool busy() const;
     int currentStep() const;        // the scrubbed position, index into result().steps
     void setCurrentStep(int step);  // clamps; emits currentStepChanged when it changes
-    void waitForIdle();             // for tests: block until the newest solve has been published
+    // The mechanism solved at exactly time `t` (a typed position: who asks for
+    // 90° must see 90°, not the nearest step), added to the cycle as a step of
+    // its own, with the summary and sizing redone, and made current. False
+    // when it cannot be: no result, an edit being solved, `t` outside the
+    // solved steps, or no assembly there.
+    bool goToTime(double t);
+    void waitForIdle();  // for tests: block until the newest solve has been published
 
     // Degrees of freedom at the drawn pose; empty when the model does not compile.
     const std::optional<clevis::MobilityReport>& mobility() const;

@@ -1,6 +1,7 @@
 #include "ui/results/drive_scrubber.h"
 
 #include "core/results/drive_units.h"
+#include "core/solver/exact_position.h"
 #include "ui/analysis/analysis_state.h"
 
 #include <QCheckBox>
@@ -135,7 +136,20 @@ void DriveScrubber::showStep(int step)
     drivers_->setText(parts.join("   "));
 }
 
-void DriveScrubber::stepFromSpinBox() { analysis_->setCurrentStep(axis_.nearestStep(position_->value())); }
+// A typed position is solved exactly (a step is added there); one on a step,
+// or one the cycle does not reach, goes to the nearest step.
+void DriveScrubber::stepFromSpinBox()
+{
+    const double x = position_->value();
+    const int nearest = axis_.nearestStep(x);
+    if (std::abs(axis_.values[std::size_t(nearest)] - x) <= 1e-9 * std::max(1.0, std::abs(x)))
+        return analysis_->setCurrentStep(nearest);
+    const auto& m = analysis_->compiled();
+    const std::optional<double> t =
+        axis_.byTime ? std::optional<double>(x)
+                     : timeAtDrivePosition(m, analysis_->result(), 0, driveSiValue(m.drivers.front().type, x));
+    if (!t || !analysis_->goToTime(*t)) analysis_->setCurrentStep(nearest);
+}
 
 void DriveScrubber::advance()
 {
