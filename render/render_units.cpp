@@ -32,4 +32,10 @@ QString formatUtilisation(double fraction)
     return QString("%1 %").arg(p, 0, 'f', p < 9.95 ? 1 : 0);
 }
 
+QString partLabel(const QString& kind, const QString& name)
+{
+    const bool saysKind = name.startsWith(kind + QLatin1Char(' '), Qt::CaseInsensitive);
+    return saysKind ? kind + name.mid(kind.size()) : kind + QLatin1Char(' ') + name;
+}
+
 }  // namespace clevis::ui

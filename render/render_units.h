@@ -25,6 +25,10 @@ struct RenderUnits {
 // the magnitudes a machine carries), with `unit`.
 QString formatQuantity(double value, const QString& unit);
 
+// A part named with its kind, "link crank", but "link 3" for a part named
+// "link 3": the kind is not said twice (whatever the case of `kind`).
+QString partLabel(const QString& kind, const QString& name);
+
 // A utilisation (a fraction) as a percentage: two significant figures at
 // most, and "<1 %" rather than "0 %" for a figure that is small but there.
 QString formatUtilisation(double fraction);

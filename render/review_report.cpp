@@ -288,7 +288,7 @@ void utilisationTable(PageFlow& f, const ReviewReportInput& in, const CycleAxis&
     std::vector<QColor> shades{QColor()};
     for (const PartUtilisation& p : ranked) {
         const QString kind = p.kind == PartUtilisation::Kind::Bar ? "link" : "pin";
-        rows.push_back({QString("%1 %2").arg(kind, qs(p.name)),
+        rows.push_back({partLabel(kind, qs(p.name)),
                         formatUtilisation(p.value) + (p.nearSingular ? QString(" ") + kNearToggleMark : QString()),
                         qs(p.governs), at(axis, p.step)});
         shades.push_back(palette::utilisationShade(p.value));

@@ -233,6 +233,15 @@ TEST(ResultsWidgets, PeakTableShowsEachSizedPinsUtilisation)
     EXPECT_EQ(sized, 3);
 }
 
+// A default name already says its kind: "link 3", not "link link 3".
+TEST(ResultsWidgets, APartsKindIsNotSaidTwice)
+{
+    EXPECT_EQ(partLabel("link", "link 3"), "link 3");
+    EXPECT_EQ(partLabel("link", "crank"), "link crank");
+    EXPECT_EQ(partLabel("Link", "link 2"), "Link 2");
+    EXPECT_EQ(partLabel("pin", "pinion"), "pin pinion");
+}
+
 TEST(ResultsWidgets, PlotsShowThePanesOfTheReportAndKeepTheChoice)
 {
     Session s;

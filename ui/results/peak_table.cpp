@@ -151,7 +151,7 @@ PeakTable::Row PeakTable::barRow(int index, const std::function<QString(int)>& w
     const CycleResult& r = analysis_->result();
     const BarSizing& bar = analysis_->sizing().bars[std::size_t(index)];
     Row row;
-    row.part = tr("link %1").arg(QString::fromStdString(bar.name));
+    row.part = partLabel(tr("link"), QString::fromStdString(bar.name));
     QStringList why;
     for (const auto& n : bar.notes) why << QString::fromStdString(n);
     if (!bar.section) {

@@ -1,5 +1,6 @@
 #include "ui/panels/properties/form_builder.h"
 
+#include "render/render_units.h"
 #include "ui/document/mechanism_document.h"
 
 #include <QCheckBox>
@@ -182,11 +183,7 @@ void FormBuilder::info(const QString& label, const QString& value, const QString
     form_->addRow(label, l);
 }
 
-void FormBuilder::partHeading(const QString& kind, const QString& name)
-{
-    const bool saysKind = name.startsWith(kind + QLatin1Char(' '), Qt::CaseInsensitive);
-    heading(saysKind ? kind + name.mid(kind.size()) : kind + QLatin1Char(' ') + name);
-}
+void FormBuilder::partHeading(const QString& kind, const QString& name) { heading(partLabel(kind, name)); }
 
 void FormBuilder::heading(const QString& title)
 {
