@@ -153,11 +153,10 @@ void BarLoads::setDistributed(const MassSpread& spread)
 // loads on the near side; x is any station of the piece (it tells whether
 // the piece lies before, within or beyond the spread mass). With F and S the
 // near-side sums: N = −F·e, V = F·n and M = −M_x = x·(F·n) − S.
-BarLoads::Piece BarLoads::piece(double x, const Vec2& force, double moment) const
+inline BarLoads::Piece BarLoads::piece(double x, const Vec2& force, double moment) const
 {
-    static const Sums none;
     const MassSpread& spread = bar_->spread;
-    const Sums& d = x <= spread.from ? none : x <= spread.to ? inside_ : beyond_;
+    const Sums& d = x <= spread.from ? none_ : x <= spread.to ? inside_ : beyond_;
     Piece p;
     for (int i = 0; i < 3; ++i) {
         const Vec2 f = i == 0 ? Vec2(force + d.f[0]) : d.f[i];

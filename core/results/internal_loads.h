@@ -131,7 +131,7 @@ private:
     double perLength_ = 0.0, rotaryPerLength_ = 0.0, perArea_ = 0.0, perModulus_ = 0.0;
     Vec2 gravity_, a_, g_, aG_, e_, n_;
     double omega_ = 0.0, alpha_ = 0.0;
-    Sums inside_, beyond_;  // the spread mass's share within it and beyond its end
+    Sums none_, inside_, beyond_;  // the spread mass's share before it, within it and beyond its end
     std::vector<LineLoad> loads_;
     std::array<double, 4> fixed_{};  // the pieces' ends that are the bar's own (prepare)
     int fixedCount_ = 0;
