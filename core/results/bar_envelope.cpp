@@ -43,7 +43,8 @@ std::vector<BarEnvelope> barEnvelopes(const CompiledMechanism& m, const CycleRes
         bodyLoads(m, r.steps[i], q, loads);
         for (std::size_t b = 0; b < bars.size(); ++b) {
             along[b].set(m, r.steps[i], q, loads[std::size_t(bars[b].body)]);
-            update(out[b], along[b].peaks(), int(i));
+            // Only a fibre stress beyond the envelope so far can change it.
+            update(out[b], along[b].peaks({out[b].fibreTension.value, out[b].fibreCompression.value}), int(i));
         }
     }
     return out;

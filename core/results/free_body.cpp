@@ -151,6 +151,10 @@ void bodyLoads(const CompiledMechanism& m, const StepResult& s, const Pose& q, s
             if (a.body != kGround) out[std::size_t(a.body)].push_back({a.at, a.force, a.couple});
         }
     }
+    // Without forces, torques or springs of any kind only weights would come
+    // back, and they are left out: not worked out at every step for nothing.
+    if (m.forces.empty() && m.torques.empty() && m.springs.empty() && m.dampers.empty() && m.torsionSprings.empty())
+        return;
     for (const AppliedLoad& l : appliedLoads(m, q, s.qd, s.t, s.drivePosition))
         if (l.body != kGround && loadKind(m, l.source) != FreeBodyItemKind::Weight)
             out[std::size_t(l.body)].push_back({l.at, l.force, l.couple});

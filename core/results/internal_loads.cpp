@@ -153,11 +153,10 @@ void BarLoads::setDistributed(const MassSpread& spread)
 // loads on the near side; x is any station of the piece (it tells whether
 // the piece lies before, within or beyond the spread mass). With F and S the
 // near-side sums: N = −F·e, V = F·n and M = −M_x = x·(F·n) − S.
-BarLoads::Piece BarLoads::piece(double x, const Vec2& force, double moment) const
+inline BarLoads::Piece BarLoads::piece(double x, const Vec2& force, double moment) const
 {
-    static const Sums none;
     const MassSpread& spread = bar_->spread;
-    const Sums& d = x <= spread.from ? none : x <= spread.to ? inside_ : beyond_;
+    const Sums& d = x <= spread.from ? none_ : x <= spread.to ? inside_ : beyond_;
     Piece p;
     for (int i = 0; i < 3; ++i) {
         const Vec2 f = i == 0 ? Vec2(force + d.f[0]) : d.f[i];
@@ -224,13 +223,30 @@ struct RunningPeaks {
 
 }  // namespace
 
+// Whether no fibre stress σ = N/A ± M/Z on a piece ending at `to` can beat
+// `beat`, given N's range [lowN, highN] and |M|'s largest, highM, there:
+// everywhere on it lowN/A − highM/Z ≤ σ ≤ highN/A + highM/Z. Evaluated in
+// floating point, σ, N and M each err by a few ulps of Σ|cᵢ|·xⁱ over their
+// coefficients (the error bound of Horner's rule; 0 ≤ x ≤ to), and the roots
+// found for the extremes by as little in value; an allowance of 1e-13 of
+// those sums (hundreds of ulps) makes the bounds hold for the values
+// peaks() would compute.
+bool BarLoads::fibresCannotBeat(const Piece& p, double to, double lowN, double highN, double highM,
+                                const FibreFloor& beat) const
+{
+    const double termsN = std::abs(p.n[0]) + to * (std::abs(p.n[1]) + to * std::abs(p.n[2]));
+    const double termsM = std::abs(p.m[0]) + to * (std::abs(p.m[1]) + to * (std::abs(p.m[2]) + to * std::abs(p.m[3])));
+    const double bending = highM * perModulus_ + 1e-13 * (termsN * perArea_ + termsM * perModulus_);
+    return highN * perArea_ + bending <= beat.tension && lowN * perArea_ - bending >= beat.compression;
+}
+
 // On each piece the peaks lie at its ends or where a derivative vanishes:
 // dN/dx = n₁ + 2n₂x, dV/dx = v₁ + 2v₂x, dM/dx = m₁ + 2m₂x + 3m₃x². (dM/dx =
 // V − c, the shear less the distributed couple, as beam theory has it.)
 // Pieces are taken from the first end on; of equal values the first found
 // stays. This runs for every bar at every step: the pieces' ends are merged
 // as they are walked, not stored.
-BarPeaks BarLoads::peaks() const
+BarPeaks BarLoads::peaks(const FibreFloor& beat) const
 {
     RunningPeaks out;
     const double perArea = perArea_, perModulus = perModulus_;
@@ -258,13 +274,24 @@ BarPeaks BarLoads::peaks() const
         const Piece p = piece(0.5 * (from + to), force, sum);
         const BarStation atFrom = p.at(from), atTo = p.at(to);
         out.all(atFrom);
-        linearRootBetween(2.0 * p.n[2], p.n[1], from, to,
-                          [&](double x) { out.axial(x, p.n[0] + x * (p.n[1] + x * p.n[2])); });
+        // N's range and |M|'s largest on the piece, for the fibres' bounds below.
+        double lowN = std::min(atFrom.axial, atTo.axial), highN = std::max(atFrom.axial, atTo.axial);
+        double highM = std::max(std::abs(atFrom.moment), std::abs(atTo.moment));
+        linearRootBetween(2.0 * p.n[2], p.n[1], from, to, [&](double x) {
+            const double n = p.n[0] + x * (p.n[1] + x * p.n[2]);
+            out.axial(x, n);
+            lowN = std::min(lowN, n);
+            highN = std::max(highN, n);
+        });
         linearRootBetween(2.0 * p.v[2], p.v[1], from, to,
                           [&](double x) { out.shearAt(x, p.v[0] + x * (p.v[1] + x * p.v[2])); });
-        rootsBetween(3.0 * p.m[3], 2.0 * p.m[2], p.m[1], from, to, [&](double x) { out.momentAt(x, p.at(x).moment); });
+        rootsBetween(3.0 * p.m[3], 2.0 * p.m[2], p.m[1], from, to, [&](double x) {
+            const double m = p.at(x).moment;
+            out.momentAt(x, m);
+            highM = std::max(highM, std::abs(m));
+        });
         out.all(atTo);
-        if (perArea > 0.0) {
+        if (perArea > 0.0 && !fibresCannotBeat(p, to, lowN, highN, highM, beat)) {
             // σ = N/A ± M/Z, each a cubic on the piece like M: its values at
             // the piece's ends, and where dσ/dx = 0 between them. (±1·M/Z is
             // ±(M/Z) exactly, so both fibres share the products.)

@@ -59,6 +59,12 @@ struct BarPeaks {
     PeakAlong fibreTension, fibreCompression;
 };
 
+// What a step's fibre stresses must beat to matter, in Pa: more tension than
+// `tension` (≥ 0), more compression than `compression` (≤ 0).
+struct FibreFloor {
+    double tension = 0.0, compression = 0.0;
+};
+
 // The loads on one bar at one step, moved onto its line and sorted along
 // it, to be evaluated anywhere. One object serves a whole cycle: set() keeps
 // its storage.
@@ -86,7 +92,12 @@ public:
 
     // The exact peaks along the bar at this step: the largest tension and
     // compression and the largest |V| and |M| (see internal_loads.cpp).
-    BarPeaks peaks() const;
+    // Fibre stresses that cannot beat `beat` (the envelope so far, say) may
+    // be left out: a piece whose fibre stresses are provably no more than
+    // beat.fibreTension and no less than beat.fibreCompression is not
+    // searched for them, so the fibre peaks returned are then exact only
+    // where they beat it. The default beats nothing a search would keep.
+    BarPeaks peaks(const FibreFloor& beat = {}) const;
 
 private:
     struct LineLoad {
@@ -111,6 +122,8 @@ private:
     void add(const Vec2& p, const Vec2& force, double couple);
     void setDistributed(const MassSpread& spread);
     Piece piece(double x, const Vec2& force, double moment) const;
+    bool fibresCannotBeat(const Piece& p, double to, double lowN, double highN, double highM,
+                          const FibreFloor& beat) const;
 
     const BarModel* bar_ = nullptr;
     // The bar's own figures (prepare): the spread's μ = m/ℓ and −J/ℓ, and
@@ -118,7 +131,7 @@ private:
     double perLength_ = 0.0, rotaryPerLength_ = 0.0, perArea_ = 0.0, perModulus_ = 0.0;
     Vec2 gravity_, a_, g_, aG_, e_, n_;
     double omega_ = 0.0, alpha_ = 0.0;
-    Sums inside_, beyond_;  // the spread mass's share within it and beyond its end
+    Sums none_, inside_, beyond_;  // the spread mass's share before it, within it and beyond its end
     std::vector<LineLoad> loads_;
     std::array<double, 4> fixed_{};  // the pieces' ends that are the bar's own (prepare)
     int fixedCount_ = 0;
