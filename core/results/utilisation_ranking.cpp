@@ -27,7 +27,10 @@ std::optional<PartUtilisation> barUtilisation(const CycleResult& r, const Sizing
 {
     const BarSizing& bar = s.bars[std::size_t(b)];
     if (!bar.section) return std::nullopt;
-    const PartUtilisation part{PartUtilisation::Kind::Bar, b, bar.name};
+    PartUtilisation part;
+    part.kind = PartUtilisation::Kind::Bar;
+    part.index = b;
+    part.name = bar.name;
     Largest largest;
     largest.offer(part, bar.section->utilisation, "stress", bar.section->governing, r);
     // A bar never in compression has a buckling ratio of 0: not a figure to rank by.
@@ -39,7 +42,10 @@ std::optional<PartUtilisation> barUtilisation(const CycleResult& r, const Sizing
 std::optional<PartUtilisation> pinUtilisation(const CycleResult& r, const SizingResult& s, int p)
 {
     const PinSizing& pin = s.pins[std::size_t(p)];
-    const PartUtilisation part{PartUtilisation::Kind::Pin, p, pin.name};
+    PartUtilisation part;
+    part.kind = PartUtilisation::Kind::Pin;
+    part.index = p;
+    part.name = pin.name;
     Largest largest;
     largest.offer(part, pin.shearUtilisation, "pin shear", pin.shearStress, r);
     largest.offer(part, pin.pressureUtilisation, "bearing pressure", pin.pressure, r);

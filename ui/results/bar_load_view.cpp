@@ -144,7 +144,8 @@ void BarLoadView::refresh()
     layOutFigure();
     std::string cycleText;
     for (const auto& b : analysis_->sizing().bars)
-        if (b.body == bar->body) cycleText = clevis::sizingText(analysis_->compiled(), analysis_->result(), {{b}, {}});
+        if (b.body == bar->body)
+            cycleText = clevis::sizingText(analysis_->compiled(), analysis_->result(), {{b}, {}, {}});
     sizing_->setText(stepStresses(*bar) + (bar->area > 0 ? "\n\n" : "") + QString::fromStdString(cycleText));
     message_->hide();
     scroll_->show();
