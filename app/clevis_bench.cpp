@@ -46,12 +46,15 @@ void timeCycle(benchmark::State& state, const clevis::CompiledMechanism& m, cons
                                                          benchmark::Counter::kIsRate | benchmark::Counter::kInvert);
 }
 
-void FlapFolderCycle(benchmark::State& state)
+// A bundled sample's cycle.
+void sampleCycle(benchmark::State& state, const char* file)
 {
     const clevis::CompiledMechanism m =
-        clevis::compile(clevis::loadMechanismFile(CLEVIS_SAMPLES_DIR "/flap_folder.json").mechanism);
+        clevis::compile(clevis::loadMechanismFile(std::string(CLEVIS_SAMPLES_DIR "/") + file).mechanism);
     timeCycle(state, m);
 }
+
+void FlapFolderCycle(benchmark::State& state) { sampleCycle(state, "flap_folder.json"); }
 BENCHMARK(FlapFolderCycle)->Unit(benchmark::kMicrosecond);
 
 void FourBarChainCycle(benchmark::State& state)
@@ -134,12 +137,7 @@ BENCHMARK_CAPTURE(ResultsFileText, csv, false)->Unit(benchmark::kMillisecond);
 // The gear ratio study of the punch press (its gearbox from the sample) at
 // 200 ratios, on one solved cycle, against solving that cycle: the study
 // must cost less than the cycle.
-void PunchPressCycle(benchmark::State& state)
-{
-    const clevis::CompiledMechanism m =
-        clevis::compile(clevis::loadMechanismFile(CLEVIS_SAMPLES_DIR "/punch_press.json").mechanism);
-    timeCycle(state, m);
-}
+void PunchPressCycle(benchmark::State& state) { sampleCycle(state, "punch_press.json"); }
 BENCHMARK(PunchPressCycle)->Unit(benchmark::kMicrosecond);
 
 void PunchPressRatioStudy(benchmark::State& state)
