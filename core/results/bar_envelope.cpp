@@ -33,16 +33,17 @@ std::vector<BarEnvelope> barEnvelopes(const CompiledMechanism& m, const CycleRes
 {
     std::vector<BarEnvelope> out(bars.size());
     for (std::size_t b = 0; b < bars.size(); ++b) out[b].body = bars[b].body;
-    std::vector<std::vector<BodyLoad>> loads;
+    if (r.steps.empty()) return out;
+    BodyLoads acting(m, r.steps.front());
     std::vector<BarLoads> along;
     along.reserve(bars.size());
     for (const BarModel& bar : bars) along.emplace_back(bar);
     std::vector<Eigen::Matrix2d> rotations;
     for (std::size_t i = 0; i < r.steps.size(); ++i) {
         const Pose q(r.steps[i].q, rotations);
-        bodyLoads(m, r.steps[i], q, loads);
+        acting.step(r.steps[i], q);
         for (std::size_t b = 0; b < bars.size(); ++b) {
-            along[b].set(m, r.steps[i], q, loads[std::size_t(bars[b].body)]);
+            along[b].set(m, r.steps[i], q, acting);
             // Only a fibre stress beyond the envelope so far can change it.
             update(out[b], along[b].peaks({out[b].fibreTension.value, out[b].fibreCompression.value}), int(i));
         }

@@ -109,14 +109,16 @@ std::vector<BandStation> barEnvelopeBand(const CompiledMechanism& m, const Cycle
     const double tol = kSameStation * bar.length;
     // One pass for the loads on the bar at every step and their piece ends,
     // which fix the stations; a second for the values there.
-    std::vector<std::vector<BodyLoad>> loads, onBar(r.steps.size());
+    std::vector<std::vector<BodyLoad>> onBar(r.steps.size());
+    if (r.steps.empty()) return bandStations(bar, {}, stations);
+    BodyLoads acting(m, r.steps.front());
     std::vector<Eigen::Matrix2d> rotations;
     std::vector<std::vector<double>> ends(r.steps.size());
     std::vector<double> all;
     for (std::size_t k = 0; k < r.steps.size(); ++k) {
         const Pose q(r.steps[k].q, rotations);
-        bodyLoads(m, r.steps[k], q, loads);
-        onBar[k] = loads[std::size_t(bar.body)];
+        acting.step(r.steps[k], q);
+        acting.on(bar.body, onBar[k]);
         ends[k] = pieceEnds(bar, q, onBar[k]);
         all.insert(all.end(), ends[k].begin(), ends[k].end());
     }
@@ -134,10 +136,11 @@ std::vector<BandStation> barEnvelopeBand(const CompiledMechanism& m, const Cycle
 BarAtStep barAtStep(const CompiledMechanism& m, const BarModel& bar, const StepResult& s,
                     const std::vector<BandStation>& band)
 {
-    std::vector<std::vector<BodyLoad>> loads;
     const Pose q(s.q);
-    bodyLoads(m, s, q, loads);
-    const auto& onBar = loads[std::size_t(bar.body)];
+    BodyLoads acting(m, s);
+    acting.step(s, q);
+    std::vector<BodyLoad> onBar;
+    acting.on(bar.body, onBar);
     BarLoads along;
     along.set(m, bar, s, q, onBar);
     const std::vector<double> ends = pieceEnds(bar, q, onBar);

@@ -8,34 +8,26 @@
 namespace clevis {
 namespace {
 
-// Where a joint's pair touches: the second body's joint point.
-Vec2 contactPoint(const Pose& q, const CompiledJoint& j) { return q.point(j.point[1]); }
+// The applied load's kind, found by which of the mechanism's names its source
+// view points into (names can repeat across kinds; the storage cannot).
+template <class List>
+bool ownedBy(const List& list, std::string_view source)
+{
+    for (const auto& item : list)
+        if (item.name.data() == source.data()) return true;
+    return false;
+}
 
 Vec2 axisOf(const StepResult& s, const CompiledJoint& j)
 {
     return j.type == JointType::Pin ? Vec2::Zero() : Vec2(rotation(bodyAngle(s.q, j.body[0])) * j.axisLocal);
 }
 
-// Where constraint k acts on its bodies, as a force through a point plus a
-// couple: a joint's (or a driver at a joint's) at the joint's contact point
-// (returned), a driver between two points where it is attached (none).
 std::optional<Vec2> actionPoint(const CompiledMechanism& m, const Pose& q, std::size_t k)
 {
-    const std::size_t joints = m.joints.size();  // constraints: joints, then drivers
-    const int joint = k < joints ? int(k) : m.drivers[k - joints].joint;
-    if (joint < 0) return std::nullopt;
-    return contactPoint(q, m.joints[std::size_t(joint)]);
-}
-
-ConstraintAction placedAt(const ConstraintAction& a, const std::optional<Vec2>& at)
-{
-    if (!at) return a;
-    return {*at, a.force, a.couple + cross(a.at - *at, a.force), a.body};
-}
-
-ConstraintAction placedAction(const CompiledMechanism& m, const StepResult& s, const Pose& q, std::size_t k, int side)
-{
-    return placedAt(s.actions[side][k], actionPoint(m, q, k));
+    const BodyPoint* contact = contactOf(m, k);
+    if (!contact) return std::nullopt;
+    return q.point(*contact);
 }
 
 FreeBodyItem fromAction(const ConstraintAction& a)
@@ -92,26 +84,6 @@ void addDriverActions(const CompiledMechanism& m, const StepResult& s, const Pos
     }
 }
 
-// The applied load's kind, found by which of the mechanism's names its source
-// view points into (names can repeat across kinds; the storage cannot).
-template <class List>
-bool ownedBy(const List& list, std::string_view source)
-{
-    for (const auto& item : list)
-        if (item.name.data() == source.data()) return true;
-    return false;
-}
-
-FreeBodyItemKind loadKind(const CompiledMechanism& m, std::string_view source)
-{
-    if (ownedBy(m.forces, source)) return FreeBodyItemKind::Force;
-    if (ownedBy(m.torques, source)) return FreeBodyItemKind::Torque;
-    if (ownedBy(m.springs, source)) return FreeBodyItemKind::Spring;
-    if (ownedBy(m.dampers, source)) return FreeBodyItemKind::Damper;
-    if (ownedBy(m.torsionSprings, source)) return FreeBodyItemKind::TorsionSpring;
-    return FreeBodyItemKind::Weight;
-}
-
 void addAppliedLoads(const CompiledMechanism& m, const StepResult& s, const Pose& q, ItemsPerBody& out)
 {
     for (const AppliedLoad& l : appliedLoads(m, q, s.qd, s.t, s.drivePosition)) {
@@ -130,6 +102,34 @@ FreeBodyEquation equation(double sum, double kinetic) { return {sum, kinetic, su
 
 }  // namespace
 
+const BodyPoint* contactOf(const CompiledMechanism& m, std::size_t k)
+{
+    const std::size_t joints = m.joints.size();  // constraints: joints, then drivers
+    const int joint = k < joints ? int(k) : m.drivers[k - joints].joint;
+    return joint < 0 ? nullptr : &m.joints[std::size_t(joint)].point[1];
+}
+
+ConstraintAction placedAt(const ConstraintAction& a, const std::optional<Vec2>& at)
+{
+    if (!at) return a;
+    return {*at, a.force, a.couple + cross(a.at - *at, a.force), a.body};
+}
+
+ConstraintAction placedAction(const CompiledMechanism& m, const StepResult& s, const Pose& q, std::size_t k, int side)
+{
+    return placedAt(s.actions[side][k], actionPoint(m, q, k));
+}
+
+FreeBodyItemKind loadKind(const CompiledMechanism& m, std::string_view source)
+{
+    if (ownedBy(m.forces, source)) return FreeBodyItemKind::Force;
+    if (ownedBy(m.torques, source)) return FreeBodyItemKind::Torque;
+    if (ownedBy(m.springs, source)) return FreeBodyItemKind::Spring;
+    if (ownedBy(m.dampers, source)) return FreeBodyItemKind::Damper;
+    if (ownedBy(m.torsionSprings, source)) return FreeBodyItemKind::TorsionSpring;
+    return FreeBodyItemKind::Weight;
+}
+
 std::vector<std::vector<FreeBodyItem>> freeBodyItems(const CompiledMechanism& m, const StepResult& s)
 {
     ItemsPerBody items(m.bodies.size());
@@ -138,26 +138,6 @@ std::vector<std::vector<FreeBodyItem>> freeBodyItems(const CompiledMechanism& m,
     addDriverActions(m, s, q, items);
     addAppliedLoads(m, s, q, items);
     return items;
-}
-
-void bodyLoads(const CompiledMechanism& m, const StepResult& s, const Pose& q, std::vector<std::vector<BodyLoad>>& out)
-{
-    out.resize(m.bodies.size());
-    for (auto& loads : out) loads.clear();
-    for (std::size_t k = 0; k < s.actions[0].size(); ++k) {
-        const std::optional<Vec2> at = actionPoint(m, q, k);  // once for both sides
-        for (int side = 0; side < 2; ++side) {
-            const ConstraintAction a = placedAt(s.actions[side][k], at);
-            if (a.body != kGround) out[std::size_t(a.body)].push_back({a.at, a.force, a.couple});
-        }
-    }
-    // Without forces, torques or springs of any kind only weights would come
-    // back, and they are left out: not worked out at every step for nothing.
-    if (m.forces.empty() && m.torques.empty() && m.springs.empty() && m.dampers.empty() && m.torsionSprings.empty())
-        return;
-    for (const AppliedLoad& l : appliedLoads(m, q, s.qd, s.t, s.drivePosition))
-        if (l.body != kGround && loadKind(m, l.source) != FreeBodyItemKind::Weight)
-            out[std::size_t(l.body)].push_back({l.at, l.force, l.couple});
 }
 
 FreeBodyDiagram freeBodyDiagram(const CompiledMechanism& m, const CycleResult& r, int body, int step)

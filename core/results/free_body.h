@@ -8,7 +8,9 @@
 #include "core/results/results.h"
 #include "core/solver/body_state.h"
 
+#include <optional>
 #include <string>
+#include <string_view>
 #include <vector>
 
 namespace clevis {
@@ -54,16 +56,21 @@ struct FreeBodyDiagram {
 // weight. One pass over the mechanism serves every body.
 std::vector<std::vector<FreeBodyItem>> freeBodyItems(const CompiledMechanism& m, const StepResult& s);
 
-// The same loads without names or kinds, and without the bodies' own
-// weight (a bar's mass is laid along it instead), for a pass over every step
-// of a cycle: `out[b]` (cleared first, its storage kept) gets what acts on
-// moving body b, in the order of freeBodyItems; `q` is the step's pose (s.q).
-struct BodyLoad {
-    Vec2 at = Vec2::Zero();     // m, global
-    Vec2 force = Vec2::Zero();  // N, global
-    double couple = 0.0;        // N·m, counter-clockwise
-};
-void bodyLoads(const CompiledMechanism& m, const StepResult& s, const Pose& q, std::vector<std::vector<BodyLoad>>& out);
+// Where constraint k acts on its bodies, as a force through a point plus a
+// couple: a joint's (or a driver's at a joint) at the joint's contact point,
+// its second body's joint point (returned); a driver's between two points
+// where it is attached (none: nullptr).
+const BodyPoint* contactOf(const CompiledMechanism& m, std::size_t k);
+
+// An action moved to act through `at` (when given) with the couple that keeps it the same.
+ConstraintAction placedAt(const ConstraintAction& a, const std::optional<Vec2>& at);
+
+// Constraint k's action on its side `side` (0: body[0]) at step s, placed
+// where the constraint acts (contactOf).
+ConstraintAction placedAction(const CompiledMechanism& m, const StepResult& s, const Pose& q, std::size_t k, int side);
+
+// Which kind of applied load `source` (an AppliedLoad's) names; Weight for gravity.
+FreeBodyItemKind loadKind(const CompiledMechanism& m, std::string_view source);
 
 // The diagram of moving body `body` at steps[step]; throws std::out_of_range
 // for ground or an index outside the mechanism or the result.

@@ -87,7 +87,7 @@ void BarLoads::prepare(const BarModel& bar)
         if (fixedCount_ == 0 || x > fixed_[fixedCount_ - 1]) fixed_[fixedCount_++] = x;
 }
 
-void BarLoads::set(const CompiledMechanism& m, const StepResult& s, const Pose& q, const std::vector<BodyLoad>& loads)
+void BarLoads::setMotion(const CompiledMechanism& m, const StepResult& s, const Pose& q)
 {
     const BarModel& bar = *bar_;
     gravity_ = m.gravity;
@@ -99,12 +99,13 @@ void BarLoads::set(const CompiledMechanism& m, const StepResult& s, const Pose& 
     e_ = (q.point(bar.ends[1].point) - a_) / bar.length;
     n_ = perp(e_);
     setDistributed(bar.spread);
-
     loads_.clear();
-    for (const auto& l : loads) {
-        const auto [at, moved] = foot(a_, e_, bar.length, l.at, l.force, l.couple);
-        loads_.push_back({at, l.force, moved});
-    }
+}
+
+// The point masses and a spread of no length, then the loads in order along the bar.
+void BarLoads::addOwnMass(const Pose& q)
+{
+    const BarModel& bar = *bar_;
     for (const auto& [mass, point] : bar.pointMasses) {
         const Vec2 p = q.point(point);
         add(p, mass * (gravity_ - accel(p)), 0.0);
@@ -118,6 +119,20 @@ void BarLoads::set(const CompiledMechanism& m, const StepResult& s, const Pose& 
     // and without the temporary buffer std::stable_sort allocates.
     for (std::size_t i = 1; i < loads_.size(); ++i)
         for (std::size_t k = i; k > 0 && loads_[k].s < loads_[k - 1].s; --k) std::swap(loads_[k], loads_[k - 1]);
+}
+
+void BarLoads::set(const CompiledMechanism& m, const StepResult& s, const Pose& q, const std::vector<BodyLoad>& loads)
+{
+    setMotion(m, s, q);
+    for (const auto& l : loads) add(l.at, l.force, l.couple);
+    addOwnMass(q);
+}
+
+void BarLoads::set(const CompiledMechanism& m, const StepResult& s, const Pose& q, const BodyLoads& acting)
+{
+    setMotion(m, s, q);
+    acting.forEachOn(bar_->body, [this](const Vec2& at, const Vec2& force, double couple) { add(at, force, couple); });
+    addOwnMass(q);
 }
 
 // The spread mass's share of the near-side sums, for u₀ = from ≤ x ≤ to,

@@ -31,6 +31,7 @@
 #pragma once
 
 #include "core/results/bar_model.h"
+#include "core/results/body_loads.h"
 #include "core/results/free_body.h"
 
 #include <array>
@@ -85,6 +86,8 @@ public:
     }
     // The same for the bar it was made or last set for.
     void set(const CompiledMechanism& m, const StepResult& s, const Pose& q, const std::vector<BodyLoad>& loads);
+    // The same with the loads taken from `acting`, readied for step s.
+    void set(const CompiledMechanism& m, const StepResult& s, const Pose& q, const BodyLoads& acting);
 
     // The loads at station x: just beyond a concentrated load there (towards
     // the second end), or just before it when `before`.
@@ -118,6 +121,9 @@ private:
         BarStation at(double x) const;
     };
     void prepare(const BarModel& bar);
+    // set() before and after the loads on the body are added.
+    void setMotion(const CompiledMechanism& m, const StepResult& s, const Pose& q);
+    void addOwnMass(const Pose& q);
     Vec2 accel(const Vec2& p) const;
     void add(const Vec2& p, const Vec2& force, double couple);
     void setDistributed(const MassSpread& spread);
