@@ -188,6 +188,7 @@ Options:
   --at-peak JOINT  at the solved position where that joint's load peaks
   --out F          the drawing, as SVG, PDF or PNG by its suffix
   --steps N        intervals over the cycle (default: the file's setting)
+  (--name=value works too)
 
 Signs (docs/method.md, "Internal loads along a bar"): N > 0 is tension. Look
 along the bar from its first end to its second with its left side up: V and M
@@ -196,8 +197,9 @@ then have the beam-table signs (V > 0 at a left-hand support, M > 0 sagging).
 Exit status:
   0  done, and the cycle is trustworthy
   1  FILE cannot be read or analysed; NAME is not a body or not a bar (the
-     message says why); the drawing cannot be written; or the results are not
-     trustworthy (the drawing is still written)
+     message says why); the drawing cannot be written; the results are not
+     trustworthy (the drawing is still written); or clevis-draw, which draws
+     it, is missing
   2  wrong command line: an unknown option, a joint the file does not have,
      or a position the solved cycle does not reach
 )";
