@@ -2,6 +2,7 @@
 
 #include "core/model/model_limits.h"
 
+#include <cctype>
 #include <charconv>
 #include <cmath>
 #include <optional>
@@ -26,8 +27,7 @@ Usage:
   clevis-cli bar-diagram FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)
                  --out F.svg|F.pdf|F.png [--steps N]
   clevis-cli analyze --help
-  clevis-cli internal-loads --help
-  clevis-cli bar-diagram --help
+  clevis-cli COMMAND --help
   clevis-cli --help
   clevis-cli --version
 
@@ -58,8 +58,8 @@ Commands:
   bar-diagram
              draw the axial force, shear force and bending moment along one
              bar at one position over their range over the cycle
-  (fbd, bar-diagram, bearing-polar and report are present in builds that include the
-  desktop app.)
+  (fbd, bar-diagram, bearing-polar and report draw with Qt: clevis-cli runs
+  clevis-draw, installed beside it with the desktop app, to draw them.)
 
 Run "clevis-cli analyze --help" for the options, units, sign conventions and
 exit codes. Documentation: docs/file-format.md (mechanism files),
@@ -188,6 +188,7 @@ Options:
   --at-peak JOINT  at the solved position where that joint's load peaks
   --out F          the drawing, as SVG, PDF or PNG by its suffix
   --steps N        intervals over the cycle (default: the file's setting)
+  (--name=value works too)
 
 Signs (docs/method.md, "Internal loads along a bar"): N > 0 is tension. Look
 along the bar from its first end to its second with its left side up: V and M
@@ -196,10 +197,84 @@ then have the beam-table signs (V > 0 at a left-hand support, M > 0 sagging).
 Exit status:
   0  done, and the cycle is trustworthy
   1  FILE cannot be read or analysed; NAME is not a body or not a bar (the
-     message says why); the drawing cannot be written; or the results are not
-     trustworthy (the drawing is still written)
+     message says why); the drawing cannot be written; the results are not
+     trustworthy (the drawing is still written); or clevis-draw, which draws
+     it, is missing
   2  wrong command line: an unknown option, a joint the file does not have,
      or a position the solved cycle does not reach
+)";
+
+const char* const kFbdHelp =
+    R"(Usage: clevis-cli fbd FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)
+                 --out F.svg|F.pdf|F.png [--steps N] [--dalembert]
+
+Draws the free-body diagram of the body NAME at one position: every force and
+couple on it as arrows, with a table of their components in N and N·m and
+the sums ΣFx, ΣFy and ΣM_G beside m·aGx, m·aGy and I_G·α.
+
+Options:
+  --body NAME      the body
+  --at-deg A       where the first rotary driver is at A degrees (modulo
+                   360°), solved at exactly that angle
+  --at-t T         at time T s, solved at exactly that time
+  --at-peak JOINT  at the solved position where that joint's load peaks
+  --out F          the drawing, as SVG, PDF or PNG by its suffix
+  --steps N        intervals over the cycle (default: the file's setting)
+  --dalembert      also draw the inertia force and couple on the body
+  (--name=value works too)
+
+Exit status:
+  0  done, and the cycle is trustworthy
+  1  FILE cannot be read or analysed; the drawing cannot be written; the
+     results are not trustworthy (the drawing is still written); or
+     clevis-draw, which draws it, is missing
+  2  wrong command line: an unknown option or body, a joint the file does not
+     have, or a position the solved cycle does not reach
+)";
+
+const char* const kBearingPolarHelp =
+    R"(Usage: clevis-cli bearing-polar FILE --joint NAME [--body NAME] --out F.svg|F.pdf|F.png
+                 [--steps N]
+
+Draws the load the joint NAME puts on one of its bodies over the whole cycle,
+in that body's own frame (x and y are the global x and y at the drawn pose,
+turning with the body; the frame's are global): the curve the force's tip
+traces, the drive position marked every 30° (a round step for other drives),
+the peak, and whether the load reverses on the bearing. Forces in N.
+
+Options:
+  --joint NAME     the joint
+  --body NAME      which of its two bodies (default: its second, on which the
+                   reaction acts)
+  --out F          the drawing, as SVG, PDF or PNG by its suffix
+  --steps N        intervals over the cycle (default: the file's setting)
+  (--name=value works too)
+
+Exit status:
+  0  done, and the cycle is trustworthy
+  1  FILE cannot be read or analysed; the drawing cannot be written; the
+     results are not trustworthy (the drawing is still written); or
+     clevis-draw, which draws it, is missing
+  2  wrong command line, or a joint or body the file does not have (named)
+)";
+
+const char* const kReportHelp = R"(Usage: clevis-cli report FILE --out review.pdf [--steps N]
+
+Writes the design-review PDF of the mechanism in FILE: drawing, inputs, plots,
+peak loads, free-body diagrams at the critical positions, sizing of bars and
+pins, energy balance, cautions.
+
+Options:
+  --out F          the report, a .pdf file
+  --steps N        intervals over the cycle (default: the file's setting)
+  (--name=value works too)
+
+Exit status:
+  0  done, and the cycle is trustworthy
+  1  FILE cannot be read or analysed; the report cannot be written; the
+     results are not trustworthy (the report is still written); or
+     clevis-draw, which writes it, is missing
+  2  wrong command line
 )";
 
 bool isHelp(const std::string& arg) { return arg == "--help" || arg == "-h"; }
@@ -253,6 +328,18 @@ RatioStudyOption parseRatioStudy(const std::string& text)
     return o;
 }
 
+// One "--name[=value]" argument: its name and the value given after '='.
+struct OptionWord {
+    std::string name;
+    std::optional<std::string> attached;
+};
+
+OptionWord optionWord(const std::string& arg)
+{
+    const std::size_t equals = arg.find('=');
+    return {arg.substr(0, equals), equals == std::string::npos ? std::nullopt : std::optional(arg.substr(equals + 1))};
+}
+
 Command parseAnalyze(ArgumentReader& in)
 {
     AnalyzeOptions options;
@@ -260,10 +347,7 @@ Command parseAnalyze(ArgumentReader& in)
         const std::string arg = in.take();
         if (isHelp(arg)) return HelpRequest{"analyze"};
         if (arg.size() > 1 && arg[0] == '-') {
-            const std::size_t equals = arg.find('=');
-            const std::string name = arg.substr(0, equals);
-            const std::optional<std::string> value =
-                equals == std::string::npos ? std::nullopt : std::optional(arg.substr(equals + 1));
+            const auto [name, value] = optionWord(arg);
             if (name == "--steps") options.steps = parseSteps(in.valueOf(name, value));
             else if (name == "--json") options.jsonOut = in.valueOf(name, value);
             else if (name == "--csv") options.csvOut = in.valueOf(name, value);
@@ -295,6 +379,17 @@ double parseNumber(const std::string& option, const std::string& text)
     return value;
 }
 
+// --at-deg, --at-t or --at-peak into `at`; false for any other option.
+bool takePosition(const OptionWord& o, ArgumentReader& in, PositionChoice& at, int& given)
+{
+    if (o.name == "--at-deg") at.degrees = parseNumber(o.name, in.valueOf(o.name, o.attached));
+    else if (o.name == "--at-t") at.time = parseNumber(o.name, in.valueOf(o.name, o.attached));
+    else if (o.name == "--at-peak") at.peakOfJoint = in.valueOf(o.name, o.attached);
+    else return false;
+    ++given;
+    return true;
+}
+
 Command parseInternalLoads(ArgumentReader& in)
 {
     InternalLoadsOptions options;
@@ -303,18 +398,14 @@ Command parseInternalLoads(ArgumentReader& in)
         const std::string arg = in.take();
         if (isHelp(arg)) return HelpRequest{"internal-loads"};
         if (arg.size() > 1 && arg[0] == '-') {
-            const std::size_t equals = arg.find('=');
-            const std::string name = arg.substr(0, equals);
-            const std::optional<std::string> value =
-                equals == std::string::npos ? std::nullopt : std::optional(arg.substr(equals + 1));
-            if (name == "--body") options.body = in.valueOf(name, value);
-            else if (name == "--at-deg") options.at.degrees = parseNumber(name, in.valueOf(name, value)), ++positions;
-            else if (name == "--at-t") options.at.time = parseNumber(name, in.valueOf(name, value)), ++positions;
-            else if (name == "--at-peak") options.at.peakOfJoint = in.valueOf(name, value), ++positions;
-            else if (name == "--stations") options.stations = parseStations(in.valueOf(name, value));
-            else if (name == "--steps") options.steps = parseSteps(in.valueOf(name, value));
-            else if (name == "--json") options.jsonOut = in.valueOf(name, value);
-            else if (name == "--csv") options.csvOut = in.valueOf(name, value);
+            const OptionWord o = optionWord(arg);
+            const std::string& name = o.name;
+            if (takePosition(o, in, options.at, positions)) continue;
+            if (name == "--body") options.body = in.valueOf(name, o.attached);
+            else if (name == "--stations") options.stations = parseStations(in.valueOf(name, o.attached));
+            else if (name == "--steps") options.steps = parseSteps(in.valueOf(name, o.attached));
+            else if (name == "--json") options.jsonOut = in.valueOf(name, o.attached);
+            else if (name == "--csv") options.csvOut = in.valueOf(name, o.attached);
             else throw UsageError("unknown option \"" + arg + "\" for internal-loads");
         } else if (options.file.empty()) options.file = arg;
         else throw UsageError("internal-loads takes one FILE; \"" + arg + "\" is a second one");
@@ -322,6 +413,53 @@ Command parseInternalLoads(ArgumentReader& in)
     if (options.file.empty()) throw UsageError("internal-loads needs a mechanism FILE");
     if (options.body.empty()) throw UsageError("internal-loads needs --body NAME");
     if (positions != 1) throw UsageError("internal-loads needs exactly one of --at-deg, --at-t, --at-peak");
+    return options;
+}
+
+// The lower-case suffix of a file name ("" if none).
+std::string suffixOf(const std::string& path)
+{
+    const std::size_t dot = path.rfind('.'), slash = path.rfind('/');
+    if (dot == std::string::npos || (slash != std::string::npos && dot < slash)) return "";
+    std::string suffix = path.substr(dot + 1);
+    for (char& c : suffix) c = char(std::tolower(static_cast<unsigned char>(c)));
+    return suffix;
+}
+
+// The drawing commands' options; each command takes the ones its help lists.
+Command parseDrawing(const std::string& command, Drawing drawing, ArgumentReader& in)
+{
+    const bool atPosition = drawing == Drawing::FreeBody || drawing == Drawing::BarDiagram;
+    const bool bearing = drawing == Drawing::BearingPolar;
+    DrawOptions options;
+    options.drawing = drawing;
+    int positions = 0;
+    while (!in.done()) {
+        const std::string arg = in.take();
+        if (isHelp(arg)) return HelpRequest{command};
+        if (arg.size() > 1 && arg[0] == '-') {
+            const OptionWord o = optionWord(arg);
+            const std::string& name = o.name;
+            if (atPosition && takePosition(o, in, options.at, positions)) continue;
+            if (name == "--out") options.out = in.valueOf(name, o.attached);
+            else if (name == "--steps") options.steps = parseSteps(in.valueOf(name, o.attached));
+            else if (name == "--body" && (atPosition || bearing)) options.body = in.valueOf(name, o.attached);
+            else if (name == "--joint" && bearing) options.joint = in.valueOf(name, o.attached);
+            else if (name == "--dalembert" && drawing == Drawing::FreeBody && !o.attached) options.dalembert = true;
+            else throw UsageError("unknown option \"" + arg + "\" for " + command);
+        } else if (options.file.empty()) options.file = arg;
+        else throw UsageError(command + " takes one FILE; \"" + arg + "\" is a second one");
+    }
+    if (options.file.empty()) throw UsageError(command + " needs a mechanism FILE");
+    if (options.out.empty()) throw UsageError("--out is missing");
+    const std::string suffix = suffixOf(options.out);
+    if (drawing == Drawing::Report) {
+        if (suffix != "pdf") throw UsageError("--out " + options.out + ": the report is a .pdf file");
+    } else if (suffix != "svg" && suffix != "pdf" && suffix != "png")
+        throw UsageError("--out " + options.out + ": use a .svg, .pdf or .png file");
+    if (atPosition && options.body.empty()) throw UsageError("--body is missing");
+    if (bearing && options.joint.empty()) throw UsageError("--joint is missing");
+    if (atPosition && positions != 1) throw UsageError("give exactly one of --at-deg, --at-t, --at-peak");
     return options;
 }
 
@@ -336,6 +474,10 @@ Command parseCommandLine(const std::vector<std::string>& args)
     if (command == "--version") return VersionRequest{};
     if (command == "analyze") return parseAnalyze(in);
     if (command == "internal-loads") return parseInternalLoads(in);
+    if (command == "fbd") return parseDrawing(command, Drawing::FreeBody, in);
+    if (command == "bar-diagram") return parseDrawing(command, Drawing::BarDiagram, in);
+    if (command == "bearing-polar") return parseDrawing(command, Drawing::BearingPolar, in);
+    if (command == "report") return parseDrawing(command, Drawing::Report, in);
     throw UsageError("unknown command \"" + command + "\"");
 }
 
@@ -344,7 +486,17 @@ std::string helpText(const std::string& topic)
     if (topic == "analyze") return kAnalyzeHelp;
     if (topic == "internal-loads") return kInternalLoadsHelp;
     if (topic == "bar-diagram") return kBarDiagramHelp;
+    if (topic == "fbd") return kFbdHelp;
+    if (topic == "bearing-polar") return kBearingPolarHelp;
+    if (topic == "report") return kReportHelp;
     return kOverview;
+}
+
+std::string usageErrorText(const std::vector<std::string>& args, const UsageError& error)
+{
+    const bool ownHelp = !args.empty() && helpText(args.front()) != kOverview;
+    return "clevis-cli: " + std::string(error.what()) + "\nTry \"clevis-cli " + (ownHelp ? args.front() + " " : "") +
+           "--help\".\n";
 }
 
 }  // namespace clevis::cli

@@ -1,5 +1,7 @@
 // The clevis-cli command line: a subcommand and its options. Parsing knows
-// nothing about mechanisms, so new subcommands only add a case here.
+// nothing about mechanisms, so new subcommands only add a case here. Core
+// only: clevis-cli and clevis-draw (the drawing commands) share it, so both
+// accept and refuse the same words and --help describes both.
 #pragma once
 
 #include <optional>
@@ -45,12 +47,28 @@ struct InternalLoadsOptions {
     int steps = 0;      // 0: the file's own setting
     std::string jsonOut, csvOut;
 };
-using Command = std::variant<HelpRequest, VersionRequest, AnalyzeOptions, InternalLoadsOptions>;
+// The commands that draw with Qt; clevis-draw runs them.
+enum class Drawing { FreeBody, BarDiagram, BearingPolar, Report };
+struct DrawOptions {
+    Drawing drawing = Drawing::FreeBody;
+    std::string file;
+    std::string out;         // .svg, .pdf or .png (the report: .pdf)
+    std::string body;        // fbd, bar-diagram: the body; bearing-polar: the side (empty: the joint's second body)
+    std::string joint;       // bearing-polar
+    PositionChoice at;       // fbd, bar-diagram
+    int steps = 0;           // 0: the file's own setting
+    bool dalembert = false;  // fbd
+};
+using Command = std::variant<HelpRequest, VersionRequest, AnalyzeOptions, InternalLoadsOptions, DrawOptions>;
 
 // `args` excludes the program name. Throws UsageError.
 Command parseCommandLine(const std::vector<std::string>& args);
 
 std::string helpText(const std::string& topic);
+
+// What a UsageError prints: the message and where help is
+// ("clevis-cli COMMAND --help" when the command has a help of its own).
+std::string usageErrorText(const std::vector<std::string>& args, const UsageError& error);
 
 inline constexpr int kExitOk = 0, kExitFailed = 1, kExitUsage = 2;
 

@@ -1,6 +1,7 @@
 #include "app/cli_render_commands.h"
 
 #include "app/bar_choice.h"
+#include "app/cli_options.h"
 #include "app/solved_file.h"
 
 #include "core/file/mechanism_file.h"
@@ -19,92 +20,12 @@
 #include <QGuiApplication>
 
 #include <algorithm>
-#include <cmath>
 #include <iostream>
-#include <map>
 #include <memory>
-#include <optional>
-#include <stdexcept>
+#include <variant>
 
 namespace clevis::cli {
-
-const char* const kFbdUsage =
-    "usage: clevis-cli fbd FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT) --out F.svg|F.pdf|F.png\n"
-    "                  [--steps N] [--dalembert]\n";
-const char* const kBarDiagramUsage =
-    "usage: clevis-cli bar-diagram FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)\n"
-    "                  --out F.svg|F.pdf|F.png [--steps N]\n";
-const char* const kReportUsage = "usage: clevis-cli report FILE --out review.pdf [--steps N]\n";
-const char* const kBearingPolarUsage =
-    "usage: clevis-cli bearing-polar FILE --joint NAME [--body NAME] --out F.svg|F.pdf|F.png [--steps N]\n";
-
 namespace {
-
-constexpr int kOk = 0, kFailed = 1, kUsage = 2;
-
-struct Usage : std::runtime_error {
-    using std::runtime_error::runtime_error;
-};
-
-// FILE followed by --options with values; `flags` take none.
-struct Parsed {
-    std::string file;
-    std::map<std::string, std::string> options;
-};
-
-Parsed parse(const std::vector<std::string>& args, const std::vector<std::string>& valued,
-             const std::vector<std::string>& flags)
-{
-    Parsed p;
-    for (std::size_t i = 0; i < args.size(); ++i) {
-        const std::string& a = args[i];
-        const auto known = [&](const std::vector<std::string>& list) {
-            return std::find(list.begin(), list.end(), a) != list.end();
-        };
-        if (known(flags)) p.options[a] = "";
-        else if (known(valued)) {
-            if (i + 1 >= args.size()) throw Usage(a + " needs a value");
-            p.options[a] = args[++i];
-        } else if (a.rfind("--", 0) == 0) throw Usage("unknown option " + a);
-        else if (p.file.empty()) p.file = a;
-        else throw Usage("unexpected argument " + a + " (one FILE only)");
-    }
-    if (p.file.empty()) throw Usage("FILE is missing");
-    if (!p.options.count("--out")) throw Usage("--out is missing");
-    return p;
-}
-
-double number(const Parsed& p, const std::string& option)
-{
-    const std::string& text = p.options.at(option);
-    try {
-        std::size_t used = 0;
-        const double v = std::stod(text, &used);
-        if (used == text.size() && std::isfinite(v)) return v;
-    } catch (const std::exception&) {}
-    throw Usage(option + ": \"" + text + "\" is not a number");
-}
-
-// --out, a figure file.
-const std::string& figureOut(const Parsed& p)
-{
-    const std::string& out = p.options.at("--out");
-    const QString suffix = QString::fromStdString(out).section('.', -1).toLower();
-    if (suffix != "svg" && suffix != "pdf" && suffix != "png")
-        throw Usage("--out " + out + ": use a .svg, .pdf or .png file");
-    return out;
-}
-
-// What the drawings of one body at one position (fbd, bar-diagram) take:
-// FILE, --body, one of --at-deg, --at-t, --at-peak, --out (.svg, .pdf or
-// .png) and --steps, and any `flags` of their own.
-Parsed parseFigureAtPosition(const std::vector<std::string>& args, const std::vector<std::string>& flags)
-{
-    Parsed p = parse(args, {"--body", "--at-deg", "--at-t", "--at-peak", "--out", "--steps"}, flags);
-    figureOut(p);
-    if (!p.options.count("--body")) throw Usage("--body is missing");
-    return p;
-}
 
 // QtGui needs an application object; the command line has none of its own.
 void ensureGuiApplication()
@@ -124,15 +45,9 @@ struct Solved {
     CycleSummary s;
 };
 
-std::unique_ptr<Solved> solve(const Parsed& p)
+std::unique_ptr<Solved> solve(const DrawOptions& o)
 {
-    int steps = 0;
-    if (p.options.count("--steps")) {
-        const double typed = number(p, "--steps");
-        if (typed < 1 || typed != std::floor(typed)) throw Usage("--steps must be a whole number of at least 1");
-        steps = int(typed);
-    }
-    SolvedFile solved = solveFile(p.file, steps, std::cerr);
+    SolvedFile solved = solveFile(o.file, o.steps, std::cerr);
     auto out = std::make_unique<Solved>();
     out->doc = std::move(solved.mechanism);
     out->m = std::move(solved.m);
@@ -149,11 +64,11 @@ int stepAtDegrees(Solved& s, double degrees)
     int driver = -1;
     for (std::size_t d = 0; d < s.m.drivers.size() && driver < 0; ++d)
         if (s.m.drivers[d].type == DriverType::Rotary) driver = int(d);
-    if (driver < 0) throw Usage("--at-deg: the mechanism has no rotary driver; use --at-t");
+    if (driver < 0) throw UsageError("--at-deg: the mechanism has no rotary driver; use --at-t");
     const auto t = timeAtDrivePosition(s.m, s.r, driver, degToRad(degrees));
     if (!t)
-        throw Usage("--at-deg " + std::to_string(degrees) + ": \"" + s.m.drivers[driver].name +
-                    "\" does not reach that angle in the solved cycle");
+        throw UsageError("--at-deg " + std::to_string(degrees) + ": \"" + s.m.drivers[driver].name +
+                         "\" does not reach that angle in the solved cycle");
     return insertStep(s.r, solveAtTime(s.m, s.r, *t));
 }
 
@@ -162,8 +77,8 @@ int stepAtTime(Solved& s, double t)
 {
     const auto& steps = s.r.steps;
     if (t < steps.front().t - 1e-12 || t > steps.back().t + 1e-12)
-        throw Usage("--at-t " + std::to_string(t) + " s is outside the solved cycle (0 to " +
-                    std::to_string(steps.back().t) + " s)");
+        throw UsageError("--at-t " + std::to_string(t) + " s is outside the solved cycle (0 to " +
+                         std::to_string(steps.back().t) + " s)");
     return insertStep(s.r, solveAtTime(s.m, s.r, std::clamp(t, steps.front().t, steps.back().t)));
 }
 
@@ -174,68 +89,47 @@ int stepAtPeak(const Solved& s, const std::string& joint)
         if (j.name == joint) return j.peak.step;
         names += (names.empty() ? "" : ", ") + j.name;
     }
-    throw Usage("--at-peak: no joint \"" + joint + "\" (joints: " + names + ")");
+    throw UsageError("--at-peak: no joint \"" + joint + "\" (joints: " + names + ")");
 }
 
-int chooseStep(const Parsed& p, Solved& s)
+// The parser has checked that exactly one position is given.
+int chooseStep(const PositionChoice& at, Solved& s)
 {
-    const int given = int(p.options.count("--at-deg") + p.options.count("--at-t") + p.options.count("--at-peak"));
-    if (given != 1) throw Usage("give exactly one of --at-deg, --at-t, --at-peak");
-    if (p.options.count("--at-deg")) return stepAtDegrees(s, number(p, "--at-deg"));
-    if (p.options.count("--at-t")) return stepAtTime(s, number(p, "--at-t"));
-    return stepAtPeak(s, p.options.at("--at-peak"));
+    if (at.degrees) return stepAtDegrees(s, *at.degrees);
+    if (at.time) return stepAtTime(s, *at.time);
+    return stepAtPeak(s, at.peakOfJoint);
 }
 
-int chooseBody(const Parsed& p, const Solved& s)
+int chooseBody(const std::string& name, const Solved& s)
 {
-    const std::string& name = p.options.at("--body");
     const int body = findBody(s.m, name);
     if (body >= 0) return body;
     std::string names;
     for (const auto& b : s.m.bodies) names += (names.empty() ? "" : ", ") + b.name;
-    if (body == kGround) throw Usage("--body ground: the frame has no free-body diagram here; choose one of " + names);
-    throw Usage("--body: no body \"" + name + "\" (bodies: " + names + ")");
+    if (body == kGround)
+        throw UsageError("--body ground: the frame has no free-body diagram here; choose one of " + names);
+    throw UsageError("--body: no body \"" + name + "\" (bodies: " + names + ")");
 }
 
 // The joint named by --joint and the side named by --body (default: the
 // joint's second body, the one its reaction acts on).
-std::pair<int, int> chooseJointSide(const Parsed& p, const Solved& s)
+std::pair<int, int> chooseJointSide(const DrawOptions& o, const Solved& s)
 {
-    if (!p.options.count("--joint")) throw Usage("--joint is missing");
-    const std::string& name = p.options.at("--joint");
+    const std::string& name = o.joint;
     const auto& joints = s.m.joints;
     const auto found = std::find_if(joints.begin(), joints.end(), [&](const auto& j) { return j.name == name; });
     if (found == joints.end()) {
         std::string names;
         for (const auto& j : joints) names += (names.empty() ? "" : ", ") + j.name;
-        throw Usage("--joint: no joint \"" + name + "\" (joints: " + names + ")");
+        throw UsageError("--joint: no joint \"" + name + "\" (joints: " + names + ")");
     }
-    if (!p.options.count("--body")) return {int(found - joints.begin()), found->body[1]};
-    const std::string& body = p.options.at("--body");
+    if (o.body.empty()) return {int(found - joints.begin()), found->body[1]};
+    const std::string& body = o.body;
     const int index = findBody(s.m, body);
     if (index == -2 || (index != found->body[0] && index != found->body[1]))
-        throw Usage("--body " + body + ": not a body of joint \"" + name +
-                    "\" (its bodies: " + s.m.bodyName(found->body[0]) + ", " + s.m.bodyName(found->body[1]) + ")");
+        throw UsageError("--body " + body + ": not a body of joint \"" + name +
+                         "\" (its bodies: " + s.m.bodyName(found->body[0]) + ", " + s.m.bodyName(found->body[1]) + ")");
     return {int(found - joints.begin()), index};
-}
-
-// Runs `work`, turning the documented failures into exit codes and messages.
-template <class Work>
-int guarded(const char* usage, const std::string& file, Work&& work)
-{
-    try {
-        return work();
-    } catch (const Usage& e) {
-        std::cerr << "clevis-cli: " << e.what() << '\n' << usage;
-        return kUsage;
-    } catch (const Refused& e) {
-        std::cerr << file << ": " << e.what() << '\n';
-    } catch (const ModelError& e) {
-        std::cerr << file << ": " << e.what() << '\n';
-    } catch (const AnalysisError& e) {
-        std::cerr << file << ": " << e.what() << '\n';
-    }
-    return kFailed;
 }
 
 bool trustworthy(const Solved& s, const std::string& file)
@@ -254,87 +148,99 @@ int exported(const ui::Figure& figure, const std::string& out, const QString& ti
     QString error;
     if (!ui::exportFigure(figure, QString::fromStdString(out), title, &error)) {
         std::cerr << error.toStdString() << '\n';
-        return kFailed;
+        return kExitFailed;
     }
-    return trustworthy(s, file) ? kOk : kFailed;
+    return trustworthy(s, file) ? kExitOk : kExitFailed;
 }
 
-std::string fileOf(const std::vector<std::string>& args)
+int drawFreeBody(const DrawOptions& o)
 {
-    for (const auto& a : args)
-        if (a.rfind("--", 0) != 0) return a;
-    return "clevis-cli";
+    const auto solved = solve(o);
+    const int body = chooseBody(o.body, *solved);
+    const int step = chooseStep(o.at, *solved);
+    ensureGuiApplication();
+    const ui::FreeBodyPainter figure(solved->m, solved->r, freeBodyDiagram(solved->m, solved->r, body, step),
+                                     {ui::RenderUnits{}, o.dalembert});
+    const QString title = QString("Free-body diagram: %1").arg(QString::fromStdString(solved->m.bodies[body].name));
+    return exported(figure, o.out, title, *solved, o.file);
+}
+
+int drawBearingPolar(const DrawOptions& o)
+{
+    const auto solved = solve(o);
+    const auto [joint, body] = chooseJointSide(o, *solved);
+    ensureGuiApplication();
+    const ui::BearingPolarDiagram figure(
+        solved->m, solved->r, bearingPolar(solved->m, solved->r, solved->s, joint, body), {ui::RenderUnits{}});
+    const QString title = QString("Bearing load at %1 on %2")
+                              .arg(QString::fromStdString(solved->m.joints[joint].name),
+                                   QString::fromStdString(solved->m.bodyName(body)));
+    return exported(figure, o.out, title, *solved, o.file);
+}
+
+int drawBarDiagram(const DrawOptions& o)
+{
+    const auto solved = solve(o);
+    const BarModel bar = chooseBar(findBars(solved->doc, solved->m), o.body);
+    const int step = chooseStep(o.at, *solved);
+    ensureGuiApplication();
+    const ui::BarCycleLoads cycle = ui::barCycleLoads(solved->m, solved->r, bar);
+    const ui::BarLoadDiagram figure(solved->m, solved->r, cycle, step, ui::RenderUnits{});
+    const QString title = QString("Internal loads: %1").arg(QString::fromStdString(bar.bodyName));
+    return exported(figure, o.out, title, *solved, o.file);
+}
+
+int writeReport(const DrawOptions& o)
+{
+    const auto solved = solve(o);
+    ensureGuiApplication();
+    QString error;
+    const ui::ReviewReportInput in{solved->m,         solved->r,   solved->s, QString::fromStdString(o.file),
+                                   ui::RenderUnits{}, &solved->doc};
+    if (!ui::writeReviewReport(in, QString::fromStdString(o.out), &error)) {
+        std::cerr << error.toStdString() << '\n';
+        return kExitFailed;
+    }
+    return trustworthy(*solved, o.file) ? kExitOk : kExitFailed;
+}
+
+int draw(const DrawOptions& o)
+{
+    switch (o.drawing) {
+    case Drawing::FreeBody: return drawFreeBody(o);
+    case Drawing::BarDiagram: return drawBarDiagram(o);
+    case Drawing::BearingPolar: return drawBearingPolar(o);
+    case Drawing::Report: return writeReport(o);
+    }
+    return kExitFailed;
 }
 
 }  // namespace
 
-int runFbdCommand(const std::vector<std::string>& args)
+int runDrawCommand(const std::vector<std::string>& args)
 {
-    return guarded(kFbdUsage, fileOf(args), [&] {
-        const Parsed p = parseFigureAtPosition(args, {"--dalembert"});
-        const std::string& out = figureOut(p);
-        const auto solved = solve(p);
-        const int body = chooseBody(p, *solved);
-        const int step = chooseStep(p, *solved);
-        ensureGuiApplication();
-        const ui::FreeBodyPainter figure(solved->m, solved->r, freeBodyDiagram(solved->m, solved->r, body, step),
-                                         {ui::RenderUnits{}, p.options.count("--dalembert") > 0});
-        const QString title = QString("Free-body diagram: %1").arg(QString::fromStdString(solved->m.bodies[body].name));
-        return exported(figure, out, title, *solved, p.file);
-    });
-}
-
-int runBearingPolarCommand(const std::vector<std::string>& args)
-{
-    return guarded(kBearingPolarUsage, fileOf(args), [&] {
-        const Parsed p = parse(args, {"--joint", "--body", "--out", "--steps"}, {});
-        const std::string& out = figureOut(p);
-        const auto solved = solve(p);
-        const auto [joint, body] = chooseJointSide(p, *solved);
-        ensureGuiApplication();
-        const ui::BearingPolarDiagram figure(
-            solved->m, solved->r, bearingPolar(solved->m, solved->r, solved->s, joint, body), {ui::RenderUnits{}});
-        const QString title = QString("Bearing load at %1 on %2")
-                                  .arg(QString::fromStdString(solved->m.joints[joint].name),
-                                       QString::fromStdString(solved->m.bodyName(body)));
-        return exported(figure, out, title, *solved, p.file);
-    });
-}
-
-int runBarDiagramCommand(const std::vector<std::string>& args)
-{
-    return guarded(kBarDiagramUsage, fileOf(args), [&] {
-        const Parsed p = parseFigureAtPosition(args, {});
-        const std::string& out = figureOut(p);
-        const auto solved = solve(p);
-        const BarModel bar = chooseBar(findBars(solved->doc, solved->m), p.options.at("--body"));
-        const int step = chooseStep(p, *solved);
-        ensureGuiApplication();
-        const ui::BarCycleLoads cycle = ui::barCycleLoads(solved->m, solved->r, bar);
-        const ui::BarLoadDiagram figure(solved->m, solved->r, cycle, step, ui::RenderUnits{});
-        const QString title = QString("Internal loads: %1").arg(QString::fromStdString(bar.bodyName));
-        return exported(figure, out, title, *solved, p.file);
-    });
-}
-
-int runReportCommand(const std::vector<std::string>& args)
-{
-    return guarded(kReportUsage, fileOf(args), [&] {
-        const Parsed p = parse(args, {"--out", "--steps"}, {});
-        const std::string& out = p.options.at("--out");
-        if (QString::fromStdString(out).section('.', -1).toLower() != "pdf")
-            throw Usage("--out " + out + ": the report is a .pdf file");
-        const auto solved = solve(p);
-        ensureGuiApplication();
-        QString error;
-        const ui::ReviewReportInput in{solved->m,         solved->r,   solved->s, QString::fromStdString(p.file),
-                                       ui::RenderUnits{}, &solved->doc};
-        if (!ui::writeReviewReport(in, QString::fromStdString(out), &error)) {
-            std::cerr << error.toStdString() << '\n';
-            return kFailed;
+    std::string file = "clevis-cli";
+    try {
+        const Command command = parseCommandLine(args);
+        if (const auto* help = std::get_if<HelpRequest>(&command)) {
+            std::cout << helpText(help->topic);
+            return kExitOk;
         }
-        return trustworthy(*solved, p.file) ? kOk : kFailed;
-    });
+        const auto* drawing = std::get_if<DrawOptions>(&command);
+        if (!drawing) throw UsageError("clevis-draw only draws (fbd, bar-diagram, bearing-polar, report)");
+        file = drawing->file;
+        return draw(*drawing);
+    } catch (const UsageError& e) {
+        std::cerr << usageErrorText(args, e);
+        return kExitUsage;
+    } catch (const Refused& e) {
+        std::cerr << file << ": " << e.what() << '\n';
+    } catch (const ModelError& e) {
+        std::cerr << file << ": " << e.what() << '\n';
+    } catch (const AnalysisError& e) {
+        std::cerr << file << ": " << e.what() << '\n';
+    }
+    return kExitFailed;
 }
 
 }  // namespace clevis::cli

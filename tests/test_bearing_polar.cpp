@@ -342,7 +342,8 @@ TEST(BearingPolarCommand, WritesSvgPdfAndPng)
     QTemporaryDir dir;
     const QString svg = dir.filePath("pin.svg"), pdf = dir.filePath("pin.pdf"), png = dir.filePath("pin.png");
     for (const QString& out : {svg, pdf, png})
-        ASSERT_EQ(cli::runBearingPolarCommand({kPress, "--joint", "crank_pin", "--out", out.toStdString()}), 0);
+        ASSERT_EQ(cli::runDrawCommand({"bearing-polar", kPress, "--joint", "crank_pin", "--out", out.toStdString()}),
+                  0);
     EXPECT_TRUE(QSvgRenderer(svg).isValid());
     QFile svgFile(svg);
     ASSERT_TRUE(svgFile.open(QIODevice::ReadOnly));
@@ -359,8 +360,8 @@ TEST(BearingPolarCommand, WritesSvgPdfAndPng)
     EXPECT_GT(image.width(), 500);
 
     const QString frame = dir.filePath("frame.svg");
-    ASSERT_EQ(cli::runBearingPolarCommand(
-                  {kPress, "--joint", "main_bearing", "--body", "ground", "--out", frame.toStdString()}),
+    ASSERT_EQ(cli::runDrawCommand({"bearing-polar", kPress, "--joint", "main_bearing", "--body", "ground", "--out",
+                                   frame.toStdString()}),
               0);
     QFile frameFile(frame);
     ASSERT_TRUE(frameFile.open(QIODevice::ReadOnly));
@@ -371,7 +372,8 @@ TEST(BearingPolarCommand, NamesTheJointOrTheBodyThatIsWrong)
 {
     const auto fails = [](std::vector<std::string> args, int code, const std::string& named) {
         testing::internal::CaptureStderr();
-        EXPECT_EQ(cli::runBearingPolarCommand(args), code);
+        args.insert(args.begin(), "bearing-polar");
+        EXPECT_EQ(cli::runDrawCommand(args), code);
         const std::string err = testing::internal::GetCapturedStderr();
         EXPECT_NE(err.find(named), std::string::npos) << err;
     };
@@ -390,7 +392,7 @@ TEST(BearingPolarReport, TheSizingChapterHasEveryPin)
 {
     QTemporaryDir dir;
     const QString pdf = dir.filePath("review.pdf");
-    ASSERT_EQ(cli::runReportCommand({kPress, "--out", pdf.toStdString()}), 0);
+    ASSERT_EQ(cli::runDrawCommand({"report", kPress, "--out", pdf.toStdString()}), 0);
     QProcess text;
     text.start("pdftotext", {pdf, "-"});
     ASSERT_TRUE(text.waitForFinished(60000));

@@ -111,7 +111,12 @@ void expectShown(double shown, double exact)
     EXPECT_NEAR(shown, exact, 6e-4 * std::abs(exact) + 1e-4) << "exact " << exact;
 }
 
-int run(int (*command)(const std::vector<std::string>&), std::vector<std::string> args) { return command(args); }
+// `clevis-cli COMMAND ARGS...` as clevis-draw runs it.
+int run(const std::string& command, std::vector<std::string> args)
+{
+    args.insert(args.begin(), command);
+    return cli::runDrawCommand(args);
+}
 
 TEST(FreeBodySvg, NumbersEqualTheSolversForEveryBody)
 {
@@ -119,8 +124,7 @@ TEST(FreeBodySvg, NumbersEqualTheSolversForEveryBody)
     QTemporaryDir dir;
     for (const auto& body : solved.m.bodies) {
         const QString out = dir.filePath(QString::fromStdString(body.name) + ".svg");
-        ASSERT_EQ(run(cli::runFbdCommand, {kPress, "--body", body.name, "--at-deg", "160", "--out", out.toStdString()}),
-                  0);
+        ASSERT_EQ(run("fbd", {kPress, "--body", body.name, "--at-deg", "160", "--out", out.toStdString()}), 0);
         // 160° of a one-revolution cycle in 360 steps from 0°: step 160.
         const FreeBodyDiagram d = freeBodyDiagram(solved.m, solved.r, findBody(solved.m, body.name), 160);
         const SvgLines lines = svgLines(out);
@@ -146,11 +150,8 @@ TEST(FreeBodySvg, SharedPinArrowsAreEqualAndOpposite)
 {
     QTemporaryDir dir;
     const QString crank = dir.filePath("crank.svg"), rod = dir.filePath("rod.svg");
-    ASSERT_EQ(run(cli::runFbdCommand,
-                  {kPress, "--body", "crankshaft", "--at-peak", "crank_pin", "--out", crank.toStdString()}),
-              0);
-    ASSERT_EQ(run(cli::runFbdCommand,
-                  {kPress, "--body", "connecting_rod", "--at-peak", "crank_pin", "--out", rod.toStdString()}),
+    ASSERT_EQ(run("fbd", {kPress, "--body", "crankshaft", "--at-peak", "crank_pin", "--out", crank.toStdString()}), 0);
+    ASSERT_EQ(run("fbd", {kPress, "--body", "connecting_rod", "--at-peak", "crank_pin", "--out", rod.toStdString()}),
               0);
     const auto onCrank = tableRow(svgLines(crank), "crank_pin"), onRod = tableRow(svgLines(rod), "crank_pin");
     ASSERT_TRUE(onCrank.count("Fy") && onRod.count("Fy"));
@@ -167,7 +168,7 @@ TEST(FreeBodySvg, PdfAndPngAreWritten)
     QTemporaryDir dir;
     for (const char* suffix : {"pdf", "png"}) {
         const QString out = dir.filePath(QString("ram.") + suffix);
-        ASSERT_EQ(run(cli::runFbdCommand, {kPress, "--body", "ram", "--at-t", "0.5", "--out", out.toStdString()}), 0);
+        ASSERT_EQ(run("fbd", {kPress, "--body", "ram", "--at-t", "0.5", "--out", out.toStdString()}), 0);
         EXPECT_GT(QFile(out).size(), 2000) << suffix;
     }
 }
@@ -175,17 +176,16 @@ TEST(FreeBodySvg, PdfAndPngAreWritten)
 TEST(FbdCommand, NamesTheOffendingItem)
 {
     testing::internal::CaptureStderr();
-    EXPECT_EQ(run(cli::runFbdCommand, {kPress, "--body", "flywheel", "--at-deg", "10", "--out", "/tmp/x.svg"}), 2);
+    EXPECT_EQ(run("fbd", {kPress, "--body", "flywheel", "--at-deg", "10", "--out", "/tmp/x.svg"}), 2);
     EXPECT_NE(testing::internal::GetCapturedStderr().find("flywheel"), std::string::npos);
     testing::internal::CaptureStderr();
-    EXPECT_EQ(run(cli::runFbdCommand, {kPress, "--body", "ram", "--at-peak", "knee", "--out", "/tmp/x.svg"}), 2);
+    EXPECT_EQ(run("fbd", {kPress, "--body", "ram", "--at-peak", "knee", "--out", "/tmp/x.svg"}), 2);
     EXPECT_NE(testing::internal::GetCapturedStderr().find("knee"), std::string::npos);
     testing::internal::CaptureStderr();
-    EXPECT_EQ(run(cli::runFbdCommand, {kPress, "--body", "ram", "--out", "/tmp/x.svg"}), 2);
+    EXPECT_EQ(run("fbd", {kPress, "--body", "ram", "--out", "/tmp/x.svg"}), 2);
     testing::internal::GetCapturedStderr();
     testing::internal::CaptureStderr();
-    EXPECT_EQ(
-        run(cli::runFbdCommand, {"/nonexistent/press.json", "--body", "ram", "--at-t", "0", "--out", "/tmp/x.svg"}), 1);
+    EXPECT_EQ(run("fbd", {"/nonexistent/press.json", "--body", "ram", "--at-t", "0", "--out", "/tmp/x.svg"}), 1);
     EXPECT_NE(testing::internal::GetCapturedStderr().find("press.json"), std::string::npos);
 }
 
@@ -203,7 +203,7 @@ TEST(ReviewReport, RendersEveryPageWithItsSectionsAndThePeakTable)
     const Solved solved = solveFile(kPress);
     QTemporaryDir dir;
     const QString pdf = dir.filePath("review.pdf");
-    ASSERT_EQ(run(cli::runReportCommand, {kPress, "--out", pdf.toStdString()}), 0);
+    ASSERT_EQ(run("report", {kPress, "--out", pdf.toStdString()}), 0);
 
     const QString info = tool("pdfinfo", {pdf});
     const int pages = QRegularExpression(R"(Pages:\s+(\d+))").match(info).captured(1).toInt();
@@ -299,7 +299,7 @@ TEST(PlotPanes, TheReportDrawsEveryPaneUnderItsTitle)
     const Solved solved = solveFile(kPress);
     QTemporaryDir dir;
     const QString pdf = dir.filePath("review.pdf");
-    ASSERT_EQ(run(cli::runReportCommand, {kPress, "--out", pdf.toStdString()}), 0);
+    ASSERT_EQ(run("report", {kPress, "--out", pdf.toStdString()}), 0);
     const QString text = tool("pdftotext", {pdf, "-"});
     qsizetype at = text.indexOf(ui::reviewReportSections()[2]);
     ASSERT_GE(at, 0);

@@ -1,0 +1,26 @@
+#!/usr/bin/env bash
+# Whole-process timing of several commands run in turn (so that a machine
+# getting busier or quieter affects them alike): the median wall and CPU
+# (user + system) time of each, in ms, after three runs not counted.
+#   tools/time_side_by_side.sh RUNS 'COMMAND 1' 'COMMAND 2' ...
+# e.g. tools/time_side_by_side.sh 40 '/tmp/old/clevis-cli --help' 'build/app/clevis-cli --help'
+set -euo pipefail
+runs=$1
+shift
+tmp=$(mktemp -d)
+trap 'rm -rf "$tmp"' EXIT
+TIMEFORMAT='%3R %3U %3S'
+for ((i = 0; i < runs + 3; ++i)); do
+  for ((c = 1; c <= $#; ++c)); do
+    # bash's `time` keyword reports to the shell's stderr, the command's own
+    # output goes to /dev/null.
+    t=$({ time eval "${!c}" >/dev/null 2>&1; } 2>&1) || true
+    ((i < 3)) || echo "$t" >>"$tmp/$c"
+  done
+done
+median() { sort -g | awk '{v[NR] = $1} END {print (NR % 2 ? v[(NR + 1) / 2] : (v[NR / 2] + v[NR / 2 + 1]) / 2)}'; }
+for ((c = 1; c <= $#; ++c)); do
+  wall=$(awk '{print $1 * 1000}' "$tmp/$c" | median)
+  cpu=$(awk '{print ($2 + $3) * 1000}' "$tmp/$c" | median)
+  printf '%10.1f ms wall %8.1f ms CPU  %s\n' "$wall" "$cpu" "${!c}"
+done
