@@ -118,14 +118,13 @@ std::vector<int> columnOrder(int n, const Graph& g)
 }
 
 // Rows by the place of their first column, then of their last; empty rows last.
-std::vector<int> rowOrder(const std::vector<std::vector<int>>& columnsOfRow, const std::vector<int>& columnPlace)
+std::vector<int> rowOrder(int n, const std::vector<std::vector<int>>& columnsOfRow, const std::vector<int>& columnPlace)
 {
-    const int rows = int(columnsOfRow.size()), columns = int(columnPlace.size());
-    std::vector<std::pair<int, int>> span(rows, {columns, -1});
-    for (int r = 0; r < rows; ++r)
+    std::vector<std::pair<int, int>> span(n, {n, -1});
+    for (int r = 0; r < n; ++r)
         for (int c : columnsOfRow[r])
             span[r] = {std::min(span[r].first, columnPlace[c]), std::max(span[r].second, columnPlace[c])};
-    std::vector<int> order(rows);
+    std::vector<int> order(n);
     std::iota(order.begin(), order.end(), 0);
     std::stable_sort(order.begin(), order.end(), [&](int a, int b) { return span[a] < span[b]; });
     return order;
@@ -135,17 +134,12 @@ std::vector<int> rowOrder(const std::vector<std::vector<int>>& columnsOfRow, con
 
 BandOrdering orderIntoBand(int n, const std::vector<std::pair<int, int>>& entries)
 {
-    return orderIntoBand(n, n, entries);
-}
-
-BandOrdering orderIntoBand(int rows, int columns, const std::vector<std::pair<int, int>>& entries)
-{
-    std::vector<std::vector<int>> columnsOfRow(rows);
+    std::vector<std::vector<int>> columnsOfRow(n);
     for (const auto& [r, c] : entries) columnsOfRow[r].push_back(c);
     BandOrdering o;
-    o.columnAt = columnOrder(columns, columnGraph(columns, columnsOfRow));
+    o.columnAt = columnOrder(n, columnGraph(n, columnsOfRow));
     o.columnPlace = inverse(o.columnAt);
-    o.rowAt = rowOrder(columnsOfRow, o.columnPlace);
+    o.rowAt = rowOrder(n, columnsOfRow, o.columnPlace);
     o.rowPlace = inverse(o.rowAt);
     for (const auto& [r, c] : entries) {
         const int offset = o.rowPlace[r] - o.columnPlace[c];

@@ -16,14 +16,11 @@ struct BandOrdering {
     std::vector<int> rowAt, columnAt;        // original row / column at each place
     std::vector<int> rowPlace, columnPlace;  // place of each original row / column
     int lower = 0, upper = 0;                // diagonals below / above the main one
-    int sign = 1;                            // sign of det P_r · det P_c (square matrices)
+    int sign = 1;                            // sign of det P_r · det P_c
 };
 
 // `entries` are the (row, column) positions of the nonzeros of an n×n matrix;
 // repeats are allowed.
 BandOrdering orderIntoBand(int n, const std::vector<std::pair<int, int>>& entries);
-// The same for a rows × columns matrix (a Jacobian with more or fewer
-// equations than coordinates).
-BandOrdering orderIntoBand(int rows, int columns, const std::vector<std::pair<int, int>>& entries);
 
 }  // namespace clevis

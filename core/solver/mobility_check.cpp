@@ -1,7 +1,7 @@
 #include "core/solver/mobility_check.h"
 
+#include "core/solver/constraint_system.h"
 #include "core/solver/row_dependence.h"
-#include "core/solver/step_solver.h"
 
 #include <set>
 #include <sstream>
@@ -9,14 +9,16 @@
 namespace clevis {
 namespace {
 
+// The joint or driver that writes `row`: the last constraint starting at or before it.
 std::string ownerName(const CompiledMechanism& m, const ConstraintSystem& s, int row)
 {
-    for (std::size_t k = s.constraints().size(); k-- > 0;)
-        if (s.firstRow(k) <= row) {
-            const Constraint& c = *s.constraints()[k];
-            return c.owner() == ConstraintOwner::Joint ? m.joints[c.ownerIndex()].name : m.drivers[c.ownerIndex()].name;
-        }
-    return "?";
+    std::size_t lo = 0, hi = s.constraints().size();  // constraint lo starts at or before row; hi after
+    while (hi - lo > 1) {
+        const std::size_t mid = (lo + hi) / 2;
+        (s.firstRow(mid) <= row ? lo : hi) = mid;
+    }
+    const Constraint& c = *s.constraints()[lo];
+    return c.owner() == ConstraintOwner::Joint ? m.joints[c.ownerIndex()].name : m.drivers[c.ownerIndex()].name;
 }
 
 // The rows of the joints, which come before the drivers' (constraint_system.h).
@@ -50,24 +52,17 @@ std::string joinNames(const std::vector<std::string>& names)
 
 }  // namespace
 
-// Where the drivers' square Jacobian factors and is well conditioned (the
-// test that starts every cycle, step_solver.h), every row is independent: no
-// joint is redundant, no body free and no driver in conflict, and the
-// joints' rank is their row count. Only otherwise are the dependent rows and
-// the null space sought (row_dependence.h).
+// One factorisation of the whole Jacobian, the joints' rows first
+// (row_dependence.h): their rank and dependent rows are the joints' own, the
+// rest the drivers', and its null space names the bodies left free.
 MobilityReport checkMobility(const CompiledMechanism& m, const Eigen::VectorXd& q)
 {
     MobilityReport r;
     r.gruebler = grueblerCount(m);
     r.drivers = int(m.drivers.size());
 
-    StepSolver solver(m);
-    const ConstraintSystem& all = solver.system();
+    const ConstraintSystem all(m, true);
     const int joints = jointRows(all);
-    if (solver.regularAt(q, 0.0)) {
-        r.mobility = all.coordinates() - joints;
-        return r;
-    }
     Eigen::VectorXd phi;
     std::vector<Eigen::Triplet<double>> entries;
     all.position(q, 0.0, phi, &entries);

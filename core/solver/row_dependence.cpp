@@ -1,10 +1,7 @@
 #include "core/solver/row_dependence.h"
 
-#include "core/solver/band_ordering.h"
-
 #include <algorithm>
 #include <cmath>
-#include <numeric>
 
 namespace clevis {
 namespace {
@@ -20,7 +17,7 @@ struct Span {
 };
 
 // Jᵀ = Q R built one column of Jᵀ (one row of J) at a time. Rows of Jᵀ are
-// J's columns in band order. Reflector p, H_p = I − τ_p v vᵀ with v_p = 1,
+// J's columns in the order of `place`. Reflector p, H_p = I − τ_p v vᵀ with v_p = 1,
 // acts on rows [p, end_p]; column p of R holds rows [first_p, p].
 class ColumnByColumnQr {
 public:
@@ -119,26 +116,32 @@ private:
 
 RowDependence rowDependence(int rows, int columns, const std::vector<Eigen::Triplet<double>>& entries, int leadingRows)
 {
-    std::vector<std::pair<int, int>> positions;
-    positions.reserve(entries.size());
-    for (const auto& e : entries) positions.emplace_back(e.row(), e.col());
-    const BandOrdering band = orderIntoBand(rows, columns, positions);
-
-    // Each row's entries at its columns' places; the leading rows first.
-    std::vector<std::vector<std::pair<int, double>>> rowEntries(rows);
-    for (const auto& e : entries) rowEntries[e.row()].emplace_back(band.columnPlace[e.col()], e.value());
-    std::vector<int> order(rows);
-    std::iota(order.begin(), order.end(), 0);
-    std::stable_partition(order.begin(), order.end(), [&](int r) { return r < leadingRows; });
+    // Each row's entries, by columns in the order the rows first reach
+    // them (those no row holds last): row k then reaches little beyond the
+    // columns of rows before it, and the QR stays within a band.
+    std::vector<int> start(rows + 1, 0);
+    for (const auto& e : entries) ++start[e.row() + 1];
+    for (int r = 0; r < rows; ++r) start[r + 1] += start[r];
+    std::vector<std::pair<int, double>> rowEntries(entries.size());
+    std::vector<int> fill(start.begin(), start.end() - 1);
+    for (const auto& e : entries) rowEntries[fill[e.row()]++] = {e.col(), e.value()};
+    std::vector<int> place(columns, -1);
+    int placed = 0;
+    for (auto& [column, value] : rowEntries) {
+        if (place[column] < 0) place[column] = placed++;
+        column = place[column];
+    }
+    for (int& p : place)
+        if (p < 0) p = placed++;
 
     std::vector<double> x(columns, 0.0);
     double largest = 0.0;  // row norm
-    for (const auto& row : rowEntries) {
-        for (const auto& [place, value] : row) x[place] += value;
+    for (int r = 0; r < rows; ++r) {
+        for (int k = start[r]; k < start[r + 1]; ++k) x[rowEntries[k].first] += rowEntries[k].second;
         double norm2 = 0.0;
-        for (const auto& [place, value] : row) {
-            norm2 += x[place] * x[place];
-            x[place] = 0.0;
+        for (int k = start[r]; k < start[r + 1]; ++k) {
+            norm2 += x[rowEntries[k].first] * x[rowEntries[k].first];
+            x[rowEntries[k].first] = 0.0;
         }
         largest = std::max(largest, std::sqrt(norm2));
     }
@@ -147,14 +150,13 @@ RowDependence rowDependence(int rows, int columns, const std::vector<Eigen::Trip
     RowDependence d;
     ColumnByColumnQr qr;
     std::vector<int> keptRow;  // J's row of each pivot
-    for (std::size_t k = 0; k < order.size(); ++k) {
-        const int row = order[k];
-        if (k == std::size_t(leadingRows)) d.leadingRank = qr.rank();
+    for (int row = 0; row < rows; ++row) {
+        if (row == leadingRows) d.leadingRank = qr.rank();
         Span s{x, columns, -1};
-        for (const auto& [place, value] : rowEntries[row]) {
-            x[place] += value;
-            s.lo = std::min(s.lo, place);
-            s.hi = std::max(s.hi, place);
+        for (int k = start[row]; k < start[row + 1]; ++k) {
+            x[rowEntries[k].first] += rowEntries[k].second;
+            s.lo = std::min(s.lo, rowEntries[k].first);
+            s.hi = std::max(s.hi, rowEntries[k].first);
         }
         if (s.hi >= 0) qr.applyTransposeQ(s);
         double residual = 0.0;
@@ -174,10 +176,8 @@ RowDependence rowDependence(int rows, int columns, const std::vector<Eigen::Trip
         }
         for (int i = std::max(s.lo, 0); i <= s.hi; ++i) x[i] = 0.0;
     }
-    if (std::size_t(leadingRows) >= order.size()) d.leadingRank = qr.rank();
+    if (leadingRows >= rows) d.leadingRank = qr.rank();
     d.rank = qr.rank();
-    std::sort(d.dependent.begin(), d.dependent.end(),
-              [](const DependentRow& a, const DependentRow& b) { return a.row < b.row; });
 
     // The null space, spanned by Q e_j for j ≥ rank: how far each column moves in it.
     std::vector<double> reach2(columns, 0.0);
@@ -192,7 +192,7 @@ RowDependence rowDependence(int rows, int columns, const std::vector<Eigen::Trip
     }
     d.nullSpaceReaches.assign(columns, 0);
     for (int c = 0; c < columns; ++c)
-        d.nullSpaceReaches[c] = reach2[band.columnPlace[c]] > kNullSpaceTolerance * kNullSpaceTolerance;
+        d.nullSpaceReaches[c] = reach2[place[c]] > kNullSpaceTolerance * kNullSpaceTolerance;
     return d;
 }
 
