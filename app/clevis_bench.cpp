@@ -4,8 +4,10 @@
 // with its unit, e.g. 3.4us; in seconds in JSON output). Fans of four-bars
 // round one driven hub, whose Jacobian has no narrow band, time the sparse
 // LU path against the band path (jacobian_factor.h). The mobility check
-// that starts every cycle is also timed on its own, since its dense rank
-// tests grow with the cube of the size. The 200-body chain is timed again
+// that starts every cycle is also timed on its own, on sound chains (the
+// drivers' square Jacobian is regular) and on the same chains without their
+// driver (the dependent rows and the null space are sought), beside the
+// cycle of the same chain at up to 500 bodies. The 200-body chain is timed again
 // with the internal loads and envelopes of every bar added, and its results
 // written as the --json and --csv files are. The gear ratio study of the
 // punch press at 200 ratios is timed beside that mechanism's cycle.
@@ -62,7 +64,7 @@ void FourBarChainCycle(benchmark::State& state)
     const clevis::CompiledMechanism m = clevis::compile(clevis::test::fourBarChain(int(state.range(0))));
     timeCycle(state, m);
 }
-BENCHMARK(FourBarChainCycle)->ArgName("bodies")->Arg(10)->Arg(50)->Arg(200)->Unit(benchmark::kMillisecond);
+BENCHMARK(FourBarChainCycle)->ArgName("bodies")->Arg(10)->Arg(50)->Arg(200)->Arg(500)->Unit(benchmark::kMillisecond);
 
 // The same cycle with the internal loads of every bar: compare its median
 // with FourBarChainCycle's (the pass should add at most a quarter).
@@ -99,20 +101,44 @@ void FourBarFanCycle(benchmark::State& state)
 }
 BENCHMARK(FourBarFanCycle)->ArgName("loops")->Arg(5)->Arg(14)->Arg(40)->Unit(benchmark::kMillisecond);
 
-void FourBarChainMobilityCheck(benchmark::State& state)
+// `driven`: the chain as generated, which passes; else without its motor,
+// so that every body is named free.
+void timeMobilityCheck(benchmark::State& state, bool driven)
 {
-    const clevis::CompiledMechanism m = clevis::compile(clevis::test::fourBarChain(int(state.range(0))));
+    clevis::Mechanism doc = clevis::test::fourBarChain(int(state.range(0)));
+    if (!driven) {
+        doc.drivers.clear();
+        doc.cycle.duration = 1.0;
+    }
+    const clevis::CompiledMechanism m = clevis::compile(doc);
     const Eigen::VectorXd drawn = clevis::StepSolver(m).drawnPose();
     for (auto _ : state) {
         const clevis::MobilityReport report = clevis::checkMobility(m, drawn);
-        if (!report.ok()) {
-            state.SkipWithError(report.describe().c_str());
+        if (report.ok() != driven || report.freeBodies.size() != (driven ? 0 : m.bodies.size())) {
+            state.SkipWithError(("unexpected: " + report.describe()).c_str());
             break;
         }
         benchmark::DoNotOptimize(report);
     }
 }
-BENCHMARK(FourBarChainMobilityCheck)->ArgName("bodies")->Arg(10)->Arg(50)->Arg(200)->Unit(benchmark::kMillisecond);
+
+void FourBarChainMobilityCheck(benchmark::State& state) { timeMobilityCheck(state, true); }
+BENCHMARK(FourBarChainMobilityCheck)
+    ->ArgName("bodies")
+    ->Arg(10)
+    ->Arg(50)
+    ->Arg(200)
+    ->Arg(500)
+    ->Unit(benchmark::kMillisecond);
+
+void UndrivenChainMobilityCheck(benchmark::State& state) { timeMobilityCheck(state, false); }
+BENCHMARK(UndrivenChainMobilityCheck)
+    ->ArgName("bodies")
+    ->Arg(10)
+    ->Arg(50)
+    ->Arg(200)
+    ->Arg(500)
+    ->Unit(benchmark::kMillisecond);
 
 // Writing the results of the 200-body chain's cycle (about 40 MB of JSON):
 // bytes_per_second is the writing speed.

@@ -1,80 +1,39 @@
 #include "core/solver/mobility_check.h"
 
 #include "core/solver/constraint_system.h"
+#include "core/solver/row_dependence.h"
 
-#include <Eigen/Dense>
 #include <set>
 #include <sstream>
 
 namespace clevis {
 namespace {
 
-constexpr double kRankTolerance = 1e-9;
-
-Eigen::MatrixXd denseJacobian(const ConstraintSystem& s, const Eigen::VectorXd& q)
-{
-    Eigen::VectorXd phi;
-    std::vector<Eigen::Triplet<double>> entries;
-    s.position(q, 0.0, phi, &entries);
-    Eigen::MatrixXd j = Eigen::MatrixXd::Zero(s.rows(), s.coordinates());
-    for (const auto& e : entries) j(e.row(), e.col()) += e.value();
-    return j;
-}
-
+// The joint or driver that writes `row`: the last constraint starting at or before it.
 std::string ownerName(const CompiledMechanism& m, const ConstraintSystem& s, int row)
 {
-    for (std::size_t k = s.constraints().size(); k-- > 0;)
-        if (s.firstRow(k) <= row) {
-            const Constraint& c = *s.constraints()[k];
-            return c.owner() == ConstraintOwner::Joint ? m.joints[c.ownerIndex()].name : m.drivers[c.ownerIndex()].name;
-        }
-    return "?";
+    std::size_t lo = 0, hi = s.constraints().size();  // constraint lo starts at or before row; hi after
+    while (hi - lo > 1) {
+        const std::size_t mid = (lo + hi) / 2;
+        (s.firstRow(mid) <= row ? lo : hi) = mid;
+    }
+    const Constraint& c = *s.constraints()[lo];
+    return c.owner() == ConstraintOwner::Joint ? m.joints[c.ownerIndex()].name : m.drivers[c.ownerIndex()].name;
 }
 
-// Rows of J that depend on earlier-chosen ones, each with the rows it is a
-// combination of: column-pivoted QR of Jᵀ picks the independent rows first.
-std::vector<std::set<std::string>> dependentGroups(const CompiledMechanism& m, const ConstraintSystem& s,
-                                                   const Eigen::MatrixXd& j, int& rank)
+// The rows of the joints, which come before the drivers' (constraint_system.h).
+int jointRows(const ConstraintSystem& s)
 {
-    std::vector<std::set<std::string>> groups;
-    // Eigen's decompositions read past an empty matrix: no constraints, no rank.
-    rank = 0;
-    if (j.rows() == 0) return groups;
-    Eigen::ColPivHouseholderQR<Eigen::MatrixXd> qr(j.transpose());
-    qr.setThreshold(kRankTolerance);
-    rank = int(qr.rank());
-    if (rank == j.rows()) return groups;
-    const auto& perm = qr.colsPermutation().indices();
-    if (rank == 0) {  // every row is zero: each depends on nothing else
-        for (int d = 0; d < j.rows(); ++d) groups.push_back({ownerName(m, s, perm[d])});
-        return groups;
-    }
-    Eigen::MatrixXd independent(j.cols(), rank);
-    for (int i = 0; i < rank; ++i) independent.col(i) = j.row(perm[i]).transpose();
-    const Eigen::ColPivHouseholderQR<Eigen::MatrixXd> basis(independent);
-    for (int d = rank; d < j.rows(); ++d) {
-        const Eigen::VectorXd coeff = basis.solve(Eigen::VectorXd(j.row(perm[d]).transpose()));
-        std::set<std::string> group{ownerName(m, s, perm[d])};
-        for (int i = 0; i < rank; ++i)
-            if (std::abs(coeff[i]) > 1e-7) group.insert(ownerName(m, s, perm[i]));
-        groups.push_back(group);
-    }
-    return groups;
+    for (std::size_t k = 0; k < s.constraints().size(); ++k)
+        if (s.constraints()[k]->owner() == ConstraintOwner::Driver) return s.firstRow(k);
+    return s.rows();
 }
 
-std::vector<std::string> movingBodies(const CompiledMechanism& m, const Eigen::MatrixXd& j)
+std::set<std::string> ownerNames(const CompiledMechanism& m, const ConstraintSystem& s, const DependentRow& d)
 {
-    std::vector<std::string> bodies;
-    if (j.rows() == 0) {  // nothing holds any body (and Eigen cannot factor an empty matrix)
-        for (const auto& b : m.bodies) bodies.push_back(b.name);
-        return bodies;
-    }
-    const Eigen::FullPivLU<Eigen::MatrixXd> lu = Eigen::FullPivLU<Eigen::MatrixXd>(j).setThreshold(kRankTolerance);
-    const Eigen::MatrixXd kernel = lu.kernel();
-    if (lu.rank() == j.cols()) return bodies;
-    for (std::size_t b = 0; b < m.bodies.size(); ++b)
-        if (kernel.middleRows(3 * b, 3).cwiseAbs().maxCoeff() > 1e-7) bodies.push_back(m.bodies[b].name);
-    return bodies;
+    std::set<std::string> names{ownerName(m, s, d.row)};
+    for (const int row : d.repeats) names.insert(ownerName(m, s, row));
+    return names;
 }
 
 int grueblerCount(const CompiledMechanism& m)
@@ -93,30 +52,37 @@ std::string joinNames(const std::vector<std::string>& names)
 
 }  // namespace
 
+// One factorisation of the whole Jacobian, the joints' rows first
+// (row_dependence.h): their rank and dependent rows are the joints' own, the
+// rest the drivers', and its null space names the bodies left free.
 MobilityReport checkMobility(const CompiledMechanism& m, const Eigen::VectorXd& q)
 {
     MobilityReport r;
     r.gruebler = grueblerCount(m);
     r.drivers = int(m.drivers.size());
 
-    const ConstraintSystem joints(m, false);
-    int jointRank = 0;
-    for (const auto& g : dependentGroups(m, joints, denseJacobian(joints, q), jointRank))
-        r.redundantGroups.emplace_back(g.begin(), g.end());
-    r.redundantEquations = joints.rows() - jointRank;
-    r.mobility = joints.coordinates() - jointRank;
-
     const ConstraintSystem all(m, true);
-    const Eigen::MatrixXd full = denseJacobian(all, q);
-    int fullRank = 0;
+    const int joints = jointRows(all);
+    Eigen::VectorXd phi;
+    std::vector<Eigen::Triplet<double>> entries;
+    all.position(q, 0.0, phi, &entries);
+    const RowDependence d = rowDependence(all.rows(), all.coordinates(), entries, joints);
+
     std::set<std::string> conflicting;
-    for (const auto& g : dependentGroups(m, all, full, fullRank))
-        for (const auto& name : g)
-            for (const auto& d : m.drivers)
-                if (d.name == name) conflicting.insert(name);
+    for (const DependentRow& dependent : d.dependent) {
+        const std::set<std::string> names = ownerNames(m, all, dependent);
+        if (dependent.row < joints) r.redundantGroups.emplace_back(names.begin(), names.end());
+        for (const auto& name : names)
+            for (const auto& driver : m.drivers)
+                if (driver.name == name) conflicting.insert(name);
+    }
+    r.redundantEquations = joints - d.leadingRank;
+    r.mobility = all.coordinates() - d.leadingRank;
     if (r.redundantGroups.empty()) r.conflictingDrivers.assign(conflicting.begin(), conflicting.end());
-    r.freeBodies = movingBodies(m, full);
-    r.singularPose = r.redundantGroups.empty() && r.mobility == r.drivers && fullRank < all.coordinates();
+    for (std::size_t b = 0; b < m.bodies.size(); ++b)
+        if (d.nullSpaceReaches[3 * b] || d.nullSpaceReaches[3 * b + 1] || d.nullSpaceReaches[3 * b + 2])
+            r.freeBodies.push_back(m.bodies[b].name);
+    r.singularPose = r.redundantGroups.empty() && r.mobility == r.drivers && d.rank < all.coordinates();
     return r;
 }
 
