@@ -27,7 +27,7 @@ public:
 
     // True when the constraint Jacobian at q is square and not near singular:
     // then no joint is redundant, no body moves freely and no driver
-    // conflicts, and the dense mobility diagnosis can be skipped.
+    // conflicts, and the full mobility diagnosis (checkMobility) can be skipped.
     bool regularAt(const VectorXd& q, double t);
 
     // Constraint residual at q in balanced units; the index of the worst row.
