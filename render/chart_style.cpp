@@ -27,8 +27,10 @@ void paintSample(QPainter& p, const LegendEntry& e)
         p.setBrush(Qt::NoBrush);
         return;
     }
-    p.setPen(chartLinePen(e.pen));
-    p.drawLine(QPointF(box.left(), y), QPointF(box.right(), y));
+    if (e.line) {
+        p.setPen(chartLinePen(e.pen));
+        p.drawLine(QPointF(box.left(), y), QPointF(box.right(), y));
+    }
     if (e.mark) paintPeakMark(p, box.center(), e.pen);
 }
 

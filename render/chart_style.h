@@ -40,6 +40,7 @@ struct LegendEntry {
     int pen = 0;
     bool mark = true;   // the peak mark on the sample
     bool dots = false;  // a dot for a curve of points, not a line
+    bool line = true;   // false: the mark alone (a point of note, not a curve)
 };
 
 // Entries for `labels` in equal columns across `width`, as many across as

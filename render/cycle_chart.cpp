@@ -3,6 +3,7 @@
 #include "core/results/cycle_summary.h"
 #include "render/palette.h"
 
+#include <QFontMetricsF>
 #include <QPainter>
 #include <QPainterPath>
 
@@ -35,11 +36,11 @@ void CycleChart::layOutLegend()
     for (const PlotCurve& c : pane_.curves) {
         const QString peak = peakText(c.series, axis_, curvePeak(c.series.values, unreliable_));
         labels << (peak.isEmpty() ? c.series.name : QString("%1  peak %2").arg(c.series.name, peak));
-        legend_.push_back({{}, {}, {}, c.pen, true, false});
+        legend_.push_back({{}, {}, {}, c.pen, true, false, true});
     }
     for (const PlotLevel& l : pane_.levels) {
         labels << QString("%1  %2").arg(l.name, formatQuantity(l.value, pane_.unit));
-        legend_.push_back({{}, {}, {}, l.pen, false, false});
+        legend_.push_back({{}, {}, {}, l.pen, false, false, true});
     }
     const double top = plot_.bottom() + kChartBelowPlot;
     size_.setHeight(top + clevis::ui::layOutLegend(legend_, labels, size_.width(), top) + kChartBottomPad);
@@ -83,7 +84,7 @@ void CycleChart::paint(QPainter& p, const QRectF& target) const
     p.fillRect(QRectF(QPointF(0, 0), size_), Qt::white);
     p.setPen(palette::ink());
     p.setFont(chartFont(12, true));
-    p.drawText(QPointF(4, 14), pane_.title);
+    p.drawText(QPointF(4, 14), QFontMetricsF(p.font()).elidedText(pane_.title, Qt::ElideRight, size_.width() - 8));
     if (axis_.values.empty() || pane_.curves.empty()) {
         p.restore();
         return;

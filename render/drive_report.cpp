@@ -85,6 +85,8 @@ void motorSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axi
 void studySection(PageFlow& f, const ReviewReportInput& in, const RatioStudy& s, const Gearbox& g)
 {
     const auto& u = in.units;
+    const XyChart chart(ratioStudyContent(in.mechanism, s, g.ratio, u));
+    f.keep(chart.size().height() * f.width() / chart.size().width() + 90);  // the heading and words with the plot
     f.subheading(QString("Gear ratio study for %1").arg(qs(in.mechanism.drivers[s.driver].name)));
     f.paragraph(QString("The RMS and peak torque the motor needs at %1 gear ratios from %2 to %3 (a quarter to four "
                         "times the gearbox's %4, spaced evenly on a log scale), with the gearbox's efficiency and "
@@ -94,7 +96,7 @@ void studySection(PageFlow& f, const ReviewReportInput& in, const RatioStudy& s,
                     .arg(s.points.empty() ? 0.0 : s.points.front().ratio, 0, 'g', 4)
                     .arg(s.points.empty() ? 0.0 : s.points.back().ratio, 0, 'g', 4)
                     .arg(g.ratio, 0, 'g', 6));
-    f.figure(XyChart(ratioStudyContent(in.mechanism, s, g.ratio, u)), f.width());
+    f.figure(chart, f.width());
     std::vector<QStringList> rows{{"Ratio", "RMS motor torque", "Peak motor torque", ""}};
     for (std::size_t k = 0; k < s.points.size(); ++k) {
         const bool own = std::abs(std::log(s.points[k].ratio / g.ratio)) < 1e-9;

@@ -64,11 +64,11 @@ XyChart::XyChart(XyChartContent content, double width)
     QStringList labels;
     for (const XyCurve& c : content_.curves) {
         labels << c.name;
-        legend_.push_back({{}, {}, {}, c.pen, false, c.dots});
+        legend_.push_back({{}, {}, {}, c.pen, false, c.dots, true});
     }
     for (const XyMark& m : content_.marks) {
         labels << m.label;
-        legend_.push_back({{}, {}, {}, m.pen, true, false});
+        legend_.push_back({{}, {}, {}, m.pen, true, false, false});
     }
     const double top = plot_.bottom() + kChartBelowPlot;
     size_.setHeight(top + layOutLegend(legend_, labels, width, top) + kChartBottomPad);
