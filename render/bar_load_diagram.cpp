@@ -36,12 +36,6 @@ QFont font(int pixels, bool bold = false)
 
 QString qs(const std::string& s) { return QString::fromStdString(s); }
 
-QString tickText(double v, double spacing)
-{
-    const int decimals = std::clamp(int(-std::floor(std::log10(spacing))), 0, 6);
-    return QString::number(std::abs(v) < 1e-12 * spacing ? 0.0 : v, 'f', decimals);
-}
-
 QString endName(const BarEnd& e) { return e.name.empty() ? QString("free end") : qs(e.name); }
 
 // The drive positions of a step ("crank = 95.00°"), or its time without drivers.

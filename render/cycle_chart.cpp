@@ -11,79 +11,14 @@
 #include <cmath>
 
 namespace clevis::ui {
-namespace {
-
-// Layout in logical units (pt on paper).
-constexpr double kPlotLeft = 58, kPlotRight = 16, kPlotTop = 26, kPlotHeight = 152;
-constexpr double kBelowPlot = 38;  // tick numbers clear of the lowest y number, then the axis title
-constexpr double kLegendRow = 15, kSampleWidth = 26, kEntryGap = 14, kBottomPad = 6;
-constexpr double kLineWidth = 1.4, kPeakMark = 3.2;
-
-QFont chartFont(int pixels, bool bold = false)
-{
-    QFont f("DejaVu Sans");
-    f.setPixelSize(pixels);
-    f.setBold(bold);
-    return f;
-}
-
-QString tickText(double v, double spacing)
-{
-    const int decimals = std::clamp(int(-std::floor(std::log10(spacing))), 0, 6);
-    return QString::number(std::abs(v) < 1e-12 * spacing ? 0.0 : v, 'f', decimals);
-}
-
-QPen linePen(int index)
-{
-    QPen pen = curvePen(index);
-    pen.setWidthF(kLineWidth);
-    return pen;
-}
-
-// An open circle in the curve's colour.
-void paintPeakMark(QPainter& p, QPointF at, int pen)
-{
-    p.setPen(QPen(curvePen(pen).color(), 1.2));
-    p.setBrush(Qt::white);
-    p.drawEllipse(at, kPeakMark, kPeakMark);
-    p.setBrush(Qt::NoBrush);
-}
-
-// A short stretch of the curve's line with its peak mark in the middle.
-void paintSample(QPainter& p, const QRectF& box, int pen)
-{
-    const double y = box.center().y();
-    p.setPen(linePen(pen));
-    p.drawLine(QPointF(box.left(), y), QPointF(box.right(), y));
-    paintPeakMark(p, box.center(), pen);
-}
-
-}  // namespace
-
-std::vector<double> niceTicks(double lo, double hi, int count)
-{
-    if (!(hi > lo)) hi = lo + 1;
-    const double raw = (hi - lo) / std::max(count, 1);
-    const double decade = std::pow(10.0, std::floor(std::log10(raw)));
-    double spacing = decade;
-    for (const double f : {1.0, 2.0, 2.5, 5.0, 10.0})
-        if (f * decade >= raw) {
-            spacing = f * decade;
-            break;
-        }
-    std::vector<double> ticks;
-    for (double t = std::ceil(lo / spacing - 1e-9) * spacing; t <= hi + 1e-9 * spacing; t += spacing)
-        ticks.push_back(t);
-    return ticks;
-}
 
 CycleChart::CycleChart(PlotPane pane, CycleAxis axis, const CycleResult& r, double width)
     : pane_(std::move(pane))
     , axis_(std::move(axis))
     , unreliable_(unreliableSteps(r))
     , singular_(unreliableRuns(unreliable_))
-    , size_(width, kPlotTop + kPlotHeight + kBelowPlot + kBottomPad)
-    , plot_(kPlotLeft, kPlotTop, width - kPlotLeft - kPlotRight, kPlotHeight)
+    , size_(width, kChartPlotTop + kChartPlotHeight + kChartBelowPlot + kChartBottomPad)
+    , plot_(kChartPlotLeft, kChartPlotTop, width - kChartPlotLeft - kChartPlotRight, kChartPlotHeight)
 {
     if (!axis_.values.empty()) {
         reachEnd_ = axis_.values.back();
@@ -92,32 +27,23 @@ CycleChart::CycleChart(PlotPane pane, CycleAxis axis, const CycleResult& r, doub
     layOutLegend();
 }
 
-// Entries in equal columns, as many across as fit, row by row; a label too
-// long for the width is shortened with an ellipsis (it names its curve first).
+// One entry per curve with its peak, then one per level with its value; a
+// label too long for its column is shortened (it names its curve first).
 void CycleChart::layOutLegend()
 {
     if (axis_.values.empty()) return;
-    const QFontMetricsF metrics(chartFont(10));
     QStringList labels;
-    double widest = 0;
     for (const PlotCurve& c : pane_.curves) {
         const QString peak = peakText(c.series, axis_, curvePeak(c.series.values, unreliable_));
-        const QString label = peak.isEmpty() ? c.series.name : QString("%1  peak %2").arg(c.series.name, peak);
-        labels << label;
-        widest = std::max(widest, metrics.horizontalAdvance(label));
+        labels << (peak.isEmpty() ? c.series.name : QString("%1  peak %2").arg(c.series.name, peak));
+        legend_.push_back({{}, {}, {}, c.pen, true, false, true});
     }
-    const double room = size_.width() - 8;
-    const double column = std::min(room, kSampleWidth + 4 + widest + kEntryGap);
-    const int across = std::max(1, int(room / column));
-    const double top = plot_.bottom() + kBelowPlot;
-    for (int i = 0; i < labels.size(); ++i) {
-        const QPointF corner(4 + (i % across) * column, top + (i / across) * kLegendRow);
-        const QRectF sample(corner, QSizeF(kSampleWidth, kLegendRow));
-        const QRectF text(sample.right() + 4, corner.y(), column - kSampleWidth - 4 - kEntryGap, kLegendRow);
-        legend_.push_back({sample, text, metrics.elidedText(labels[i], Qt::ElideRight, text.width())});
+    for (const PlotLevel& l : pane_.levels) {
+        labels << QString("%1  %2").arg(l.name, formatQuantity(l.value, pane_.unit));
+        legend_.push_back({{}, {}, {}, l.pen, false, false, true});
     }
-    const int rows = (int(labels.size()) + across - 1) / across;
-    size_.setHeight(top + rows * kLegendRow + kBottomPad);
+    const double top = plot_.bottom() + kChartBelowPlot;
+    size_.setHeight(top + clevis::ui::layOutLegend(legend_, labels, size_.width(), top) + kChartBottomPad);
 }
 
 void CycleChart::paintAxes(QPainter& p, double xlo, double xhi, double ylo, double yhi) const
@@ -125,7 +51,8 @@ void CycleChart::paintAxes(QPainter& p, double xlo, double xhi, double ylo, doub
     const auto X = [&](double x) { return plot_.left() + (x - xlo) / (xhi - xlo) * plot_.width(); };
     const auto Y = [&](double y) { return plot_.bottom() - (y - ylo) / (yhi - ylo) * plot_.height(); };
     p.setFont(chartFont(10));
-    const auto xt = niceTicks(xlo, xhi, 8), yt = niceTicks(ylo, yhi, 5);
+    // About one x tick per 55 units of width, so the numbers stay apart in a narrow chart.
+    const auto xt = niceTicks(xlo, xhi, std::clamp(int(plot_.width() / 55), 3, 8)), yt = niceTicks(ylo, yhi, 5);
     const double xs = xt.size() > 1 ? xt[1] - xt[0] : 1, ys = yt.size() > 1 ? yt[1] - yt[0] : 1;
     for (const double t : xt) {
         p.setPen(QPen(palette::gridMinor(), 0.6));
@@ -157,7 +84,7 @@ void CycleChart::paint(QPainter& p, const QRectF& target) const
     p.fillRect(QRectF(QPointF(0, 0), size_), Qt::white);
     p.setPen(palette::ink());
     p.setFont(chartFont(12, true));
-    p.drawText(QPointF(4, 14), pane_.title);
+    p.drawText(QPointF(4, 14), QFontMetricsF(p.font()).elidedText(pane_.title, Qt::ElideRight, size_.width() - 8));
     if (axis_.values.empty() || pane_.curves.empty()) {
         p.restore();
         return;
@@ -170,6 +97,10 @@ void CycleChart::paint(QPainter& p, const QRectF& target) const
             ylo = std::min(ylo, v);
             yhi = std::max(yhi, v);
         }
+    for (const auto& l : pane_.levels) {
+        ylo = std::min(ylo, l.value);
+        yhi = std::max(yhi, l.value);
+    }
     if (yhi - ylo < 1e-12) yhi = ylo + 1;
     const double pad = 0.06 * (yhi - ylo);
     ylo -= ylo < 0 ? pad : 0;
@@ -193,7 +124,7 @@ void CycleChart::paint(QPainter& p, const QRectF& target) const
     paintAxes(p, xlo, xhi, ylo, yhi);
 
     p.save();
-    p.setClipRect(plot_.adjusted(-kPeakMark - 1, -kPeakMark - 1, kPeakMark + 1, kPeakMark + 1));
+    p.setClipRect(plot_.adjusted(-kChartPeakMark - 1, -kChartPeakMark - 1, kChartPeakMark + 1, kChartPeakMark + 1));
     for (const auto& c : pane_.curves) {
         const auto& v = c.series.values;
         QPainterPath path;
@@ -202,8 +133,12 @@ void CycleChart::paint(QPainter& p, const QRectF& target) const
             if (i == 0) path.moveTo(pt);
             else path.lineTo(pt);
         }
-        p.setPen(linePen(c.pen));
+        p.setPen(chartLinePen(c.pen));
         p.drawPath(path);
+    }
+    for (const auto& l : pane_.levels) {
+        p.setPen(chartLinePen(l.pen));
+        p.drawLine(QPointF(plot_.left(), Y(l.value)), QPointF(plot_.right(), Y(l.value)));
     }
     // Peak marks over every line, so none hides under a later curve.
     for (const auto& c : pane_.curves)
@@ -211,12 +146,7 @@ void CycleChart::paint(QPainter& p, const QRectF& target) const
             paintPeakMark(p, QPointF(X(axis_.values[k]), Y(c.series.values[k])), c.pen);
     p.restore();
 
-    p.setFont(chartFont(10));
-    for (std::size_t i = 0; i < legend_.size(); ++i) {
-        paintSample(p, legend_[i].sample, pane_.curves[i].pen);
-        p.setPen(palette::ink());
-        p.drawText(legend_[i].text, Qt::AlignLeft | Qt::AlignVCenter, legend_[i].label);
-    }
+    paintLegend(p, legend_);
     p.restore();
 }
 

@@ -2,9 +2,11 @@
 // exports): axes with round ticks and titles, near-singular steps and the
 // unreachable end of the cycle shaded, each curve's peak marked on it and
 // listed in a legend under the chart beside a sample of the curve's line, so
-// that no two labels can overlap however the peaks fall.
+// that no two labels can overlap however the peaks fall; a pane's levels
+// (a supply pressure) drawn across it and listed with their values.
 #pragma once
 
+#include "render/chart_style.h"
 #include "render/cycle_axis.h"
 #include "render/figure_export.h"
 #include "render/plot_panes.h"
@@ -20,11 +22,6 @@ public:
     void paint(QPainter& p, const QRectF& target) const override;
 
 private:
-    struct LegendEntry {
-        QRectF sample;  // the line sample with the peak mark
-        QRectF text;
-        QString label;  // "A |F|  peak 1.20 kN at 95.0 °"
-    };
     void layOutLegend();
     void paintAxes(QPainter& p, double xlo, double xhi, double ylo, double yhi) const;
 
@@ -35,10 +32,7 @@ private:
     double reachEnd_ = 0, plannedEnd_ = 0;  // x where the solved part ends and the cycle would
     QSizeF size_;
     QRectF plot_;
-    std::vector<LegendEntry> legend_;
+    std::vector<LegendEntry> legend_;  // "A |F|  peak 1.20 kN at 95.0 °" per curve, then each level
 };
-
-// Round tick positions covering [lo, hi], about `count` of them.
-std::vector<double> niceTicks(double lo, double hi, int count);
 
 }  // namespace clevis::ui

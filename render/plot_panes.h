@@ -18,10 +18,18 @@ struct PlotCurve {
     int pen = 0;  // index for curvePen()
 };
 
+// A constant drawn across a pane, e.g. a cylinder's supply pressure.
+struct PlotLevel {
+    QString name;  // e.g. "supply"
+    double value = 0;
+    int pen = 0;
+};
+
 struct PlotPane {
     QString title;  // e.g. "Drive torque"
     QString unit;   // of every curve in the pane
     std::vector<PlotCurve> curves;
+    std::vector<PlotLevel> levels;  // drawn by the report's charts (CycleChart)
 };
 
 // What the user chose to see of the joint reactions. The default shows every

@@ -24,6 +24,11 @@ QString RenderUnits::torque(double newtonMetres) const
     return formatQuantity(newtonMetres * torquePerNewtonMetre, torqueSymbol);
 }
 
+QString RenderUnits::pressure(double pascals) const
+{
+    return formatQuantity(pascals * pressurePerPascal, pressureSymbol);
+}
+
 QString formatUtilisation(double fraction)
 {
     const double p = 100.0 * fraction;

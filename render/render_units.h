@@ -1,7 +1,7 @@
 // The units a drawing or report is labelled in, and how its numbers are
 // written with them. Plain values, so the renderers need no settings or
 // widgets: the desktop app fills them from the user's display units, the
-// command line uses millimetres, newtons and newton-metres.
+// command line uses millimetres, newtons, newton-metres and megapascals.
 #pragma once
 
 #include <QString>
@@ -15,10 +15,13 @@ struct RenderUnits {
     QString forceSymbol = "N";
     double torquePerNewtonMetre = 1.0;
     QString torqueSymbol = "N·m";
+    double pressurePerPascal = 1e-6;  // a cylinder's pressure
+    QString pressureSymbol = "MPa";
 
     QString length(double metres) const;
     QString force(double newtons) const;
     QString torque(double newtonMetres) const;
+    QString pressure(double pascals) const;
 };
 
 // `value` to four significant figures in fixed notation (no exponent for

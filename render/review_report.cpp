@@ -11,6 +11,8 @@
 #include "render/bearing_polar_report.h"
 #include "render/cycle_axis.h"
 #include "render/cycle_chart.h"
+#include "render/drive_figures.h"
+#include "render/drive_report.h"
 #include "render/energy_balance_figure.h"
 #include "render/free_body_painter.h"
 #include "render/mechanism_sketch.h"
@@ -26,6 +28,20 @@
 #include <set>
 
 namespace clevis::ui {
+
+QString stepPlace(const CycleAxis& axis, int step)
+{
+    if (step < 0 || step >= int(axis.values.size())) return "–";
+    return QString("%1 %2 (step %3)").arg(axis.values[step], 0, 'f', axis.byTime ? 4 : 1).arg(axis.unit).arg(step);
+}
+
+// A value from a step near a singular position carries the mark the notes
+// under the table explain.
+QString markedValue(const QString& value, const PeakAt& p)
+{
+    return p.nearSingular ? QString("%1 %2").arg(value, kNearToggleMark) : value;
+}
+
 namespace {
 
 constexpr int kMaxDiagrams = 8;  // keeps the report a size people read
@@ -40,22 +56,9 @@ QString point(const RenderUnits& u, const Vec2& p)
         .arg(u.lengthSymbol);
 }
 
-QString at(const CycleAxis& axis, int step)
-{
-    if (step < 0 || step >= int(axis.values.size())) return "–";
-    return QString("%1 %2 (step %3)").arg(axis.values[step], 0, 'f', axis.byTime ? 4 : 1).arg(axis.unit).arg(step);
-}
-
 QString effort(const RenderUnits& u, DriverType type, double v)
 {
     return type == DriverType::Rotary ? u.torque(v) : u.force(v);
-}
-
-// A value from a step near a singular position carries the mark the notes
-// under the table explain.
-QString marked(const QString& value, const PeakAt& p)
-{
-    return p.nearSingular ? QString("%1 %2").arg(value, kNearToggleMark) : value;
 }
 
 // A larger value at a flagged step, with where it occurs, or a dash.
@@ -63,7 +66,7 @@ QString larger(const CycleAxis& axis, const Peak& p, const std::function<QString
 {
     return p.flagged.step < 0
                ? QString("–")
-               : QString("%1 %2 at %3").arg(format(p.flagged.value), kNearToggleMark, at(axis, p.flagged.step));
+               : QString("%1 %2 at %3").arg(format(p.flagged.value), kNearToggleMark, stepPlace(axis, p.flagged.step));
 }
 
 // The handbook material with this density, or "ρ = … kg/m³".
@@ -200,9 +203,10 @@ void peakSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis
     std::vector<QStringList> joints{{"Joint", "Peak |F|", "Where", "RMS |F|", "Peak slider moment"}};
     if (flagged) joints.front() << "Larger, near a toggle";
     for (const auto& j : s.joints) {
-        joints.push_back({qs(j.name), marked(u.force(j.peak.value), j.peak), at(axis, j.peak.step),
-                          marked(u.force(j.rms), overCycle),
-                          j.peakMoment.step >= 0 ? marked(u.torque(j.peakMoment.value), j.peakMoment) : QString("–")});
+        joints.push_back(
+            {qs(j.name), markedValue(u.force(j.peak.value), j.peak), stepPlace(axis, j.peak.step),
+             markedValue(u.force(j.rms), overCycle),
+             j.peakMoment.step >= 0 ? markedValue(u.torque(j.peakMoment.value), j.peakMoment) : QString("–")});
         if (flagged)
             joints.back() << (j.peak.flagged.step >= 0 ? larger(axis, j.peak, force)
                                                        : larger(axis, j.peakMoment, torque));
@@ -214,12 +218,13 @@ void peakSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis
     std::vector<QStringList> driverFlags{{"Driver", "Larger effort, near a toggle", "Larger power, near a toggle"}};
     for (const auto& d : s.drivers) {
         const auto effortOf = [&](double v) { return effort(u, d.type, v); };
-        drivers.push_back(
-            {qs(d.name), marked(effortOf(d.peak.value), d.peak), at(axis, d.peak.step),
-             marked(effortOf(d.rms), overCycle), marked(effortOf(d.mean), overCycle),
-             d.peakPower.step >= 0 ? marked(watts(d.peakPower.value), d.peakPower) : QString("–"),
-             d.peakRegenerative.step >= 0 ? marked(watts(d.peakRegenerative.value), d.peakRegenerative) : QString("–"),
-             marked(formatQuantity(d.work, "J"), overCycle)});
+        drivers.push_back({qs(d.name), markedValue(effortOf(d.peak.value), d.peak), stepPlace(axis, d.peak.step),
+                           markedValue(effortOf(d.rms), overCycle), markedValue(effortOf(d.mean), overCycle),
+                           d.peakPower.step >= 0 ? markedValue(watts(d.peakPower.value), d.peakPower) : QString("–"),
+                           d.peakRegenerative.step >= 0
+                               ? markedValue(watts(d.peakRegenerative.value), d.peakRegenerative)
+                               : QString("–"),
+                           markedValue(formatQuantity(d.work, "J"), overCycle)});
         if (d.peak.flagged.step >= 0 || d.peakPower.flagged.step >= 0)
             driverFlags.push_back({qs(d.name), larger(axis, d.peak, effortOf), larger(axis, d.peakPower, watts)});
     }
@@ -228,22 +233,23 @@ void peakSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis
     f.subheading("Frame and transmission");
     std::vector<QStringList> frame{
         {"Quantity", "Peak", "Where"},
-        {"shaking force", marked(u.force(s.groundForce.value), s.groundForce), at(axis, s.groundForce.step)},
-        {"shaking moment about the origin", marked(u.torque(s.groundMoment.value), s.groundMoment),
-         at(axis, s.groundMoment.step)}};
+        {"shaking force", markedValue(u.force(s.groundForce.value), s.groundForce),
+         stepPlace(axis, s.groundForce.step)},
+        {"shaking moment about the origin", markedValue(u.torque(s.groundMoment.value), s.groundMoment),
+         stepPlace(axis, s.groundMoment.step)}};
     if (s.groundForce.flagged.step >= 0)
         frame.push_back({"shaking force, larger near a toggle",
-                         marked(force(s.groundForce.flagged.value), s.groundForce.flagged),
-                         at(axis, s.groundForce.flagged.step)});
+                         markedValue(force(s.groundForce.flagged.value), s.groundForce.flagged),
+                         stepPlace(axis, s.groundForce.flagged.step)});
     if (s.groundMoment.flagged.step >= 0)
         frame.push_back({"shaking moment, larger near a toggle",
-                         marked(torque(s.groundMoment.flagged.value), s.groundMoment.flagged),
-                         at(axis, s.groundMoment.flagged.step)});
+                         markedValue(torque(s.groundMoment.flagged.value), s.groundMoment.flagged),
+                         stepPlace(axis, s.groundMoment.flagged.step)});
     for (const auto& t : s.transmission) {
         frame.push_back({QString("transmission angle at %1, least").arg(qs(t.joint)), formatDirection(t.minimum.value),
-                         at(axis, t.minimum.step)});
+                         stepPlace(axis, t.minimum.step)});
         frame.push_back({QString("transmission angle at %1, greatest").arg(qs(t.joint)),
-                         formatDirection(t.maximum.value), at(axis, t.maximum.step)});
+                         formatDirection(t.maximum.value), stepPlace(axis, t.maximum.step)});
     }
     f.table(frame, {0.45, 0.2, 0.35});
     if (s.nearSingularSteps > 0)
@@ -290,7 +296,7 @@ void utilisationTable(PageFlow& f, const ReviewReportInput& in, const CycleAxis&
         const QString kind = p.kind == PartUtilisation::Kind::Bar ? "link" : "pin";
         rows.push_back({partLabel(kind, qs(p.name)),
                         formatUtilisation(p.value) + (p.nearSingular ? QString(" ") + kNearToggleMark : QString()),
-                        qs(p.governs), at(axis, p.step)});
+                        qs(p.governs), stepPlace(axis, p.step)});
         shades.push_back(palette::utilisationShade(p.value));
     }
     f.table(rows, {0.3, 0.2, 0.22, 0.28},
@@ -321,7 +327,7 @@ bool barDiagramsSection(PageFlow& f, const ReviewReportInput& in, const CycleAxi
                                 ? QString("utilisation %1 peaks").arg(*sized.section->utilisation, 0, 'f', 3)
                                 : QString("|M| peaks");
         f.keep(figure.size().height() * f.width() / figure.size().width() + 26);
-        f.subheading(QString("%1: %2 at %3").arg(qs(sized.name), why, at(axis, step)));
+        f.subheading(QString("%1: %2 at %3").arg(qs(sized.name), why, stepPlace(axis, step)));
         f.figure(figure, std::min(f.width(), figure.size().width() * (f.pageHeight() - 40) / figure.size().height()));
     }
     for (const NotABar& o : sizing.others)
@@ -331,7 +337,7 @@ bool barDiagramsSection(PageFlow& f, const ReviewReportInput& in, const CycleAxi
 
 }  // namespace
 
-const std::vector<QString>& reviewReportSections()
+const std::vector<QString>& reviewReportSections(bool drive)
 {
     static const std::vector<QString> sections{"1 Mechanism",
                                                "2 Inputs",
@@ -341,7 +347,16 @@ const std::vector<QString>& reviewReportSections()
                                                "6 Sizing",
                                                "7 Energy balance",
                                                "8 Cautions and assumptions"};
-    return sections;
+    static const std::vector<QString> withDrive{"1 Mechanism",
+                                                "2 Inputs",
+                                                "3 Loads over the cycle",
+                                                "4 Peak loads",
+                                                "5 Free-body diagrams at the critical positions",
+                                                "6 Sizing",
+                                                "7 Drive",
+                                                "8 Energy balance",
+                                                "9 Cautions and assumptions"};
+    return drive ? withDrive : sections;
 }
 
 std::vector<CriticalPosition> criticalPositions(const CompiledMechanism& m, const CycleSummary& s)
@@ -379,10 +394,14 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
         return false;
     }
     painter.setRenderHint(QPainter::Antialiasing);
-    const auto& sections = reviewReportSections();
+    // The drive is known from the mechanism as described, like the sizing.
+    const std::optional<DriveResults> drive =
+        in.document ? std::optional(driveResultsWithStudies(*in.document, m, r, in.summary.unreliable)) : std::nullopt;
+    const bool drives = drive && hasDriveFigures(*drive);
+    const auto& sections = reviewReportSections(drives);
     const std::vector<CriticalPosition> critical = criticalPositions(m, in.summary);
     const int bars = in.document ? int(findBars(*in.document, m).bars.size()) : 0;
-    const int total = 7 + int(critical.size()) + bars;
+    const int total = 7 + int(drives) + int(critical.size()) + bars;
     int done = 0;
     const auto advance = [&] { return !progress || progress(++done, total); };
     const CycleAxis axis = cycleAxis(m, r);
@@ -432,7 +451,7 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
             const double width = std::clamp(figure.size().width() * (f.pageHeight() / 2 - 34) / figure.size().height(),
                                             0.8 * f.width(), f.width());
             f.keep(figure.size().height() * width / figure.size().width() + 26);
-            f.subheading(QString("%1: %2 at %3").arg(c.reason, qs(m.bodies[c.body].name), at(axis, c.step)));
+            f.subheading(QString("%1: %2 at %3").arg(c.reason, qs(m.bodies[c.body].name), stepPlace(axis, c.step)));
             f.figure(figure, width);
         }
     }
@@ -451,8 +470,14 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
         if (ok) bearingPolarPages(f, in);
         ok = ok && advance();
     }
+    int next = 6;  // the chapters after Sizing, numbered with or without Drive
+    if (ok && drives) {
+        f.heading(sections[next++]);
+        driveChapter(f, in, axis, *drive);
+        ok = advance();
+    }
     if (ok) {
-        f.heading(sections[6]);
+        f.heading(sections[next++]);
         f.paragraph(
             "Energy put into the mechanism (right) and taken out of it (left) over the solved span: by each driver "
             "(positive and negative power apart), the net work of the applied loads, the kinetic and potential "
@@ -464,7 +489,7 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
         ok = advance();
     }
     if (ok) {
-        f.heading(sections[7]);
+        f.heading(sections[next]);
         for (const QString& c :
              {QString("Rigid bodies and ideal joints: no clearance, no elasticity, no friction unless it is modelled "
                       "as a load; "

@@ -2,9 +2,9 @@
 // loads over the cycle, the peak-load table (the numbers of summarize(), as
 // the command-line summary prints them), free-body diagrams at the critical
 // positions, the sizing chapter (the N/V/M diagram of each bar at its
-// critical position, the bearing loads in the body frame), the energy
-// balance, and the cautions. Needs QtGui only, so it
-// runs headless.
+// critical position, the bearing loads in the body frame), the drive (when
+// a driver has a gearbox or a cylinder: drive_report.h), the energy
+// balance, and the cautions. Needs QtGui only, so it runs headless.
 #pragma once
 
 #include "core/results/cycle_summary.h"
@@ -29,8 +29,17 @@ struct ReviewReportInput {
     const Mechanism* document = nullptr;
 };
 
-// The report's numbered section titles, in order (tests look for them).
-const std::vector<QString>& reviewReportSections();
+// The report's numbered section titles, in order (tests look for them);
+// with `drive`, the Drive chapter, written when a driver has a gearbox or a
+// cylinder, is among them.
+const std::vector<QString>& reviewReportSections(bool drive = false);
+
+// Shared by the report's chapters: where a step is on the cycle's axis,
+// "95.0 ° (step 95)", and a value from a step near a singular position with
+// the mark the notes explain.
+struct CycleAxis;
+QString stepPlace(const CycleAxis& axis, int step);
+QString markedValue(const QString& value, const PeakAt& p);
 
 // A critical position: the step where a joint carries its peak, and the body
 // whose free-body diagram shows it.

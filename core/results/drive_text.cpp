@@ -9,9 +9,6 @@
 #include <cmath>
 
 namespace clevis {
-namespace {
-
-using Align = TextTable::Align;
 
 const char* const kMotorCaution =
     "  Motor figures follow the prescribed motion of rigid bodies with ideal joints. They include no\n"
@@ -21,6 +18,10 @@ const char* const kMotorCaution =
 const char* const kCylinderCaution =
     "  Cylinder figures leave out seal friction, pressure lost in pipes and valves, and the buckling of\n"
     "  the rod; the supply must cover those too.\n";
+
+namespace {
+
+using Align = TextTable::Align;
 
 std::string quantity(double value, const char* unit) { return significant(value) + " " + unit; }
 
@@ -64,9 +65,7 @@ std::string inertiaText(const CompiledMechanism& m, const CycleResult& r, const 
         at(m, r, duty.driver, j.smallest) + " to " + quantity(j.largest.value, "kg·m²") + " " +
         at(m, r, duty.driver, j.largest) + "\n";
     if (!j.ratioToRotor) return text + "  No rotor inertia given: no inertia ratio.\n";
-    text += "  Largest load inertia / rotor inertia: " + significant(*j.ratioToRotor) +
-            " (common practice, a rule of thumb: within about " + significant(kInertiaRatioGuide) +
-            ", nearer 1–5 for quick, stiff positioning)";
+    text += "  Largest load inertia / rotor inertia: " + significant(*j.ratioToRotor) + " (" + inertiaGuideText() + ")";
     return text + (*j.ratioToRotor > kInertiaRatioGuide ? ": ABOVE THE GUIDE\n" : "\n");
 }
 
@@ -134,6 +133,12 @@ std::string cylinderText(const CompiledMechanism& m, const CycleResult& r, const
 }
 
 }  // namespace
+
+std::string inertiaGuideText()
+{
+    return "common practice, a rule of thumb: within about " + significant(kInertiaRatioGuide) +
+           ", nearer 1–5 for quick, stiff positioning";
+}
 
 double litresPerMinute(double cubicMetresPerSecond) { return cubicMetresPerSecond * 60e3; }
 

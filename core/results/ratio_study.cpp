@@ -18,6 +18,8 @@ std::vector<double> studyRatios(const RatioRange& range)
     return ratios;
 }
 
+RatioRange ratioRangeAround(double ratio) { return {ratio / 4.0, ratio * 4.0, 41}; }
+
 namespace {
 
 // T_m at step k is a_k/i + b_k·i (motorTorque): a_k = T/η while power flows

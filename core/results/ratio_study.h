@@ -31,6 +31,11 @@ struct RatioStudy {
 
 std::vector<double> studyRatios(const RatioRange& range);
 
+// The range a study shows when none is asked for: a factor of 4 either side
+// of the gearbox's own `ratio` (ratio/4 … 4·ratio), 41 ratios log spaced, so
+// `ratio` itself is the middle one and neighbours differ by 16^(1/40) ≈ 7 %.
+RatioRange ratioRangeAround(double ratio);
+
 // `g` supplies the efficiency and inertias; its ratio is replaced by each of the range's.
 RatioStudy ratioStudy(const CompiledMechanism& m, const CycleResult& r, const std::vector<bool>& unreliable, int driver,
                       const Gearbox& g, const RatioRange& range);

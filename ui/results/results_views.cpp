@@ -4,6 +4,7 @@
 #include "ui/results/bar_load_view.h"
 #include "ui/results/bearing_polar_view.h"
 #include "ui/results/drive_scrubber.h"
+#include "ui/results/drive_view.h"
 #include "ui/results/free_body_view.h"
 #include "ui/results/peak_table.h"
 #include "ui/results/plot_stack.h"
@@ -28,6 +29,7 @@ void installResultsViews(QMainWindow* window, MechanismDocument* doc, AnalysisSt
     addPanel(window, QObject::tr("Free-body diagram"), "freeBodyDock", diagram, {260, 200});
     addPanel(window, QObject::tr("Loads along the link"), "barLoadsDock", barLoads, {260, 200});
     addPanel(window, QObject::tr("Bearing load"), "bearingPolarDock", new BearingPolarView(doc, analysis), {260, 200});
+    addPanel(window, QObject::tr("Drive"), "driveDock", new DriveView(doc, analysis), {260, 120});
     auto* exports = new ExportActions(window, doc, analysis, diagram, plots);
     exports->fill(window->menuBar()->addMenu(QObject::tr("E&xport")));
 }

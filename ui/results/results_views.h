@@ -1,6 +1,6 @@
 // Adds the results views to the main window as panels (the cycle scrubber,
 // the stacked plots, the peak-load table, the free-body diagram, the bearing
-// load of the selected joint; where they
+// load of the selected joint, the drive of a motor or cylinder; where they
 // go is arrangePanels()'s) and an Export menu.
 #pragma once
 

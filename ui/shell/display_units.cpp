@@ -15,6 +15,7 @@ constexpr double kPoundForce = 0.45359237 * 9.80665;
 const char* kLengthKey = "units/length";
 const char* kForceKey = "units/force";
 const char* kTorqueKey = "units/torque";
+const char* kPressureKey = "units/pressure";
 
 template <typename E>
 E readSetting(const char* key, E fallback, int count)
@@ -35,11 +36,13 @@ DisplayUnits::DisplayUnits()
     : length_(readSetting(kLengthKey, Length::Millimetre, 3))
     , force_(readSetting(kForceKey, Force::Newton, 3))
     , torque_(readSetting(kTorqueKey, Torque::NewtonMetre, 2))
+    , pressure_(readSetting(kPressureKey, Pressure::Bar, 3))
 {}
 
 DisplayUnits::Length DisplayUnits::length() const { return length_; }
 DisplayUnits::Force DisplayUnits::force() const { return force_; }
 DisplayUnits::Torque DisplayUnits::torque() const { return torque_; }
+DisplayUnits::Pressure DisplayUnits::pressure() const { return pressure_; }
 
 void DisplayUnits::setLength(Length l)
 {
@@ -62,6 +65,14 @@ void DisplayUnits::setTorque(Torque t)
     if (t == torque_) return;
     torque_ = t;
     QSettings().setValue(kTorqueKey, int(t));
+    emit changed();
+}
+
+void DisplayUnits::setPressure(Pressure p)
+{
+    if (p == pressure_) return;
+    pressure_ = p;
+    QSettings().setValue(kPressureKey, int(p));
     emit changed();
 }
 
@@ -94,6 +105,17 @@ double DisplayUnits::torqueFactor() const
     return 1.0;
 }
 
+// 1 bar = 10⁵ Pa exactly; 1 psi = 1 lbf/in² = 6894.757… Pa.
+double DisplayUnits::pressureFactor() const
+{
+    switch (pressure_) {
+    case Pressure::Bar: return 1e5;
+    case Pressure::Megapascal: return 1e6;
+    case Pressure::PoundForcePerSquareInch: return kPoundForce / (kInch * kInch);
+    }
+    return 1.0;
+}
+
 // Millimetres divide by 1000 rather than multiply by 0.001, so that a typed
 // "30" is exactly the double nearest 0.03 m, as a file would hold it.
 double DisplayUnits::lengthFromSi(double m) const
@@ -108,6 +130,8 @@ double DisplayUnits::forceFromSi(double n) const { return n / forceFactor(); }
 double DisplayUnits::forceToSi(double v) const { return v * forceFactor(); }
 double DisplayUnits::torqueFromSi(double nm) const { return nm / torqueFactor(); }
 double DisplayUnits::torqueToSi(double v) const { return v * torqueFactor(); }
+double DisplayUnits::pressureFromSi(double pa) const { return pa / pressureFactor(); }
+double DisplayUnits::pressureToSi(double v) const { return v * pressureFactor(); }
 
 QString DisplayUnits::lengthSymbol() const
 {
@@ -134,6 +158,16 @@ QString DisplayUnits::torqueSymbol() const
     switch (torque_) {
     case Torque::NewtonMetre: return QStringLiteral("N·m");
     case Torque::PoundForceInch: return QStringLiteral("lbf·in");
+    }
+    return {};
+}
+
+QString DisplayUnits::pressureSymbol() const
+{
+    switch (pressure_) {
+    case Pressure::Bar: return QStringLiteral("bar");
+    case Pressure::Megapascal: return QStringLiteral("MPa");
+    case Pressure::PoundForcePerSquareInch: return QStringLiteral("psi");
     }
     return {};
 }
@@ -178,8 +212,8 @@ QString formatWithUnit(double value, const QString& unit)
 RenderUnits renderUnits(const DisplayUnits& units)
 {
     // Every unit choice is a pure scale of SI, so one factor each describes it.
-    return {units.lengthFromSi(1.0), units.lengthSymbol(),    units.forceFromSi(1.0),
-            units.forceSymbol(),     units.torqueFromSi(1.0), units.torqueSymbol()};
+    return {units.lengthFromSi(1.0), units.lengthSymbol(), units.forceFromSi(1.0),    units.forceSymbol(),
+            units.torqueFromSi(1.0), units.torqueSymbol(), units.pressureFromSi(1.0), units.pressureSymbol()};
 }
 
 }  // namespace clevis::ui

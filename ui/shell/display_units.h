@@ -16,15 +16,18 @@ public:
     enum class Length { Millimetre, Metre, Inch };
     enum class Force { Newton, Kilonewton, PoundForce };
     enum class Torque { NewtonMetre, PoundForceInch };
+    enum class Pressure { Bar, Megapascal, PoundForcePerSquareInch };
 
     static DisplayUnits& instance();
 
     Length length() const;
     Force force() const;
     Torque torque() const;
+    Pressure pressure() const;
     void setLength(Length);  // persist, emit changed()
     void setForce(Force);
     void setTorque(Torque);
+    void setPressure(Pressure);
 
     double lengthFromSi(double m) const;
     double lengthToSi(double v) const;
@@ -35,6 +38,10 @@ public:
     double torqueFromSi(double nm) const;
     double torqueToSi(double v) const;
     QString torqueSymbol() const;  // "N·m", "lbf·in"
+    // A cylinder's pressures: bar by default, as cylinder catalogues give them.
+    double pressureFromSi(double pa) const;
+    double pressureToSi(double v) const;
+    QString pressureSymbol() const;  // "bar", "MPa", "psi"
 
     // Number + unit, sensible precision.
     QString formatLength(double si) const;
@@ -56,13 +63,15 @@ signals:
 
 private:
     DisplayUnits();
-    double lengthFactor() const;  // metres per display unit
-    double forceFactor() const;   // newtons per display unit
-    double torqueFactor() const;  // newton-metres per display unit
+    double lengthFactor() const;    // metres per display unit
+    double forceFactor() const;     // newtons per display unit
+    double torqueFactor() const;    // newton-metres per display unit
+    double pressureFactor() const;  // pascals per display unit
 
     Length length_ = Length::Millimetre;
     Force force_ = Force::Newton;
     Torque torque_ = Torque::NewtonMetre;
+    Pressure pressure_ = Pressure::Bar;
 };
 
 // `value` with four significant figures, in fixed notation, and `unit`.

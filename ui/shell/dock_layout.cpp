@@ -63,6 +63,13 @@ void arrangePanels(QMainWindow* window)
         polar->show();
         plots->raise();
     }
+    // The drive's figures stand side by side: the wide bottom suits them.
+    if (QDockWidget* drive = panel("driveDock")) {
+        drive->setFloating(false);
+        window->tabifyDockWidget(peaks, drive);
+        drive->show();
+        plots->raise();
+    }
 
     const QSize size = window->size();
     const int column = share(size.width(), 0.2, 240, 360), diagramWidth = share(size.width(), 0.34, 300, 640);

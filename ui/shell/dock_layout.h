@@ -3,7 +3,7 @@
 // Editing column on the left, full height: "Parts" above "Properties" (which
 // gets most of the height). Results to the right of and below the canvas:
 // the free-body diagram on the right, the cycle position strip and the plots
-// (with the peak table and the bearing load as tabs) along the bottom under
+// (with the peak table, the bearing load and the drive as tabs) along the bottom under
 // the canvas and the diagram. Widths and heights are shares of the window,
 // within limits, so the same arrangement serves a 1366 × 768 laptop and a
 // 1920 × 1080 screen.

@@ -43,6 +43,10 @@ QMenu* createUnitsMenu(QWidget* parent)
     addGroup<T>(menu, QObject::tr("Torque"),
                 {{QStringLiteral("N·m"), T::NewtonMetre}, {QStringLiteral("lbf·in"), T::PoundForceInch}}, u.torque(),
                 &DisplayUnits::setTorque);
+    using P = DisplayUnits::Pressure;
+    addGroup<P>(menu, QObject::tr("Pressure"),
+                {{"bar", P::Bar}, {"MPa", P::Megapascal}, {"psi", P::PoundForcePerSquareInch}}, u.pressure(),
+                &DisplayUnits::setPressure);
     return menu;
 }
 

@@ -52,6 +52,13 @@ DisplayQuantity linearSpeedQuantity()
     return {l.unit + QStringLiteral("/s"), l.fromSi, l.toSi, l.decimals};
 }
 
+DisplayQuantity pressureQuantity()
+{
+    return {units().pressureSymbol(), [](double v) { return units().pressureFromSi(v); },
+            [](double v) { return units().pressureToSi(v); },
+            units().pressure() == DisplayUnits::Pressure::Bar ? 1 : 3};
+}
+
 DisplayQuantity megaQuantity(const QString& unit, int decimals)
 {
     return {unit, [](double si) { return si * 1e-6; }, [](double v) { return v * 1e6; }, decimals};

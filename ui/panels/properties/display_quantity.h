@@ -21,6 +21,7 @@ DisplayQuantity stiffnessQuantity();
 DisplayQuantity angleQuantity();        // degrees, SI radians
 DisplayQuantity rotarySpeedQuantity();  // rpm, SI rad/s
 DisplayQuantity linearSpeedQuantity();  // length per second
+DisplayQuantity pressureQuantity();     // a cylinder's: bar, MPa or psi
 // Stresses and pressures in MPa, p·v in MPa·m/s, as handbooks and bearing
 // tables give them (`unit` names the SI quantity times 10⁻⁶).
 DisplayQuantity megaQuantity(const QString& unit, int decimals);

@@ -41,13 +41,7 @@ DisplayQuantity positionQuantity(const Driver& d)
     return d.type == DriverType::Rotary ? angleQuantity() : lengthQuantity();
 }
 
-// Pressures in bar as cylinder catalogues give them;
-// rotor and gearbox inertias in kg·cm² as motor and gearbox data sheets do.
-DisplayQuantity barQuantity()
-{
-    return {QStringLiteral("bar"), [](double si) { return si * 1e-5; }, [](double v) { return v * 1e5; }, 1};
-}
-
+// Rotor and gearbox inertias in kg·cm² as motor and gearbox data sheets do.
 DisplayQuantity smallInertiaQuantity()
 {
     return {QStringLiteral("kg·cm²"), [](double si) { return si * 1e4; }, [](double v) { return v * 1e-4; }, 3};
@@ -83,6 +77,70 @@ void gearboxFields(FormBuilder& f, const Driver& driver, const std::function<Dri
     f.info({}, QObject::tr("Efficiency counts in the direction power flows; inertias at the motor shaft."));
 }
 
+// A motor characteristic to start from when one is ticked: no torque at 10 %
+// above the motor's expected speed (the driver's through the gearbox), and
+// a stall torque to be replaced by the motor's own.
+MotorLine startingLine(const Driver& d)
+{
+    const auto* c = std::get_if<ConstantSpeed>(&d.motion);
+    const double expected = c && c->speed > 0.0 ? c->speed : toSi(FileUnit::Rpm, 60.0);
+    return {10.0, 1.1 * expected * (d.gearbox ? d.gearbox->ratio : 1.0)};
+}
+
+// What sets a rotary driver's real speed: the motor's characteristic (a
+// straight line here; a table stays in the file), a flywheel, and the speed
+// fluctuation wanted. The file reader allows them only on a mechanism's one
+// driver, a characteristic only with a constant speed; the document refuses
+// an edit that breaks either and says why.
+void motorFields(FormBuilder& f, const Mechanism& m, const Driver& driver,
+                 const std::function<Driver&(Mechanism&)>& self)
+{
+    const QString undo = QObject::tr("Set %1 motor").arg(QString::fromStdString(driver.name));
+    f.heading(QObject::tr("Motor characteristic and flywheel"));
+    if (m.drivers.size() > 1 && !driver.motor && !driver.flywheel && !driver.fluctuationTarget) {
+        f.info({}, QObject::tr("Only for a mechanism's one driver: with another driver the speed is prescribed."));
+        return;
+    }
+    f.check("motorCharacteristic", QObject::tr("Motor torque against speed"), driver.motor.has_value(), undo,
+            [self](Mechanism& m, bool on) {
+                if (!on) self(m).motor.reset();
+                else if (!self(m).motor) self(m).motor = startingLine(self(m));
+            });
+    if (const auto* line = driver.motor ? std::get_if<MotorLine>(&*driver.motor) : nullptr) {
+        const auto motor = [self](Mechanism& m) -> MotorLine& { return std::get<MotorLine>(*self(m).motor); };
+        f.number("stallTorque", QObject::tr("Stall torque"), line->stallTorque, torqueQuantity(), undo,
+                 [motor](Mechanism& m, double v) { motor(m).stallTorque = v; });
+        f.number("noLoadSpeed", QObject::tr("No-load speed"), line->noLoadSpeed, rotarySpeedQuantity(), undo,
+                 [motor](Mechanism& m, double v) { motor(m).noLoadSpeed = v; });
+        f.info({}, QObject::tr("At the motor shaft, a straight line from the stall torque at rest to none at the "
+                               "no-load speed. The speed above is the output speed expected."));
+    } else if (driver.motor) {
+        f.info(QObject::tr("Characteristic"),
+               QObject::tr("a table of %1 speeds and torques, from the file: edit it there")
+                   .arg(std::get<MotorTable>(*driver.motor).speed.size()),
+               "motorTable");
+    }
+    f.check("flywheel", QObject::tr("Flywheel"), driver.flywheel.has_value(), undo, [self](Mechanism& m, bool on) {
+        if (!on) self(m).flywheel.reset();
+        else if (!self(m).flywheel) self(m).flywheel = Flywheel{0.1};  // an inertia to start from
+    });
+    if (driver.flywheel) {
+        const auto flywheel = [self](Mechanism& m) -> Flywheel& { return *self(m).flywheel; };
+        f.number("flywheelInertia", QObject::tr("Flywheel inertia"), driver.flywheel->inertia,
+                 plainQuantity(QStringLiteral("kg·m²"), 4), undo,
+                 [flywheel](Mechanism& m, double v) { flywheel(m).inertia = v; });
+        f.choice("flywheelShaft", QObject::tr("Flywheel on"),
+                 {QObject::tr("the output shaft (the driven joint)"), QObject::tr("the motor shaft")},
+                 driver.flywheel->on == FlywheelShaft::Motor ? 1 : 0, undo, [flywheel](Mechanism& m, int on) {
+                     flywheel(m).on = on == 1 ? FlywheelShaft::Motor : FlywheelShaft::Output;
+                 });
+    }
+    f.optionalNumber(
+        "fluctuationTarget", QObject::tr("Speed fluctuation wanted"), driver.fluctuationTarget, percentQuantity(), undo,
+        [self](Mechanism& m, std::optional<double> v) { self(m).fluctuationTarget = v; }, QObject::tr("none"));
+    f.info({}, QObject::tr("(ω_max − ω_min)/ω_mean, below 200 %: asks for the flywheel that gives it."));
+}
+
 // The cylinder doing a linear driver's work.
 void cylinderFields(FormBuilder& f, const Driver& driver, const std::function<Driver&(Mechanism&)>& self)
 {
@@ -101,15 +159,14 @@ void cylinderFields(FormBuilder& f, const Driver& driver, const std::function<Dr
     f.number("cylinderRod", QObject::tr("Rod"), c.rod, lengthQuantity(), undo,
              [cylinder](Mechanism& m, double v) { cylinder(m).rod = v; });
     f.optionalNumber(
-        "supplyPressure", QObject::tr("Supply pressure"), c.supplyPressure, barQuantity(), undo,
+        "supplyPressure", QObject::tr("Supply pressure"), c.supplyPressure, pressureQuantity(), undo,
         [cylinder](Mechanism& m, std::optional<double> v) { cylinder(m).supplyPressure = v; }, QObject::tr("none"));
     f.info({}, QObject::tr("Pushes on the full bore, pulls on the ring round the rod."));
 }
 
 }  // namespace
 
-void driverForm(FormBuilder& f, const Mechanism& /*every form takes it; a motion needs no other part*/,
-                const Driver& driver)
+void driverForm(FormBuilder& f, const Mechanism& m, const Driver& driver)
 {
     const std::string name = driver.name;
     const QString qname = QString::fromStdString(name);
@@ -171,8 +228,10 @@ void driverForm(FormBuilder& f, const Mechanism& /*every form takes it; a motion
                QObject::tr(
                    "Times increase strictly; one position per time. Between them the motion follows a smooth curve."));
     }
-    if (rotary) gearboxFields(f, driver, self);
-    else cylinderFields(f, driver, self);
+    if (rotary) {
+        gearboxFields(f, driver, self);
+        motorFields(f, m, driver, self);
+    } else cylinderFields(f, driver, self);
 }
 
 }  // namespace clevis::ui

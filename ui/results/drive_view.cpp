@@ -1,0 +1,216 @@
+#include "ui/results/drive_view.h"
+
+#include "core/file/mechanism_file_format.h"
+#include "render/cycle_axis.h"
+#include "render/cycle_chart.h"
+#include "render/drive_figures.h"
+#include "render/palette.h"
+#include "ui/analysis/analysis_state.h"
+#include "ui/document/mechanism_document.h"
+#include "ui/shell/display_units.h"
+
+#include <QComboBox>
+#include <QEvent>
+#include <QFontInfo>
+#include <QHBoxLayout>
+#include <QLabel>
+#include <QPainter>
+#include <QScrollArea>
+#include <QVBoxLayout>
+
+#include <algorithm>
+
+namespace clevis::ui {
+namespace {
+
+constexpr int kLeastFigureWidth = 340;  // pixels: narrower, the tick numbers crowd
+constexpr int kGap = 8;                 // pixels between figures
+constexpr double kChartText = 10;       // the charts' own text size, logical units (chart_style.cpp)
+constexpr double kTextShare = 0.85;     // chart text against the window's font, as on the other charts
+
+QString qs(const std::string& s) { return QString::fromStdString(s); }
+
+}  // namespace
+
+DriveView::DriveView(MechanismDocument* doc, AnalysisState* analysis, QWidget* parent)
+    : QWidget(parent)
+    , doc_(doc)
+    , analysis_(analysis)
+    , choice_(new QComboBox(this))
+    , warnings_(new QLabel(this))
+    , scroll_(new QScrollArea(this))
+    , canvas_(new QWidget)
+{
+    setObjectName("driveView");
+    choice_->setObjectName("driveChoice");
+    choice_->setToolTip(tr("Whose drive: every driver with a gearbox or a cylinder"));
+    choice_->setSizeAdjustPolicy(QComboBox::AdjustToContents);  // the driver's whole name and kind
+    warnings_->setObjectName("driveWarnings");
+    warnings_->setWordWrap(true);
+    warnings_->setTextInteractionFlags(Qt::TextSelectableByMouse);
+    QPalette warningColours = warnings_->palette();
+    warningColours.setColor(QPalette::WindowText, palette::problem());
+    warnings_->setPalette(warningColours);
+    scroll_->setWidget(canvas_);
+    scroll_->setFrameShape(QFrame::NoFrame);
+    scroll_->setHorizontalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
+    canvas_->installEventFilter(this);
+    scroll_->viewport()->installEventFilter(this);
+    auto* top = new QHBoxLayout;
+    top->setContentsMargins(0, 0, 0, 0);
+    top->addWidget(choice_);
+    top->addStretch(1);
+    auto* layout = new QVBoxLayout(this);
+    layout->setContentsMargins(2, 2, 2, 2);
+    layout->setSpacing(2);
+    layout->addLayout(top);
+    layout->addWidget(warnings_);
+    layout->addWidget(scroll_, 1);
+    connect(analysis_, &AnalysisState::resultChanged, this, &DriveView::solved);
+    connect(doc_, &MechanismDocument::documentReset, this, &DriveView::solved);
+    connect(doc_, &MechanismDocument::selectionChanged, this, &DriveView::selectionMoved);
+    connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, &DriveView::showDriver);
+    connect(choice_, &QComboBox::currentIndexChanged, this, &DriveView::showDriver);
+    solved();
+}
+
+std::vector<const Figure*> DriveView::figures() const
+{
+    std::vector<const Figure*> out;
+    for (const auto& f : figures_) out.push_back(f.get());
+    return out;
+}
+
+QString DriveView::warningText() const { return warnings_->text(); }
+
+// The drive is worked out from the mechanism the result was solved for: while
+// an edit is being solved the document is newer, and its result follows.
+void DriveView::solved()
+{
+    if (analysis_->busy() && analysis_->hasResult()) return;
+    drive_.reset();
+    if (analysis_->hasResult()) {
+        const auto& m = analysis_->compiled();
+        drive_ = driveResultsWithStudies(doc_->mechanism(), m, analysis_->result(), analysis_->summary().unreliable);
+    }
+    const QString kept = choice_->currentText();
+    choices_.clear();
+    {
+        const QSignalBlocker quiet(choice_);
+        choice_->clear();
+        if (drive_) {
+            const auto& m = analysis_->compiled();
+            for (const MotorDuty& d : drive_->motors) choices_.push_back(d.driver);
+            for (const CylinderDuty& c : drive_->cylinders) choices_.push_back(c.driver);
+            std::sort(choices_.begin(), choices_.end());
+            for (const int d : choices_)
+                choice_->addItem(m.drivers[d].type == DriverType::Rotary
+                                     ? tr("%1: motor through a gearbox").arg(qs(m.drivers[d].name))
+                                     : tr("%1: cylinder").arg(qs(m.drivers[d].name)));
+        }
+        choice_->setCurrentIndex(std::max(0, choice_->findText(kept)));
+    }
+    choice_->setEnabled(choices_.size() > 1);
+    selectionMoved();
+    showDriver();
+}
+
+void DriveView::selectionMoved()
+{
+    const Selection s = doc_->selection();
+    if (s.kind != Selection::Kind::Driver || !analysis_->hasResult()) return;
+    for (std::size_t i = 0; i < choices_.size(); ++i)
+        if (qs(analysis_->compiled().drivers[choices_[i]].name) == s.name) choice_->setCurrentIndex(int(i));
+}
+
+void DriveView::showDriver()
+{
+    driver_ = -1;
+    message_.clear();
+    if (analysis_->nothingDrawn()) message_ = tr("Draw a mechanism: what its motor or cylinder must give shows here.");
+    else if (!drive_) message_ = tr("No solved cycle: %1").arg(analysis_->errorText());
+    else if (choices_.empty())
+        message_ =
+            tr("No driver has a gearbox or a cylinder: give a motor one in its properties (Gearbox and "
+               "motor), or a linear drive a cylinder, to see what it must give.");
+    else driver_ = choices_[std::size_t(std::clamp(choice_->currentIndex(), 0, int(choices_.size()) - 1))];
+    QStringList said;
+    if (drive_)
+        for (const Warning& w : drive_->warnings) said << qs(w.message);
+    warnings_->setText(said.join('\n'));
+    warnings_->setVisible(!said.isEmpty() && driver_ >= 0);
+    layOutFigures();
+}
+
+// As many figures across as the width takes at kLeastFigureWidth each, built
+// at a logical width that sets their text at about the window's size.
+void DriveView::layOutFigures()
+{
+    figures_.clear();
+    places_.clear();
+    const int width = scroll_->viewport()->width();
+    if (driver_ >= 0 && drive_) {
+        const auto& m = analysis_->compiled();
+        const auto& r = analysis_->result();
+        const RenderUnits u = renderUnits(DisplayUnits::instance());
+        const double scale = std::max(1.0, kTextShare * QFontInfo(font()).pixelSize() / kChartText);
+        const bool rotary = m.drivers[driver_].type == DriverType::Rotary;
+        const int count = rotary ? 3 : 2;
+        const int across = std::clamp((width + kGap) / (kLeastFigureWidth + kGap), 1, count);
+        const double column = double(width - (across - 1) * kGap) / across;
+        const double logical = column / scale;
+        const CycleAxis axis = cycleAxis(m, r);
+        if (rotary) {
+            const auto motor = std::find_if(drive_->motors.begin(), drive_->motors.end(),
+                                            [&](const MotorDuty& d) { return d.driver == driver_; });
+            const Driver* described = findDriver(doc_->mechanism().drivers, m.drivers[driver_].name);
+            figures_.push_back(std::make_unique<XyChart>(
+                torqueSpeedContent(m, *motor, described ? described->motor : std::nullopt, u), logical));
+            for (PlotPane& pane : motorPanes(m, *motor, u))
+                figures_.push_back(std::make_unique<CycleChart>(std::move(pane), axis, r, logical));
+            for (const RatioStudy& s : drive_->studies)
+                if (s.driver == driver_)
+                    figures_.push_back(
+                        std::make_unique<XyChart>(ratioStudyContent(m, s, motor->gearbox.ratio, u), logical));
+        } else {
+            const auto cylinder = std::find_if(drive_->cylinders.begin(), drive_->cylinders.end(),
+                                               [&](const CylinderDuty& c) { return c.driver == driver_; });
+            for (PlotPane& pane : cylinderPanes(m, *cylinder, u))
+                figures_.push_back(std::make_unique<CycleChart>(std::move(pane), axis, r, logical));
+        }
+        double top = 0, rowHeight = 0;
+        for (std::size_t i = 0; i < figures_.size(); ++i) {
+            const int col = int(i) % across;
+            if (col == 0 && i > 0) {
+                top += rowHeight + kGap;
+                rowHeight = 0;
+            }
+            const QSizeF size = figures_[i]->size() * scale;
+            places_.push_back(QRectF(QPointF(col * (column + kGap), top), size));
+            rowHeight = std::max(rowHeight, size.height());
+        }
+        canvas_->resize(width, int(std::ceil(top + rowHeight)));
+    } else {
+        canvas_->resize(width, scroll_->viewport()->height());
+    }
+    canvas_->update();
+}
+
+bool DriveView::eventFilter(QObject* watched, QEvent* event)
+{
+    if (watched == scroll_->viewport() && event->type() == QEvent::Resize) layOutFigures();
+    if (watched != canvas_ || event->type() != QEvent::Paint) return QWidget::eventFilter(watched, event);
+    QPainter p(canvas_);
+    p.fillRect(canvas_->rect(), palette::paper());
+    if (figures_.empty()) {
+        p.setPen(palette().color(QPalette::WindowText));
+        p.drawText(QRectF(canvas_->rect()).adjusted(8, 8, -8, -8), Qt::AlignCenter | Qt::TextWordWrap, message_);
+        return true;
+    }
+    p.setRenderHint(QPainter::Antialiasing);
+    p.setRenderHint(QPainter::TextAntialiasing);
+    for (std::size_t i = 0; i < figures_.size(); ++i) figures_[i]->paint(p, places_[i]);
+    return true;
+}
+
+}  // namespace clevis::ui
