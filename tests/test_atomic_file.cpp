@@ -111,6 +111,19 @@ TEST_F(AtomicFileTest, ReplacesTheFileAndKeepsThePreviousAsBackup)
     EXPECT_EQ(entries(dir_), (std::vector<std::string>{"press.json", "press.json.bak"}));
 }
 
+// A save stopped between making the new backup and replacing the file leaves
+// the backup as a second name of the file itself; the next save must still
+// leave just the file and its backup.
+TEST_F(AtomicFileTest, ABackupThatIsTheFileItselfIsReplacedCleanly)
+{
+    writePlainly(file_, "old\n");
+    fs::create_hard_link(file_, file_.string() + ".bak");
+    writeFileAtomically(file_.string(), "new\n", true);
+    EXPECT_EQ(readFile(file_), "new\n");
+    EXPECT_EQ(readFile(file_.string() + ".bak"), "old\n");
+    EXPECT_EQ(entries(dir_), (std::vector<std::string>{"press.json", "press.json.bak"}));
+}
+
 TEST_F(AtomicFileTest, WithoutBackupLeavesNone)
 {
     writePlainly(file_, "old");

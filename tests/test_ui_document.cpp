@@ -357,4 +357,18 @@ TEST(MechanismEdits, DeletingABodyOpensItsPinsAndDropsItsLoads)
     EXPECT_EQ(m.joints[jointIndex(m, "pin 3")].bodies[1], "");
 }
 
+// A body whose last pin is deleted goes, and with it what acts on it: a load
+// or a cylinder left on it would name a part no longer there.
+TEST(MechanismEdits, ABodyLeftWithoutPinsGoesWithTheLoadsAndCylindersOnIt)
+{
+    Mechanism m = drawnFourBar();  // link 1, the crank, on pin 1 (to ground) and pin 3 (to link 2)
+    edits::addForce(m, {"link 1", {0.02, 0.02}}, {0.0, -10.0});
+    edits::addCylinder(m, {kGroundName, {0.1, -0.1}}, {"link 1", {0.02, 0.03}});
+    edits::remove(m, {Selection::Kind::Joint, "pin 1", -1});
+    edits::remove(m, {Selection::Kind::Joint, "pin 3", -1});
+    EXPECT_EQ(bodyIndex(m, "link 1"), -1);
+    EXPECT_TRUE(m.loads.empty());
+    EXPECT_TRUE(m.drivers.empty());  // the motor went with pin 1, the cylinder with link 1
+}
+
 }  // namespace

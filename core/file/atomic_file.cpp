@@ -39,19 +39,32 @@ std::optional<struct stat> existing(const std::string& path)
     return st;
 }
 
+// A hidden name beside `target` for a file on its way to replacing it: the
+// process id and a counter keep names apart; the caller skips one in use (a
+// leftover from a crash) by asking again.
+std::string temporaryNameFor(const std::string& target)
+{
+    static std::atomic<unsigned> counter{0};
+    const fs::path p(target);
+    // Appended piece by piece: `"." + name + …` makes GCC 12 warn falsely (-Wrestrict) at -O2.
+    std::string name = ".";
+    name += p.filename().string();
+    name += ".saving-";
+    name += std::to_string(::getpid());
+    name += '-';
+    name += std::to_string(counter++);
+    return (p.parent_path() / name).string();
+}
+
 // Removes the temporary file unless the save got as far as renaming it.
 class TemporaryFile {
 public:
     TemporaryFile(const std::string& target, const std::string& reportedPath) : reported_(reportedPath)
     {
-        // Created like any new file (mode 0666 less the umask); the process id
-        // and a counter keep names apart, a leftover from a crash is skipped.
-        static std::atomic<unsigned> counter{0};
+        // Created like any new file (mode 0666 less the umask).
         const fs::path p(target);
-        const std::string stem =
-            (p.parent_path() / ("." + p.filename().string() + ".saving-" + std::to_string(::getpid()) + "-")).string();
         do {
-            name_ = stem + std::to_string(counter++);
+            name_ = temporaryNameFor(target);
             fd_ = ::open(name_.c_str(), O_WRONLY | O_CREAT | O_EXCL | O_CLOEXEC, 0666);
         } while (fd_ < 0 && errno == EEXIST);
         if (fd_ < 0) {
@@ -108,14 +121,30 @@ std::string fileText(const std::string& path)
 }
 
 // The previous file becomes the backup by a second name (a hard link), so
-// the target never disappears; where links are not possible it is copied.
+// the target never disappears. The link is made under a temporary name and
+// renamed over the old backup, so that there is a backup, old or new, at every
+// moment (removing the old one first left none until the link was made).
+// Where links are not possible the previous file is copied, as atomically.
 void keepBackupOf(const std::string& target, const std::string& reportedPath)
 {
     const std::string backup = target + ".bak";
-    if (::unlink(backup.c_str()) != 0 && errno != ENOENT)
-        fail(reportedPath, "cannot replace the old backup \"" + backup + "\"", errno);
-    if (::link(target.c_str(), backup.c_str()) == 0) return;
-    writeFileAtomically(backup, fileText(target), false);
+    std::string link;
+    int linked = -1;
+    do {
+        link = temporaryNameFor(backup);
+        linked = ::link(target.c_str(), link.c_str());
+    } while (linked != 0 && errno == EEXIST);
+    if (linked != 0) {
+        writeFileAtomically(backup, fileText(target), false);
+        return;
+    }
+    const int renamed = ::rename(link.c_str(), backup.c_str());
+    const int error = errno;
+    // Where the old backup already was the target (a save stopped just
+    // before its rename), rename() leaves both names as they are: the spare
+    // name goes here, as it does after a failure.
+    ::unlink(link.c_str());
+    if (renamed != 0) fail(reportedPath, "cannot replace the old backup \"" + backup + "\"", error);
 }
 
 // Makes the rename itself durable. Best effort: the new file is already in

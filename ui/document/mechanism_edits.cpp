@@ -220,13 +220,18 @@ void removePart(Mechanism& m, const Selection& s)
         if (s.loadIndex >= 0 && s.loadIndex < int(m.loads.size())) m.loads.erase(m.loads.begin() + s.loadIndex);
         return;
     case Selection::Kind::Driver: std::erase_if(m.drivers, [&](const Driver& d) { return d.name == name; }); return;
-    case Selection::Kind::Joint:
+    case Selection::Kind::Joint: {
         std::erase_if(m.joints, [&](const Joint& j) { return j.name == name; });
         eraseReferring(m.drivers, PartKind::Joint, name);
         eraseReferring(m.loads, PartKind::Joint, name);
-        // A body left with nothing holding it is no longer part of the drawing.
-        std::erase_if(m.bodies, [&](const Body& b) { return bodyPins(m, b.name).empty(); });
+        // A body left with nothing holding it is no longer part of the drawing,
+        // nor are the drivers and loads on it, which would name nothing.
+        std::vector<std::string> unheld;
+        for (const Body& b : m.bodies)
+            if (bodyPins(m, b.name).empty()) unheld.push_back(b.name);
+        for (const std::string& b : unheld) removePart(m, {Selection::Kind::Body, QString::fromStdString(b), -1});
         return;
+    }
     case Selection::Kind::Body:
         std::erase_if(m.bodies, [&](const Body& b) { return b.name == name; });
         for (auto& j : m.joints)
