@@ -158,12 +158,24 @@ TEST(MotorDrivenSliderCrank, SteadyCycleMatchesScipy)
     ASSERT_TRUE(solved.found);
     ASSERT_TRUE(solved.r.complete);
     const test::SliderCrankSpec s = pressSpec();
-    const nlohmann::json out = test::runPythonCheck(
-        CLEVIS_SCIPY_SLIDER_CRANK,
-        {{"r", s.r}, {"l", s.l}, {"theta0", s.theta0}, {"m1", s.crankMass}, {"I1", s.crankInertia},
-         {"m2", s.rodMass}, {"I2", s.rodInertia}, {"m3", s.pistonMass}, {"ratio", p.ratio},
-         {"stall_torque", p.stall}, {"no_load", p.noLoad}, {"flywheel", p.flywheel}, {"motor_inertia", p.rotor},
-         {"force", p.force}, {"damping", p.damping}, {"steps", p.steps}, {"turns", 40}, {"start_speed", s.omega}});
+    const nlohmann::json out = test::runPythonCheck(CLEVIS_SCIPY_SLIDER_CRANK, {{"r", s.r},
+                                                                                {"l", s.l},
+                                                                                {"theta0", s.theta0},
+                                                                                {"m1", s.crankMass},
+                                                                                {"I1", s.crankInertia},
+                                                                                {"m2", s.rodMass},
+                                                                                {"I2", s.rodInertia},
+                                                                                {"m3", s.pistonMass},
+                                                                                {"ratio", p.ratio},
+                                                                                {"stall_torque", p.stall},
+                                                                                {"no_load", p.noLoad},
+                                                                                {"flywheel", p.flywheel},
+                                                                                {"motor_inertia", p.rotor},
+                                                                                {"force", p.force},
+                                                                                {"damping", p.damping},
+                                                                                {"steps", p.steps},
+                                                                                {"turns", 40},
+                                                                                {"start_speed", s.omega}});
     ASSERT_FALSE(out.is_null());
     ASSERT_LT(out["start_mismatch"].get<double>(), 1e-11);  // scipy's last turn is steady
     const SteadyCycle& c = solved.found->cycle;
@@ -231,10 +243,9 @@ TEST(MotorDrivenSliderCrank, EnergyBalancesOverTheSteadyCycle)
     }
     const StepResult &first = steps.front(), &last = steps.back();
     const double drive = 0.5 * (p.flywheel + p.rotor * p.ratio * p.ratio);
-    const double stored = (last.kinetic - first.kinetic) + drive * (std::pow(last.driveRate[0], 2) -
-                                                                     std::pow(first.driveRate[0], 2)) +
-                          (last.gravityPotential - first.gravityPotential) +
-                          (last.springPotential - first.springPotential);
+    const double stored =
+        (last.kinetic - first.kinetic) + drive * (std::pow(last.driveRate[0], 2) - std::pow(first.driveRate[0], 2)) +
+        (last.gravityPotential - first.gravityPotential) + (last.springPotential - first.springPotential);
     const double residual = motor + loads - damper - stored;
     std::cout << "motor work " << motor << " J, loads " << loads << " J, damper " << damper << " J, residual "
               << residual << " J\n";

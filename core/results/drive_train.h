@@ -1,8 +1,9 @@
 // What the solved cycle asks of each driver's drive: the motor of a rotary
 // driver with a gearbox (speed and torque at the motor shaft, their peaks
 // and RMS, the energy it must take back, the inertia it sees), and the
-// cylinder of a linear driver (pressure, flow). The motion is the prescribed
-// one; the equations are above the code in drive_train.cpp.
+// cylinder of a linear driver (pressure, flow), at the motion the cycle was
+// solved at (prescribed, or found for a motor: core/solver/motor_drive.h);
+// the equations are above the code in drive_train.cpp.
 #pragma once
 
 #include "core/results/cycle_summary.h"
@@ -30,7 +31,7 @@ struct ReflectedInertia {
 struct MotorDuty {
     int driver = -1;  // index into CompiledMechanism::drivers
     Gearbox gearbox;
-    std::optional<Flywheel> flywheel;  // with the inertia used (a sized one if sized)
+    std::optional<Flywheel> flywheel;      // with the inertia used (a sized one if sized)
     std::vector<double> speed, torque;     // per step at the motor shaft: rad/s, N·m
     Peak torquePeak;                       // N·m, signed, largest magnitude
     double torqueRms = 0, torqueMean = 0;  // N·m, over time

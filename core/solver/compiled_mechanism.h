@@ -41,7 +41,7 @@ struct CompiledJoint {
 // The driver's state at one instant of a motion found by integrating the
 // equation of motion (core/solver/steady_cycle.h).
 struct MotionSample {
-    double t = 0.0;                               // s
+    double t = 0.0;                                  // s
     double position = 0.0, rate = 0.0, accel = 0.0;  // rad or m, per s, per s²
 };
 

@@ -203,7 +203,8 @@ CycleResult Sweeper::run()
             "to ground.",
             {});
     const int steps = !options_.times.empty() ? int(options_.times.size()) - 1
-                      : options_.steps > 0 ? options_.steps : mechanism_.steps;
+                      : options_.steps > 0    ? options_.steps
+                                              : mechanism_.steps;
     const ModelSize size{mechanism_.bodies.size(), mechanism_.joints.size(), mechanism_.drivers.size(), 0, steps};
     if (const auto exceeded = exceededLimit(size))
         throw AnalysisError("Cannot analyse: " + exceeded->message + ".", {});

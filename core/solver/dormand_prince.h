@@ -21,8 +21,8 @@ namespace clevis {
 // The distinct nodes c of the stages (the sixth and seventh share c = 1).
 inline constexpr std::array<double, 6> kDormandPrinceNodes = {0.0, 1.0 / 5, 3.0 / 10, 4.0 / 5, 8.0 / 9, 1.0};
 // The fifth-order weights b at those nodes: as a quadrature rule, ∫₀¹ f ≈ Σ b·f(c).
-inline constexpr std::array<double, 6> kDormandPrinceWeights = {35.0 / 384,         0.0,       500.0 / 1113,
-                                                                125.0 / 192,        -2187.0 / 6784, 11.0 / 84};
+inline constexpr std::array<double, 6> kDormandPrinceWeights = {35.0 / 384,     0.0,      500.0 / 1113, 125.0 / 192,
+                                                                -2187.0 / 6784, 11.0 / 84};
 
 template <std::size_t N>
 struct DormandPrinceStep {
@@ -43,8 +43,8 @@ DormandPrinceStep<N> dormandPrinceStep(const std::array<double, N>& y0, const st
                                        {19372.0 / 6561, -25360.0 / 2187, 64448.0 / 6561, -212.0 / 729},
                                        {9017.0 / 3168, -355.0 / 33, 46732.0 / 5247, 49.0 / 176, -5103.0 / 18656},
                                        {35.0 / 384, 0.0, 500.0 / 1113, 125.0 / 192, -2187.0 / 6784, 11.0 / 84}};
-    static constexpr double e[7] = {71.0 / 57600,  0.0, -71.0 / 16695, 71.0 / 1920, -17253.0 / 339200, 22.0 / 525,
-                                    -1.0 / 40};
+    static constexpr double e[7] = {71.0 / 57600,      0.0,        -71.0 / 16695, 71.0 / 1920,
+                                    -17253.0 / 339200, 22.0 / 525, -1.0 / 40};
     std::array<std::array<double, N>, 7> k;
     k[0] = slope;
     std::array<double, N> y;

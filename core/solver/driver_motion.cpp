@@ -7,10 +7,16 @@
 
 namespace clevis {
 
-DriverMotion::DriverMotion(const CompiledDriver& driver, double cycleDuration)
-    : motion_(driver.motion), start_(driver.offset), cycle_(cycleDuration), found_(driver.found)
+DriverMotion::DriverMotion(const Motion& motion, double drawnPosition, double cycleDuration)
+    : motion_(motion), start_(drawnPosition), cycle_(cycleDuration)
 {
     if (const auto* table = std::get_if<MotionTable>(&motion_)) table_ = CubicSpline(table->time, table->position);
+}
+
+DriverMotion::DriverMotion(const CompiledDriver& driver, double cycleDuration)
+    : DriverMotion(driver.motion, driver.offset, cycleDuration)
+{
+    found_ = driver.found;
 }
 
 // Between two samples, the quintic s(x), x = (t − t₀)/h, that matches

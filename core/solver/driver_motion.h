@@ -12,6 +12,8 @@ struct DriveState {
 
 class DriverMotion {
 public:
+    // A prescribed motion starting from `drawnPosition`.
+    DriverMotion(const Motion& motion, double drawnPosition, double cycleDuration);
     // The driver's found motion if it has one, else its prescribed motion.
     DriverMotion(const CompiledDriver& driver, double cycleDuration);
     DriveState operator()(double t) const;

@@ -55,32 +55,28 @@ SizedFlywheel sizeFlywheel(CycleIntegrator& cycles, const Driver& d)
         throw AnalysisError("driver " + d.name + ": no flywheel up to " + significant(hi) +
                                 " kg·m² brings the speed fluctuation down to " + significant(f.target),
                             {d.name});
-    // The least fluctuation found is kept unless one within the tolerance turns up.
-    std::optional<SteadyCycle> best = high;
+    // The least fluctuation found is kept unless one within the tolerance
+    // turns up (`high` holds a cycle: a stall's mismatch is negative).
+    SteadyCycle best = std::move(*high);
     double bestInertia = hi;
-    while (!within(*best) && f.trials < kMaxFlywheelTrials) {
+    while (!within(best) && f.trials < kMaxFlywheelTrials) {
         double next = lo - mlo * (hi - lo) / (mhi - mlo);
         if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
         std::optional<SteadyCycle> c = trial(next);
         const double m = mismatch(c);
-        if (c && within(*c)) {
-            best = std::move(c);
-            bestInertia = next;
-            break;
-        }
-        if (m < 0.0) {
+        if (m < 0.0 && !(c && within(*c))) {
             lo = next;
             mlo = m;
-        } else {
-            hi = next;
-            mhi = m;
-            best = std::move(c);
-            bestInertia = next;
+            continue;
         }
+        hi = next;
+        mhi = m;
+        best = std::move(*c);
+        bestInertia = next;
     }
     f.integrated = bestInertia;
-    f.achieved = best->fluctuation;
-    out.cycle = std::move(*best);
+    f.achieved = best.fluctuation;
+    out.cycle = std::move(best);
     return out;
 }
 

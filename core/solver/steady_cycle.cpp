@@ -84,8 +84,7 @@ void CycleIntegrator::fill(int k, int substeps)
     iv.nodes.assign(std::size_t(5 * substeps + 1), {});
     iv.nodes[0] = start;
     for (int j = 0; j < substeps; ++j)
-        for (int n = 1; n <= 5; ++n)
-            iv.nodes[5 * j + n] = reduced_.at(theta0_ + direction_ * nodePosition(k, j, n));
+        for (int n = 1; n <= 5; ++n) iv.nodes[5 * j + n] = reduced_.at(theta0_ + direction_ * nodePosition(k, j, n));
 }
 
 const ReducedTerms& CycleIntegrator::at(int k, int node)
@@ -119,8 +118,8 @@ bool CycleIntegrator::interval(const DriveTrain& d, int k, Run& run)
             const auto step = dormandPrinceStep<2>(y, slope, h, [&](int node, const State& ys) {
                 return derivative(nodes[std::size_t(5 * j + node)], ys);
             });
-            const bool finite = std::isfinite(step.y[0]) && std::isfinite(step.y[1]) && step.y[0] > 0.0 &&
-                                std::isfinite(step.slope[0]);
+            const bool finite =
+                std::isfinite(step.y[0]) && std::isfinite(step.y[1]) && step.y[0] > 0.0 && std::isfinite(step.slope[0]);
             const double error = std::max(std::abs(step.error[0]) / (kStepTolerance * run.uScale),
                                           std::abs(step.error[1]) / (kStepTolerance * run.tScale));
             if (!finite || error > 1.0) {
@@ -194,11 +193,10 @@ SteadyCycle CycleIntegrator::cycleOf(const DriveTrain& d, const Run& run) const
 {
     SteadyCycle out;
     for (int k = 0; k <= steps_; ++k) {
-        const ReducedTerms& terms =
-            k < steps_ ? intervals_[k].nodes.front() : intervals_[steps_ - 1].nodes.back();
+        const ReducedTerms& terms = k < steps_ ? intervals_[k].nodes.front() : intervals_[steps_ - 1].nodes.back();
         const double speed = direction_ * std::sqrt(run.u[k]);
-        out.samples.push_back({run.t[k], theta0_ + direction_ * startOf(k), speed,
-                               driveAcceleration(d, terms, speed).accel});
+        out.samples.push_back(
+            {run.t[k], theta0_ + direction_ * startOf(k), speed, driveAcceleration(d, terms, speed).accel});
     }
     out.period = run.t.back();
     out.meanSpeed = direction_ * kTurn / out.period;
