@@ -27,7 +27,7 @@ bool writeOutputs(const AnalyzeOptions& options, const CompiledMechanism& m, con
                               resultsJsonText(m, r, s, {{"sizing", sizingToJson(m, r, sizing)}},  // bars and pins
                                               &drive),  // (docs/results-format.md)
                               err);
-    if (!options.csvOut.empty()) ok &= writeOutputFile(options.csvOut, resultsCsvText(m, r), err);
+    if (!options.csvOut.empty()) ok &= writeOutputFile(options.csvOut, resultsCsvText(m, r, &drive), err);
     return ok;
 }
 
@@ -77,7 +77,7 @@ int runAnalyze(const AnalyzeOptions& options, std::ostream& out, std::ostream& e
         const CompiledMechanism& m = solved.m;
         const CycleResult& r = solved.r;
         const CycleSummary s = summarize(m, r);
-        DriveResults drive = driveResults(solved.mechanism, m, r, s.unreliable);
+        DriveResults drive = driveResults(solved.mechanism, m, r, s.unreliable, solved.found);
         if (!studyRatios(options, solved, s, drive, err)) return kExitFailed;
         out << summaryText(m, r, s) << driveText(m, r, drive) << std::flush;
         // Sizing of bars: stresses, utilisation and buckling (core/results/bar_sizing.h);

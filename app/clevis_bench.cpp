@@ -10,7 +10,9 @@
 // cycle of the same chain at up to 500 bodies. The 200-body chain is timed again
 // with the internal loads and envelopes of every bar added, and its results
 // written as the --json and --csv files are. The gear ratio study of the
-// punch press at 200 ratios is timed beside that mechanism's cycle.
+// punch press at 200 ratios is timed beside that mechanism's cycle, and the
+// flywheel press's real motion (with and without sizing its flywheel) beside
+// its cycle at the prescribed speed.
 #include "app/heap_reuse.h"
 #include "core/file/mechanism_file.h"
 #include "core/results/bar_envelope.h"
@@ -18,6 +20,7 @@
 #include "core/results/results_csv.h"
 #include "core/results/results_json.h"
 #include "core/solver/cycle_sweep.h"
+#include "core/solver/motor_drive.h"
 #include "core/solver/mobility_check.h"
 #include "core/solver/step_solver.h"
 #include "tests/chain_generator.h"
@@ -179,6 +182,32 @@ void PunchPressRatioStudy(benchmark::State& state)
         benchmark::DoNotOptimize(clevis::ratioStudy(m, result, unreliable, 0, doc.drivers[0].gearbox.value(), range));
 }
 BENCHMARK(PunchPressRatioStudy)->ArgName("ratios")->Arg(200)->Unit(benchmark::kMicrosecond);
+
+// The flywheel press: one cycle at its prescribed speed, against its real
+// motion (the cycle checked at the prescribed speed, the equation of motion
+// integrated to the steady cycle, that motion solved step by step), and
+// against that with the flywheel sized first (its fluctuation target).
+void FlywheelPressPrescribedCycle(benchmark::State& state) { sampleCycle(state, "flywheel_press.json"); }
+BENCHMARK(FlywheelPressPrescribedCycle)->Unit(benchmark::kMicrosecond);
+
+void FlywheelPressSteadyCycle(benchmark::State& state, bool sizing)
+{
+    clevis::Mechanism doc = clevis::loadMechanismFile(CLEVIS_SAMPLES_DIR "/flywheel_press.json").mechanism;
+    if (!sizing) doc.drivers[0].fluctuationTarget.reset();
+    const clevis::CompiledMechanism m = clevis::compile(doc);
+    clevis::SweepOptions options;
+    options.steps = kSteps;
+    for (auto _ : state) {
+        clevis::SolvedCycle solved = clevis::solveCycle(doc, m, options);
+        if (!solved.found || !solved.r.complete) {
+            state.SkipWithError("the flywheel press's motion was not found");
+            break;
+        }
+        benchmark::DoNotOptimize(solved);
+    }
+}
+BENCHMARK_CAPTURE(FlywheelPressSteadyCycle, given_flywheel, false)->Unit(benchmark::kMicrosecond);
+BENCHMARK_CAPTURE(FlywheelPressSteadyCycle, sized_flywheel, true)->Unit(benchmark::kMicrosecond);
 
 }  // namespace
 

@@ -74,7 +74,12 @@ Solves the mechanism in FILE (a Clevis mechanism file, docs/file-format.md)
 over its whole cycle and prints a summary: peak and RMS joint loads, driver
 effort, power and work, the load on the frame, transmission angles and an
 energy-balance check. A value from a position near a toggle is shown apart,
-marked, with the part that locks named. Then the drive: for a rotary
+marked, with the part that locks named. Where the one driver has a motor
+characteristic ("motor"), the cycle is solved at the speed the motor gives:
+the equation of motion is integrated turn after turn to the steady cycle
+(one turn, the steps evenly spaced in position), with the mean speed, the
+highest and lowest and the speed fluctuation shown, and the flywheel sized
+where the file gives a "fluctuation_target". Then the drive: for a rotary
 driver with a gearbox, the motor's torque (peak, RMS, mean), speed, power,
 the energy it takes back per cycle and the load inertia it sees; for a
 linear driver with a cylinder, the pressure and flow and whether the supply
@@ -106,7 +111,8 @@ Options:
 
 Units: SI (m, s, kg, N, N·m, W, J), except angles: degrees. Rotary driver
 positions are in degrees, linear ones in metres. In the drive section, motor
-speeds are in rpm, pressures in MPa and flows in L/min.
+and driver speeds are in rpm, flywheel inertias in kg·m², pressures in MPa
+and flows in L/min.
 
 Signs: a joint's reaction is the force its first-listed body exerts on its
 second, in global axes; a driver's effort is the torque (N·m) or force (N) it
@@ -120,12 +126,13 @@ Exit status:
   1  FILE cannot be read or is not a valid mechanism (the message on stderr
      starts with FILE), an output cannot be written, or the results are not
      trustworthy: the cycle could not be completed or some positions are near
-     singular (dead centre, toggle), or a driver's motor characteristic,
-     flywheel or fluctuation target cannot be used yet (the cycle is solved
-     at its prescribed speed instead). In those last cases the summary is
+     singular (dead centre, toggle), or a driver's flywheel or fluctuation
+     target has no motor characteristic to act with (the cycle is solved at
+     its prescribed speed instead). In those last cases the summary is
      still printed and the outputs written; the warnings follow on stderr.
-     --ratio-study on a file with no rotary driver with a gearbox also
-     exits 1.
+     A motor that cannot keep the mechanism turning (it stalls: the message
+     names the driver and the position) exits 1 with nothing written, as
+     does --ratio-study on a file with no rotary driver with a gearbox.
   2  wrong command line
 )";
 

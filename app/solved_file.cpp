@@ -2,7 +2,7 @@
 
 #include "core/file/atomic_file.h"
 #include "core/file/mechanism_file.h"
-#include "core/solver/cycle_sweep.h"
+#include "core/solver/motor_drive.h"
 
 namespace clevis::cli {
 
@@ -10,11 +10,13 @@ SolvedFile solveFile(const std::string& file, int steps, std::ostream& err)
 {
     LoadedMechanism loaded = loadMechanismFile(file);
     for (const auto& w : loaded.warnings) err << file << ": warning: " << w << '\n';
-    SolvedFile out{std::move(loaded.mechanism), {}, {}};
-    out.m = compile(out.mechanism);
+    SolvedFile out{std::move(loaded.mechanism), {}, {}, std::nullopt};
     SweepOptions sweep;
     sweep.steps = steps;
-    out.r = sweepCycle(out.m, sweep);
+    SolvedCycle solved = solveCycle(out.mechanism, compile(out.mechanism), sweep);
+    out.m = std::move(solved.m);
+    out.r = std::move(solved.r);
+    out.found = std::move(solved.found);
     return out;
 }
 

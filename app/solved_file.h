@@ -1,11 +1,12 @@
 // What every command that analyses a file starts and ends with: read the
-// file (its warnings go to `err`), compile it and sweep its cycle; write a
-// result file atomically.
+// file (its warnings go to `err`), compile it and sweep its cycle (at the
+// motion a motor gives, where a driver has one); write a result file atomically.
 #pragma once
 
 #include "core/model/mechanism.h"
 #include "core/results/results.h"
 #include "core/solver/compiled_mechanism.h"
+#include "core/solver/motor_drive.h"
 
 #include <ostream>
 #include <string>
@@ -14,8 +15,9 @@ namespace clevis::cli {
 
 struct SolvedFile {
     Mechanism mechanism;
-    CompiledMechanism m;
+    CompiledMechanism m;  // with a motor's found motion, if any (core/solver/motor_drive.h)
     CycleResult r;
+    std::optional<FoundMotion> found;
 };
 
 // `steps` intervals over the cycle (0: the file's own setting). Throws the

@@ -115,6 +115,63 @@ TEST_F(CliTest, CsvOutputHasUnitsInItsHeaderAndOneRowPerPosition)
     EXPECT_EQ(rows, 25);
 }
 
+// kPress with a motor characteristic (and more) on its driver.
+std::string pressWithMotor(const std::string& drive)
+{
+    std::string text = kPress;
+    const std::string driver = R"("speed_rpm": 60})";
+    text.replace(text.find(driver), driver.size(), R"("speed_rpm": 60, )" + drive + "}");
+    return text;
+}
+
+// The motion found: time and speed per step, the fluctuation and mean speed,
+// the flywheel sizing, the CSV's drive columns after the old ones, and the
+// figures in the text with their units.
+TEST_F(CliTest, MotorDrivenPressReportsItsRealSpeed)
+{
+    const fs::path file = write("press.json", pressWithMotor(R"("motor": {"stall_torque": 300, "no_load_rpm": 75},
+        "gearbox": {"ratio": 1, "efficiency": 0.9}, "flywheel": {"inertia": 0.5}, "fluctuation_target": 0.04)"));
+    const fs::path json = dir_ / "out.json", csv = dir_ / "out.csv";
+    const CliRun r = run("analyze " + quoted(file) + " --json " + quoted(json) + " --csv " + quoted(csv));
+    ASSERT_EQ(r.exitCode, 0) << r.err;
+    const nlohmann::json j = nlohmann::json::parse(readFile(json));
+    const auto& d = j["summary"]["drivers"]["motor"];
+    EXPECT_NEAR(d["speed_fluctuation"].get<double>(), 0.04, 0.04 * 1e-3);
+    EXPECT_GT(d["mean_speed_rpm"].get<double>(), 60.0);
+    EXPECT_LT(d["mean_speed_rpm"].get<double>(), 75.0);
+    for (const char* key : {"energy_estimate_kgm2", "integrated_kgm2"})
+        EXPECT_GT(j["summary"]["flywheel"][key].get<double>(), 0.0) << key;
+    const auto& steps = j["steps"];
+    ASSERT_EQ(steps.size(), 37u);
+    for (std::size_t k = 1; k < steps.size(); ++k) {
+        EXPECT_GT(steps[k]["t"].get<double>(), steps[k - 1]["t"].get<double>());
+        EXPECT_NEAR(steps[k]["drive"]["motor"].get<double>(), 10.0 * double(k), 1e-9);
+        EXPECT_GT(steps[k]["drivers"]["motor"]["speed_rpm"].get<double>(), 0.0);
+    }
+    std::istringstream table(readFile(csv));
+    std::string header;
+    std::getline(table, header);
+    EXPECT_TRUE(contains(header, "near_singular,motor.speed [rpm],motor.motor_speed [rpm],motor.motor_torque [N·m]"))
+        << header;
+    for (const char* shown : {"Speed fluctuation (max − min)/mean", "rpm", "Energy estimate", "kg·m²"})
+        EXPECT_TRUE(contains(r.out, shown)) << shown;
+    EXPECT_FALSE(contains(r.err, "drive_not_integrated")) << r.err;
+}
+
+// A motor too weak for the press: a clear message naming the driver and where
+// it stops, exit status 1, and no result file written.
+TEST_F(CliTest, MotorThatStallsStopsCleanly)
+{
+    const fs::path file = write("press.json", pressWithMotor(R"("motor": {"stall_torque": 10, "no_load_rpm": 100})"));
+    const fs::path json = dir_ / "out.json";
+    const CliRun r = run("analyze " + quoted(file) + " --json " + quoted(json));
+    EXPECT_EQ(r.exitCode, 1);
+    EXPECT_TRUE(contains(r.err, "driver motor: the motor cannot keep the mechanism turning: it stalls at motor = "))
+        << r.err;
+    EXPECT_FALSE(fs::exists(json));
+    EXPECT_EQ(readFile(file), pressWithMotor(R"("motor": {"stall_torque": 10, "no_load_rpm": 100})"));
+}
+
 TEST_F(CliTest, BadUsageExitsWithTwoAndPointsToHelp)
 {
     const fs::path file = write("press.json", kPress);

@@ -11,7 +11,7 @@
 namespace clevis {
 
 const char* const kMotorCaution =
-    "  Motor figures follow the prescribed motion of rigid bodies with ideal joints. They include no\n"
+    "  Motor figures follow the motion of rigid bodies with ideal joints. They include no\n"
     "  service factor for shock and no gearbox maker's rating; check the motor's thermal rating against\n"
     "  the RMS torque at the speeds of the cycle and its peak torque against the peak. The duty cycle\n"
     "  (starts per hour, pauses between cycles) is not covered.\n";
@@ -91,6 +91,42 @@ std::string motorText(const CompiledMechanism& m, const CycleResult& r, const Mo
     return text + t.render() + inertiaText(m, r, d);
 }
 
+// Where the speed was found rather than prescribed: how it varies over the
+// steady cycle, how it was reached, and the flywheel sizing.
+std::string foundText(const CompiledMechanism& m, const FoundMotion& f)
+{
+    const SteadyCycle& c = f.cycle;
+    const CompiledDriver& d = m.drivers[std::size_t(f.driver)];
+    std::string text = "\nSpeed of " + d.name +
+                       " as its motor turns it (the equation of motion integrated turn after turn to the steady "
+                       "cycle)\n";
+    TextTable t({Align::Left, Align::Right, Align::Left});
+    t.addRow({"Mean speed (one turn over its period)", rpm(std::abs(c.meanSpeed)),
+              "period " + quantity(c.period, "s")});
+    t.addRow({"Highest speed", rpm(c.speedMax), "at " + formatDrivePosition(d, c.maxAt)});
+    t.addRow({"Lowest speed", rpm(c.speedMin), "at " + formatDrivePosition(d, c.minAt)});
+    t.addRow({"Speed fluctuation (max − min)/mean", significant(c.fluctuation), ""});
+    t.addRow({"Flywheel", quantity(f.flywheelInertia, "kg·m²"),
+              f.sizing ? std::string("sized, below") : f.flywheelInertia > 0.0 ? "as given" : "none"});
+    text += t.render();
+    text += "  Steady after " + std::to_string(c.turns) +
+            " turns (a turn ends within 1e-10 of the squared speed it started with). Every figure of this\n"
+            "  analysis is at this speed, not at the speed_rpm given.\n";
+    if (!f.sizing) return text;
+    const FlywheelSizing& s = *f.sizing;
+    const std::string shaft = s.on == FlywheelShaft::Motor ? "motor shaft" : "output shaft";
+    text += "\nFlywheel on the " + shaft + " for a speed fluctuation of " + significant(s.target) + "\n";
+    TextTable z({Align::Left, Align::Right, Align::Left});
+    z.addRow({"Energy estimate ΔE_max/(C_s·ω²)", quantity(s.estimate, "kg·m²"),
+              "ΔE_max " + quantity(s.energySwing, "J") + " at " + rpm(s.speed) +
+                  "; leaves out the mechanism's and the rotor's inertia and the motor's slope"});
+    z.addRow({"Integrated (steady cycle)", quantity(s.integrated, "kg·m²"),
+              "fluctuation " + significant(s.achieved) + " after " + std::to_string(s.trials) + " trials"});
+    text += z.render();
+    if (s.integrated == 0.0) text += "  The mechanism keeps within the target without a flywheel.\n";
+    return text;
+}
+
 std::string studyText(const CompiledMechanism& m, const RatioStudy& s)
 {
     TextTable t({Align::Right, Align::Right, Align::Right, Align::Left});
@@ -144,9 +180,10 @@ double litresPerMinute(double cubicMetresPerSecond) { return cubicMetresPerSecon
 
 std::string driveText(const CompiledMechanism& m, const CycleResult& r, const DriveResults& d)
 {
-    if (d.motors.empty() && d.cylinders.empty() && d.studies.empty() && d.warnings.empty()) return "";
+    if (d.motors.empty() && d.cylinders.empty() && d.studies.empty() && d.warnings.empty() && !d.found) return "";
     std::string text = "\nDrive (what the motion asks of each motor and cylinder)\n";
     for (const auto& w : d.warnings) text += "  - " + w.message + "\n";
+    if (d.found) text += foundText(m, *d.found);
     for (const auto& motor : d.motors) text += motorText(m, r, motor);
     for (const auto& study : d.studies) text += studyText(m, study);
     for (const auto& cylinder : d.cylinders) text += cylinderText(m, r, cylinder);

@@ -54,13 +54,21 @@ std::optional<ReflectedInertia> reflectedInertia(const CompiledMechanism& m, con
     return out;
 }
 
-MotorDuty motorDuty(const CompiledMechanism& m, const CycleResult& r, const Steps& steps, int d, const Gearbox& g)
+// A flywheel on the output adds J_f·α to the torque through the gearbox; one
+// on the motor shaft J_f·i·α to the motor's, as the rotor does.
+MotorDuty motorDuty(const CompiledMechanism& m, const CycleResult& r, const Steps& steps, int d, const Gearbox& g,
+                    const std::optional<Flywheel>& flywheel)
 {
     MotorDuty out;
     out.driver = d;
     out.gearbox = g;
+    out.flywheel = flywheel;
+    Gearbox withFlywheel = g;
+    double outputFlywheel = 0.0;
+    if (flywheel) (flywheel->on == FlywheelShaft::Motor ? withFlywheel.gearboxInertia : outputFlywheel) += flywheel->inertia;
     const StepValue torque = [&](const StepResult& s) {
-        return motorTorque(g, g.ratio, s.effort[d], s.driveRate[d], driverAcceleration(m, d, s));
+        const double accel = driverAcceleration(m, d, s);
+        return motorTorque(withFlywheel, g.ratio, s.effort[d] + outputFlywheel * accel, s.driveRate[d], accel);
     };
     const StepValue speed = [&](const StepResult& s) { return g.ratio * s.driveRate[d]; };
     const StepValue power = [&](const StepResult& s) { return torque(s) * speed(s); };
@@ -133,25 +141,29 @@ Warning overSupply(const CompiledMechanism& m, const CycleResult& r, const Cylin
             c.firstOverSupply};
 }
 
-// Until the equation of motion is integrated, a motor characteristic, a
-// flywheel and a fluctuation target are read but not used: said, never passed over.
-std::optional<Warning> notYetUsed(const Driver& d)
+// A motor characteristic whose motion was not found (the cycle could not be
+// completed at the expected speed), and a flywheel or fluctuation target
+// without a motor to change the speed: said, never passed over.
+std::optional<Warning> notUsed(const Driver& d, bool found)
 {
-    std::vector<std::string> items;
-    if (d.motor) items.push_back("motor characteristic");
-    if (d.flywheel) items.push_back("flywheel");
-    if (d.fluctuationTarget) items.push_back("fluctuation target");
-    if (items.empty()) return std::nullopt;
-    std::string what = items[0];
-    for (std::size_t k = 1; k < items.size(); ++k) what += (k + 1 == items.size() ? " and " : ", ") + items[k];
-    what += items.size() > 1 ? " are" : " is";
     const auto* c = std::get_if<ConstantSpeed>(&d.motion);
     const std::string motion =
         c && c->accel == 0.0 ? "the constant speed given (" + significant(fromSi(FileUnit::Rpm, c->speed)) + " rpm)"
                              : "its prescribed motion";
+    if (d.motor && !found)
+        return Warning{kDriveNotIntegrated,
+                       "driver " + d.name + ": its motor characteristic is not used: the cycle is solved at " +
+                           motion + ", not at the speed the motor, the flywheel and the loads would give",
+                       -1};
+    if (d.motor || (!d.flywheel && !d.fluctuationTarget)) return std::nullopt;
+    const std::string what = d.flywheel && d.fluctuationTarget ? "flywheel and fluctuation target act"
+                             : d.flywheel                      ? "flywheel acts"
+                                                               : "fluctuation target acts";
     return Warning{kDriveNotIntegrated,
-                   "driver " + d.name + ": its " + what + " not used yet: the cycle is solved at " + motion +
-                       ", not at the speed the motor, the flywheel and the loads would give",
+                   "driver " + d.name + ": its " + what +
+                       " only with a motor characteristic (\"motor\"), which lets the speed vary: the cycle is "
+                       "solved at " +
+                       motion,
                    -1};
 }
 
@@ -173,15 +185,21 @@ double capArea(const Cylinder& c) { return std::numbers::pi / 4.0 * c.bore * c.b
 double annulusArea(const Cylinder& c) { return std::numbers::pi / 4.0 * (c.bore * c.bore - c.rod * c.rod); }
 
 DriveResults driveResults(const Mechanism& doc, const CompiledMechanism& m, const CycleResult& r,
-                          const std::vector<bool>& unreliable)
+                          const std::vector<bool>& unreliable, const std::optional<FoundMotion>& found)
 {
     DriveResults out;
+    out.found = found;
     const Steps steps{r.steps, unreliable};
     for (std::size_t d = 0; d < m.drivers.size(); ++d) {
         const Driver* driver = findDriver(doc.drivers, m.drivers[d].name);
         if (!driver) continue;
         if (driver->gearbox) {
-            out.motors.push_back(motorDuty(m, r, steps, int(d), *driver->gearbox));
+            std::optional<Flywheel> flywheel = driver->flywheel;
+            if (found && found->driver == int(d)) {
+                if (!flywheel) flywheel = Flywheel{};
+                flywheel->inertia = found->flywheelInertia;
+            }
+            out.motors.push_back(motorDuty(m, r, steps, int(d), *driver->gearbox, flywheel));
             out.motors.back().reflected = reflectedInertia(m, r, unreliable, int(d), *driver->gearbox);
         }
         if (driver->cylinder) {
@@ -190,7 +208,7 @@ DriveResults driveResults(const Mechanism& doc, const CompiledMechanism& m, cons
                 out.warnings.push_back(overSupply(m, r, out.cylinders.back()));
         }
         if (driver->type == DriverType::Rotary)
-            if (auto w = notYetUsed(*driver)) out.warnings.push_back(*w);
+            if (auto w = notUsed(*driver, found && found->driver == int(d))) out.warnings.push_back(*w);
     }
     return out;
 }

@@ -1,12 +1,14 @@
 // What the solved cycle asks of each driver's drive: the motor of a rotary
 // driver with a gearbox (speed and torque at the motor shaft, their peaks
 // and RMS, the energy it must take back, the inertia it sees), and the
-// cylinder of a linear driver (pressure, flow). The motion is the prescribed
-// one; the equations are above the code in drive_train.cpp.
+// cylinder of a linear driver (pressure, flow), at the motion the cycle was
+// solved at (prescribed, or found for a motor: core/solver/motor_drive.h);
+// the equations are above the code in drive_train.cpp.
 #pragma once
 
 #include "core/results/cycle_summary.h"
 #include "core/results/ratio_study.h"
+#include "core/solver/motor_drive.h"
 
 #include <optional>
 #include <vector>
@@ -29,6 +31,7 @@ struct ReflectedInertia {
 struct MotorDuty {
     int driver = -1;  // index into CompiledMechanism::drivers
     Gearbox gearbox;
+    std::optional<Flywheel> flywheel;      // with the inertia used (a sized one if sized)
     std::vector<double> speed, torque;     // per step at the motor shaft: rad/s, N·m
     Peak torquePeak;                       // N·m, signed, largest magnitude
     double torqueRms = 0, torqueMean = 0;  // N·m, over time
@@ -55,18 +58,23 @@ inline constexpr const char* kDriveNotIntegrated = "drive_not_integrated";
 inline constexpr const char* kCylinderOverSupply = "cylinder_over_supply";
 
 struct DriveResults {
+    // The motion found for a driver with a motor characteristic (the cycle
+    // was solved at it), with the flywheel sizing when asked for.
+    std::optional<FoundMotion> found;
     std::vector<MotorDuty> motors;
     std::vector<CylinderDuty> cylinders;
     std::vector<RatioStudy> studies;  // when asked for (ratioStudy)
-    // What the drive data asks for and this analysis cannot give yet (a
-    // motor characteristic, a flywheel), and cylinders short of pressure.
+    // Drive data this analysis could not use (a flywheel or fluctuation
+    // target without a motor characteristic, a motor whose motion was not
+    // found), and cylinders short of pressure.
     std::vector<Warning> warnings;
 };
 
 // `doc` is the mechanism `m` was compiled from; `unreliable` as in the
-// summary (unreliableSteps).
+// summary (unreliableSteps); `found` the motion `r` was solved at, if it was
+// found rather than prescribed (solveCycle).
 DriveResults driveResults(const Mechanism& doc, const CompiledMechanism& m, const CycleResult& r,
-                          const std::vector<bool>& unreliable);
+                          const std::vector<bool>& unreliable, const std::optional<FoundMotion>& found = std::nullopt);
 
 // The motor-shaft torque at one step for a gearbox of ratio `ratio` (the
 // rest of `g` as given): see drive_train.cpp.

@@ -1,5 +1,6 @@
 #include "core/results/results_csv.h"
 
+#include "core/file/file_units.h"
 #include "core/results/drive_units.h"
 
 #include <charconv>
@@ -48,6 +49,25 @@ std::vector<std::string> header(const CompiledMechanism& m, const CycleResult& r
     return h;
 }
 
+std::vector<std::string> driveHeader(const CompiledMechanism& m, const DriveResults& drive)
+{
+    std::vector<std::string> h;
+    if (drive.found) h.push_back(m.drivers[std::size_t(drive.found->driver)].name + ".speed [rpm]");
+    for (const MotorDuty& motor : drive.motors) {
+        h.push_back(m.drivers[std::size_t(motor.driver)].name + ".motor_speed [rpm]");
+        h.push_back(m.drivers[std::size_t(motor.driver)].name + ".motor_torque [N·m]");
+    }
+    return h;
+}
+
+void driveValues(std::vector<double>& v, const DriveResults& drive, const StepResult& s, std::size_t step)
+{
+    v.clear();
+    if (drive.found) v.push_back(fromSi(FileUnit::Rpm, s.driveRate[std::size_t(drive.found->driver)]));
+    for (const MotorDuty& motor : drive.motors)
+        v.insert(v.end(), {fromSi(FileUnit::Rpm, motor.speed[step]), motor.torque[step]});
+}
+
 // Shortest form that reads back to the same double.
 void appendNumber(std::string& out, double v)
 {
@@ -74,21 +94,29 @@ void rowValues(std::vector<double>& v, const CompiledMechanism& m, const StepRes
 
 }  // namespace
 
-std::string resultsCsvText(const CompiledMechanism& m, const CycleResult& r)
+std::string resultsCsvText(const CompiledMechanism& m, const CycleResult& r, const DriveResults* drive)
 {
     std::string text;
-    const std::vector<std::string> h = header(m, r);
+    std::vector<std::string> h = header(m, r);
+    if (drive)
+        for (auto& column : driveHeader(m, *drive)) h.push_back(std::move(column));
     for (std::size_t i = 0; i < h.size(); ++i) text += (i ? "," : "") + csvField(h[i]);
     text += '\n';
     text.reserve(text.size() * (r.steps.size() + 1));
-    std::vector<double> row;
+    std::vector<double> row, extra;
     for (const auto& s : r.steps) {
         rowValues(row, m, s);
         for (const double v : row) {
             appendNumber(text, v);
             text += ',';
         }
-        text += s.nearSingular ? "1\n" : "0\n";
+        text += s.nearSingular ? "1" : "0";
+        if (drive) driveValues(extra, *drive, s, std::size_t(&s - r.steps.data()));
+        for (const double v : extra) {
+            text += ',';
+            appendNumber(text, v);
+        }
+        text += '\n';
     }
     return text;
 }

@@ -3,14 +3,16 @@
 // described in docs/results-format.md.
 #pragma once
 
-#include "core/results/results.h"
+#include "core/results/drive_train.h"
 
 #include <string>
 
 namespace clevis {
 
 // Numbers in the shortest form that reads back to the same double, with a
-// '.' whatever the locale.
-std::string resultsCsvText(const CompiledMechanism& m, const CycleResult& r);
+// '.' whatever the locale. With `drive`, its columns follow the others: the
+// speed of a driver whose motion was found, the speed and torque of each
+// motor behind a gearbox.
+std::string resultsCsvText(const CompiledMechanism& m, const CycleResult& r, const DriveResults* drive = nullptr);
 
 }  // namespace clevis

@@ -74,6 +74,8 @@ private:
     // The motor behind a gearbox, or the cylinder, of driver `d` at `step`.
     void driveFields(int d, std::size_t step)
     {
+        if (drive_->found && drive_->found->driver == d)
+            w_.field("speed_rpm", fromSi(FileUnit::Rpm, r_.steps[step].driveRate[std::size_t(d)]));
         for (const MotorDuty& motor : drive_->motors)
             if (motor.driver == d) {
                 w_.field("motor_speed_rpm", fromSi(FileUnit::Rpm, motor.speed[step]));
@@ -241,9 +243,37 @@ json studyJson(const RatioStudy& s)
             {"best_index", s.best}};
 }
 
+json foundJson(const CompiledMechanism& m, const FoundMotion& f)
+{
+    const SteadyCycle& c = f.cycle;
+    const CompiledDriver& d = m.drivers[std::size_t(f.driver)];
+    return {{"speed_fluctuation", c.fluctuation},
+            {"mean_speed_rpm", fromSi(FileUnit::Rpm, c.meanSpeed)},
+            {"speed_max_rpm", fromSi(FileUnit::Rpm, c.speedMax)},
+            {"speed_max_at", driveDisplayValue(d.type, c.maxAt)},
+            {"speed_min_rpm", fromSi(FileUnit::Rpm, c.speedMin)},
+            {"speed_min_at", driveDisplayValue(d.type, c.minAt)},
+            {"period_s", c.period},
+            {"turns_to_steady", c.turns},
+            {"flywheel_kgm2", f.flywheelInertia}};
+}
+
+json flywheelJson(const FlywheelSizing& f)
+{
+    return {{"energy_estimate_kgm2", f.estimate},
+            {"integrated_kgm2", f.integrated},
+            {"on", f.on == FlywheelShaft::Motor ? "motor" : "output"},
+            {"fluctuation_target", f.target},
+            {"fluctuation_achieved", f.achieved},
+            {"energy_swing_J", f.energySwing},
+            {"estimate_speed_rpm", fromSi(FileUnit::Rpm, f.speed)},
+            {"trials", f.trials}};
+}
+
 // The drive's figures, added to each driver's summary (docs/results-format.md).
 void addDriveSummary(json& drivers, const CompiledMechanism& m, const DriveResults& drive)
 {
+    if (drive.found) drivers[m.drivers[std::size_t(drive.found->driver)].name].update(foundJson(m, *drive.found));
     for (const MotorDuty& d : drive.motors) {
         json& out = drivers[m.drivers[d.driver].name];
         out.update(peakJson("motor_torque_peak", "_Nm", d.torquePeak));
@@ -298,13 +328,15 @@ json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const Cycle
                                  {"min_step", stepIndex(t.minimum.step)},
                                  {"max_deg", t.maximum.value},
                                  {"max_step", stepIndex(t.maximum.step)}};
-    return {{"joints", joints},
-            {"drivers", drivers},
-            {"ground", ground},
-            {"transmission", transmission},
-            {"energy_balance", energyBalance(s.energy)},
-            {"near_singular_steps", s.nearSingularSteps},
-            {"toggles", toggles}};
+    json out = {{"joints", joints},
+                {"drivers", drivers},
+                {"ground", ground},
+                {"transmission", transmission},
+                {"energy_balance", energyBalance(s.energy)},
+                {"near_singular_steps", s.nearSingularSteps},
+                {"toggles", toggles}};
+    if (drive && drive->found && drive->found->sizing) out["flywheel"] = flywheelJson(*drive->found->sizing);
+    return out;
 }
 
 std::string resultsJsonText(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& summary,

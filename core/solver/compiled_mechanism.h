@@ -38,6 +38,13 @@ struct CompiledJoint {
     Vec2 axisLocal;      // unit axis in the first body's frame (sliders, slots)
 };
 
+// The driver's state at one instant of a motion found by integrating the
+// equation of motion (core/solver/steady_cycle.h).
+struct MotionSample {
+    double t = 0.0;                                  // s
+    double position = 0.0, rate = 0.0, accel = 0.0;  // rad or m, per s, per s²
+};
+
 struct CompiledDriver {
     std::string name;
     DriverType type;
@@ -45,6 +52,10 @@ struct CompiledDriver {
     BodyPoint ends[2];
     double offset = 0.0;  // position at the drawn pose
     Motion motion;
+    // When not empty, the motion found (a motor's real motion over one cycle,
+    // samples in time order), which replaces `motion`; `motion` then keeps
+    // the file's expected speed.
+    std::vector<MotionSample> found{};
 };
 
 struct CompiledProfile {

@@ -32,7 +32,7 @@ ConstraintSystem::ConstraintSystem(const CompiledMechanism& m, bool includeDrive
     if (includeDrivers) {
         motions_.reserve(m.drivers.size());
         for (std::size_t i = 0; i < m.drivers.size(); ++i) {
-            motions_.emplace_back(m.drivers[i].motion, m.drivers[i].offset, m.duration);
+            motions_.emplace_back(m.drivers[i], m.duration);
             constraints_.push_back(makeDriverConstraint(m, int(i), motions_.back()));
         }
     }

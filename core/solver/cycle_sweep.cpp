@@ -202,7 +202,9 @@ CycleResult Sweeper::run()
             "There is nothing to analyse: the mechanism has no moving bodies. Add a body and join it "
             "to ground.",
             {});
-    const int steps = options_.steps > 0 ? options_.steps : mechanism_.steps;
+    const int steps = !options_.times.empty() ? int(options_.times.size()) - 1
+                      : options_.steps > 0    ? options_.steps
+                                              : mechanism_.steps;
     const ModelSize size{mechanism_.bodies.size(), mechanism_.joints.size(), mechanism_.drivers.size(), 0, steps};
     if (const auto exceeded = exceededLimit(size))
         throw AnalysisError("Cannot analyse: " + exceeded->message + ".", {});
@@ -225,7 +227,7 @@ CycleResult Sweeper::run()
             "The mechanism is locked at the start of the cycle: its constraint equations are singular there.", {});
     result_.complete = true;
     for (int k = 1; k <= steps; ++k) {
-        const double t = mechanism_.duration * double(k) / double(steps);
+        const double t = options_.times.empty() ? mechanism_.duration * double(k) / double(steps) : options_.times[k];
         StepResult next;
         if (!advance(result_.steps.back(), t, next, 0)) {
             result_.complete = false;

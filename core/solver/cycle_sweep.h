@@ -7,11 +7,15 @@
 #include "core/results/results.h"
 
 #include <functional>
+#include <vector>
 
 namespace clevis {
 
 struct SweepOptions {
     int steps = 0;  // intervals over the cycle; 0: the mechanism's own setting
+    // The times of the steps (s, from 0 to the cycle's duration, increasing)
+    // when they are not evenly spaced: then `steps` is one fewer than these.
+    std::vector<double> times;
     // Called after each step with (steps done, steps planned); return false to stop.
     std::function<bool(int, int)> progress;
 };

@@ -12,14 +12,20 @@ struct DriveState {
 
 class DriverMotion {
 public:
+    // A prescribed motion starting from `drawnPosition`.
     DriverMotion(const Motion& motion, double drawnPosition, double cycleDuration);
+    // The driver's found motion if it has one, else its prescribed motion.
+    DriverMotion(const CompiledDriver& driver, double cycleDuration);
     DriveState operator()(double t) const;
 
 private:
+    DriveState found(double t) const;
+
     Motion motion_;
     double start_;  // constant speed: position at t = 0
     double cycle_;
     CubicSpline table_;
+    std::vector<MotionSample> found_;
 };
 
 }  // namespace clevis

@@ -44,7 +44,7 @@ StepResult solveAtTime(const CompiledMechanism& m, const CycleResult& r, double 
 std::optional<double> timeAtDrivePosition(const CompiledMechanism& m, const CycleResult& r, int driver, double position)
 {
     const CompiledDriver& d = m.drivers[std::size_t(driver)];
-    const DriverMotion motion(d.motion, d.offset, m.duration);
+    const DriverMotion motion(d, m.duration);
     const auto f = [&](double t) { return gap(d, motion(t).position, position); };
     for (std::size_t i = 0; i < r.steps.size(); ++i) {
         double lo = r.steps[i].t, flo = f(lo);

@@ -150,11 +150,7 @@ StepResult StepSolver::analyse(double t, const VectorXd& q)
     r.nearSingular = r.reciprocalCondition < nearSingular_.threshold();
     keepFactor_ = factored && !r.nearSingular;  // a near-singular Jacobian would mislead the next assembly
 
-    zeroRates_.setZero(n);
-    system_.rates(pose, zeroRates_, t, nu_, gamma_);  // ν does not depend on q̇; γ is recomputed below
-    r.qd = factor_.solve(nu_);
-    system_.rates(pose, r.qd, t, nu_, gamma_);
-    r.qdd = factor_.solve(gamma_);
+    solveRates(pose, t, r.qd, r.qdd);
 
     const std::vector<AppliedLoad> loads = appliedLoads(mechanism_, pose, r.qd, t, r.drivePosition);
     VectorXd rhs = generalizedForces(mechanism_, q, loads);
@@ -177,6 +173,26 @@ StepResult StepSolver::analyse(double t, const VectorXd& q)
     r.appliedPower = e.appliedPower;
     for (const auto& pin : transmission_) r.transmissionDeg.push_back(transmissionAngleDeg(mechanism_, pin, pose));
     return r;
+}
+
+bool StepSolver::rates(double t, const VectorXd& q, VectorXd& qd, VectorXd& qdd)
+{
+    const Pose pose(q, rotations_);
+    if (!(t == entriesTime_ && q == entriesPose_)) evaluate(pose, t);
+    keepFactor_ = factor_.factor(system_.coordinates(), entries_);
+    if (!keepFactor_) return false;
+    solveRates(pose, t, qd, qdd);
+    return qd.allFinite() && qdd.allFinite();
+}
+
+// With Φ_q factored at the pose.
+void StepSolver::solveRates(const Pose& pose, double t, VectorXd& qd, VectorXd& qdd)
+{
+    zeroRates_.setZero(system_.coordinates());
+    system_.rates(pose, zeroRates_, t, nu_, gamma_);  // ν does not depend on q̇; γ is recomputed below
+    qd = factor_.solve(nu_);
+    system_.rates(pose, qd, t, nu_, gamma_);
+    qdd = factor_.solve(gamma_);
 }
 
 // The generalised constraint force on the bodies of constraint k is

@@ -36,6 +36,10 @@ public:
     // Everything at an assembled pose.
     StepResult analyse(double t, const VectorXd& q);
 
+    // Only the velocities and accelerations at an assembled pose
+    // (Φ_q q̇ = ν, Φ_q q̈ = γ); false where Φ_q cannot be factored.
+    bool rates(double t, const VectorXd& q, VectorXd& qd, VectorXd& qdd);
+
     const ConstraintSystem& system() const { return system_; }
     const std::vector<TransmissionPin>& transmissionPins() const { return transmission_; }
 
@@ -48,6 +52,7 @@ public:
 
 private:
     void evaluate(const Pose& q, double t);
+    void solveRates(const Pose& pose, double t, VectorXd& qd, VectorXd& qdd);
     bool newton(double t, VectorXd& q);
     void fillActions(const Pose& q, StepResult& r) const;
     void fillReactionsAndEfforts(StepResult& r) const;
