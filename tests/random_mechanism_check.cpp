@@ -279,6 +279,8 @@ void checkSolved(const RandomMechanism& rm, const CompiledMechanism& cm, const C
     checkEnergy(cm, r, summary, v, rules);
     checkOutputs(cm, r, summary, rules);
     if (rm.fault != Fault::None) rules.broken("a fault put in on purpose was not refused", faultName(rm.fault));
+    if (rm.completes && !r.complete)
+        rules.broken("a mechanism that turns fully is stopped", r.warnings.empty() ? "" : r.warnings.back().message);
 }
 
 void checkRefusal(const RandomMechanism& rm, const AnalysisError& e, Verdict& v, Rules& rules)
@@ -289,6 +291,7 @@ void checkRefusal(const RandomMechanism& rm, const AnalysisError& e, Verdict& v,
     if (e.items().empty()) rules.broken("a refusal names no part", e.what());
     for (const auto& item : e.items())
         if (!namesPart(rm.mechanism, item)) rules.broken("a refusal names a part that does not exist", item);
+    if (rm.completes) rules.broken("a mechanism that turns fully is refused", e.what());
     if (rm.fault != Fault::None && v.diagnosis != expectedRefusal(rm.fault))
         rules.broken("a fault put in on purpose is misnamed", std::string(faultName(rm.fault)) + ": " + e.what());
 }
@@ -307,6 +310,14 @@ const char* outcomeName(Outcome o)
     return "?";
 }
 
+Verdict checkResult(const RandomMechanism& rm, const CompiledMechanism& cm, const CycleResult& r)
+{
+    Verdict v;
+    Rules rules(v);
+    checkSolved(rm, cm, r, v, rules);
+    return v;
+}
+
 Verdict checkMechanism(const RandomMechanism& rm)
 {
     Verdict v;
@@ -321,7 +332,7 @@ Verdict checkMechanism(const RandomMechanism& rm)
         const CompiledMechanism cm = compile(rm.mechanism);
         try {
             const CycleResult r = sweepCycle(cm);
-            checkSolved(rm, cm, r, v, rules);
+            return checkResult(rm, cm, r);
         } catch (const AnalysisError& e) {
             checkRefusal(rm, e, v, rules);
         }

@@ -386,7 +386,7 @@ RandomMechanism fourBar(Rng& rng)
         d.m.drivers.push_back(rotary("motor", "O2", d.rotaryMotion(pose->theta, turns, label), pose->theta));
         d.chooseSteps();
         finish(d, rng, 4);
-        return {d.m, "four-bar", "four-bar, " + className(cls, turns) + ", " + label};
+        return {d.m, "four-bar", "four-bar, " + className(cls, turns) + ", " + label, Fault::None, turns};
     }
 }
 
@@ -412,7 +412,8 @@ RandomMechanism sliderCrank(Rng& rng)
         d.slider("S", kGroundName, "piston", b, axisDeg);
         std::string label;
         const bool turns = l >= r + std::abs(e);
-        if (rng.chance(0.7)) {
+        const bool crankDriven = rng.chance(0.7);
+        if (crankDriven) {
             d.m.drivers.push_back(rotary("motor", "O", d.rotaryMotion(theta, turns, label), theta));
             label = "crank-driven, " + label;
         } else {
@@ -421,8 +422,11 @@ RandomMechanism sliderCrank(Rng& rng)
         }
         d.chooseSteps();
         finish(d, rng, 4);
+        // Clear of the limit l = r + |e|, a driven crank turns fully.
+        const bool completes = crankDriven && l >= 1.02 * (r + std::abs(e));
         return {d.m, "slider-crank",
-                std::string("slider-crank, ") + (turns ? "crank turns, " : "crank rocks, ") + label};
+                std::string("slider-crank, ") + (turns ? "crank turns, " : "crank rocks, ") + label, Fault::None,
+                completes};
     }
 }
 
@@ -540,7 +544,7 @@ RandomMechanism loopChain(Rng& rng, int loops, bool gentle)
     d.chooseSteps(std::clamp(36000 / bodies, 36, 360));
     finish(d, rng, gentle ? 3 : 5);
     return {d.m, gentle ? "long chain" : "chain",
-            numbered(gentle ? "long chain, " : "chain, ", loops) + " loops, " + label};
+            numbered(gentle ? "long chain, " : "chain, ", loops) + " loops, " + label, Fault::None, gentle};
 }
 
 // `loops` crank-rocker four-bars round one driven hub, each of random
@@ -574,7 +578,7 @@ RandomMechanism fan(Rng& rng, int loops)
     d.m.drivers.push_back(rotary("motor", "O", d.rotaryMotion(0.0, true, label), 0.0));
     d.chooseSteps(std::clamp(36000 / int(d.m.bodies.size()), 36, 360));
     finish(d, rng, 4);
-    return {d.m, "fan", numbered("fan, ", loops) + " loops, " + label};
+    return {d.m, "fan", numbered("fan, ", loops) + " loops, " + label, Fault::None, true};
 }
 
 // A fault put in on purpose: each must be refused with the part named.
@@ -591,7 +595,7 @@ RandomMechanism faulty(Rng& rng)
         const double shift = rng.sign() * reach * rng.uniform(2.5, 4.0);
         rise.from += shift, rise.to += shift;
         s.kind = "slider-crank, piston driven from out of reach";
-        s.family = "faulty", s.fault = fault;
+        s.family = "faulty", s.fault = fault, s.completes = false;
         return s;
     }
     if (fault == Fault::RedundantLink) {
@@ -613,7 +617,7 @@ RandomMechanism faulty(Rng& rng)
         d.m.drivers.push_back(rotary("motor", "O0", d.rotaryMotion(theta, true, label), theta));
         d.chooseSteps();
         finish(d, rng, 2);
-        return {d.m, "faulty", "parallelogram with a redundant third link", fault};
+        return {d.m, "faulty", "parallelogram with a redundant third link", fault, false};
     }
     RandomMechanism f;
     do f = fourBar(rng);
@@ -632,7 +636,7 @@ RandomMechanism faulty(Rng& rng)
         f.mechanism.cycle.duration = 1.0;
         f.kind = "four-bar with a second driver on its rocker";
     }
-    f.family = "faulty", f.fault = fault;
+    f.family = "faulty", f.fault = fault, f.completes = false;
     return f;
 }
 

@@ -35,6 +35,12 @@ struct RandomMechanism {
     std::string family;  // "four-bar", "slider-crank", "Watt six-bar", … (one tally per family)
     std::string kind;    // finer, e.g. "four-bar, crank-rocker, cam-driven"
     Fault fault = Fault::None;
+    // Whether its drive is known to turn it through the whole cycle: a
+    // four-bar whose driven crank turns fully by Grashof's condition (not at
+    // a change point), a crank-driven slider-crank whose rod is longer than
+    // crank and offset together, a fan, a gentle chain. Such a mechanism
+    // must be solved over the whole cycle, neither stopped nor refused.
+    bool completes = false;
     std::uint64_t seed = 0;
     int index = 0;
 };
