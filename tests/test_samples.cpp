@@ -1,18 +1,12 @@
 // The bundled sample mechanisms, and generated four-bar chains, solved over
-// their whole cycle and checked at every step against two laws the reported
-// results must obey whatever the mechanism:
-//  - Newton–Euler for each body: the reported joint reactions and driver
-//    efforts plus the applied loads on it add up to m·a_G, and their moment
-//    about its centre of mass to I_G·α;
-//  - the work–energy theorem for the whole mechanism, in rate form: the
-//    drivers' power equals dT/dt + dV_gravity/dt + dV_springs/dt + the damper
-//    dissipation − the power of the applied forces and torques, every rate
-//    computed analytically from q, q̇ and q̈ at that step.
+// their whole cycle and checked at every step against the two laws the
+// reported results must obey whatever the mechanism (tests/step_laws.h):
+// Newton–Euler for each body, and the work–energy theorem in rate form.
 #include "core/file/mechanism_file.h"
 #include "core/results/cycle_summary.h"
-#include "core/solver/applied_loads.h"
 #include "core/solver/cycle_sweep.h"
 #include "tests/chain_generator.h"
+#include "tests/step_laws.h"
 
 #include <gtest/gtest.h>
 
@@ -24,12 +18,6 @@
 using namespace clevis;
 
 namespace {
-
-// Residuals are compared with the sum of the magnitudes of the terms that
-// make them up, so the checks scale from a 30 N flap folder to a 40 kN press.
-constexpr double kEquilibriumTolerance = 1e-8;
-constexpr double kPowerTolerance = 1e-6;
-constexpr double kFloor = 1e-9;  // N, N·m or W: below this a residual is zero
 
 struct Solved {
     CompiledMechanism mechanism;
@@ -65,168 +53,15 @@ const Solved& solvedSample(const std::string& path)
     return it->second;
 }
 
-// A force system on one body reduced to its centre of mass, and the sums of
-// magnitudes it is judged against.
-struct Wrench {
-    Vec2 force = Vec2::Zero();
-    double moment = 0.0;
-    double forceScale = 0.0, momentScale = 0.0;
-};
-
-class BodyWrenches {
-public:
-    BodyWrenches(const CompiledMechanism& m, const VectorXd& q) : q_(q), wrenches_(m.bodies.size()) {}
-
-    void add(int body, const Vec2& at, const Vec2& force, double couple)
-    {
-        if (body == kGround) return;
-        const Vec2 arm = at - bodyOrigin(q_, body);
-        Wrench& w = wrenches_[body];
-        w.force += force;
-        w.moment += couple + cross(arm, force);
-        w.forceScale += force.norm();
-        w.momentScale += std::abs(couple) + arm.norm() * force.norm();
-    }
-    const Wrench& operator[](std::size_t body) const { return wrenches_[body]; }
-
-private:
-    const VectorXd& q_;
-    std::vector<Wrench> wrenches_;
-};
-
-// A joint's reaction is the force and couple on its second body at the joint
-// point there; the first body receives the opposite (core/results.h).
-void addJointReactions(const CompiledMechanism& m, const StepResult& s, BodyWrenches& out)
-{
-    for (std::size_t k = 0; k < m.joints.size(); ++k) {
-        const CompiledJoint& j = m.joints[k];
-        const Reaction& r = s.joints[k];
-        const Vec2 at = pointPosition(s.q, j.point[1]);
-        out.add(j.body[1], at, r.force, r.moment);
-        out.add(j.body[0], at, -r.force, -r.moment);
-    }
-}
-
-// A driver's effort acts on its second body in the direction of its
-// coordinate, the opposite on its first (core/results.h): a couple at a pin,
-// a force along the axis at a slider, a push along the line between a
-// cylinder's ends.
-void addDriverEfforts(const CompiledMechanism& m, const StepResult& s, BodyWrenches& out)
-{
-    for (std::size_t d = 0; d < m.drivers.size(); ++d) {
-        const CompiledDriver& driver = m.drivers[d];
-        const double effort = s.effort[d];
-        if (driver.type == DriverType::Rotary) {
-            const CompiledJoint& j = m.joints[driver.joint];
-            const Vec2 at = pointPosition(s.q, j.point[1]);
-            out.add(j.body[1], at, Vec2::Zero(), effort);
-            out.add(j.body[0], at, Vec2::Zero(), -effort);
-        } else if (driver.joint >= 0) {
-            const CompiledJoint& j = m.joints[driver.joint];
-            const Vec2 at = pointPosition(s.q, j.point[1]);
-            const Vec2 axis = rotation(bodyAngle(s.q, j.body[0])) * j.axisLocal;
-            out.add(j.body[1], at, effort * axis, 0.0);
-            out.add(j.body[0], at, -effort * axis, 0.0);
-        } else {
-            const Vec2 from = pointPosition(s.q, driver.ends[0]), to = pointPosition(s.q, driver.ends[1]);
-            const Vec2 axis = (to - from).normalized();
-            out.add(driver.ends[1].body, to, effort * axis, 0.0);
-            out.add(driver.ends[0].body, from, -effort * axis, 0.0);
-        }
-    }
-}
-
 // Newton–Euler for every moving body at one step.
 void expectNewtonEuler(const CompiledMechanism& m, const StepResult& s, const std::string& where)
 {
-    BodyWrenches wrenches(m, s.q);
-    addJointReactions(m, s, wrenches);
-    addDriverEfforts(m, s, wrenches);
-    for (const AppliedLoad& l : appliedLoads(m, s.q, s.qd, s.t, s.drivePosition))
-        wrenches.add(l.body, l.at, l.force, l.couple);
-    for (std::size_t b = 0; b < m.bodies.size(); ++b) {
-        const MassProperties& mp = m.bodies[b].mass;
-        const Vec2 massTimesAccel = mp.mass * Vec2(s.qdd[3 * b], s.qdd[3 * b + 1]);
-        const double inertiaTimesAlpha = mp.inertia * s.qdd[3 * b + 2];
-        const Wrench& w = wrenches[b];
-        EXPECT_LE((w.force - massTimesAccel).norm(),
-                  kEquilibriumTolerance * (w.forceScale + massTimesAccel.norm()) + kFloor)
-            << where << ", force on body \"" << m.bodies[b].name << "\" (N)";
-        EXPECT_LE(std::abs(w.moment - inertiaTimesAlpha),
-                  kEquilibriumTolerance * (w.momentScale + std::abs(inertiaTimesAlpha)) + kFloor)
-            << where << ", moment about the centre of mass of body \"" << m.bodies[b].name << "\" (N·m)";
-    }
-}
-
-struct LineState {
-    double length, rate;  // m, m/s
-};
-LineState lineState(const StepResult& s, const BodyPoint& a, const BodyPoint& b)
-{
-    const Vec2 d = pointPosition(s.q, b) - pointPosition(s.q, a);
-    const double length = d.norm();
-    return {length, d.dot(pointVelocity(s.q, s.qd, b) - pointVelocity(s.q, s.qd, a)) / length};
-}
-
-double relativeRate(const CompiledMechanism& m, const StepResult& s, int joint, double* angle)
-{
-    const CompiledJoint& j = m.joints[joint];
-    *angle = bodyAngle(s.q, j.body[1]) - bodyAngle(s.q, j.body[0]);
-    return bodyRate(s.qd, j.body[1]) - bodyRate(s.qd, j.body[0]);
-}
-
-// The terms of the work–energy theorem at one step, W.
-struct PowerTerms {
-    double drivers = 0, kinetic = 0, gravity = 0, springs = 0, dampers = 0, loads = 0;
-    double residual() const { return drivers - (kinetic + gravity + springs + dampers - loads); }
-    double gross() const
-    {
-        return std::abs(drivers) + std::abs(kinetic) + std::abs(gravity) + std::abs(springs) + std::abs(dampers) +
-               std::abs(loads);
-    }
-};
-
-PowerTerms powerTerms(const CompiledMechanism& m, const StepResult& s)
-{
-    PowerTerms p;
-    for (const double w : s.power) p.drivers += w;
-    for (std::size_t b = 0; b < m.bodies.size(); ++b) {
-        const MassProperties& mp = m.bodies[b].mass;
-        const Vec2 v = bodyVelocity(s.qd, int(b)), a(s.qdd[3 * b], s.qdd[3 * b + 1]);
-        p.kinetic += mp.mass * v.dot(a) + mp.inertia * s.qd[3 * b + 2] * s.qdd[3 * b + 2];  // dT/dt
-        p.gravity -= mp.mass * m.gravity.dot(v);                                            // dV/dt, V = −m g·r_G
-    }
-    for (const auto& spring : m.springs) {
-        const LineState l = lineState(s, spring.a, spring.b);
-        p.springs += spring.stiffness * (l.length - spring.freeLength) * l.rate;
-    }
-    for (const auto& spring : m.torsionSprings) {
-        double angle = 0.0;
-        const double rate = relativeRate(m, s, spring.joint, &angle);
-        p.springs += spring.stiffness * (angle - spring.freeAngle) * rate;
-    }
-    for (const auto& damper : m.dampers)
-        p.dampers += damper.damping * std::pow(lineState(s, damper.a, damper.b).rate, 2);
-    for (const auto& f : m.forces) {
-        const double factor = f.profile ? f.profile->eval(s.t, s.drivePosition) : 1.0;
-        const Vec2 force = f.turnsWithBody ? Vec2(rotation(bodyAngle(s.q, f.point.body)) * f.force) : f.force;
-        p.loads += factor * force.dot(pointVelocity(s.q, s.qd, f.point));
-    }
-    for (const auto& c : m.torques) {
-        const double factor = c.profile ? c.profile->eval(s.t, s.drivePosition) : 1.0;
-        p.loads += factor * c.torque * bodyRate(s.qd, c.body);
-    }
-    return p;
+    for (const auto& breach : test::newtonEulerBreaches(m, s)) ADD_FAILURE() << where << ", " << breach;
 }
 
 void expectPowerBalance(const CompiledMechanism& m, const StepResult& s, const std::string& where)
 {
-    const PowerTerms p = powerTerms(m, s);
-    EXPECT_LE(std::abs(p.residual()), kPowerTolerance * p.gross() + kFloor)
-        << where << ": driver power " << p.drivers << " W against dT/dt " << p.kinetic << " W + dV_g/dt " << p.gravity
-        << " W + dV_s/dt " << p.springs << " W + dampers " << p.dampers << " W − loads " << p.loads << " W";
-    EXPECT_NEAR(s.damperDissipation, p.dampers, kPowerTolerance * p.gross() + kFloor) << where << " (W)";
-    EXPECT_NEAR(s.appliedPower, p.loads, kPowerTolerance * p.gross() + kFloor) << where << " (W)";
+    for (const auto& breach : test::powerBalanceBreaches(m, s)) ADD_FAILURE() << where << ": " << breach;
 }
 
 std::string stepLabel(const CompiledMechanism& m, std::size_t k, const StepResult& s)
