@@ -24,6 +24,15 @@ QString show(double si, const DisplayQuantity& q)
     return QString::number(v, 'f', q.decimals);
 }
 
+// Wide enough for `widest`: a narrow panel must never show "850.0" of
+// 7850.0, nor "tor 1" of a name (the form puts the field under its label
+// instead, and the panel scrolls sideways if even that is too narrow).
+void fitWidth(QLineEdit* edit, const QString& widest)
+{
+    edit->setMinimumWidth(edit->fontMetrics().horizontalAdvance(widest) + 2 * edit->fontMetrics().averageCharWidth() +
+                          8);
+}
+
 // A line edit with its unit after it, so every number on screen carries one.
 QLineEdit* withUnit(QFormLayout* form, const QString& key, const QString& label, const QString& value,
                     const QString& unit)
@@ -34,11 +43,7 @@ QLineEdit* withUnit(QFormLayout* form, const QString& key, const QString& label,
     auto* edit = new QLineEdit(value);
     edit->setObjectName(key);
     edit->setAlignment(Qt::AlignRight);
-    // Wide enough for the whole value: a narrow panel must never show "850.0"
-    // of 7850.0 (it scrolls sideways instead).
-    const QString widest = value.size() > 7 ? value : QStringLiteral("0000.000");
-    edit->setMinimumWidth(edit->fontMetrics().horizontalAdvance(widest) + 2 * edit->fontMetrics().averageCharWidth() +
-                          8);
+    fitWidth(edit, value.size() > 7 ? value : QStringLiteral("0000.000"));
     layout->addWidget(edit, 1);
     auto* u = new QLabel(unit);
     u->setMinimumWidth(44);
@@ -130,6 +135,7 @@ void FormBuilder::text(const QString& key, const QString& label, const QString& 
 {
     auto* edit = new QLineEdit(value);
     edit->setObjectName(key);
+    fitWidth(edit, value.size() > 12 ? value.left(24) : QStringLiteral("Wwwwwwwwwwww"));
     form_->addRow(label, edit);
     QObject::connect(edit, &QLineEdit::editingFinished, edit, [=, doc = doc_, refused = refused_] {
         const QString typed = edit->text().trimmed();
