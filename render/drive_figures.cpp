@@ -57,7 +57,8 @@ PlotPane speedPane(const CompiledMechanism& m, const CycleResult& r, const Found
     return {QString("Speed of %1 (C_s = %2)").arg(name).arg(found.cycle.fluctuation, 0, 'f', 4),
             "rpm",
             {{{name + " speed", "rpm", std::move(speed)}, kDriverPen}},
-            {{"mean " + rpmText(found.cycle.meanSpeed), rpm(found.cycle.meanSpeed), kCharacteristicPen}}};
+            {{"mean " + rpmText(found.cycle.meanSpeed), rpm(found.cycle.meanSpeed), kCharacteristicPen}},
+            false};
 }
 
 QString flywheelText(const CompiledMechanism& m, const FoundMotion& found)
