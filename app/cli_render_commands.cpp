@@ -43,6 +43,7 @@ struct Solved {
     CompiledMechanism m;
     CycleResult r;
     CycleSummary s;
+    std::optional<FoundMotion> found;
 };
 
 std::unique_ptr<Solved> solve(const DrawOptions& o)
@@ -52,6 +53,7 @@ std::unique_ptr<Solved> solve(const DrawOptions& o)
     out->doc = std::move(solved.mechanism);
     out->m = std::move(solved.m);
     out->r = std::move(solved.r);
+    out->found = std::move(solved.found);
     if (out->r.steps.empty()) throw AnalysisError("no position of the cycle could be solved", {});
     out->s = summarize(out->m, out->r);
     return out;
@@ -195,8 +197,13 @@ int writeReport(const DrawOptions& o)
     const auto solved = solve(o);
     ensureGuiApplication();
     QString error;
-    const ui::ReviewReportInput in{solved->m,         solved->r,   solved->s, QString::fromStdString(o.file),
-                                   ui::RenderUnits{}, &solved->doc};
+    const ui::ReviewReportInput in{solved->m,
+                                   solved->r,
+                                   solved->s,
+                                   QString::fromStdString(o.file),
+                                   ui::RenderUnits{},
+                                   &solved->doc,
+                                   solved->found ? &*solved->found : nullptr};
     if (!ui::writeReviewReport(in, QString::fromStdString(o.out), &error)) {
         std::cerr << error.toStdString() << '\n';
         return kExitFailed;

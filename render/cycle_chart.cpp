@@ -91,7 +91,7 @@ void CycleChart::paint(QPainter& p, const QRectF& target) const
     }
 
     double xlo = std::min(axis_.values.front(), plannedEnd_), xhi = std::max(axis_.values.back(), plannedEnd_);
-    double ylo = 0, yhi = 0;
+    double ylo = pane_.fromZero ? 0.0 : HUGE_VAL, yhi = pane_.fromZero ? 0.0 : -HUGE_VAL;
     for (const auto& c : pane_.curves)
         for (const double v : c.series.values) {
             ylo = std::min(ylo, v);
@@ -103,7 +103,7 @@ void CycleChart::paint(QPainter& p, const QRectF& target) const
     }
     if (yhi - ylo < 1e-12) yhi = ylo + 1;
     const double pad = 0.06 * (yhi - ylo);
-    ylo -= ylo < 0 ? pad : 0;
+    ylo -= ylo < 0 || !pane_.fromZero ? pad : 0;
     yhi += pad;
     const auto X = [&](double x) { return plot_.left() + (x - xlo) / (xhi - xlo) * plot_.width(); };
     const auto Y = [&](double y) { return plot_.bottom() - (y - ylo) / (yhi - ylo) * plot_.height(); };

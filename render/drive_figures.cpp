@@ -28,9 +28,9 @@ std::vector<double> scaled(const std::vector<double>& v, double k)
 }  // namespace
 
 DriveResults driveResultsWithStudies(const Mechanism& doc, const CompiledMechanism& m, const CycleResult& r,
-                                     const std::vector<bool>& unreliable)
+                                     const std::vector<bool>& unreliable, const std::optional<FoundMotion>& found)
 {
-    DriveResults d = driveResults(doc, m, r, unreliable);
+    DriveResults d = driveResults(doc, m, r, unreliable, found);
     for (const MotorDuty& motor : d.motors)
         d.studies.push_back(
             ratioStudy(m, r, unreliable, motor.driver, motor.gearbox, ratioRangeAround(motor.gearbox.ratio)));
@@ -46,6 +46,40 @@ std::vector<PlotPane> motorPanes(const CompiledMechanism& m, const MotorDuty& d,
              u.torqueSymbol,
              {{{name + " motor torque", u.torqueSymbol, scaled(d.torque, u.torquePerNewtonMetre)}, kDriverPen}},
              {}}};
+}
+
+PlotPane speedPane(const CompiledMechanism& m, const CycleResult& r, const FoundMotion& found)
+{
+    const QString name = qs(m.drivers[found.driver].name);
+    std::vector<double> speed;
+    speed.reserve(r.steps.size());
+    for (const StepResult& s : r.steps) speed.push_back(rpm(s.driveRate[std::size_t(found.driver)]));
+    return {QString("Speed of %1 (C_s = %2)").arg(name).arg(found.cycle.fluctuation, 0, 'f', 4),
+            "rpm",
+            {{{name + " speed", "rpm", std::move(speed)}, kDriverPen}},
+            {{"mean " + rpmText(found.cycle.meanSpeed), rpm(found.cycle.meanSpeed), kCharacteristicPen}},
+            false};
+}
+
+QString flywheelText(const CompiledMechanism& m, const FoundMotion& found)
+{
+    QString text = QString(
+                       "Speed of %1 found from its motor characteristic: mean %2, fluctuation C_s = %3; "
+                       "flywheel %4 kg·m².")
+                       .arg(qs(m.drivers[found.driver].name), rpmText(std::abs(found.cycle.meanSpeed)))
+                       .arg(found.cycle.fluctuation, 0, 'f', 4)
+                       .arg(found.flywheelInertia, 0, 'g', 4);
+    if (const auto& f = found.sizing)
+        text += QString(
+                    " Sized for C_s = %1 on the %2 shaft: energy estimate ΔE/(C_s·ω²) = %3 kg·m² (ΔE = %4 J), "
+                    "integrated %5 kg·m² reaching C_s = %6.")
+                    .arg(f->target, 0, 'g', 3)
+                    .arg(f->on == FlywheelShaft::Motor ? "motor" : "output")
+                    .arg(f->estimate, 0, 'g', 4)
+                    .arg(f->energySwing, 0, 'g', 4)
+                    .arg(f->integrated, 0, 'g', 4)
+                    .arg(f->achieved, 0, 'f', 4);
+    return text;
 }
 
 std::vector<PlotPane> cylinderPanes(const CompiledMechanism& m, const CylinderDuty& c, const RenderUnits& u)

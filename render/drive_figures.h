@@ -17,14 +17,24 @@ namespace clevis::ui {
 // The drive results of the solved cycle (driveResults) with, for every
 // motor behind a gearbox, its ratio study over ratioRangeAround(its ratio):
 // what the drive view and the report show.
+// `found` as for driveResults: the motion `r` was solved at, if a motor set it.
 DriveResults driveResultsWithStudies(const Mechanism& doc, const CompiledMechanism& m, const CycleResult& r,
-                                     const std::vector<bool>& unreliable);
+                                     const std::vector<bool>& unreliable,
+                                     const std::optional<FoundMotion>& found = std::nullopt);
 
 // Whether any driver has drive data to show: a gearbox or a cylinder.
 bool hasDriveFigures(const DriveResults& d);
 
 // The motor's torque at its shaft over the cycle.
 std::vector<PlotPane> motorPanes(const CompiledMechanism& m, const MotorDuty& d, const RenderUnits& u);
+
+// The found motion's speed at the output over the cycle (rpm), its time
+// average drawn across, the fluctuation C_s in the title.
+PlotPane speedPane(const CompiledMechanism& m, const CycleResult& r, const FoundMotion& found);
+
+// The flywheel of a found motion in words: its inertia, and where sizing was
+// asked for, the energy estimate, the integrated value and the C_s reached.
+QString flywheelText(const CompiledMechanism& m, const FoundMotion& found);
 
 // Pressure on the working side with the supply pressure across, and the flow into it (L/min).
 std::vector<PlotPane> cylinderPanes(const CompiledMechanism& m, const CylinderDuty& c, const RenderUnits& u);

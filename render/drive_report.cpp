@@ -31,7 +31,7 @@ void peakRows(std::vector<QStringList>& rows, const QString& name, const Peak& p
 }
 
 void motorSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis, const MotorDuty& d,
-                  const Driver* driver)
+                  const Driver* driver, const std::optional<FoundMotion>& found)
 {
     const auto& u = in.units;
     const Gearbox& g = d.gearbox;
@@ -77,6 +77,10 @@ void motorSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axi
         f.paragraph(QString("The inertia ratio is read against %1.").arg(qs(inertiaGuideText())),
                     *d.reflected->ratioToRotor > kInertiaRatioGuide ? palette::problem() : QColor(),
                     *d.reflected->ratioToRotor > kInertiaRatioGuide);
+    if (found && found->driver == d.driver) {
+        f.paragraph(flywheelText(in.mechanism, *found));
+        f.figure(CycleChart(speedPane(in.mechanism, in.result, *found), axis, in.result), f.width());
+    }
     for (PlotPane& pane : motorPanes(in.mechanism, d, u))
         f.figure(CycleChart(std::move(pane), axis, in.result), f.width());
     f.figure(XyChart(torqueSpeedContent(in.mechanism, d, driver ? driver->motor : std::nullopt, u)), f.width());
@@ -144,14 +148,18 @@ void cylinderSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& 
 void driveChapter(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis, const DriveResults& d)
 {
     f.paragraph(
-        "What the prescribed motion asks of each motor behind a gearbox and each cylinder. A motor turns i times as "
+        QString(d.found ? "What the motion its motor characteristic gives (found by integrating the equation of "
+                          "motion to the steady cycle) asks of each motor behind a gearbox, and what the prescribed "
+                          "motion asks of each cylinder."
+                        : "What the prescribed motion asks of each motor behind a gearbox and each cylinder.") +
+        " A motor turns i times as "
         "fast as its driver; its torque is the driver's divided by i·η while power flows to the mechanism and "
         "multiplied by η/i while it flows back, plus the torque that accelerates its rotor and the gearbox.");
     for (const Warning& w : d.warnings) f.paragraph(QString("Warning: %1").arg(qs(w.message)), palette::problem());
     for (const MotorDuty& motor : d.motors) {
         const Driver* driver =
             in.document ? findDriver(in.document->drivers, in.mechanism.drivers[motor.driver].name) : nullptr;
-        motorSection(f, in, axis, motor, driver);
+        motorSection(f, in, axis, motor, driver, d.found);
         for (const RatioStudy& s : d.studies)
             if (s.driver == motor.driver) studySection(f, in, s, motor.gearbox);
     }

@@ -30,6 +30,9 @@ struct PlotPane {
     QString unit;   // of every curve in the pane
     std::vector<PlotCurve> curves;
     std::vector<PlotLevel> levels;  // drawn by the report's charts (CycleChart)
+    // False: the value axis spans only the values (a speed varying by a few
+    // per cent about its mean), not down to zero.
+    bool fromZero = true;
 };
 
 // What the user chose to see of the joint reactions. The default shows every

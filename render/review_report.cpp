@@ -1,5 +1,7 @@
 #include "render/review_report.h"
 
+#include "core/file/file_units.h"
+#include "core/file/mechanism_file_format.h"
 #include "core/model/materials.h"
 #include "core/model/type_names.h"
 #include "core/results/bar_sizing.h"
@@ -94,8 +96,36 @@ QString massSource(const CompiledBody& b)
     return text;
 }
 
-QString motionText(const CompiledDriver& d)
+// The driver, if any, whose motion a motor characteristic gave, as described in the file.
+const Driver* motorDriven(const CompiledDriver& d, const ReviewReportInput& in)
 {
+    if (!in.found || !in.document || d.found.empty()) return nullptr;
+    const Driver* described = findDriver(in.document->drivers, d.name);
+    return described && described->motor ? described : nullptr;
+}
+
+// A driver whose motion was found is described by the motor that turns it.
+QString foundMotionText(const Driver& described, const FoundMotion& found, const RenderUnits& u)
+{
+    QString s = QString("%1 is driven by a motor characteristic: ").arg(qs(described.name));
+    if (const auto* line = std::get_if<MotorLine>(&*described.motor))
+        s += QString("stall torque %1, no-load speed %2 at the motor shaft")
+                 .arg(u.torque(line->stallTorque), formatQuantity(fromSi(FileUnit::Rpm, line->noLoadSpeed), "rpm"));
+    else s += QString("a table of %1 torques against speed").arg(std::get<MotorTable>(*described.motor).speed.size());
+    const bool onMotor = described.flywheel ? described.flywheel->on == FlywheelShaft::Motor
+                         : found.sizing     ? found.sizing->on == FlywheelShaft::Motor
+                                            : false;
+    s += QString(
+             "; flywheel %1 on the %2 shaft%3. Its speed is found by integrating the equation of motion to the "
+             "steady cycle (Drive chapter), not prescribed.")
+             .arg(formatQuantity(found.flywheelInertia, "kg·m²"), onMotor ? "motor" : "output",
+                  found.sizing ? " (sized)" : "");
+    return s;
+}
+
+QString motionText(const CompiledDriver& d, const ReviewReportInput& in)
+{
+    if (motorDriven(d, in)) return "driven by a motor characteristic (below)";
     const bool rotary = d.type == DriverType::Rotary;
     const auto pos = [&](double v) {
         return QString("%1 %2").arg(driveDisplayValue(d.type, v), 0, 'f', rotary ? 2 : 4).arg(driveDisplayUnit(d.type));
@@ -147,8 +177,10 @@ void inputsSection(PageFlow& f, const ReviewReportInput& in)
                            d.joint >= 0
                                ? qs(m.joints[d.joint].name)
                                : QString("%1 – %2").arg(qs(m.bodyName(d.ends[0].body)), qs(m.bodyName(d.ends[1].body))),
-                           motionText(d)});
+                           motionText(d, in)});
     f.table(drivers, {0.16, 0.1, 0.2, 0.54});
+    for (const auto& d : m.drivers)
+        if (const Driver* described = motorDriven(d, in)) f.paragraph(foundMotionText(*described, *in.found, u));
     f.subheading("Loads");
     std::vector<QStringList> loads{{"Load", "Kind", "On", "Value"}};
     for (const auto& l : m.forces)
@@ -396,7 +428,9 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
     painter.setRenderHint(QPainter::Antialiasing);
     // The drive is known from the mechanism as described, like the sizing.
     const std::optional<DriveResults> drive =
-        in.document ? std::optional(driveResultsWithStudies(*in.document, m, r, in.summary.unreliable)) : std::nullopt;
+        in.document ? std::optional(driveResultsWithStudies(*in.document, m, r, in.summary.unreliable,
+                                                            in.found ? std::optional(*in.found) : std::nullopt))
+                    : std::nullopt;
     const bool drives = drive && hasDriveFigures(*drive);
     const auto& sections = reviewReportSections(drives);
     const std::vector<CriticalPosition> critical = criticalPositions(m, in.summary);

@@ -15,6 +15,10 @@
 #include <functional>
 #include <vector>
 
+namespace clevis {
+struct FoundMotion;
+}
+
 namespace clevis::ui {
 
 struct ReviewReportInput {
@@ -27,6 +31,9 @@ struct ReviewReportInput {
     // tells which bodies are bars and their sections. None: the sizing
     // chapter says it cannot be drawn.
     const Mechanism* document = nullptr;
+    // The motion `result` was solved at when a motor characteristic set it
+    // (solveCycle); none when the motion is prescribed.
+    const FoundMotion* found = nullptr;
 };
 
 // The report's numbered section titles, in order (tests look for them);

@@ -221,10 +221,13 @@ struct Window {
 
 TEST(DriveView, ShowsTheOnlyMotorsThreeFiguresAndTheDrivesWarnings)
 {
-    Window w(pressWithMotor(false));
+    Mechanism m = sample("punch_press");
+    m.drivers[0].flywheel = Flywheel{0.2, FlywheelShaft::Motor};
+    Window w(m);
     ASSERT_GE(w.view->driver(), 0) << w.view->message().toStdString();
     EXPECT_EQ(w.view->figures().size(), 3u);
-    // The characteristic is read but the cycle is at the prescribed speed: the view says what driveResults says.
+    EXPECT_TRUE(w.view->motionText().isEmpty());
+    // A flywheel without a motor characteristic is not used: the view says what driveResults says.
     const DriveResults d =
         driveResults(w.doc.mechanism(), w.analysis->compiled(), w.analysis->result(), w.analysis->summary().unreliable);
     ASSERT_FALSE(d.warnings.empty());

@@ -83,6 +83,8 @@ const CycleResult& AnalysisState::result() const { return outcome_->result; }
 
 const CycleSummary& AnalysisState::summary() const { return outcome_->summary; }
 
+const std::optional<FoundMotion>& AnalysisState::found() const { return outcome_->found; }
+
 const SizingResult& AnalysisState::sizing() const { return outcome_->sizing; }
 
 QString AnalysisState::errorText() const { return outcome_->error; }

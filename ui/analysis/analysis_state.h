@@ -8,6 +8,7 @@
 #include "core/results/results.h"
 #include "core/solver/compiled_mechanism.h"
 #include "core/solver/mobility_check.h"
+#include "core/solver/motor_drive.h"
 
 #include <QObject>
 #include <QStringList>
@@ -35,6 +36,8 @@ public:
     const clevis::CompiledMechanism& compiled() const;  // valid when hasResult()
     const clevis::CycleResult& result() const;
     const clevis::CycleSummary& summary() const;
+    // The motion the result was solved at when a motor characteristic sets it; none when prescribed.
+    const std::optional<clevis::FoundMotion>& found() const;
     const clevis::SizingResult& sizing() const;  // every bar's and pin's stresses and utilisations
     QString errorText() const;  // empty when the last solve succeeded (ModelError/AnalysisError text otherwise)
     QStringList offendingItems() const;

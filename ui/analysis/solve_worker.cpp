@@ -4,6 +4,7 @@
 #include "core/model/model_error.h"
 #include "core/solver/analysis_error.h"
 #include "core/solver/cycle_sweep.h"
+#include "core/solver/motor_drive.h"
 #include "core/solver/step_solver.h"
 
 namespace clevis::ui {
@@ -50,10 +51,12 @@ SolveOutcome solveMechanism(const Mechanism& m, const std::function<bool()>& sti
         out.mobility = checkMobility(counted, StepSolver(counted).drawnPose());
         // When the count is wrong the sweep refuses at once, with the core's own words and culprits.
         if (!out.mobility->ok()) sweepCycle(counted);
-        out.compiled = compile(m);
         SweepOptions options;
         options.progress = [&](int, int) { return stillWanted(); };
-        out.result = sweepCycle(*out.compiled, options);
+        SolvedCycle solved = solveCycle(m, compile(m), options);
+        out.compiled = std::move(solved.m);
+        out.result = std::move(solved.r);
+        out.found = std::move(solved.found);
         if (!out.result.steps.empty()) {
             out.summary = summarize(*out.compiled, out.result);
             out.sizing = sizeParts(m, *out.compiled, out.result);

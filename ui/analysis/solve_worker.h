@@ -8,6 +8,7 @@
 #include "core/results/cycle_summary.h"
 #include "core/solver/compiled_mechanism.h"
 #include "core/solver/mobility_check.h"
+#include "core/solver/motor_drive.h"
 
 #include <QObject>
 #include <QStringList>
@@ -24,6 +25,7 @@ struct SolveOutcome {
     std::optional<CompiledMechanism> compiled;  // empty when the model does not compile
     std::optional<MobilityReport> mobility;     // degrees of freedom at the drawn pose
     CycleResult result;
+    std::optional<FoundMotion> found;  // the motion found for a driver with a motor characteristic
     CycleSummary summary;
     SizingResult sizing;        // stresses and utilisations of every bar and pin
     bool nothingDrawn = false;  // a blank drawing: not a fault, only nothing to solve
@@ -31,7 +33,8 @@ struct SolveOutcome {
     QStringList offendingItems;
 };
 
-// Runs the whole analysis of one mechanism: compile, mobility, sweep, summary, sizing.
+// Runs the whole analysis of one mechanism: compile, mobility, the cycle (at
+// the prescribed motion, or the one a motor characteristic gives), summary, sizing.
 SolveOutcome solveMechanism(const Mechanism& m, const std::function<bool()>& stillWanted);
 
 class SolveWorker : public QObject {

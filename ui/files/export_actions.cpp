@@ -163,7 +163,8 @@ void ExportActions::exportReport()
                                analysis_->summary(),
                                source,
                                renderUnits(DisplayUnits::instance()),
-                               analysis_->busy() ? nullptr : &doc_->mechanism()};
+                               analysis_->busy() ? nullptr : &doc_->mechanism(),
+                               analysis_->found() ? &*analysis_->found() : nullptr};
     QString error;
     const bool ok = writeReviewReport(in, path, &error, [&](int done, int total) {
         progress.setMaximum(total);

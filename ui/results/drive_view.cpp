@@ -38,6 +38,7 @@ DriveView::DriveView(MechanismDocument* doc, AnalysisState* analysis, QWidget* p
     , analysis_(analysis)
     , choice_(new QComboBox(this))
     , warnings_(new QLabel(this))
+    , motion_(new QLabel(this))
     , scroll_(new QScrollArea(this))
     , canvas_(new QWidget)
 {
@@ -45,6 +46,9 @@ DriveView::DriveView(MechanismDocument* doc, AnalysisState* analysis, QWidget* p
     choice_->setObjectName("driveChoice");
     choice_->setToolTip(tr("Whose drive: every driver with a gearbox or a cylinder"));
     choice_->setSizeAdjustPolicy(QComboBox::AdjustToContents);  // the driver's whole name and kind
+    motion_->setObjectName("driveMotion");
+    motion_->setWordWrap(true);
+    motion_->setTextInteractionFlags(Qt::TextSelectableByMouse);
     warnings_->setObjectName("driveWarnings");
     warnings_->setWordWrap(true);
     warnings_->setTextInteractionFlags(Qt::TextSelectableByMouse);
@@ -64,6 +68,7 @@ DriveView::DriveView(MechanismDocument* doc, AnalysisState* analysis, QWidget* p
     layout->setContentsMargins(2, 2, 2, 2);
     layout->setSpacing(2);
     layout->addLayout(top);
+    layout->addWidget(motion_);
     layout->addWidget(warnings_);
     layout->addWidget(scroll_, 1);
     connect(analysis_, &AnalysisState::resultChanged, this, &DriveView::solved);
@@ -83,6 +88,8 @@ std::vector<const Figure*> DriveView::figures() const
 
 QString DriveView::warningText() const { return warnings_->text(); }
 
+QString DriveView::motionText() const { return motion_->text(); }
+
 // The drive is worked out from the mechanism the result was solved for: while
 // an edit is being solved the document is newer, and its result follows.
 void DriveView::solved()
@@ -91,7 +98,8 @@ void DriveView::solved()
     drive_.reset();
     if (analysis_->hasResult()) {
         const auto& m = analysis_->compiled();
-        drive_ = driveResultsWithStudies(doc_->mechanism(), m, analysis_->result(), analysis_->summary().unreliable);
+        drive_ = driveResultsWithStudies(doc_->mechanism(), m, analysis_->result(), analysis_->summary().unreliable,
+                                         analysis_->found());
     }
     const QString kept = choice_->currentText();
     choices_.clear();
@@ -139,6 +147,10 @@ void DriveView::showDriver()
         for (const Warning& w : drive_->warnings) said << qs(w.message);
     warnings_->setText(said.join('\n'));
     warnings_->setVisible(!said.isEmpty() && driver_ >= 0);
+    const auto& found = analysis_->found();
+    const bool moving = drive_ && found && found->driver == driver_;
+    motion_->setText(moving ? flywheelText(analysis_->compiled(), *found) : QString());
+    motion_->setVisible(moving);
     layOutFigures();
 }
 
@@ -155,7 +167,9 @@ void DriveView::layOutFigures()
         const RenderUnits u = renderUnits(DisplayUnits::instance());
         const double scale = std::max(1.0, kTextShare * QFontInfo(font()).pixelSize() / kChartText);
         const bool rotary = m.drivers[driver_].type == DriverType::Rotary;
-        const int count = rotary ? 3 : 2;
+        const auto& found = analysis_->found();
+        const bool moving = found && found->driver == driver_;
+        const int count = rotary ? 3 + int(moving) : 2;
         const int across = std::clamp((width + kGap) / (kLeastFigureWidth + kGap), 1, count);
         const double column = double(width - (across - 1) * kGap) / across;
         const double logical = column / scale;
@@ -166,6 +180,7 @@ void DriveView::layOutFigures()
             const Driver* described = findDriver(doc_->mechanism().drivers, m.drivers[driver_].name);
             figures_.push_back(std::make_unique<XyChart>(
                 torqueSpeedContent(m, *motor, described ? described->motor : std::nullopt, u), logical));
+            if (moving) figures_.push_back(std::make_unique<CycleChart>(speedPane(m, r, *found), axis, r, logical));
             for (PlotPane& pane : motorPanes(m, *motor, u))
                 figures_.push_back(std::make_unique<CycleChart>(std::move(pane), axis, r, logical));
             for (const RatioStudy& s : drive_->studies)

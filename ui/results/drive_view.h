@@ -39,6 +39,7 @@ public:
     // The figures on show, in their order on screen.
     std::vector<const Figure*> figures() const;
     QString warningText() const;
+    QString motionText() const;  // the found motion and flywheel in words; empty at a prescribed speed
 
 protected:
     bool eventFilter(QObject* watched, QEvent* event) override;
@@ -53,6 +54,7 @@ private:
     AnalysisState* analysis_;
     QComboBox* choice_;
     QLabel* warnings_;
+    QLabel* motion_;
     QScrollArea* scroll_;
     QWidget* canvas_;
     std::optional<DriveResults> drive_;
