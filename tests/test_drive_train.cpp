@@ -285,6 +285,23 @@ TEST(DriveTrain, MotorCharacteristicIsSaidToBeUnusedNotIgnored)
     EXPECT_NE(x.drive.warnings[0].message.find("motor characteristic"), std::string::npos);
 }
 
+// A motor with no gearbox turns the joint itself: its shaft is the output,
+// so its torque is the driver's effort and its speed the driver's rate (the
+// gear-train relations above at i = 1, η = 1).
+TEST(DriveTrain, AMotorWithoutAGearboxDrivesDirectly)
+{
+    Mechanism doc = bar(2.0, 0.3, 0.01, ConstantSpeed{3.0, 0.0}, Vec2(0, -kG));
+    doc.drivers[0].motor = MotorLine{50.0, 150.0};
+    const DriveRun x = run(doc);
+    ASSERT_EQ(x.drive.motors.size(), 1u);
+    const MotorDuty& d = x.drive.motors[0];
+    EXPECT_EQ(d.gearbox, Gearbox{});
+    for (std::size_t i = 0; i < x.r.steps.size(); ++i) {
+        EXPECT_NEAR(d.torque[i], x.r.steps[i].effort[0], 1e-12 * (1.0 + std::abs(x.r.steps[i].effort[0])));
+        EXPECT_NEAR(d.speed[i], 3.0, 1e-12);
+    }
+}
+
 // The summary and step keys the issue fixes (docs/results-format.md).
 TEST(DriveTrain, JsonCarriesTheDriveKeys)
 {

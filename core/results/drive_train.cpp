@@ -193,14 +193,16 @@ DriveResults driveResults(const Mechanism& doc, const CompiledMechanism& m, cons
     for (std::size_t d = 0; d < m.drivers.size(); ++d) {
         const Driver* driver = findDriver(doc.drivers, m.drivers[d].name);
         if (!driver) continue;
-        if (driver->gearbox) {
+        // A motor with no gearbox drives the joint directly: ratio 1, no losses.
+        if (driver->gearbox || driver->motor) {
+            const Gearbox gearbox = driver->gearbox.value_or(Gearbox{});
             std::optional<Flywheel> flywheel = driver->flywheel;
             if (found && found->driver == int(d)) {
                 if (!flywheel) flywheel = Flywheel{};
                 flywheel->inertia = found->flywheelInertia;
             }
-            out.motors.push_back(motorDuty(m, r, steps, int(d), *driver->gearbox, flywheel));
-            out.motors.back().reflected = reflectedInertia(m, r, unreliable, int(d), *driver->gearbox);
+            out.motors.push_back(motorDuty(m, r, steps, int(d), gearbox, flywheel));
+            out.motors.back().reflected = reflectedInertia(m, r, unreliable, int(d), gearbox);
         }
         if (driver->cylinder) {
             out.cylinders.push_back(cylinderDuty(r, steps, int(d), *driver->cylinder));

@@ -44,7 +44,7 @@ DriveView::DriveView(MechanismDocument* doc, AnalysisState* analysis, QWidget* p
 {
     setObjectName("driveView");
     choice_->setObjectName("driveChoice");
-    choice_->setToolTip(tr("Whose drive: every driver with a gearbox or a cylinder"));
+    choice_->setToolTip(tr("Whose drive: every driver with a gearbox, a motor characteristic or a cylinder"));
     choice_->setSizeAdjustPolicy(QComboBox::AdjustToContents);  // the driver's whole name and kind
     motion_->setObjectName("driveMotion");
     motion_->setWordWrap(true);
@@ -112,9 +112,10 @@ void DriveView::solved()
             for (const CylinderDuty& c : drive_->cylinders) choices_.push_back(c.driver);
             std::sort(choices_.begin(), choices_.end());
             for (const int d : choices_)
-                choice_->addItem(m.drivers[d].type == DriverType::Rotary
+                choice_->addItem(m.drivers[d].type == DriverType::Linear ? tr("%1: cylinder").arg(qs(m.drivers[d].name))
+                                 : findDriver(doc_->mechanism().drivers, m.drivers[d].name)->gearbox
                                      ? tr("%1: motor through a gearbox").arg(qs(m.drivers[d].name))
-                                     : tr("%1: cylinder").arg(qs(m.drivers[d].name)));
+                                     : tr("%1: motor").arg(qs(m.drivers[d].name)));
         }
         choice_->setCurrentIndex(std::max(0, choice_->findText(kept)));
     }
@@ -139,8 +140,8 @@ void DriveView::showDriver()
     else if (!drive_) message_ = tr("No solved cycle: %1").arg(analysis_->errorText());
     else if (choices_.empty())
         message_ =
-            tr("No driver has a gearbox or a cylinder: give a motor one in its properties (Gearbox and "
-               "motor), or a linear drive a cylinder, to see what it must give.");
+            tr("No driver has a gearbox, a motor characteristic or a cylinder: give a motor one in its "
+               "properties (Gearbox and motor), or a linear drive a cylinder, to see what it must give.");
     else driver_ = choices_[std::size_t(std::clamp(choice_->currentIndex(), 0, int(choices_.size()) - 1))];
     QStringList said;
     if (drive_)
