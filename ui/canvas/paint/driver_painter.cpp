@@ -14,7 +14,11 @@ namespace {
 QString motionLabel(const Driver& d)
 {
     if (const auto* c = std::get_if<ConstantSpeed>(&d.motion)) {
-        if (d.type == DriverType::Rotary) return QStringLiteral("%1 rpm").arg(c->speed * 60 / (2 * kPi), 0, 'g', 4);
+        // With a motor characteristic the speed is found, not set: the
+        // file's speed is only what is expected of it.
+        if (d.type == DriverType::Rotary)
+            return (d.motor ? QStringLiteral("motor, about %1 rpm") : QStringLiteral("%1 rpm"))
+                .arg(c->speed * 60 / (2 * kPi), 0, 'g', 4);
         return DisplayUnits::instance().formatLength(c->speed) + QStringLiteral("/s");
     }
     if (std::holds_alternative<Rise>(d.motion)) return QStringLiteral("cam law");
