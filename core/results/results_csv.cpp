@@ -100,7 +100,10 @@ std::string resultsCsvText(const CompiledMechanism& m, const CycleResult& r, con
     std::vector<std::string> h = header(m, r);
     if (drive)
         for (auto& column : driveHeader(m, *drive)) h.push_back(std::move(column));
-    for (std::size_t i = 0; i < h.size(); ++i) text += (i ? "," : "") + csvField(h[i]);
+    for (std::size_t i = 0; i < h.size(); ++i) {
+        if (i) text += ',';
+        text += csvField(h[i]);
+    }
     text += '\n';
     text.reserve(text.size() * (r.steps.size() + 1));
     std::vector<double> row, extra;
