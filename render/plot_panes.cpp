@@ -12,7 +12,7 @@ void addPane(std::vector<PlotPane>& panes, const QString& title, std::vector<Plo
 {
     if (curves.empty()) return;
     const QString unit = curves.front().series.unit;
-    panes.push_back({title, unit, std::move(curves)});
+    panes.push_back({title, unit, std::move(curves), {}});
 }
 
 std::vector<PlotCurve> reactionCurves(const CompiledMechanism& m, const CycleResult& r, const RenderUnits& u,
