@@ -136,6 +136,7 @@ void FormBuilder::text(const QString& key, const QString& label, const QString& 
     auto* edit = new QLineEdit(value);
     edit->setObjectName(key);
     fitWidth(edit, value.size() > 12 ? value.left(24) : QStringLiteral("Wwwwwwwwwwww"));
+    edit->setCursorPosition(0);  // a name longer than the field shows its start
     form_->addRow(label, edit);
     QObject::connect(edit, &QLineEdit::editingFinished, edit, [=, doc = doc_, refused = refused_] {
         const QString typed = edit->text().trimmed();
