@@ -5,15 +5,18 @@
 // the report describes the driver by its motor and draws the speed.
 #include "core/file/file_units.h"
 #include "core/file/mechanism_file.h"
+#include "core/solver/motor_drive.h"
 #include "render/drive_figures.h"
 #include "render/review_report.h"
 #include "tests/cli_runner.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/analysis/solve_worker.h"
 #include "ui/document/mechanism_document.h"
+#include "ui/results/drive_scrubber.h"
 #include "ui/results/drive_view.h"
 
 #include <QCoreApplication>
+#include <QDoubleSpinBox>
 #include <QProcess>
 #include <QTemporaryDir>
 
@@ -110,6 +113,49 @@ TEST(FoundMotionView, TheSpeedPaneAndTheFlywheelFiguresAreShown)
     const std::size_t k = analysis.result().steps.size() / 3;
     EXPECT_DOUBLE_EQ(pane.curves[0].series.values[k],
                      fromSi(FileUnit::Rpm, analysis.result().steps[k].driveRate[std::size_t(f.driver)]));
+}
+
+// A position typed between two steps is solved there at the found motion, not
+// at the prescribed one: the step added matches the one a finer cycle
+// (720 steps, so that 100.5° is one of them) finds at the same position, to
+// the precision with which the found motion is interpolated between its samples.
+TEST(FoundMotionView, APositionTypedBetweenStepsIsSolvedAtTheFoundMotion)
+{
+    MechanismDocument doc;
+    doc.reset(press(), {});
+    AnalysisState analysis(&doc);
+    DriveScrubber scrubber(&analysis);
+    analysis.waitForIdle();
+    QCoreApplication::processEvents();
+    ASSERT_TRUE(analysis.found().has_value());
+    const int d = analysis.found()->driver;
+    const std::size_t before = analysis.result().steps.size();
+    ASSERT_EQ(before, 361u);
+    const double start = analysis.result().steps.front().drivePosition[std::size_t(d)];
+    auto* typed = scrubber.findChild<QDoubleSpinBox*>("scrubPosition");
+    ASSERT_NE(typed, nullptr);
+    typed->setValue(100.5);
+    QCoreApplication::processEvents();
+    ASSERT_EQ(analysis.result().steps.size(), before + 1) << "no step added at the typed position";
+    const StepResult& at = analysis.result().steps[std::size_t(analysis.currentStep())];
+    EXPECT_NEAR(std::remainder(at.drivePosition[std::size_t(d)] - start - 100.5 * kPi / 180.0, 2 * kPi), 0.0, 1e-9);
+
+    const Mechanism m = press();
+    const SolvedCycle fine = solveCycle(m, compile(m), SweepOptions{.steps = 720});
+    ASSERT_TRUE(fine.found.has_value());
+    const StepResult& ref = fine.r.steps[201];
+    ASSERT_NEAR(std::remainder(ref.drivePosition[std::size_t(d)] - start - 100.5 * kPi / 180.0, 2 * kPi), 0.0, 1e-9);
+    EXPECT_NEAR(at.t, ref.t, 1e-6 * fine.r.steps.back().t);
+    EXPECT_NEAR(at.driveRate[std::size_t(d)], ref.driveRate[std::size_t(d)],
+                1e-6 * std::abs(ref.driveRate[std::size_t(d)]));
+    double largest = 0.0;
+    for (const Reaction& j : ref.joints) largest = std::max(largest, j.force.norm());
+    ASSERT_EQ(at.joints.size(), ref.joints.size());
+    for (std::size_t j = 0; j < ref.joints.size(); ++j)
+        EXPECT_LT((at.joints[j].force - ref.joints[j].force).norm(), 1e-6 * largest) << "joint " << j;
+    // The prescribed speed would not do: the found motion is slower or faster than the mean there.
+    const double prescribed = std::get<ConstantSpeed>(analysis.compiled().drivers[std::size_t(d)].motion).speed;
+    EXPECT_GT(std::abs(at.driveRate[std::size_t(d)] - prescribed), 1e-4 * std::abs(prescribed));
 }
 
 TEST(FoundMotionReport, TheDriverIsDescribedByItsMotorAndTheSpeedIsDrawn)
