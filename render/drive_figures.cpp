@@ -135,7 +135,9 @@ XyChartContent ratioStudyContent(const CompiledMechanism& m, const RatioStudy& s
                                  const RenderUnits& u)
 {
     XyChartContent c;
-    c.title = QString("Gear ratio study for %1").arg(qs(m.drivers[s.driver].name));
+    c.title = QString(m.drivers[std::size_t(s.driver)].found.empty() ? "Gear ratio study for %1"
+                                                                     : "Gear ratio study for %1 (at the found motion)")
+                  .arg(qs(m.drivers[s.driver].name));
     c.xTitle = "gear ratio, motor turns per output turn (log scale)";
     c.yTitle = QString("motor torque (%1)").arg(u.torqueSymbol);
     c.logX = true;

@@ -94,12 +94,13 @@ void studySection(PageFlow& f, const ReviewReportInput& in, const RatioStudy& s,
     f.subheading(QString("Gear ratio study for %1").arg(qs(in.mechanism.drivers[s.driver].name)));
     f.paragraph(QString("The RMS and peak torque the motor needs at %1 gear ratios from %2 to %3 (a quarter to four "
                         "times the gearbox's %4, spaced evenly on a log scale), with the gearbox's efficiency and "
-                        "inertias at each and the same motion at the output. A larger ratio divides the load "
-                        "torque but multiplies the torque that accelerates the rotor and gearbox.")
+                        "inertias at each and %5. A larger ratio divides the load torque but multiplies the "
+                        "torque that accelerates the rotor and gearbox.")
                     .arg(s.points.size())
                     .arg(s.points.empty() ? 0.0 : s.points.front().ratio, 0, 'g', 4)
                     .arg(s.points.empty() ? 0.0 : s.points.back().ratio, 0, 'g', 4)
-                    .arg(g.ratio, 0, 'g', 6));
+                    .arg(g.ratio, 0, 'g', 6)
+                    .arg(qs(ratioStudyMotionText(in.mechanism, s))));
     f.figure(chart, f.width());
     std::vector<QStringList> rows{{"Ratio", "RMS motor torque", "Peak motor torque", ""}};
     for (std::size_t k = 0; k < s.points.size(); ++k) {

@@ -10,6 +10,7 @@
 #include "core/results/results_json.h"
 #include "core/solver/compiled_mechanism.h"
 #include "core/solver/cycle_sweep.h"
+#include "core/solver/motor_drive.h"
 #include "tests/mechanism_builders.h"
 #include "tests/python_check.h"
 
@@ -207,6 +208,25 @@ TEST(RatioStudy, FindsTheInertiaMatchingRatioWithinTheGridSpacing)
         EXPECT_NEAR(p.torquePeak.value, duty.torquePeak.value, 1e-12 * std::abs(duty.torquePeak.value));
         EXPECT_EQ(p.torquePeak.step, duty.torquePeak.step);
     }
+}
+
+// The study holds the output's motion fixed: the prescribed one says so
+// plainly; one a motor characteristic sets is named as found at the
+// gearbox's own ratio, since at another ratio the motor would give another speed.
+TEST(RatioStudy, SaysWhichMotionItHoldsFixed)
+{
+    const Gearbox g{10.0, 0.9, 2e-4, 0.0};
+    const Mechanism prescribed = withGearbox(bar(2.0, 0.3, 0.01, ConstantSpeed{3.0, 0.0}, Vec2(0, -kG)), g);
+    const DriveRun x = run(prescribed);
+    const RatioStudy s = ratioStudy(x.m, x.r, x.s.unreliable, 0, g, ratioRangeAround(g.ratio));
+    EXPECT_EQ(ratioStudyMotionText(x.m, s), "the same motion at the output");
+
+    const Mechanism press = loadMechanismFile(std::string(CLEVIS_SAMPLES_DIR) + "/flywheel_press.json").mechanism;
+    const SolvedCycle found = solveCycle(press, compile(press));
+    ASSERT_TRUE(found.found.has_value());
+    const RatioStudy f = ratioStudy(found.m, found.r, std::vector<bool>(found.r.steps.size(), false),
+                                    found.found->driver, Gearbox{20.0, 0.9, 0.0, 0.0}, {5.0, 40.0, 3});
+    EXPECT_NE(ratioStudyMotionText(found.m, f).find("found at the gearbox's own ratio"), std::string::npos);
 }
 
 // A cylinder lifting a mass up a vertical slider at constant speed, then

@@ -101,13 +101,15 @@ std::string foundText(const CompiledMechanism& m, const FoundMotion& f)
                        " as its motor turns it (the equation of motion integrated turn after turn to the steady "
                        "cycle)\n";
     TextTable t({Align::Left, Align::Right, Align::Left});
-    t.addRow({"Mean speed (one turn over its period)", rpm(std::abs(c.meanSpeed)),
-              "period " + quantity(c.period, "s")});
+    t.addRow(
+        {"Mean speed (one turn over its period)", rpm(std::abs(c.meanSpeed)), "period " + quantity(c.period, "s")});
     t.addRow({"Highest speed", rpm(c.speedMax), "at " + formatDrivePosition(d, c.maxAt)});
     t.addRow({"Lowest speed", rpm(c.speedMin), "at " + formatDrivePosition(d, c.minAt)});
     t.addRow({"Speed fluctuation (max − min)/mean", significant(c.fluctuation), ""});
     t.addRow({"Flywheel", quantity(f.flywheelInertia, "kg·m²"),
-              f.sizing ? std::string("sized, below") : f.flywheelInertia > 0.0 ? "as given" : "none"});
+              f.sizing                  ? std::string("sized, below")
+              : f.flywheelInertia > 0.0 ? "as given"
+                                        : "none"});
     text += t.render();
     text += "  Steady after " + std::to_string(c.turns) +
             " turns (a turn ends within 1e-10 of the squared speed it started with). Every figure of this\n"
@@ -137,7 +139,7 @@ std::string studyText(const CompiledMechanism& m, const RatioStudy& s)
                   k == s.best ? "<- least RMS torque" : ""});
     }
     std::string text = "\nGear ratio study for " + m.drivers[s.driver].name +
-                       " (the gearbox's efficiency and inertias at each ratio; the same motion at the output)\n" +
+                       " (the gearbox's efficiency and inertias at each ratio; " + ratioStudyMotionText(m, s) + ")\n" +
                        t.render();
     if (s.best == 0 || s.best + 1 == s.points.size())
         text += "  The least RMS torque is at an end of the range: the best ratio may lie beyond it.\n";

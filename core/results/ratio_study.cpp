@@ -20,6 +20,13 @@ std::vector<double> studyRatios(const RatioRange& range)
 
 RatioRange ratioRangeAround(double ratio) { return {ratio / 4.0, ratio * 4.0, 41}; }
 
+std::string ratioStudyMotionText(const CompiledMechanism& m, const RatioStudy& s)
+{
+    if (m.drivers[std::size_t(s.driver)].found.empty()) return "the same motion at the output";
+    return "the motion at the output found at the gearbox's own ratio; at another ratio the motor would turn the "
+           "mechanism at another speed, which the study does not follow";
+}
+
 namespace {
 
 // T_m at step k is a_k/i + b_k·i (motorTorque): a_k = T/η while power flows

@@ -6,6 +6,7 @@
 
 #include "core/results/cycle_summary.h"
 
+#include <string>
 #include <vector>
 
 namespace clevis {
@@ -39,5 +40,11 @@ RatioRange ratioRangeAround(double ratio);
 // `g` supplies the efficiency and inertias; its ratio is replaced by each of the range's.
 RatioStudy ratioStudy(const CompiledMechanism& m, const CycleResult& r, const std::vector<bool>& unreliable, int driver,
                       const Gearbox& g, const RatioRange& range);
+
+// Which motion at the output the study holds fixed, in words: the prescribed
+// one, or, where a motor characteristic sets the motion, the one found at
+// the gearbox's own ratio (another ratio would change the speed the motor
+// gives; following it would need the motion found again at every ratio).
+std::string ratioStudyMotionText(const CompiledMechanism& m, const RatioStudy& s);
 
 }  // namespace clevis
