@@ -7,6 +7,7 @@
 // exactly when a driver has a gearbox or a cylinder.
 #include "core/file/file_units.h"
 #include "core/file/mechanism_file.h"
+#include "core/solver/motor_drive.h"
 #include "render/cycle_axis.h"
 #include "render/cycle_chart.h"
 #include "render/drive_figures.h"
@@ -28,6 +29,7 @@
 
 #include <cmath>
 #include <memory>
+#include <optional>
 
 using namespace clevis;
 using namespace clevis::ui;
@@ -64,12 +66,29 @@ Drawn draw(const Figure& figure, const QString& title)
     return {title, figure.size(), device.engine.texts};
 }
 
-// Every drive figure of a solved mechanism, built at `width`.
-std::vector<Drawn> driveFigures(const Solved& s, double width, const RenderUnits& u = {})
+// A mechanism at the motion its motor characteristic gives.
+struct Found {
+    Solved solved;
+    std::optional<FoundMotion> found;
+};
+
+Found solveFound(const Mechanism& doc)
+{
+    SolvedCycle c = solveCycle(doc, compile(doc));
+    CycleSummary s = summarize(c.m, c.r);
+    BarList bars = findBars(doc, c.m);
+    return {{doc, std::move(c.m), std::move(c.r), std::move(s), std::move(bars)}, std::move(c.found)};
+}
+
+// Every drive figure of a solved mechanism, built at `width`; with a found
+// motion, the speed over the cycle too.
+std::vector<Drawn> driveFigures(const Solved& s, double width, const RenderUnits& u = {},
+                                const std::optional<FoundMotion>& found = std::nullopt)
 {
     std::vector<Drawn> out;
-    const DriveResults d = driveResultsWithStudies(s.doc, s.m, s.r, s.s.unreliable);
+    const DriveResults d = driveResultsWithStudies(s.doc, s.m, s.r, s.s.unreliable, found);
     const CycleAxis axis = cycleAxis(s.m, s.r);
+    if (found) out.push_back(draw(CycleChart(speedPane(s.m, s.r, *found), axis, s.r, width), "speed"));
     for (const MotorDuty& motor : d.motors) {
         out.push_back(draw(XyChart(torqueSpeedContent(s.m, motor, s.doc.drivers[0].motor, u), width), "torque-speed"));
         for (PlotPane& pane : motorPanes(s.m, motor, u))
@@ -94,11 +113,15 @@ TEST(DriveFigures, NoTwoTextsOverlapAndNoneLeavesTheFigureAtAnyWidth)
     const std::vector<std::pair<const char*, Mechanism>> cases{{"press", sample("punch_press")},
                                                                {"press with a motor line", pressWithMotor(false)},
                                                                {"press with a motor table", pressWithMotor(true)},
-                                                               {"tipping bed", sample("tipping_bed")}};
+                                                               {"tipping bed", sample("tipping_bed")},
+                                                               {"flywheel press at its found motion", {}}};
+    const Found press = solveFound(sample("flywheel_press"));
+    ASSERT_TRUE(press.found.has_value());
     for (const auto& [name, doc] : cases) {
-        const Solved s = test::solve(doc);
+        const bool found = std::string(name) == "flywheel press at its found motion";
+        const Solved s = found ? press.solved : test::solve(doc);
         for (const double width : {515.0, 400.0, 300.0, 240.0}) {
-            const std::vector<Drawn> figures = driveFigures(s, width);
+            const std::vector<Drawn> figures = driveFigures(s, width, {}, found ? press.found : std::nullopt);
             ASSERT_GE(figures.size(), 2u) << name;
             for (const Drawn& f : figures) {
                 const auto& t = f.texts;
