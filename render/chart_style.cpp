@@ -61,6 +61,8 @@ QFont chartFont(int pixels, bool bold)
     return f;
 }
 
+int yTickCount(double plotHeight) { return std::clamp(int(plotHeight / 30), 3, 5); }
+
 QString tickText(double v, double spacing)
 {
     const int decimals = std::clamp(int(-std::floor(std::log10(spacing))), 0, 6);

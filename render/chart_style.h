@@ -17,12 +17,17 @@ namespace clevis::ui {
 inline constexpr double kChartPlotLeft = 58, kChartPlotRight = 16, kChartPlotTop = 26, kChartPlotHeight = 152;
 inline constexpr double kChartBelowPlot = 38;  // tick numbers clear of the lowest y number, then the axis title
 inline constexpr double kChartBottomPad = 6;
-inline constexpr double kChartPeakMark = 3.2;  // the radius of a peak's circle
+inline constexpr double kChartPeakMark = 3.2;        // the radius of a peak's circle
+inline constexpr double kChartLeastPlotHeight = 70;  // a plot squeezed into a short window: three y ticks still apart
 
 QFont chartFont(int pixels, bool bold = false);
 
 // Round tick positions covering [lo, hi], about `count` of them.
 std::vector<double> niceTicks(double lo, double hi, int count);
+
+// About as many y ticks as a plot of that height holds with room between
+// their numbers: five at the full height, down to three.
+int yTickCount(double plotHeight);
 
 // A tick's number to the decimals its spacing needs ("0" rather than "-0").
 QString tickText(double v, double spacing);

@@ -12,13 +12,13 @@
 
 namespace clevis::ui {
 
-CycleChart::CycleChart(PlotPane pane, CycleAxis axis, const CycleResult& r, double width)
+CycleChart::CycleChart(PlotPane pane, CycleAxis axis, const CycleResult& r, double width, double plotHeight)
     : pane_(std::move(pane))
     , axis_(std::move(axis))
     , unreliable_(unreliableSteps(r))
     , singular_(unreliableRuns(unreliable_))
-    , size_(width, kChartPlotTop + kChartPlotHeight + kChartBelowPlot + kChartBottomPad)
-    , plot_(kChartPlotLeft, kChartPlotTop, width - kChartPlotLeft - kChartPlotRight, kChartPlotHeight)
+    , size_(width, kChartPlotTop + plotHeight + kChartBelowPlot + kChartBottomPad)
+    , plot_(kChartPlotLeft, kChartPlotTop, width - kChartPlotLeft - kChartPlotRight, plotHeight)
 {
     if (!axis_.values.empty()) {
         reachEnd_ = axis_.values.back();
@@ -52,7 +52,8 @@ void CycleChart::paintAxes(QPainter& p, double xlo, double xhi, double ylo, doub
     const auto Y = [&](double y) { return plot_.bottom() - (y - ylo) / (yhi - ylo) * plot_.height(); };
     p.setFont(chartFont(10));
     // About one x tick per 55 units of width, so the numbers stay apart in a narrow chart.
-    const auto xt = niceTicks(xlo, xhi, std::clamp(int(plot_.width() / 55), 3, 8)), yt = niceTicks(ylo, yhi, 5);
+    const auto xt = niceTicks(xlo, xhi, std::clamp(int(plot_.width() / 55), 3, 8)),
+               yt = niceTicks(ylo, yhi, yTickCount(plot_.height()));
     const double xs = xt.size() > 1 ? xt[1] - xt[0] : 1, ys = yt.size() > 1 ? yt[1] - yt[0] : 1;
     for (const double t : xt) {
         p.setPen(QPen(palette::gridMinor(), 0.6));

@@ -15,8 +15,9 @@ namespace clevis::ui {
 
 class CycleChart final : public Figure {
 public:
-    // The height follows from the width: the plot, then as many legend rows as the curves need.
-    CycleChart(PlotPane pane, CycleAxis axis, const CycleResult& r, double width = 515);
+    // The height follows from the plot's and the legend's: as many rows as the curves need.
+    CycleChart(PlotPane pane, CycleAxis axis, const CycleResult& r, double width = 515,
+               double plotHeight = kChartPlotHeight);
 
     QSizeF size() const override { return size_; }
     void paint(QPainter& p, const QRectF& target) const override;

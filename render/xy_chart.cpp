@@ -25,10 +25,10 @@ std::vector<double> logTicks(double lo, double hi)
     return ticks;
 }
 
-XyChart::XyChart(XyChartContent content, double width)
+XyChart::XyChart(XyChartContent content, double width, double plotHeight)
     : content_(std::move(content))
-    , size_(width, kChartPlotTop + kChartPlotHeight + kChartBelowPlot + kChartBottomPad)
-    , plot_(kChartPlotLeft, kChartPlotTop, width - kChartPlotLeft - kChartPlotRight, kChartPlotHeight)
+    , size_(width, kChartPlotTop + plotHeight + kChartBelowPlot + kChartBottomPad)
+    , plot_(kChartPlotLeft, kChartPlotTop, width - kChartPlotLeft - kChartPlotRight, plotHeight)
 {
     // Linear axes take in zero, where torque and speed are read from; a
     // logarithmic one spans the points exactly.
@@ -59,7 +59,7 @@ XyChart::XyChart(XyChartContent content, double width)
     const double pad = 0.06 * (yhi - ylo);
     ylo_ = ylo - (ylo < 0 ? pad : 0);
     yhi_ = yhi + pad;
-    yTicks_ = niceTicks(ylo_, yhi_, 5);
+    yTicks_ = niceTicks(ylo_, yhi_, yTickCount(plot_.height()));
 
     QStringList labels;
     for (const XyCurve& c : content_.curves) {

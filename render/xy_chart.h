@@ -40,8 +40,8 @@ struct XyChartContent {
 
 class XyChart final : public Figure {
 public:
-    // The height follows from the width: the plot, then the legend's rows.
-    explicit XyChart(XyChartContent content, double width = 515);
+    // The height follows from the plot's and the legend's rows.
+    explicit XyChart(XyChartContent content, double width = 515, double plotHeight = kChartPlotHeight);
 
     QSizeF size() const override { return size_; }
     void paint(QPainter& p, const QRectF& target) const override;

@@ -8,6 +8,7 @@
 #include "core/file/file_units.h"
 #include "core/file/mechanism_file.h"
 #include "core/solver/motor_drive.h"
+#include "render/chart_style.h"
 #include "render/cycle_axis.h"
 #include "render/cycle_chart.h"
 #include "render/drive_figures.h"
@@ -83,22 +84,23 @@ Found solveFound(const Mechanism& doc)
 // Every drive figure of a solved mechanism, built at `width`; with a found
 // motion, the speed over the cycle too.
 std::vector<Drawn> driveFigures(const Solved& s, double width, const RenderUnits& u = {},
-                                const std::optional<FoundMotion>& found = std::nullopt)
+                                const std::optional<FoundMotion>& found = std::nullopt, double plot = kChartPlotHeight)
 {
     std::vector<Drawn> out;
     const DriveResults d = driveResultsWithStudies(s.doc, s.m, s.r, s.s.unreliable, found);
     const CycleAxis axis = cycleAxis(s.m, s.r);
-    if (found) out.push_back(draw(CycleChart(speedPane(s.m, s.r, *found), axis, s.r, width), "speed"));
+    if (found) out.push_back(draw(CycleChart(speedPane(s.m, s.r, *found), axis, s.r, width, plot), "speed"));
     for (const MotorDuty& motor : d.motors) {
-        out.push_back(draw(XyChart(torqueSpeedContent(s.m, motor, s.doc.drivers[0].motor, u), width), "torque-speed"));
+        out.push_back(
+            draw(XyChart(torqueSpeedContent(s.m, motor, s.doc.drivers[0].motor, u), width, plot), "torque-speed"));
         for (PlotPane& pane : motorPanes(s.m, motor, u))
-            out.push_back(draw(CycleChart(pane, axis, s.r, width), pane.title));
+            out.push_back(draw(CycleChart(pane, axis, s.r, width, plot), pane.title));
     }
     for (const RatioStudy& study : d.studies)
-        out.push_back(draw(XyChart(ratioStudyContent(s.m, study, d.motors[0].gearbox.ratio, u), width), "study"));
+        out.push_back(draw(XyChart(ratioStudyContent(s.m, study, d.motors[0].gearbox.ratio, u), width, plot), "study"));
     for (const CylinderDuty& c : d.cylinders)
         for (PlotPane& pane : cylinderPanes(s.m, c, u))
-            out.push_back(draw(CycleChart(pane, axis, s.r, width), pane.title));
+            out.push_back(draw(CycleChart(pane, axis, s.r, width, plot), pane.title));
     return out;
 }
 
@@ -108,7 +110,7 @@ bool overlap(const QRectF& a, const QRectF& b)
     return i.width() > 0.25 && i.height() > 0.25;
 }
 
-TEST(DriveFigures, NoTwoTextsOverlapAndNoneLeavesTheFigureAtAnyWidth)
+TEST(DriveFigures, NoTwoTextsOverlapAndNoneLeavesTheFigureAtAnyWidthOrHeight)
 {
     const std::vector<std::pair<const char*, Mechanism>> cases{{"press", sample("punch_press")},
                                                                {"press with a motor line", pressWithMotor(false)},
@@ -120,23 +122,25 @@ TEST(DriveFigures, NoTwoTextsOverlapAndNoneLeavesTheFigureAtAnyWidth)
     for (const auto& [name, doc] : cases) {
         const bool found = std::string(name) == "flywheel press at its found motion";
         const Solved s = found ? press.solved : test::solve(doc);
-        for (const double width : {515.0, 400.0, 300.0, 240.0}) {
-            const std::vector<Drawn> figures = driveFigures(s, width, {}, found ? press.found : std::nullopt);
-            ASSERT_GE(figures.size(), 2u) << name;
-            for (const Drawn& f : figures) {
-                const auto& t = f.texts;
-                ASSERT_GE(t.size(), 8u) << name << ", " << f.title.toStdString() << ": a title, ticks, a legend";
-                const QRectF inside = QRectF(QPointF(0, 0), f.size).adjusted(-0.5, -0.5, 0.5, 0.5);
-                for (std::size_t i = 0; i < t.size(); ++i) {
-                    EXPECT_TRUE(inside.contains(t[i].box)) << name << " at " << width << ", " << f.title.toStdString()
-                                                           << ": '" << t[i].text.toStdString() << "' leaves it";
-                    for (std::size_t j = i + 1; j < t.size(); ++j)
-                        EXPECT_FALSE(overlap(t[i].box, t[j].box))
-                            << name << " at " << width << ", " << f.title.toStdString() << ": '"
-                            << t[i].text.toStdString() << "' overlaps '" << t[j].text.toStdString() << "'";
+        for (const double width : {515.0, 400.0, 300.0, 240.0})
+            for (const double plot : {kChartPlotHeight, kChartLeastPlotHeight}) {
+                const std::vector<Drawn> figures = driveFigures(s, width, {}, found ? press.found : std::nullopt, plot);
+                ASSERT_GE(figures.size(), 2u) << name;
+                for (const Drawn& f : figures) {
+                    const auto& t = f.texts;
+                    ASSERT_GE(t.size(), 8u) << name << ", " << f.title.toStdString() << ": a title, ticks, a legend";
+                    const QRectF inside = QRectF(QPointF(0, 0), f.size).adjusted(-0.5, -0.5, 0.5, 0.5);
+                    for (std::size_t i = 0; i < t.size(); ++i) {
+                        EXPECT_TRUE(inside.contains(t[i].box))
+                            << name << " at " << width << " x " << plot << ", " << f.title.toStdString() << ": '"
+                            << t[i].text.toStdString() << "' leaves it";
+                        for (std::size_t j = i + 1; j < t.size(); ++j)
+                            EXPECT_FALSE(overlap(t[i].box, t[j].box))
+                                << name << " at " << width << " x " << plot << ", " << f.title.toStdString() << ": '"
+                                << t[i].text.toStdString() << "' overlaps '" << t[j].text.toStdString() << "'";
+                    }
                 }
             }
-        }
     }
 }
 

@@ -1,6 +1,7 @@
 #include "ui/results/drive_view.h"
 
 #include "core/file/mechanism_file_format.h"
+#include "render/chart_style.h"
 #include "render/cycle_axis.h"
 #include "render/cycle_chart.h"
 #include "render/drive_figures.h"
@@ -23,10 +24,11 @@
 namespace clevis::ui {
 namespace {
 
-constexpr int kLeastFigureWidth = 340;  // pixels: narrower, the tick numbers crowd
-constexpr int kGap = 8;                 // pixels between figures
-constexpr double kChartText = 10;       // the charts' own text size, logical units (chart_style.cpp)
-constexpr double kTextShare = 0.85;     // chart text against the window's font, as on the other charts
+constexpr int kLeastFigureWidth = 340;   // pixels: narrower, the tick numbers crowd
+constexpr int kNarrowFigureWidth = 250;  // pixels: the least, where height is short (drive figures are tested at 240)
+constexpr int kGap = 8;                  // pixels between figures
+constexpr double kChartText = 10;        // the charts' own text size, logical units (chart_style.cpp)
+constexpr double kTextShare = 0.85;      // chart text against the window's font, as on the other charts
 
 QString qs(const std::string& s) { return QString::fromStdString(s); }
 
@@ -156,60 +158,97 @@ void DriveView::showDriver()
 }
 
 // As many figures across as the width takes at kLeastFigureWidth each, built
-// at a logical width that sets their text at about the window's size.
+// at a logical width that sets their text at about the window's size. Where
+// the rows would not fit the pane's height (a laptop screen), the figures go
+// narrower, down to kNarrowFigureWidth, and their plots shorter, down to
+// kChartLeastPlotHeight, until they do; shorter still, the pane scrolls.
 void DriveView::layOutFigures()
 {
     figures_.clear();
     places_.clear();
     const int width = scroll_->viewport()->width();
-    if (driver_ >= 0 && drive_) {
-        const auto& m = analysis_->compiled();
-        const auto& r = analysis_->result();
-        const RenderUnits u = renderUnits(DisplayUnits::instance());
-        const double scale = std::max(1.0, kTextShare * QFontInfo(font()).pixelSize() / kChartText);
-        const bool rotary = m.drivers[driver_].type == DriverType::Rotary;
-        const auto& found = analysis_->found();
-        const bool moving = found && found->driver == driver_;
-        const int count = rotary ? 3 + int(moving) : 2;
-        const int across = std::clamp((width + kGap) / (kLeastFigureWidth + kGap), 1, count);
-        const double column = double(width - (across - 1) * kGap) / across;
-        const double logical = column / scale;
-        const CycleAxis axis = cycleAxis(m, r);
-        if (rotary) {
-            const auto motor = std::find_if(drive_->motors.begin(), drive_->motors.end(),
-                                            [&](const MotorDuty& d) { return d.driver == driver_; });
-            const Driver* described = findDriver(doc_->mechanism().drivers, m.drivers[driver_].name);
-            figures_.push_back(std::make_unique<XyChart>(
-                torqueSpeedContent(m, *motor, described ? described->motor : std::nullopt, u), logical));
-            if (moving) figures_.push_back(std::make_unique<CycleChart>(speedPane(m, r, *found), axis, r, logical));
-            for (PlotPane& pane : motorPanes(m, *motor, u))
-                figures_.push_back(std::make_unique<CycleChart>(std::move(pane), axis, r, logical));
-            for (const RatioStudy& s : drive_->studies)
-                if (s.driver == driver_)
-                    figures_.push_back(
-                        std::make_unique<XyChart>(ratioStudyContent(m, s, motor->gearbox.ratio, u), logical));
-        } else {
-            const auto cylinder = std::find_if(drive_->cylinders.begin(), drive_->cylinders.end(),
-                                               [&](const CylinderDuty& c) { return c.driver == driver_; });
-            for (PlotPane& pane : cylinderPanes(m, *cylinder, u))
-                figures_.push_back(std::make_unique<CycleChart>(std::move(pane), axis, r, logical));
-        }
-        double top = 0, rowHeight = 0;
-        for (std::size_t i = 0; i < figures_.size(); ++i) {
-            const int col = int(i) % across;
-            if (col == 0 && i > 0) {
-                top += rowHeight + kGap;
-                rowHeight = 0;
-            }
-            const QSizeF size = figures_[i]->size() * scale;
-            places_.push_back(QRectF(QPointF(col * (column + kGap), top), size));
-            rowHeight = std::max(rowHeight, size.height());
-        }
-        canvas_->resize(width, int(std::ceil(top + rowHeight)));
-    } else {
+    const std::vector<FigureMaker> makers = figureMakers();
+    if (makers.empty()) {
         canvas_->resize(width, scroll_->viewport()->height());
+        canvas_->update();
+        return;
+    }
+    const double scale = std::max(1.0, kTextShare * QFontInfo(font()).pixelSize() / kChartText);
+    const int height = scroll_->viewport()->height();
+    const auto across = [&](int least) { return std::clamp((width + kGap) / (least + kGap), 1, int(makers.size())); };
+    const auto build = [&](int columns, double plotHeight) {
+        figures_.clear();
+        const double logical = (double(width - (columns - 1) * kGap) / columns) / scale;
+        for (const FigureMaker& make : makers) figures_.push_back(make(logical, plotHeight));
+        return placeFigures(columns, width, scale);
+    };
+    if (build(across(kLeastFigureWidth), kChartPlotHeight) > height) {
+        const int narrow = across(kNarrowFigureWidth);
+        const int rows = (int(makers.size()) + narrow - 1) / narrow;
+        double besidePlot = 0;  // the tallest figure's height beyond its plot, logical units
+        for (const auto& f : figures_) besidePlot = std::max(besidePlot, f->size().height() - kChartPlotHeight);
+        const double plot = std::clamp((double(height + kGap) / rows - kGap) / scale - besidePlot - 1,
+                                       kChartLeastPlotHeight, kChartPlotHeight);
+        build(narrow, plot);
     }
     canvas_->update();
+}
+
+// The chosen driver's figures, each to be built at a logical width and plot height.
+std::vector<DriveView::FigureMaker> DriveView::figureMakers() const
+{
+    std::vector<FigureMaker> out;
+    if (driver_ < 0 || !drive_) return out;
+    const auto& m = analysis_->compiled();
+    const auto& r = analysis_->result();
+    const RenderUnits u = renderUnits(DisplayUnits::instance());
+    const CycleAxis axis = cycleAxis(m, r);
+    const auto cycleChart = [&](PlotPane pane) {
+        out.push_back([pane = std::move(pane), axis, &r](double width, double plot) {
+            return std::unique_ptr<Figure>(new CycleChart(pane, axis, r, width, plot));
+        });
+    };
+    const auto xyChart = [&](XyChartContent content) {
+        out.push_back([content = std::move(content)](double width, double plot) {
+            return std::unique_ptr<Figure>(new XyChart(content, width, plot));
+        });
+    };
+    if (m.drivers[driver_].type == DriverType::Rotary) {
+        const auto motor = std::find_if(drive_->motors.begin(), drive_->motors.end(),
+                                        [&](const MotorDuty& d) { return d.driver == driver_; });
+        const Driver* described = findDriver(doc_->mechanism().drivers, m.drivers[driver_].name);
+        xyChart(torqueSpeedContent(m, *motor, described ? described->motor : std::nullopt, u));
+        const auto& found = analysis_->found();
+        if (found && found->driver == driver_) cycleChart(speedPane(m, r, *found));
+        for (PlotPane& pane : motorPanes(m, *motor, u)) cycleChart(std::move(pane));
+        for (const RatioStudy& s : drive_->studies)
+            if (s.driver == driver_) xyChart(ratioStudyContent(m, s, motor->gearbox.ratio, u));
+    } else {
+        const auto cylinder = std::find_if(drive_->cylinders.begin(), drive_->cylinders.end(),
+                                           [&](const CylinderDuty& c) { return c.driver == driver_; });
+        for (PlotPane& pane : cylinderPanes(m, *cylinder, u)) cycleChart(std::move(pane));
+    }
+    return out;
+}
+
+int DriveView::placeFigures(int across, int width, double scale)
+{
+    places_.clear();
+    const double column = double(width - (across - 1) * kGap) / across;
+    double top = 0, rowHeight = 0;
+    for (std::size_t i = 0; i < figures_.size(); ++i) {
+        const int col = int(i) % across;
+        if (col == 0 && i > 0) {
+            top += rowHeight + kGap;
+            rowHeight = 0;
+        }
+        const QSizeF size = figures_[i]->size() * scale;
+        places_.push_back(QRectF(QPointF(col * (column + kGap), top), size));
+        rowHeight = std::max(rowHeight, size.height());
+    }
+    const int height = int(std::ceil(top + rowHeight));
+    canvas_->resize(width, height);
+    return height;
 }
 
 bool DriveView::eventFilter(QObject* watched, QEvent* event)

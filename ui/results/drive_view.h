@@ -14,6 +14,7 @@
 
 #include <QWidget>
 
+#include <functional>
 #include <memory>
 #include <optional>
 #include <vector>
@@ -49,6 +50,9 @@ private:
     void selectionMoved();  // the selected driver, when it has drive data
     void showDriver();
     void layOutFigures();
+    using FigureMaker = std::function<std::unique_ptr<Figure>(double width, double plotHeight)>;
+    std::vector<FigureMaker> figureMakers() const;
+    int placeFigures(int across, int width, double scale);  // the figures' total height, pixels
 
     MechanismDocument* doc_;
     AnalysisState* analysis_;
