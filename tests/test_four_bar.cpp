@@ -62,6 +62,26 @@ test::FourBarSpec crankRocker()
     return s;
 }
 
+// A body with neither mass nor inertia is named in a warning for the whole
+// analysis (a forgotten section would otherwise leave its loads out
+// silently); one given a mass is not.
+TEST(FourBar, MasslessBodiesAreNamed)
+{
+    Mechanism doc = test::fourBar(crankRocker());
+    ASSERT_EQ(doc.bodies.size(), 3u);
+    doc.bodies[1].mass = 1.5;
+    doc.bodies[1].inertia = 0.01;
+    const CycleResult r = sweepCycle(compile(doc), {.steps = 36});
+    ASSERT_EQ(r.warnings.size(), 1u);
+    const Warning& w = r.warnings[0];
+    EXPECT_EQ(w.code, "massless_bodies");
+    EXPECT_EQ(w.step, -1);
+    const std::string expected = "No mass is given for " + doc.bodies[0].name + " and " + doc.bodies[2].name + ":";
+    EXPECT_EQ(w.message.rfind(expected, 0), 0u) << w.message;
+    for (Body& b : doc.bodies) b.mass = 1.0;
+    EXPECT_TRUE(sweepCycle(compile(doc), {.steps = 36}).warnings.empty());
+}
+
 TEST(FourBar, CrankRockerFollowsFreudenstein)
 {
     const test::FourBarSpec spec = crankRocker();
@@ -70,7 +90,9 @@ TEST(FourBar, CrankRockerFollowsFreudenstein)
     const CycleResult r = sweepCycle(m, {.steps = 360});
     ASSERT_TRUE(r.complete);
     ASSERT_EQ(r.steps.size(), 361u);
-    EXPECT_TRUE(r.warnings.empty());
+    // Its bodies are massless (kinematics only): that is the one warning.
+    ASSERT_EQ(r.warnings.size(), 1u);
+    EXPECT_EQ(r.warnings[0].code, "massless_bodies");
 
     const Freudenstein f(spec);
     const double theta3Drawn = absoluteAngle(p.a, p.b), theta4Drawn = absoluteAngle(p.o4, p.b);

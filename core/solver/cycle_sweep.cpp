@@ -53,6 +53,7 @@ private:
     void flagCrossings();
     void warnNearSingular();
     void warnUnreachable(double tFail);
+    void warnMassless();
     std::string drivePositions(const StepResult& s) const;
     std::string withGrashofNote(const std::string& message) const;
 
@@ -184,6 +185,29 @@ void Sweeper::warnNearSingular()
     }
 }
 
+// A body drawn but not yet given a section, a plate or a mass moves with no
+// weight and no inertia: the reactions leave it out, which is right for a
+// light link chosen so, and wrong for one forgotten.
+void Sweeper::warnMassless()
+{
+    constexpr std::size_t kNamed = 5;
+    std::vector<std::string> names;
+    for (const CompiledBody& b : mechanism_.bodies)
+        if (b.mass.mass == 0.0 && b.mass.inertia == 0.0) names.push_back(b.name);
+    if (names.empty()) return;
+    std::string list;
+    for (std::size_t i = 0; i < std::min(names.size(), kNamed); ++i)
+        list += (i == 0 ? "" : i + 1 == names.size() ? " and " : ", ") + names[i];
+    if (names.size() > kNamed) list += " and " + std::to_string(names.size() - kNamed) + " more";
+    result_.warnings.push_back(
+        {"massless_bodies",
+         (names.size() == 1 ? "No mass is given for " + list + ": it carries"
+                            : "No mass is given for " + list + ": they carry") +
+             " no weight and no inertia load, and the reactions and drive effort leave them out. Give each a bar "
+             "section, a plate or its mass properties, unless it is light enough to neglect.",
+         -1});
+}
+
 void Sweeper::warnUnreachable(double tFail)
 {
     const StepResult& last = result_.steps.back();
@@ -220,6 +244,7 @@ CycleResult Sweeper::run()
         throw AnalysisError(mobility.describe(), items);
     }
     assembleDrawnPose(q);
+    warnMassless();
     result_.steps.reserve(steps + 1);
     result_.steps.push_back(solver_.analyse(0.0, q));
     if (!finiteStep(result_.steps.back()))
