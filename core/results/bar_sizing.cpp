@@ -87,7 +87,8 @@ SizingResult sizeBars(const Mechanism& doc, const CompiledMechanism& m, const Cy
             stressFigures(*sized.section, sized.envelope, sized.notes);
             bucklingFigures(*sized.section, sized.envelope, bar.length, sized.notes);
         } else {
-            sized.notes.push_back("no stresses: the body has typed-in mass and no section");
+            sized.notes.push_back(body.mass || body.inertia ? "no stresses: the body has typed-in mass and no section"
+                                                            : "no stresses: the body has no section");
         }
         out.bars.push_back(std::move(sized));
     }
