@@ -527,8 +527,11 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
         for (const QString& c :
              {QString("Rigid bodies and ideal joints: no clearance, no elasticity, no friction unless it is modelled "
                       "as a load; "
-                      "the drivers follow their prescribed motion exactly."),
-              QString("These are loads, not a design check. Fatigue is not covered."),
+                      "the drivers follow their prescribed motion exactly, or the motion found from a motor's "
+                      "characteristic."),
+              QString("The sizing figures are utilisations against the allowables you gave, not a verdict that a "
+                      "part is safe. Fatigue, stress concentrations at holes, the bending of pins and the wear life "
+                      "of bearings are not covered."),
               QString("Apply the service and dynamic factors of the application (shock, start-up, misalignment) "
                       "before sizing a pin, bearing, link or motor."),
               QString("Check the parts under the local codes and standards that apply."),
