@@ -23,24 +23,6 @@ using clevis::test::contains;
 using clevis::test::quoted;
 using clevis::test::readFile;
 
-// A slider-crank: crank 0.1 m, rod 0.35 m, ram along +x.
-const char* const kPress = R"({
-  "clevis": 1, "name": "press",
-  "bodies": [
-    {"name": "crank", "mass": 1.0, "cg": [0.05, 0], "inertia": 0.001},
-    {"name": "rod", "mass": 0.5, "cg": [0.275, 0], "inertia": 0.005},
-    {"name": "ram", "mass": 2.0, "cg": [0.45, 0]}
-  ],
-  "joints": [
-    {"name": "O", "type": "pin", "bodies": ["ground", "crank"], "at": [0, 0]},
-    {"name": "A", "type": "pin", "bodies": ["crank", "rod"], "at": [0.1, 0]},
-    {"name": "B", "type": "pin", "bodies": ["rod", "ram"], "at": [0.45, 0]},
-    {"name": "S", "type": "slider", "bodies": ["ground", "ram"], "at": [0.45, 0], "axis_deg": 0}
-  ],
-  "drivers": [{"name": "motor", "type": "rotary", "joint": "O", "speed_rpm": 60}],
-  "cycle": {"steps": 36}
-})";
-
 class DrawingFront : public ::testing::Test {
 protected:
     void SetUp() override
@@ -48,8 +30,7 @@ protected:
         std::string pattern = (fs::temp_directory_path() / "clevis-front-test-XXXXXX").string();
         ASSERT_NE(mkdtemp(pattern.data()), nullptr);
         dir_ = pattern;
-        press_ = dir_ / "press.json";
-        std::ofstream(press_) << kPress;
+        press_ = fs::path(CLEVIS_SAMPLES_DIR) / "punch_press.json";
     }
     void TearDown() override { fs::remove_all(dir_); }
 
