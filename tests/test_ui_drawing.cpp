@@ -242,6 +242,29 @@ TEST_F(DrawingTest, PartsAreNamedInOneScheme)
     EXPECT_EQ(loadName(drawn.loads[0], 0), loadName(read.loads[0], 0));
 }
 
+// What a tool has just placed is selected, so its properties are at hand: a
+// new link's mass, a new force's value, a new motor's speed.
+TEST_F(DrawingTest, APartJustPlacedIsSelected)
+{
+    drawFourBar();
+    EXPECT_EQ(window.document()->selection().kind, Selection::Kind::Driver);  // the motor, placed last
+    useTool("Link");
+    click(0.17, 0.12), click(0.25, 0.2);
+    Selection s = window.document()->selection();
+    EXPECT_EQ(s.kind, Selection::Kind::Body);
+    EXPECT_EQ(s.name.toStdString(), mechanism().bodies.back().name);
+    useTool("Force");
+    click(0.21, 0.16), click(0.21, 0.25);
+    s = window.document()->selection();
+    EXPECT_EQ(s.kind, Selection::Kind::Load);
+    EXPECT_EQ(s.loadIndex, int(mechanism().loads.size()) - 1);
+    useTool("Ground pin");
+    click(0.3, 0.0);
+    s = window.document()->selection();
+    EXPECT_EQ(s.kind, Selection::Kind::Joint);
+    EXPECT_EQ(s.name.toStdString(), mechanism().joints.back().name);
+}
+
 // After typing in a property field, a click on the canvas gives the canvas
 // the keyboard: the tool keys and Esc work there again.
 TEST_F(DrawingTest, AClickOnTheCanvasTakesTheKeyboardFromAPropertyField)
