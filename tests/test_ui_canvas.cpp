@@ -80,6 +80,8 @@ TEST_F(CanvasTest, DrawAFourBarSetAMassSaveAndReopen)
     EXPECT_TRUE(status.contains("1 degree of freedom")) << status.toStdString();
     EXPECT_TRUE(status.contains("1 driver")) << status.toStdString();
     EXPECT_TRUE(status.contains("Solves over the whole cycle")) << status.toStdString();
+    // Its links were drawn without mass: the analysis's warning is on the line too.
+    EXPECT_TRUE(status.contains("No mass is given for")) << status.toStdString();
 }
 
 TEST_F(CanvasTest, WithoutAMotorTheStatusSaysItDoesNotSolve)

@@ -13,7 +13,7 @@ ElidedLabel::ElidedLabel(QWidget* parent) : QLabel(parent)
 void ElidedLabel::setFullText(const QString& text)
 {
     setText(text);
-    setToolTip(text);
+    setToolTip(text.isEmpty() ? text : QStringLiteral("<p>%1</p>").arg(text.toHtmlEscaped()));  // rich text wraps
 }
 
 QSize ElidedLabel::minimumSizeHint() const

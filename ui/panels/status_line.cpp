@@ -29,12 +29,19 @@ QString describeAnalysis(const AnalysisState& a)
     if (!a.errorText().isEmpty()) return counts + QObject::tr("Does not solve: %1").arg(a.errorText());
     if (!a.hasResult()) return counts + QObject::tr("Not solved yet.");
     const CycleResult& r = a.result();
+    // What the analysis warns of follows, so that a designer sees it without
+    // opening a report (the line is elided; its tooltip holds the whole text).
+    QString warned;
+    for (const Warning& w : r.warnings) warned += QStringLiteral("  ⚠ ") + QString::fromStdString(w.message);
     if (!r.complete)
-        return counts + QObject::tr("Solves for part of the cycle only (%1 of %2 steps).")
-                            .arg(r.steps.size() - 1)
-                            .arg(r.plannedSteps);
+        return counts +
+               QObject::tr("Solves for part of the cycle only (%1 of %2 steps).")
+                   .arg(r.steps.size() - 1)
+                   .arg(r.plannedSteps) +
+               warned;
     return counts +
-           QObject::tr("Solves over the whole cycle (%1 steps, %2 s).").arg(r.plannedSteps).arg(r.duration, 0, 'g', 4);
+           QObject::tr("Solves over the whole cycle (%1 steps, %2 s).").arg(r.plannedSteps).arg(r.duration, 0, 'g', 4) +
+           warned;
 }
 
 StatusLine::StatusLine(AnalysisState* analysis, QWidget* parent)
@@ -67,9 +74,14 @@ void StatusLine::refresh()
     state_->setFullText(analysis_->busy() ? text + tr("  (solving…)") : text);
     // The mark differs in shape as well as colour: a filled disc when it
     // solves, a ring with a bar when not, an open ring for a blank drawing.
+    // A warning sign when it solves but the analysis warns of something.
     const bool blank = analysis_->nothingDrawn();
-    const QColor c = solves ? palette::load() : blank ? palette::groundHatch() : palette::problem();
-    mark_->setText(solves ? QStringLiteral("●") : blank ? QStringLiteral("○") : QStringLiteral("⊘"));
+    const bool warned = solves && !analysis_->result().warnings.empty();
+    const QColor c = solves && !warned ? palette::load() : blank ? palette::groundHatch() : palette::problem();
+    mark_->setText(warned   ? QStringLiteral("⚠")
+                   : solves ? QStringLiteral("●")
+                   : blank  ? QStringLiteral("○")
+                            : QStringLiteral("⊘"));
     mark_->setStyleSheet(QStringLiteral("color: %1; font-weight: bold;").arg(c.name()));
     state_->setStyleSheet(solves || blank ? QString() : QStringLiteral("color: %1;").arg(palette::problem().name()));
 }
