@@ -8,6 +8,7 @@
 #include "ui/analysis/analysis_state.h"
 #include "ui/document/mechanism_edits.h"
 #include "ui/document/sketch_geometry.h"
+#include "ui/panels/properties/body_mass_preview.h"
 #include "ui/shell/display_units.h"
 
 #include <QLabel>
@@ -129,6 +130,26 @@ TEST_F(DrawingTest, ACompoundPinListsItsBodiesAndTheForceOfEachJoint)
         ASSERT_NE(row, nullptr) << "no force listed for " << j.name;
         EXPECT_TRUE(row->text().endsWith(DisplayUnits::instance().forceSymbol())) << row->text().toStdString();
     }
+}
+
+// The dyad's link joins the six-bar at B by a second joint on one of the
+// bodies already there (a compound pin): that body keeps two pins, so it is
+// still a link with a length, and its mass is worked out as for any link.
+TEST_F(DrawingTest, ABodyAtACompoundPinStaysALinkAndItsMassIsWorkedOut)
+{
+    drawSixBar();
+    std::string twice;  // the body two joints at B name
+    for (const auto& b : mechanism().bodies) {
+        int atB = 0;
+        for (int i : jointsAtB())
+            for (const auto& n : mechanism().joints[i].bodies) atB += n == b.name;
+        if (atB == 2) twice = b.name;
+    }
+    ASSERT_FALSE(twice.empty());
+    EXPECT_EQ(bodyPins(mechanism(), twice).size(), 2u);
+    QString problem;
+    const auto mass = previewMass(mechanism(), twice, problem);
+    EXPECT_TRUE(mass.has_value()) << problem.toStdString();
 }
 
 // The end typed after the first click lands exactly there: 100 mm at 30°

@@ -1,5 +1,7 @@
 #include "core/model/body_points.h"
 
+#include <algorithm>
+
 namespace clevis {
 
 BodyPointKind jointPointKind(JointType type, int side)
@@ -48,7 +50,7 @@ std::vector<Vec2> bodyPins(const Mechanism& m, const std::string& body)
 {
     std::vector<Vec2> pins;
     for (const auto& p : bodyPoints(m, body))
-        if (p.isJoint()) pins.push_back(p.at);
+        if (p.isJoint() && std::find(pins.begin(), pins.end(), p.at) == pins.end()) pins.push_back(p.at);
     return pins;
 }
 

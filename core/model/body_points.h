@@ -35,7 +35,8 @@ BodyPointKind jointPointKind(JointType type, int side);
 // load points, point masses, then the centre of mass where one is given.
 std::vector<BodyPointOf> bodyPoints(const Mechanism& m, const std::string& body);
 
-// Joint points on a body (every joint that names it), in document order.
+// Joint points on a body, in document order, each point once: the joints of a
+// compound pin (several at one point) make one pin of the body.
 std::vector<Vec2> bodyPins(const Mechanism& m, const std::string& body);
 
 // Where a body is joined to others, at the drawn pose: its joint points and
