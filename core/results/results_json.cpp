@@ -40,7 +40,7 @@ public:
         const std::size_t step = std::size_t(&s - r_.steps.data());
         w_.beginObject(true);
         w_.field(t_, s.t);
-        w_.key(drive_key_).beginObject();
+        w_.key(driveKey_).beginObject();
         for (std::size_t d = 0; d < m_.drivers.size(); ++d)
             w_.field(driverKeys_[d], driveDisplayValue(m_.drivers[d].type, s.drivePosition[d]));
         w_.endObject();
@@ -149,7 +149,7 @@ private:
     const DriveResults* drive_;
     std::vector<JsonKey> driverKeys_, bodyKeys_, jointKeys_, pinKeys_;
     std::vector<Eigen::Matrix2d> unrotations_;  // ground's, then each body's at the step
-    const JsonKey t_{"t"}, drive_key_{"drive"}, bodies_{"bodies"}, joints_{"joints"}, drivers_{"drivers"};
+    const JsonKey t_{"t"}, driveKey_{"drive"}, bodies_{"bodies"}, joints_{"joints"}, drivers_{"drivers"};
     const JsonKey ground_{"ground"}, energy_{"energy"}, transmission_{"transmission_deg"};
     const JsonKey nearSingular_{"near_singular"}, effort_{"effort"}, power_{"power"}, moment_{"moment"};
     const JsonKey kinetic_{"kinetic"}, gravity_{"gravity"}, spring_{"spring"}, fx_{"fx"}, fy_{"fy"};
