@@ -131,7 +131,8 @@ void streamResultsCsv(std::string& text, const TextPieces* write, const Compiled
 std::string resultsCsvText(const CompiledMechanism& m, const CycleResult& r, const DriveResults* drive)
 {
     std::string text;
-    // At most 24 characters and a comma per number, for the columns that grow with the machine.
+    // About 24 characters a number (a double's shortest form takes up to 24), in the columns that grow with the
+    // machine.
     text.reserve(std::size_t(r.steps.size() + 1) * 24 *
                  (1 + m.drivers.size() + 9 * m.bodies.size() + 3 * m.joints.size()));
     streamResultsCsv(text, nullptr, m, r, drive);
