@@ -22,12 +22,19 @@ bool writeOutputs(const AnalyzeOptions& options, const CompiledMechanism& m, con
                   const CycleSummary& s, const DriveResults& drive, const SizingResult& sizing, std::ostream& err)
 {
     bool ok = true;
+    // Each file written as it is made, piece by piece (a large machine's
+    // results run to tens of megabytes).
     if (!options.jsonOut.empty())
-        ok &= writeOutputFile(options.jsonOut,
-                              resultsJsonText(m, r, s, {{"sizing", sizingToJson(m, r, sizing)}},  // bars and pins
-                                              &drive),  // (docs/results-format.md)
-                              err);
-    if (!options.csvOut.empty()) ok &= writeOutputFile(options.csvOut, resultsCsvText(m, r, &drive), err);
+        ok &= writeOutputFile(
+            options.jsonOut,
+            [&](const TextPieces& write) {
+                writeResultsJson(write, m, r, s, {{"sizing", sizingToJson(m, r, sizing)}},  // bars and pins
+                                 &drive);                                                   // (docs/results-format.md)
+            },
+            err);
+    if (!options.csvOut.empty())
+        ok &= writeOutputFile(
+            options.csvOut, [&](const TextPieces& write) { writeResultsCsv(write, m, r, &drive); }, err);
     return ok;
 }
 

@@ -12,7 +12,9 @@
 // written as the --json and --csv files are. The gear ratio study of the
 // punch press at 200 ratios is timed beside that mechanism's cycle, and the
 // flywheel press's real motion (with and without sizing its flywheel) beside
-// its cycle at the prescribed speed.
+// its cycle at the prescribed speed. clevis-cli's analysis of a 100-loop fan
+// is timed as the command runs it.
+#include "app/analyze_command.h"
 #include "app/heap_reuse.h"
 #include "core/file/mechanism_file.h"
 #include "core/results/bar_envelope.h"
@@ -20,12 +22,16 @@
 #include "core/results/results_csv.h"
 #include "core/results/results_json.h"
 #include "core/solver/cycle_sweep.h"
-#include "core/solver/motor_drive.h"
 #include "core/solver/mobility_check.h"
+#include "core/solver/motor_drive.h"
 #include "core/solver/step_solver.h"
 #include "tests/chain_generator.h"
 
 #include <benchmark/benchmark.h>
+
+#include <filesystem>
+#include <fstream>
+#include <sstream>
 
 namespace {
 
@@ -144,8 +150,11 @@ BENCHMARK(UndrivenChainMobilityCheck)
     ->Unit(benchmark::kMillisecond);
 
 // Writing the results of the 200-body chain's cycle (about 40 MB of JSON):
-// bytes_per_second is the writing speed.
-void ResultsFileText(benchmark::State& state, bool json)
+// bytes_per_second is the writing speed. `pieces`: as clevis-cli writes its
+// --json and --csv files, handed on a megabyte at a time (here to nothing,
+// so the disk is left out); else the whole text in one string, as the
+// desktop's export and the tests take it.
+void ResultsFileText(benchmark::State& state, bool json, bool pieces)
 {
     const clevis::CompiledMechanism m = clevis::compile(clevis::test::fourBarChain(200));
     clevis::SweepOptions options;
@@ -153,15 +162,48 @@ void ResultsFileText(benchmark::State& state, bool json)
     const clevis::CycleResult result = clevis::sweepCycle(m, options);
     const clevis::CycleSummary summary = clevis::summarize(m, result);
     std::size_t bytes = 0;
+    const clevis::TextPieces count = [&](std::string_view piece) {
+        bytes += piece.size();
+        benchmark::DoNotOptimize(piece.data());
+    };
     for (auto _ : state) {
+        if (pieces && json) clevis::writeResultsJson(count, m, result, summary);
+        if (pieces && !json) clevis::writeResultsCsv(count, m, result);
+        if (pieces) continue;
         const std::string text = json ? clevis::resultsJsonText(m, result, summary) : clevis::resultsCsvText(m, result);
-        bytes += text.size();
-        benchmark::DoNotOptimize(text.data());
+        count(text);
     }
     state.SetBytesProcessed(std::int64_t(bytes));
 }
-BENCHMARK_CAPTURE(ResultsFileText, json, true)->Unit(benchmark::kMillisecond);
-BENCHMARK_CAPTURE(ResultsFileText, csv, false)->Unit(benchmark::kMillisecond);
+BENCHMARK_CAPTURE(ResultsFileText, json, true, true)->Unit(benchmark::kMillisecond);
+BENCHMARK_CAPTURE(ResultsFileText, csv, false, true)->Unit(benchmark::kMillisecond);
+BENCHMARK_CAPTURE(ResultsFileText, json_whole, true, false)->Unit(benchmark::kMillisecond);
+BENCHMARK_CAPTURE(ResultsFileText, csv_whole, false, false)->Unit(benchmark::kMillisecond);
+
+// `clevis-cli analyze` of a fan of 100 four-bars on one crank (201 bodies,
+// 360 steps) as the command runs it, from reading the file to the summary and
+// sizing text, without the process's start. The file is written once to the
+// temporary folder and left there (clevis-bench-fan-100.json) so that the
+// whole process can be timed on it too: /usr/bin/time clevis-cli analyze FILE.
+void FanAnalysis(benchmark::State& state)
+{
+    const int loops = int(state.range(0));
+    const std::filesystem::path file =
+        std::filesystem::temp_directory_path() / ("clevis-bench-fan-" + std::to_string(loops) + ".json");
+    std::ofstream(file) << clevis::saveMechanismText(clevis::test::fourBarFan(loops));
+    clevis::cli::AnalyzeOptions options;
+    options.file = file.string();
+    options.steps = kSteps;
+    for (auto _ : state) {
+        std::ostringstream out, err;
+        if (clevis::cli::runAnalyze(options, out, err) != clevis::cli::kExitOk) {
+            state.SkipWithError(("the fan's analysis failed: " + err.str()).c_str());
+            break;
+        }
+        benchmark::DoNotOptimize(out.str().data());
+    }
+}
+BENCHMARK(FanAnalysis)->ArgName("loops")->Arg(100)->Unit(benchmark::kMillisecond);
 
 // The gear ratio study of the punch press (its gearbox from the sample) at
 // 200 ratios, on one solved cycle, against solving that cycle: the study

@@ -22,8 +22,14 @@ SolvedFile solveFile(const std::string& file, int steps, std::ostream& err)
 
 bool writeOutputFile(const std::string& path, const std::string& text, std::ostream& err)
 {
+    return writeOutputFile(
+        path, [&](const std::function<void(std::string_view)>& write) { write(text); }, err);
+}
+
+bool writeOutputFile(const std::string& path, const TextProducer& produce, std::ostream& err)
+{
     try {
-        writeFileAtomically(path, text, false);
+        writeFileAtomically(path, produce, false);
         return true;
     } catch (const FileWriteError& e) {
         err << e.what() << '\n';

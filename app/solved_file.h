@@ -3,6 +3,7 @@
 // motion a motor gives, where a driver has one); write a result file atomically.
 #pragma once
 
+#include "core/file/atomic_file.h"
 #include "core/model/mechanism.h"
 #include "core/results/results.h"
 #include "core/solver/compiled_mechanism.h"
@@ -27,5 +28,7 @@ SolvedFile solveFile(const std::string& file, int steps, std::ostream& err);
 // Writes atomically, so a failed run never leaves half a file in place of the
 // last good one; false (with a message naming it and the reason) if it cannot.
 bool writeOutputFile(const std::string& path, const std::string& text, std::ostream& err);
+// The same for text made in pieces (core/file/atomic_file.h).
+bool writeOutputFile(const std::string& path, const TextProducer& produce, std::ostream& err);
 
 }  // namespace clevis::cli

@@ -124,6 +124,38 @@ TEST_F(AtomicFileTest, ABackupThatIsTheFileItselfIsReplacedCleanly)
     EXPECT_EQ(entries(dir_), (std::vector<std::string>{"press.json", "press.json.bak"}));
 }
 
+// Content made in pieces lands in the file in the order it was handed over.
+TEST_F(AtomicFileTest, WritesContentMadeInPieces)
+{
+    writePlainly(file_, "old");
+    const std::string big(1 << 20, 'y');
+    writeFileAtomically(
+        file_.string(),
+        [&](const std::function<void(std::string_view)>& write) {
+            write("first ");
+            write("");
+            write(big);
+            write(" last");
+        },
+        true);
+    EXPECT_EQ(readFile(file_), "first " + big + " last");
+    EXPECT_EQ(readFile(file_.string() + ".bak"), "old");
+}
+
+// A producer that fails half-way (after pieces were written) leaves the old
+// file as it was, and no temporary file behind.
+TEST_F(AtomicFileTest, ContentThatFailsHalfWayLeavesTheOldFile)
+{
+    writePlainly(file_, "old");
+    const auto failing = [](const std::function<void(std::string_view)>& write) {
+        write("half a file");
+        throw std::runtime_error("the results could not be made");
+    };
+    EXPECT_THROW(writeFileAtomically(file_.string(), failing, true), std::runtime_error);
+    EXPECT_EQ(readFile(file_), "old");
+    EXPECT_EQ(entries(dir_), std::vector<std::string>{"press.json"});
+}
+
 TEST_F(AtomicFileTest, WithoutBackupLeavesNone)
 {
     writePlainly(file_, "old");

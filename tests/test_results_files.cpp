@@ -242,4 +242,75 @@ TEST(JsonWriter, WritesWhatATreeDumpWrites)
     EXPECT_EQ(mixed, "{\n  \"steps\": [\n    {\"t\":0.5,\"xy\":[1,2]},\n    {}\n  ],\n  \"n\": 3\n}");
 }
 
+// Keys escaped once (JsonKey, as each step's names are) write the same text
+// as keys escaped at each use, first or not in their container, compact or
+// indented, before numbers (non-finite ones too) and before containers.
+TEST(JsonWriter, KeysEscapedOnceWriteWhatKeysEscapedEachTimeWrite)
+{
+    const std::string names[] = {"x", "angle_deg", "quote \" back\\ tab\t µ", "ctl\x01"};
+    const double numbers[] = {0.1, -2.5e-300, std::nan(""), std::numeric_limits<double>::infinity(), 12.0};
+    const auto write = [&](std::string& text, bool once) {
+        JsonWriter w(text);
+        w.beginObject();
+        for (const bool compact : {false, true}) {
+            w.key(compact ? "compact" : "indented").beginObject(compact);
+            for (std::size_t i = 0; i < std::size(names); ++i) {
+                const JsonKey key(names[i]);
+                (once ? w.key(key) : w.key(names[i])).beginObject(i % 2 == 0);  // a key first in its container
+                (once ? w.key(key) : w.key(names[i])).beginArray();
+                w.endArray();
+                w.endObject();
+                for (const double v : numbers) {
+                    if (once) w.field(key, v);
+                    else w.field(names[i], v);
+                }
+                (once ? w.key(key) : w.key(names[i])).beginArray();
+                w.value(true);
+                w.endArray();
+                if (once) w.field(key, "text");
+                else w.field(names[i], "text");
+            }
+            w.endObject();
+        }
+        w.endObject();
+    };
+    std::string escapedOnce, escapedEachTime;
+    write(escapedOnce, true);
+    write(escapedEachTime, false);
+    EXPECT_EQ(escapedOnce, escapedEachTime);
+    // and both are the JSON a tree reads: the last of each repeated key
+    const json j = json::parse(escapedOnce);
+    EXPECT_EQ(j["compact"]["quote \" back\\ tab\t µ"], "text");
+    EXPECT_EQ(escapedOnce.find("\n", escapedOnce.find("\"compact\"")), escapedOnce.rfind('\n'));  // one line
+    EXPECT_NE(
+        escapedOnce.find("{\"x\":{\"x\":[]},\"x\":0.1,\"x\":-2.5e-300,\"x\":null,\"x\":null,\"x\":12,\"x\":[true]"),
+        std::string::npos)
+        << escapedOnce;
+}
+
+// A link spinning long enough that its results run to several pieces.
+Solved longRun() { return solve(spinningLink(15000)); }
+
+// The pieces clevis-cli writes its files from, put together, are the whole
+// text, byte for byte; every piece but the last is at least kTextPiece long.
+TEST(ResultsFiles, PiecesMakeTheWholeText)
+{
+    const Solved x = longRun();
+    for (const bool isJson : {true, false}) {
+        std::vector<std::string> pieces;
+        const TextPieces keep = [&](std::string_view piece) { pieces.emplace_back(piece); };
+        if (isJson) writeResultsJson(keep, x.m, x.r, x.s);
+        else writeResultsCsv(keep, x.m, x.r);
+        const std::string whole = isJson ? resultsJsonText(x.m, x.r, x.s) : resultsCsvText(x.m, x.r);
+        ASSERT_GE(pieces.size(), 3u) << "the test needs a file of several pieces";
+        std::string joined;
+        for (std::size_t i = 0; i < pieces.size(); ++i) {
+            if (i + 1 < pieces.size()) EXPECT_GE(pieces[i].size(), kTextPiece) << i;
+            joined += pieces[i];
+        }
+        EXPECT_EQ(joined.size(), whole.size()) << (isJson ? "json" : "csv");
+        EXPECT_TRUE(joined == whole) << (isJson ? "json" : "csv");
+    }
+}
+
 }  // namespace

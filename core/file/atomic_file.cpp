@@ -83,16 +83,12 @@ public:
 
     const std::string& name() const { return name_; }
 
-    void write(const std::string& content, std::optional<mode_t> keepMode)
+    // The content as `produce` hands it over, in one piece or many, then
+    // flushed to the disk.
+    void write(const TextProducer& produce, std::optional<mode_t> keepMode)
     {
         if (keepMode && ::fchmod(fd_, *keepMode) != 0) fail(reported_, "cannot set the file's permissions", errno);
-        std::size_t done = 0;
-        while (done < content.size()) {
-            const ssize_t n = ::write(fd_, content.data() + done, content.size() - done);
-            if (n < 0 && errno == EINTR) continue;
-            if (n < 0) fail(reported_, "cannot write the file", errno);
-            done += std::size_t(n);
-        }
+        produce([this](std::string_view piece) { append(piece); });
         if (::fsync(fd_) != 0) fail(reported_, "cannot flush the file to the disk", errno);
         const int fd = fd_;
         fd_ = -1;
@@ -106,6 +102,17 @@ public:
     }
 
 private:
+    void append(std::string_view piece)
+    {
+        std::size_t done = 0;
+        while (done < piece.size()) {
+            const ssize_t n = ::write(fd_, piece.data() + done, piece.size() - done);
+            if (n < 0 && errno == EINTR) continue;
+            if (n < 0) fail(reported_, "cannot write the file", errno);
+            done += std::size_t(n);
+        }
+    }
+
     std::string reported_, name_;
     int fd_ = -1;
     bool renamed_ = false;
@@ -161,23 +168,35 @@ void syncDirectoryOf(const std::string& target)
 
 }  // namespace
 
-void writeFileAtomically(const std::string& path, const std::string& content, bool keepBackup,
+void writeFileAtomically(const std::string& path, const TextProducer& produce, bool keepBackup,
                          const std::function<void(const std::string&)>& beforeRename)
 {
     const std::string target = resolvedTarget(path);
     const std::optional<struct stat> old = existing(target);
     if (old && S_ISDIR(old->st_mode)) fail(path, "a folder has that name", EISDIR);
     TemporaryFile temp(target, path);
-    temp.write(content, old ? std::optional<mode_t>(old->st_mode & 07777) : std::nullopt);
+    temp.write(produce, old ? std::optional<mode_t>(old->st_mode & 07777) : std::nullopt);
     if (keepBackup && old) keepBackupOf(target, path);
     if (beforeRename) beforeRename(temp.name());
     temp.renameOver(target);
     syncDirectoryOf(target);
 }
 
+void writeFileAtomically(const std::string& path, const std::string& content, bool keepBackup,
+                         const std::function<void(const std::string&)>& beforeRename)
+{
+    writeFileAtomically(
+        path, [&](const std::function<void(std::string_view)>& write) { write(content); }, keepBackup, beforeRename);
+}
+
 void writeFileAtomically(const std::string& path, const std::string& content, bool keepBackup)
 {
     writeFileAtomically(path, content, keepBackup, {});
+}
+
+void writeFileAtomically(const std::string& path, const TextProducer& produce, bool keepBackup)
+{
+    writeFileAtomically(path, produce, keepBackup, {});
 }
 
 }  // namespace clevis

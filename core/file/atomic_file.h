@@ -7,6 +7,7 @@
 #include <functional>
 #include <stdexcept>
 #include <string>
+#include <string_view>
 
 namespace clevis {
 
@@ -27,10 +28,18 @@ private:
 // followed: the file it points to is replaced. Throws FileWriteError.
 void writeFileAtomically(const std::string& path, const std::string& content, bool keepBackup);
 
+// Content made in pieces: `produce(write)` calls `write` with each piece in
+// turn, which goes to the file at once (a results file of tens of megabytes
+// is never held whole).
+using TextProducer = std::function<void(const std::function<void(std::string_view)>& write)>;
+void writeFileAtomically(const std::string& path, const TextProducer& produce, bool keepBackup);
+
 // The same, calling `beforeRename(temporaryPath)` once the temporary file is
 // complete and synced, just before it replaces the target: lets a test stop
 // the save at its most delicate point.
 void writeFileAtomically(const std::string& path, const std::string& content, bool keepBackup,
+                         const std::function<void(const std::string&)>& beforeRename);
+void writeFileAtomically(const std::string& path, const TextProducer& produce, bool keepBackup,
                          const std::function<void(const std::string&)>& beforeRename);
 
 }  // namespace clevis

@@ -3,12 +3,55 @@
 #include <algorithm>
 #include <charconv>
 #include <cmath>
+#include <cstring>
 
 namespace clevis {
+namespace {
+
+// RFC 8259 string escapes; other bytes (UTF-8 included) pass through.
+void appendQuoted(std::string& out, std::string_view text)
+{
+    out += '"';
+    const auto plain = [](char c) { return c != '"' && c != '\\' && static_cast<unsigned char>(c) >= 0x20; };
+    if (std::all_of(text.begin(), text.end(), plain)) {  // names and keys, nearly always
+        out += text;
+        out += '"';
+        return;
+    }
+    for (const char c : text) {
+        switch (c) {
+        case '"': out += "\\\""; break;
+        case '\\': out += "\\\\"; break;
+        case '\n': out += "\\n"; break;
+        case '\r': out += "\\r"; break;
+        case '\t': out += "\\t"; break;
+        case '\b': out += "\\b"; break;
+        case '\f': out += "\\f"; break;
+        default:
+            if (static_cast<unsigned char>(c) < 0x20) {
+                static const char hex[] = "0123456789abcdef";
+                out += "\\u00";
+                out += hex[(c >> 4) & 0xf];
+                out += hex[c & 0xf];
+            } else {
+                out += c;
+            }
+        }
+    }
+    out += '"';
+}
+
+}  // namespace
+
+JsonKey::JsonKey(std::string_view name) : text_(",")
+{
+    appendQuoted(text_, name);
+    text_ += ':';
+}
 
 void JsonWriter::newline()
 {
-    if (compactDepth_ <= empty_.size()) return;
+    if (compact()) return;
     out_ += '\n';
     out_.append(2 * empty_.size(), ' ');
 }
@@ -30,10 +73,39 @@ void JsonWriter::beforeValue()
 JsonWriter& JsonWriter::key(std::string_view name)
 {
     beforeValue();
-    writeString(name);
-    out_ += compactDepth_ <= empty_.size() ? ":" : ": ";
+    appendQuoted(out_, name);
+    out_ += compact() ? ":" : ": ";
     afterKey_ = true;
     return *this;
+}
+
+// A compact container's key is copied whole, its comma left out if it comes first.
+JsonWriter& JsonWriter::key(const JsonKey& name)
+{
+    const std::string_view text = name.text();
+    if (compact()) {
+        out_ += empty_.back() ? text.substr(1) : text;
+        empty_.back() = false;
+    } else {
+        beforeValue();
+        out_ += text.substr(1, text.size() - 2);
+        out_ += ": ";
+    }
+    afterKey_ = true;
+    return *this;
+}
+
+void JsonWriter::field(const JsonKey& name, double v)
+{
+    constexpr std::size_t kNumber = 32;  // the longest shortest form of a double is 24 characters
+    char piece[128];
+    const std::string_view text = name.text();
+    if (!compact() || !std::isfinite(v) || text.size() + kNumber > sizeof piece) return key(name).value(v);
+    const std::string_view k = empty_.back() ? text.substr(1) : text;
+    empty_.back() = false;
+    std::memcpy(piece, k.data(), k.size());
+    const auto end = std::to_chars(piece + k.size(), piece + sizeof piece, v).ptr;
+    out_.append(piece, end);
 }
 
 void JsonWriter::open(char bracket, bool compact)
@@ -46,10 +118,10 @@ void JsonWriter::open(char bracket, bool compact)
 
 void JsonWriter::close(char bracket)
 {
-    const bool wasEmpty = empty_.back(), compact = compactDepth_ <= empty_.size();
+    const bool wasEmpty = empty_.back(), wasCompact = compact();
     empty_.pop_back();
     if (compactDepth_ > empty_.size()) compactDepth_ = kNotCompact;
-    if (!wasEmpty && !compact) newline();
+    if (!wasEmpty && !wasCompact) newline();
     out_ += bracket;
 }
 
@@ -90,40 +162,7 @@ void JsonWriter::null()
 void JsonWriter::value(std::string_view text)
 {
     beforeValue();
-    writeString(text);
-}
-
-// RFC 8259 string escapes; other bytes (UTF-8 included) pass through.
-void JsonWriter::writeString(std::string_view text)
-{
-    out_ += '"';
-    const auto plain = [](char c) { return c != '"' && c != '\\' && static_cast<unsigned char>(c) >= 0x20; };
-    if (std::all_of(text.begin(), text.end(), plain)) {  // names and keys, nearly always
-        out_ += text;
-        out_ += '"';
-        return;
-    }
-    for (const char c : text) {
-        switch (c) {
-        case '"': out_ += "\\\""; break;
-        case '\\': out_ += "\\\\"; break;
-        case '\n': out_ += "\\n"; break;
-        case '\r': out_ += "\\r"; break;
-        case '\t': out_ += "\\t"; break;
-        case '\b': out_ += "\\b"; break;
-        case '\f': out_ += "\\f"; break;
-        default:
-            if (static_cast<unsigned char>(c) < 0x20) {
-                static const char hex[] = "0123456789abcdef";
-                out_ += "\\u00";
-                out_ += hex[(c >> 4) & 0xf];
-                out_ += hex[c & 0xf];
-            } else {
-                out_ += c;
-            }
-        }
-    }
-    out_ += '"';
+    appendQuoted(out_, text);
 }
 
 void JsonWriter::value(const nlohmann::json& tree)

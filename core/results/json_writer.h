@@ -16,6 +16,18 @@
 
 namespace clevis {
 
+// A key escaped and quoted once, for keys written at every step (the names
+// of bodies and joints, "x", "fx"…): writing it is then one copy.
+class JsonKey {
+public:
+    explicit JsonKey(std::string_view name);
+    // `,"name":`: the separator before it and the colon after it included.
+    std::string_view text() const { return text_; }
+
+private:
+    std::string text_;
+};
+
 class JsonWriter {
 public:
     explicit JsonWriter(std::string& out) : out_(out) {}
@@ -26,6 +38,7 @@ public:
     void endArray();
     // The key of the next value, inside an object.
     JsonWriter& key(std::string_view name);
+    JsonWriter& key(const JsonKey& name);
 
     void value(double v);
     void value(std::int64_t v);
@@ -44,16 +57,23 @@ public:
     {
         key(name).value(v);
     }
+    template <class T>
+    void field(const JsonKey& name, const T& v)
+    {
+        key(name).value(v);
+    }
+    // The same for a number, in one append: the form every step is made of.
+    void field(const JsonKey& name, double v);
 
 private:
+    bool compact() const { return compactDepth_ <= empty_.size(); }
     void beforeValue();
     void open(char bracket, bool compact);
     void close(char bracket);
     void newline();
-    void writeString(std::string_view text);
 
     std::string& out_;
-    std::vector<bool> empty_;  // per open container: nothing written in it yet
+    std::vector<char> empty_;  // per open container: nothing written in it yet
     bool afterKey_ = false;
     // The depth of the outermost compact container open (1: the top level).
     static constexpr std::size_t kNotCompact = std::size_t(-1);

@@ -68,11 +68,14 @@ void driveValues(std::vector<double>& v, const DriveResults& drive, const StepRe
         v.insert(v.end(), {fromSi(FileUnit::Rpm, motor.speed[step]), motor.torque[step]});
 }
 
-// Shortest form that reads back to the same double.
-void appendNumber(std::string& out, double v)
+// Shortest form that reads back to the same double, with the comma after it
+// if asked (one append for both).
+void appendNumber(std::string& out, double v, bool comma)
 {
     char text[32];
-    out.append(text, std::to_chars(text, text + sizeof text, v).ptr);
+    char* end = std::to_chars(text, text + sizeof text - 1, v).ptr;
+    if (comma) *end++ = ',';
+    out.append(text, end);
 }
 
 void rowValues(std::vector<double>& v, const CompiledMechanism& m, const StepResult& s)
@@ -92,11 +95,10 @@ void rowValues(std::vector<double>& v, const CompiledMechanism& m, const StepRes
     v.insert(v.end(), s.transmissionDeg.begin(), s.transmissionDeg.end());
 }
 
-}  // namespace
-
-std::string resultsCsvText(const CompiledMechanism& m, const CycleResult& r, const DriveResults* drive)
+// The whole table into `text`; with `write`, handed on in pieces as it grows.
+void streamResultsCsv(std::string& text, const TextPieces* write, const CompiledMechanism& m, const CycleResult& r,
+                      const DriveResults* drive)
 {
-    std::string text;
     std::vector<std::string> h = header(m, r);
     if (drive)
         for (auto& column : driveHeader(m, *drive)) h.push_back(std::move(column));
@@ -105,23 +107,44 @@ std::string resultsCsvText(const CompiledMechanism& m, const CycleResult& r, con
         text += csvField(h[i]);
     }
     text += '\n';
-    text.reserve(text.size() * (r.steps.size() + 1));
     std::vector<double> row, extra;
     for (const auto& s : r.steps) {
         rowValues(row, m, s);
-        for (const double v : row) {
-            appendNumber(text, v);
-            text += ',';
-        }
+        for (const double v : row) appendNumber(text, v, true);
         text += s.nearSingular ? "1" : "0";
         if (drive) driveValues(extra, *drive, s, std::size_t(&s - r.steps.data()));
         for (const double v : extra) {
             text += ',';
-            appendNumber(text, v);
+            appendNumber(text, v, false);
         }
         text += '\n';
+        if (write && text.size() >= kTextPiece) {
+            (*write)(text);
+            text.clear();
+        }
     }
+    if (write) (*write)(text);
+}
+
+}  // namespace
+
+std::string resultsCsvText(const CompiledMechanism& m, const CycleResult& r, const DriveResults* drive)
+{
+    std::string text;
+    // About 24 characters a number (a double's shortest form takes up to 24), in the columns that grow with the
+    // machine.
+    text.reserve(std::size_t(r.steps.size() + 1) * 24 *
+                 (1 + m.drivers.size() + 9 * m.bodies.size() + 3 * m.joints.size()));
+    streamResultsCsv(text, nullptr, m, r, drive);
     return text;
+}
+
+void writeResultsCsv(const TextPieces& write, const CompiledMechanism& m, const CycleResult& r,
+                     const DriveResults* drive)
+{
+    std::string text;
+    text.reserve(kTextPiece + (kTextPiece >> 2));
+    streamResultsCsv(text, &write, m, r, drive);
 }
 
 }  // namespace clevis

@@ -4,6 +4,7 @@
 #pragma once
 
 #include "core/results/drive_train.h"
+#include "core/results/text_pieces.h"
 
 #include <string>
 
@@ -14,5 +15,9 @@ namespace clevis {
 // speed of a driver whose motion was found, the speed and torque of each
 // motor behind a gearbox.
 std::string resultsCsvText(const CompiledMechanism& m, const CycleResult& r, const DriveResults* drive = nullptr);
+
+// The same text handed to `write` in pieces as it is made.
+void writeResultsCsv(const TextPieces& write, const CompiledMechanism& m, const CycleResult& r,
+                     const DriveResults* drive = nullptr);
 
 }  // namespace clevis

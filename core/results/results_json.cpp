@@ -23,50 +23,59 @@ json drivePositions(const CompiledMechanism& m, const StepResult& s)
 
 // The steps are streamed: one object per step on a line of its own, in the
 // order of docs/results-format.md, bodies and joints in the file's order.
+// Every key is escaped once for the whole cycle.
 class StepWriter {
 public:
     StepWriter(JsonWriter& w, const CompiledMechanism& m, const CycleResult& r, const DriveResults* drive)
         : w_(w), m_(m), r_(r), drive_(drive)
-    {}
+    {
+        for (const auto& d : m.drivers) driverKeys_.emplace_back(d.name);
+        for (const auto& b : m.bodies) bodyKeys_.emplace_back(b.name);
+        for (const auto& j : m.joints) jointKeys_.emplace_back(j.name);
+        for (const auto& pin : r.transmissionPins) pinKeys_.emplace_back(m.joints[pin.joint].name);
+    }
 
     void write(const StepResult& s)
     {
         const std::size_t step = std::size_t(&s - r_.steps.data());
         w_.beginObject(true);
-        w_.field("t", s.t);
-        w_.key("drive").beginObject();
+        w_.field(t_, s.t);
+        w_.key(driveKey_).beginObject();
         for (std::size_t d = 0; d < m_.drivers.size(); ++d)
-            w_.field(m_.drivers[d].name, driveDisplayValue(m_.drivers[d].type, s.drivePosition[d]));
+            w_.field(driverKeys_[d], driveDisplayValue(m_.drivers[d].type, s.drivePosition[d]));
         w_.endObject();
-        w_.key("bodies").beginObject();
+        w_.key(bodies_).beginObject();
         for (std::size_t b = 0; b < m_.bodies.size(); ++b) body(s, int(b));
         w_.endObject();
-        w_.key("joints").beginObject();
+        w_.key(joints_).beginObject();
+        // Into each body's own frame, ground's included (at the angle 0), once per step.
+        unrotations_.resize(m_.bodies.size() + 1);
+        for (int b = kGround; b < int(m_.bodies.size()); ++b)
+            unrotations_[std::size_t(b + 1)] = rotation(-bodyAngle(s.q, b));
         for (std::size_t j = 0; j < m_.joints.size(); ++j) joint(s, int(j));
         w_.endObject();
-        w_.key("drivers").beginObject();
+        w_.key(drivers_).beginObject();
         for (std::size_t d = 0; d < m_.drivers.size(); ++d) {
-            w_.key(m_.drivers[d].name).beginObject();
-            w_.field("effort", s.effort[d]);
-            w_.field("power", s.power[d]);
+            w_.key(driverKeys_[d]).beginObject();
+            w_.field(effort_, s.effort[d]);
+            w_.field(power_, s.power[d]);
             if (drive_) driveFields(int(d), step);
             w_.endObject();
         }
         w_.endObject();
-        w_.key("ground").beginObject();
+        w_.key(ground_).beginObject();
         force(s.groundForce);
-        w_.field("moment", s.groundMoment);
+        w_.field(moment_, s.groundMoment);
         w_.endObject();
-        w_.key("energy").beginObject();
-        w_.field("kinetic", s.kinetic);
-        w_.field("gravity", s.gravityPotential);
-        w_.field("spring", s.springPotential);
+        w_.key(energy_).beginObject();
+        w_.field(kinetic_, s.kinetic);
+        w_.field(gravity_, s.gravityPotential);
+        w_.field(spring_, s.springPotential);
         w_.endObject();
-        w_.key("transmission_deg").beginObject();
-        for (std::size_t k = 0; k < r_.transmissionPins.size(); ++k)
-            w_.field(m_.joints[r_.transmissionPins[k].joint].name, s.transmissionDeg[k]);
+        w_.key(transmission_).beginObject();
+        for (std::size_t k = 0; k < r_.transmissionPins.size(); ++k) w_.field(pinKeys_[k], s.transmissionDeg[k]);
         w_.endObject();
-        w_.field("near_singular", s.nearSingular);
+        w_.field(nearSingular_, s.nearSingular);
         w_.endObject();
     }
 
@@ -90,23 +99,23 @@ private:
 
     void force(const Vec2& f)
     {
-        w_.field("fx", f.x());
-        w_.field("fy", f.y());
+        w_.field(fx_, f.x());
+        w_.field(fy_, f.y());
     }
 
     void body(const StepResult& s, int b)
     {
         const int i = coordinateIndex(b, 0);
-        w_.key(m_.bodies[b].name).beginObject();
-        w_.field("x", s.q[i]);
-        w_.field("y", s.q[i + 1]);
-        w_.field("angle_deg", radToDeg(s.q[i + 2]));
-        w_.field("vx", s.qd[i]);
-        w_.field("vy", s.qd[i + 1]);
-        w_.field("omega", s.qd[i + 2]);
-        w_.field("ax", s.qdd[i]);
-        w_.field("ay", s.qdd[i + 1]);
-        w_.field("alpha", s.qdd[i + 2]);
+        w_.key(bodyKeys_[std::size_t(b)]).beginObject();
+        w_.field(x_, s.q[i]);
+        w_.field(y_, s.q[i + 1]);
+        w_.field(angle_, radToDeg(s.q[i + 2]));
+        w_.field(vx_, s.qd[i]);
+        w_.field(vy_, s.qd[i + 1]);
+        w_.field(omega_, s.qd[i + 2]);
+        w_.field(ax_, s.qdd[i]);
+        w_.field(ay_, s.qdd[i + 1]);
+        w_.field(alpha_, s.qdd[i + 2]);
         w_.endObject();
     }
 
@@ -118,16 +127,16 @@ private:
         const CompiledJoint& cj = m_.joints[j];
         const Reaction& reaction = s.joints[j];
         const auto inFrame = [&](int body, const Vec2& global) -> Vec2 {
-            return rotation(-bodyAngle(s.q, body)) * global;
+            return unrotations_[std::size_t(body + 1)] * global;
         };
-        w_.key(cj.name).beginObject();
+        w_.key(jointKeys_[std::size_t(j)]).beginObject();
         force(reaction.force);
-        w_.field("moment", reaction.moment);
-        w_.key("local").beginObject();
-        w_.key("first").beginObject();
+        w_.field(moment_, reaction.moment);
+        w_.key(local_).beginObject();
+        w_.key(first_).beginObject();
         force(inFrame(cj.body[0], -reaction.force));
         w_.endObject();
-        w_.key("second").beginObject();
+        w_.key(second_).beginObject();
         force(inFrame(cj.body[1], reaction.force));
         w_.endObject();
         w_.endObject();
@@ -138,6 +147,14 @@ private:
     const CompiledMechanism& m_;
     const CycleResult& r_;
     const DriveResults* drive_;
+    std::vector<JsonKey> driverKeys_, bodyKeys_, jointKeys_, pinKeys_;
+    std::vector<Eigen::Matrix2d> unrotations_;  // ground's, then each body's at the step
+    const JsonKey t_{"t"}, driveKey_{"drive"}, bodies_{"bodies"}, joints_{"joints"}, drivers_{"drivers"};
+    const JsonKey ground_{"ground"}, energy_{"energy"}, transmission_{"transmission_deg"};
+    const JsonKey nearSingular_{"near_singular"}, effort_{"effort"}, power_{"power"}, moment_{"moment"};
+    const JsonKey kinetic_{"kinetic"}, gravity_{"gravity"}, spring_{"spring"}, fx_{"fx"}, fy_{"fy"};
+    const JsonKey x_{"x"}, y_{"y"}, angle_{"angle_deg"}, vx_{"vx"}, vy_{"vy"}, omega_{"omega"};
+    const JsonKey ax_{"ax"}, ay_{"ay"}, alpha_{"alpha"}, local_{"local"}, first_{"first"}, second_{"second"};
 };
 
 // `<key>_near_singular`: the peak's step is flagged; `<key>_near_toggle`: a
@@ -339,11 +356,12 @@ json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const Cycle
     return out;
 }
 
-std::string resultsJsonText(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& summary,
-                            const nlohmann::json& sections, const DriveResults* drive)
+namespace {
+
+// The whole file into `text`; with `write`, handed on in pieces as it grows.
+void streamResultsJson(std::string& text, const TextPieces* write, const CompiledMechanism& m, const CycleResult& r,
+                       const CycleSummary& summary, const nlohmann::json& sections, const DriveResults* drive)
 {
-    std::string text;
-    text.reserve(std::size_t(r.steps.size()) * (600 + 400 * (m.bodies.size() + m.joints.size())));
     JsonWriter w(text);
     w.beginObject();
     w.key("summary").value(summaryToJson(m, r, summary, drive));
@@ -358,11 +376,36 @@ std::string resultsJsonText(const CompiledMechanism& m, const CycleResult& r, co
     w.field("planned_steps", r.plannedSteps);
     w.key("steps").beginArray();
     StepWriter steps(w, m, r, drive);
-    for (const auto& s : r.steps) steps.write(s);
+    for (const auto& s : r.steps) {
+        steps.write(s);
+        if (write && text.size() >= kTextPiece) {
+            (*write)(text);
+            text.clear();
+        }
+    }
     w.endArray();
     w.endObject();
     text += '\n';
+    if (write) (*write)(text);
+}
+
+}  // namespace
+
+std::string resultsJsonText(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& summary,
+                            const nlohmann::json& sections, const DriveResults* drive)
+{
+    std::string text;
+    text.reserve(std::size_t(r.steps.size()) * (600 + 400 * (m.bodies.size() + m.joints.size())));
+    streamResultsJson(text, nullptr, m, r, summary, sections, drive);
     return text;
+}
+
+void writeResultsJson(const TextPieces& write, const CompiledMechanism& m, const CycleResult& r,
+                      const CycleSummary& summary, const nlohmann::json& sections, const DriveResults* drive)
+{
+    std::string text;
+    text.reserve(kTextPiece + (kTextPiece >> 2));
+    streamResultsJson(text, &write, m, r, summary, sections, drive);
 }
 
 }  // namespace clevis

@@ -5,6 +5,7 @@
 
 #include "core/results/cycle_summary.h"
 #include "core/results/drive_train.h"
+#include "core/results/text_pieces.h"
 
 #include <nlohmann/json.hpp>
 
@@ -23,5 +24,11 @@ nlohmann::json summaryToJson(const CompiledMechanism& m, const CycleResult& r, c
 std::string resultsJsonText(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& summary,
                             const nlohmann::json& sections = nlohmann::json::object(),
                             const DriveResults* drive = nullptr);
+
+// The same text handed to `write` in pieces as it is made, so that a file of
+// tens of megabytes is written without being held whole.
+void writeResultsJson(const TextPieces& write, const CompiledMechanism& m, const CycleResult& r,
+                      const CycleSummary& summary, const nlohmann::json& sections = nlohmann::json::object(),
+                      const DriveResults* drive = nullptr);
 
 }  // namespace clevis

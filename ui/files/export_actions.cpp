@@ -140,7 +140,11 @@ void ExportActions::exportCsv()
     const QString path = QFileDialog::getSaveFileName(window_, tr("Export step data"), "steps.csv", tr("CSV (*.csv)"));
     if (path.isEmpty()) return;
     try {
-        writeFileAtomically(path.toStdString(), resultsCsvText(analysis_->compiled(), analysis_->result()), false);
+        // Written as it is made: a large machine's table is never held whole.
+        writeFileAtomically(
+            path.toStdString(),
+            [&](const TextPieces& write) { writeResultsCsv(write, analysis_->compiled(), analysis_->result()); },
+            false);
     } catch (const FileWriteError& e) {
         failed(QString::fromStdString(e.what()));
     }
