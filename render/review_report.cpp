@@ -27,6 +27,7 @@
 #include <QPdfWriter>
 
 #include <algorithm>
+#include <future>
 #include <set>
 
 namespace clevis::ui {
@@ -335,25 +336,41 @@ void utilisationTable(PageFlow& f, const ReviewReportInput& in, const CycleAxis&
             [&](int row, int column) { return column == 1 ? shades[std::size_t(row)] : QColor(); });
 }
 
+// What the sizing chapter shows that takes no drawing: the sizing, the bars
+// and the band each sweeps, found in one pass over the cycle for all bars.
+struct SizingFigures {
+    SizingResult sizing;
+    BarList bars;
+    std::vector<std::vector<BandStation>> bands;  // per bar, as barCycleLoads finds it
+};
+
+SizingFigures sizingFigures(const Mechanism& doc, const CompiledMechanism& m, const CycleResult& r)
+{
+    SizingFigures out{sizeParts(doc, m, r), findBars(doc, m), {}};
+    out.bands = barEnvelopeBands(m, r, out.bars.bars, kBandStations);
+    return out;
+}
+
 // The N/V/M diagram of every bar at its critical position, one to a page
 // where they fit; `advance` reports each and may cancel.
-bool barDiagramsSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis, const SizingResult& sizing,
+bool barDiagramsSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis, const SizingFigures& found,
                         const std::function<bool()>& advance)
 {
     const auto& m = in.mechanism;
     const auto& r = in.result;
+    const SizingResult& sizing = found.sizing;
     f.subheading("Internal loads of the bars");
     f.paragraph(
         "Each bar below is drawn at its critical position: where its utilisation peaks, or, for a bar "
         "without a section and an allowable, where its bending moment |M| peaks. Utilisations are "
         "fractions of the allowables given, not a verdict that a part is safe.");
-    const BarList bars = findBars(*in.document, m);
     for (std::size_t b = 0; b < sizing.bars.size(); ++b) {
         if (!advance()) return false;
         const BarSizing& sized = sizing.bars[b];
         const int step = criticalStep(sized);
         if (step < 0) continue;
-        const BarCycleLoads cycle = barCycleLoads(m, r, bars.bars[b]);
+        // As barCycleLoads would find it; the sizing has the envelope already.
+        const BarCycleLoads cycle{found.bars.bars[b], found.bands[b], sized.envelope};
         const BarLoadDiagram figure(m, r, cycle, step, in.units);
         const QString why = sized.section && sized.section->utilisation
                                 ? QString("utilisation %1 peaks").arg(*sized.section->utilisation, 0, 'f', 3)
@@ -426,6 +443,12 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
         return false;
     }
     painter.setRenderHint(QPainter::Antialiasing);
+    // The sizing takes no drawing: it is worked out on a second thread while
+    // this one writes the chapters before it (only core code runs there).
+    std::future<SizingFigures> sizingFound;
+    if (in.document)
+        sizingFound =
+            std::async(std::launch::async, sizingFigures, std::cref(*in.document), std::cref(m), std::cref(r));
     // The drive is known from the mechanism as described, like the sizing.
     const std::optional<DriveResults> drive =
         in.document ? std::optional(driveResultsWithStudies(*in.document, m, r, in.summary.unreliable,
@@ -492,9 +515,9 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
     if (ok) {
         f.heading(sections[5]);
         if (in.document) {
-            const SizingResult sizing = sizeParts(*in.document, m, r);
-            utilisationTable(f, in, axis, sizing);
-            ok = barDiagramsSection(f, in, axis, sizing, advance);
+            const SizingFigures found = sizingFound.get();
+            utilisationTable(f, in, axis, found.sizing);
+            ok = barDiagramsSection(f, in, axis, found, advance);
         } else {
             f.paragraph(
                 "The parts are not known for this result (the mechanism changed while it was being solved): "
