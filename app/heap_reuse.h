@@ -9,7 +9,8 @@ namespace clevis::app {
 // at 200 bodies they take about 25 MB, and with glibc's default (trim above
 // 128 kB) giving those pages back and faulting them in again cost more than
 // the solving: 274 µs per step against 119 µs on clevis-bench's 200-body
-// chain. No effect outside glibc.
+// chain. Blocks up to 32 MB come from the heap too, for the same reason.
+// No effect outside glibc.
 void keepFreedHeapForReuse();
 
 }  // namespace clevis::app

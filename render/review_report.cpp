@@ -29,6 +29,7 @@
 #include <algorithm>
 #include <future>
 #include <set>
+#include <thread>
 
 namespace clevis::ui {
 
@@ -443,12 +444,18 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
         return false;
     }
     painter.setRenderHint(QPainter::Antialiasing);
-    // The sizing takes no drawing: it is worked out on a second thread while
-    // this one writes the chapters before it (only core code runs there).
-    std::future<SizingFigures> sizingFound;
-    if (in.document)
-        sizingFound =
-            std::async(std::launch::async, sizingFigures, std::cref(*in.document), std::cref(m), std::cref(r));
+    // What the sizing chapter shows takes no painter: it is worked out on a
+    // second thread, in the order it is wanted, while this one writes the
+    // chapters before it. Only core code and Qt's fonts (thread-safe) run there.
+    std::packaged_task<SizingFigures()> sizingTask(
+        [&] { return in.document ? sizingFigures(*in.document, m, r) : SizingFigures{}; });
+    std::packaged_task<BearingPolarDiagrams()> polarTask([&] { return bearingPolarDiagrams(in); });
+    std::future<SizingFigures> sizingFound = sizingTask.get_future();
+    std::future<BearingPolarDiagrams> polarsFound = polarTask.get_future();
+    const std::jthread worker([&] {
+        sizingTask();
+        polarTask();
+    });
     // The drive is known from the mechanism as described, like the sizing.
     const std::optional<DriveResults> drive =
         in.document ? std::optional(driveResultsWithStudies(*in.document, m, r, in.summary.unreliable,
@@ -458,7 +465,9 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
     const auto& sections = reviewReportSections(drives);
     const std::vector<CriticalPosition> critical = criticalPositions(m, in.summary);
     const int bars = in.document ? int(findBars(*in.document, m).bars.size()) : 0;
-    const int total = 7 + int(drives) + int(critical.size()) + bars;
+    const int pins = int(std::count_if(m.joints.begin(), m.joints.end(),
+                                       [](const CompiledJoint& j) { return j.type == JointType::Pin; }));
+    const int total = 7 + int(drives) + int(critical.size()) + bars + (pins + 1) / 2;
     int done = 0;
     const auto advance = [&] { return !progress || progress(++done, total); };
     const CycleAxis axis = cycleAxis(m, r);
@@ -524,7 +533,7 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
                 "write the report again once it is solved.",
                 palette::problem());
         }
-        if (ok) bearingPolarPages(f, in);
+        ok = ok && bearingPolarPages(f, polarsFound.get(), advance);
         ok = ok && advance();
     }
     int next = 6;  // the chapters after Sizing, numbered with or without Drive
