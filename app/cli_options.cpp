@@ -269,7 +269,8 @@ const char* const kReportHelp = R"(Usage: clevis-cli report FILE --out review.pd
 
 Writes the design-review PDF of the mechanism in FILE: drawing, inputs, plots,
 peak loads, free-body diagrams at the critical positions, sizing of bars and
-pins, energy balance, cautions.
+pins, energy balance, cautions. When stderr is a terminal and the report takes
+over half a second, one line there tells how far it has got.
 
 Options:
   --out F          the report, a .pdf file

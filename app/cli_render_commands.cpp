@@ -19,7 +19,10 @@
 
 #include <QGuiApplication>
 
+#include <unistd.h>
+
 #include <algorithm>
+#include <chrono>
 #include <iostream>
 #include <memory>
 #include <variant>
@@ -192,8 +195,38 @@ int drawBarDiagram(const DrawOptions& o)
     return exported(figure, o.out, title, *solved, o.file);
 }
 
+// How far the report has got, on one line of stderr rewritten in place:
+// only when stderr is a terminal (a script's log gets no carriage returns)
+// and only once half a second has passed (a small report shows nothing).
+class TerminalProgress {
+public:
+    explicit TerminalProgress(std::string what) : what_(std::move(what)), shown_(isatty(STDERR_FILENO) != 0) {}
+    // Rubs the line out, before anything else is written.
+    void clear()
+    {
+        if (percent_ >= 0) std::cerr << '\r' << std::string(what_.size() + 8, ' ') << '\r' << std::flush;
+        percent_ = -1;
+    }
+    bool operator()(int done, int total)
+    {
+        using namespace std::chrono;
+        const int percent = total > 0 ? 100 * done / total : 0;
+        if (!shown_ || percent == percent_ || steady_clock::now() - start_ < milliseconds(500)) return true;
+        percent_ = percent;
+        std::cerr << '\r' << what_ << ' ' << percent << " %" << std::flush;
+        return true;
+    }
+
+private:
+    std::string what_;
+    bool shown_;
+    int percent_ = -1;  // the last shown; −1: nothing shown yet
+    std::chrono::steady_clock::time_point start_ = std::chrono::steady_clock::now();
+};
+
 int writeReport(const DrawOptions& o)
 {
+    TerminalProgress progress("writing " + o.out + ":");  // timed from the start, the solve included
     const auto solved = solve(o);
     ensureGuiApplication();
     QString error;
@@ -204,7 +237,9 @@ int writeReport(const DrawOptions& o)
                                    ui::RenderUnits{},
                                    &solved->doc,
                                    solved->found ? &*solved->found : nullptr};
-    if (!ui::writeReviewReport(in, QString::fromStdString(o.out), &error)) {
+    const bool written = ui::writeReviewReport(in, QString::fromStdString(o.out), &error, std::ref(progress));
+    progress.clear();
+    if (!written) {
         std::cerr << error.toStdString() << '\n';
         return kExitFailed;
     }

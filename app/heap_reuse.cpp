@@ -15,8 +15,10 @@ void keepFreedHeapForReuse()
 #if defined(__GLIBC__)
     constexpr int kKept = 64 << 20;
     mallopt(M_TRIM_THRESHOLD, kKept);
-    // Blocks of up to 32 MB (glibc's largest setting) from the heap, not
-    // each from a mapping of its own faulted in afresh.
+    // Setting the trim threshold turns off glibc's sliding mmap threshold, so
+    // every block over 128 kB would be mapped and unmapped afresh (the
+    // report's page buffers, hundreds of them, faulted in page by page):
+    // blocks of up to 32 MB (glibc's largest setting) come from the heap.
     mallopt(M_MMAP_THRESHOLD, 32 << 20);
     // The heap grows by 64 MB at once, here, so that the whole of it can be
     // advised to use huge pages (untouched, it costs address space only).

@@ -27,7 +27,9 @@ struct BarCycleLoads {
 };
 
 // `stations` equally spaced stations for the band, besides the piece ends.
-BarCycleLoads barCycleLoads(const CompiledMechanism& m, const CycleResult& r, const BarModel& bar, int stations = 101);
+constexpr int kBandStations = 101;
+BarCycleLoads barCycleLoads(const CompiledMechanism& m, const CycleResult& r, const BarModel& bar,
+                            int stations = kBandStations);
 
 class BarLoadDiagram final : public Figure {
 public:

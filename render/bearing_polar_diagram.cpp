@@ -105,6 +105,18 @@ QPointF unit(QPointF v)
 // On the page y runs down: a body-frame angle drawn counter-clockwise.
 QPointF pageDirection(double deg) { return {std::cos(degToRad(deg)), -std::sin(degToRad(deg))}; }
 
+// The peak's mark, a diamond round its tip.
+QPainterPath peakDiamond(QPointF at)
+{
+    QPainterPath diamond;
+    diamond.moveTo(at + QPointF(0, -kPeakMark));
+    diamond.lineTo(at + QPointF(kPeakMark, 0));
+    diamond.lineTo(at + QPointF(0, kPeakMark));
+    diamond.lineTo(at + QPointF(-kPeakMark, 0));
+    diamond.closeSubpath();
+    return diamond;
+}
+
 }  // namespace
 
 BearingPolarDiagram::BearingPolarDiagram(const CompiledMechanism& m, const CycleResult& r, BearingPolar polar,
@@ -201,6 +213,7 @@ BearingPolarDiagram::BearingPolarDiagram(const CompiledMechanism& m, const Cycle
     }
     const double radius = std::max(plot_.width() / 4, plot_.width() / 2 - kRingRoom * options_.textScale);
     pagePerNewton_ = radius / rings_.back();
+    placeLabels();
 }
 
 QStringList BearingPolarDiagram::paragraphs() const
@@ -214,6 +227,55 @@ QStringList BearingPolarDiagram::paragraphs() const
 QPointF BearingPolarDiagram::tip(const Vec2& force) const
 {
     return plot_.center() + QPointF(force.x(), -force.y()) * pagePerNewton_;
+}
+
+double BearingPolarDiagram::axisReach() const { return rings_.back() * pagePerNewton_ + 12 * options_.textScale; }
+
+void BearingPolarDiagram::placeLabels()
+{
+    const RenderUnits& u = options_.units;
+    const QPointF centre = plot_.center();
+    LabelPlacer& labels = labels_.emplace(plot_, font(kLabelPixels * options_.textScale));
+
+    const QString frame = polar_.body == kGround ? QString("global") : qs(mechanism_.bodyName(polar_.body));
+    const double reach = axisReach();
+    const QPointF xEnd = centre + QPointF(reach, 0), yEnd = centre + QPointF(0, -reach);
+    labels.addObstacle(QLineF(centre - QPointF(reach, 0), xEnd));
+    labels.addObstacle(QLineF(centre + QPointF(0, reach), yEnd));
+    labels.add(QString("x (%1)").arg(frame), xEnd, QPointF(-0.3, 1));
+    labels.add(QString("y (%1)").arg(frame), yEnd, QPointF(1, 0.3));
+    labels.addObstacle(QRectF(centre - QPointF(kPinRadius, kPinRadius), QSizeF(2, 2) * kPinRadius));
+
+    const auto& f = polar_.force;
+    for (std::size_t i = 1; i < f.size(); ++i) labels.addObstacle(QLineF(tip(f[i - 1]), tip(f[i])));
+    if (!f.empty()) labels.addObstacle(QRectF(tip(f.front()) - QPointF(3.5, 3.5), QSizeF(7, 7)));
+
+    if (polar_.peak.step >= 0 && polar_.peak.value > 0) {
+        const QPointF at = tip(f[polar_.peak.step]);
+        labels.addObstacle(QLineF(centre, at));
+        labels.addObstacle(peakDiamond(at).boundingRect());
+        labels.add("peak " + u.force(polar_.peak.value), at, unit(at - centre));
+    }
+
+    // Each ring's value, along the side the load leaves most free.
+    const double ringDeg = polar_.sector.defined && !polar_.sector.reverses ? polar_.sector.quietDeg : -45.0;
+    for (std::size_t k = options_.compact ? rings_.size() - 1 : 0; k < rings_.size(); ++k)
+        labels.add(ringText(u, rings_[k]), centre + pageDirection(ringDeg) * rings_[k] * pagePerNewton_,
+                   pageDirection(ringDeg), palette::groundHatch());
+
+    for (const PolarMark& mark : marks_)
+        labels.addObstacle(QRectF(tip(mark.force) - QPointF(kMarkRadius, kMarkRadius), QSizeF(2, 2) * kMarkRadius));
+    for (std::size_t k = 0; k < marks_.size(); k += options_.compact ? kCompactMarkLabels : 1) {
+        const QPointF at = tip(marks_[k].force);
+        labels.add(markText(axis_, marks_[k].position), at, unit(at - centre));
+    }
+
+    if (options_.currentStep >= 0 && options_.currentStep < int(f.size())) {
+        const QPointF at = tip(f[options_.currentStep]);
+        labels.addObstacle(QLineF(centre, at));
+        labels.addObstacle(QRectF(at - QPointF(kNowRing, kNowRing), QSizeF(2, 2) * kNowRing));
+        labels.add("now", at, unit(at - centre), palette::link());
+    }
 }
 
 void BearingPolarDiagram::paint(QPainter& p, const QRectF& target) const
@@ -247,10 +309,7 @@ void BearingPolarDiagram::paint(QPainter& p, const QRectF& target) const
 
 void BearingPolarDiagram::paintPlot(QPainter& p) const
 {
-    const RenderUnits& u = options_.units;
     const QPointF centre = plot_.center();
-    const double outer = rings_.back() * pagePerNewton_;
-    LabelPlacer labels(plot_, font(kLabelPixels * options_.textScale));
 
     // Rings, light, the outer one a shade darker.
     p.setBrush(Qt::NoBrush);
@@ -261,18 +320,11 @@ void BearingPolarDiagram::paintPlot(QPainter& p) const
     }
 
     // The body-frame axes through the pin, named at their positive ends.
-    const QString frame = polar_.body == kGround ? QString("global") : qs(mechanism_.bodyName(polar_.body));
     const ArrowStyle axisArrow = figureArrow(palette::groundHatch(), 0.8);
-    const double reach = outer + 12 * options_.textScale;
-    const QPointF xEnd = centre + QPointF(reach, 0), yEnd = centre + QPointF(0, -reach);
-    drawArrow(p, centre - QPointF(reach, 0), xEnd, axisArrow);
-    drawArrow(p, centre + QPointF(0, reach), yEnd, axisArrow);
-    labels.addObstacle(QLineF(centre - QPointF(reach, 0), xEnd));
-    labels.addObstacle(QLineF(centre + QPointF(0, reach), yEnd));
-    labels.add(QString("x (%1)").arg(frame), xEnd, QPointF(-0.3, 1));
-    labels.add(QString("y (%1)").arg(frame), yEnd, QPointF(1, 0.3));
+    const double reach = axisReach();
+    drawArrow(p, centre - QPointF(reach, 0), centre + QPointF(reach, 0), axisArrow);
+    drawArrow(p, centre + QPointF(0, reach), centre + QPointF(0, -reach), axisArrow);
     drawPin(p, centre, kPinRadius, palette::ink(), palette::paper());
-    labels.addObstacle(QRectF(centre - QPointF(kPinRadius, kPinRadius), QSizeF(2, 2) * kPinRadius));
 
     // The curve, straight between steps; dashed where a step is near a singular position.
     const auto& f = polar_.force;
@@ -283,9 +335,7 @@ void BearingPolarDiagram::paintPlot(QPainter& p) const
         QPen pen(flagged ? palette::problem() : palette::ink(), 1.5, flagged ? Qt::DashLine : Qt::SolidLine,
                  Qt::RoundCap, Qt::RoundJoin);
         p.setPen(pen);
-        const QLineF segment(tip(f[i - 1]), tip(f[i]));
-        p.drawLine(segment);
-        labels.addObstacle(segment);
+        p.drawLine(QLineF(tip(f[i - 1]), tip(f[i])));
     }
     p.restore();
 
@@ -295,7 +345,6 @@ void BearingPolarDiagram::paintPlot(QPainter& p) const
         p.setPen(QPen(palette::ink(), 1.2));
         p.setBrush(palette::paper());
         p.drawRect(QRectF(start - QPointF(3.5, 3.5), QSizeF(7, 7)));
-        labels.addObstacle(QRectF(start - QPointF(3.5, 3.5), QSizeF(7, 7)));
         for (std::size_t i = 1; i < f.size(); ++i)
             if (const QPointF d = tip(f[i]) - start; std::hypot(d.x(), d.y()) >= 14) {
                 drawArrow(p, start, start + unit(d) * 14, figureArrow(palette::ink(), 1.2));
@@ -307,38 +356,15 @@ void BearingPolarDiagram::paintPlot(QPainter& p) const
     if (polar_.peak.step >= 0 && polar_.peak.value > 0) {
         const QPointF at = tip(f[polar_.peak.step]);
         drawArrow(p, centre, at, figureArrow(palette::groundHatch(), 0.8, true));
-        labels.addObstacle(QLineF(centre, at));
-        QPainterPath diamond;
-        diamond.moveTo(at + QPointF(0, -kPeakMark));
-        diamond.lineTo(at + QPointF(kPeakMark, 0));
-        diamond.lineTo(at + QPointF(0, kPeakMark));
-        diamond.lineTo(at + QPointF(-kPeakMark, 0));
-        diamond.closeSubpath();
         p.setPen(QPen(palette::ink(), 1));
         p.setBrush(palette::ink());
-        p.drawPath(diamond);
-        labels.addObstacle(diamond.boundingRect());
-        labels.add("peak " + u.force(polar_.peak.value), at, unit(at - centre));
+        p.drawPath(peakDiamond(at));
     }
-
-    // Each ring's value, along the side the load leaves most free.
-    const double ringDeg = polar_.sector.defined && !polar_.sector.reverses ? polar_.sector.quietDeg : -45.0;
-    for (std::size_t k = options_.compact ? rings_.size() - 1 : 0; k < rings_.size(); ++k)
-        labels.add(ringText(u, rings_[k]), centre + pageDirection(ringDeg) * rings_[k] * pagePerNewton_,
-                   pageDirection(ringDeg), palette::groundHatch());
 
     // The drive position at each mark.
     p.setPen(QPen(palette::paper(), 0.8));
     p.setBrush(palette::ink());
-    for (const PolarMark& mark : marks_) {
-        const QPointF at = tip(mark.force);
-        p.drawEllipse(at, kMarkRadius, kMarkRadius);
-        labels.addObstacle(QRectF(at - QPointF(kMarkRadius, kMarkRadius), QSizeF(2, 2) * kMarkRadius));
-    }
-    for (std::size_t k = 0; k < marks_.size(); k += options_.compact ? kCompactMarkLabels : 1) {
-        const QPointF at = tip(marks_[k].force);
-        labels.add(markText(axis_, marks_[k].position), at, unit(at - centre));
-    }
+    for (const PolarMark& mark : marks_) p.drawEllipse(tip(mark.force), kMarkRadius, kMarkRadius);
 
     // The scrubbed position.
     if (options_.currentStep >= 0 && options_.currentStep < int(f.size())) {
@@ -348,11 +374,8 @@ void BearingPolarDiagram::paintPlot(QPainter& p) const
         p.setPen(QPen(palette::link(), 1.6));
         p.setBrush(Qt::NoBrush);
         p.drawEllipse(at, kNowRing, kNowRing);
-        labels.addObstacle(QLineF(centre, at));
-        labels.addObstacle(QRectF(at - QPointF(kNowRing, kNowRing), QSizeF(2, 2) * kNowRing));
-        labels.add("now", at, unit(at - centre), palette::link());
     }
-    labels.paint(p, palette::ink(), palette::paper());
+    labels_->paint(p, palette::ink(), palette::paper());
 }
 
 }  // namespace clevis::ui

@@ -10,12 +10,14 @@
 #include "core/results/bearing_polar.h"
 #include "render/cycle_axis.h"
 #include "render/figure_export.h"
+#include "render/label_placer.h"
 #include "render/render_units.h"
 
 #include <QFont>
 #include <QString>
 #include <QStringList>
 
+#include <optional>
 #include <vector>
 
 namespace clevis::ui {
@@ -55,6 +57,10 @@ public:
 
 private:
     QPointF tip(const Vec2& force) const;  // where a force's tip is drawn, page units
+    double axisReach() const;              // from the pin to the tip of each body-frame axis
+    // The labels are placed once, in the order they claim their places; the
+    // plot is painted under them.
+    void placeLabels();
     void paintPlot(QPainter& p) const;
 
     const CompiledMechanism& mechanism_;
@@ -76,6 +82,7 @@ private:
     QSizeF size_;
     QRectF plot_;
     double captionTop_ = 0, notesTop_ = 0;
+    std::optional<LabelPlacer> labels_;
 };
 
 }  // namespace clevis::ui

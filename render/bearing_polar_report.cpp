@@ -44,10 +44,10 @@ private:
 
 }  // namespace
 
-void bearingPolarPages(PageFlow& f, const ReviewReportInput& in)
+BearingPolarDiagrams bearingPolarDiagrams(const ReviewReportInput& in)
 {
     const auto& m = in.mechanism;
-    std::vector<std::unique_ptr<BearingPolarDiagram>> diagrams;
+    BearingPolarDiagrams diagrams;
     for (std::size_t j = 0; j < m.joints.size(); ++j) {
         const auto& joint = m.joints[j];
         if (joint.type != JointType::Pin) continue;
@@ -55,10 +55,15 @@ void bearingPolarPages(PageFlow& f, const ReviewReportInput& in)
         diagrams.push_back(std::make_unique<BearingPolarDiagram>(
             m, in.result, bearingPolar(m, in.result, in.summary, int(j), body), BearingPolarOptions{in.units}));
     }
+    return diagrams;
+}
+
+bool bearingPolarPages(PageFlow& f, const BearingPolarDiagrams& diagrams, const std::function<bool()>& advance)
+{
     f.subheading("Bearing loads in the body frame");
     if (diagrams.empty()) {
         f.paragraph("The mechanism has no pin joints.");
-        return;
+        return true;
     }
     f.paragraph(
         "The load each pin puts on a body over the whole cycle, drawn in that body's own frame: the curve "
@@ -67,12 +72,14 @@ void bearingPolarPages(PageFlow& f, const ReviewReportInput& in)
         "one that sweeps 180° or more reverses on the bearing. A pin between two moving bodies is shown "
         "in its second body's frame; a pin on the frame in the moving body's.");
     for (std::size_t k = 0; k < diagrams.size(); k += 2) {
+        if (!advance()) return false;
         std::vector<const Figure*> row{diagrams[k].get()};
         if (k + 1 < diagrams.size()) row.push_back(diagrams[k + 1].get());
         // A lone last diagram keeps the width it has beside another.
         const double width = row.size() == 2 ? f.width() : (f.width() - kGap) / 2;
         f.figure(FigureRow(row), width);
     }
+    return true;
 }
 
 }  // namespace clevis::ui

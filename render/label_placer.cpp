@@ -21,6 +21,11 @@ double overlapArea(const QRectF& a, const QRectF& b)
 
 bool crosses(const QLineF& line, const QRectF& box)
 {
+    // A segment whose bounding box misses the box cannot touch it: most
+    // obstacles are far from any one candidate, and this test is cheap.
+    if (std::max(line.x1(), line.x2()) < box.left() || std::min(line.x1(), line.x2()) > box.right() ||
+        std::max(line.y1(), line.y2()) < box.top() || std::min(line.y1(), line.y2()) > box.bottom())
+        return false;
     if (box.contains(line.p1()) || box.contains(line.p2())) return true;
     const QLineF edges[] = {{box.topLeft(), box.topRight()},
                             {box.topRight(), box.bottomRight()},

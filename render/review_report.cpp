@@ -27,7 +27,9 @@
 #include <QPdfWriter>
 
 #include <algorithm>
+#include <future>
 #include <set>
+#include <thread>
 
 namespace clevis::ui {
 
@@ -335,25 +337,41 @@ void utilisationTable(PageFlow& f, const ReviewReportInput& in, const CycleAxis&
             [&](int row, int column) { return column == 1 ? shades[std::size_t(row)] : QColor(); });
 }
 
+// What the sizing chapter shows that takes no drawing: the sizing, the bars
+// and the band each sweeps, found in one pass over the cycle for all bars.
+struct SizingFigures {
+    SizingResult sizing;
+    BarList bars;
+    std::vector<std::vector<BandStation>> bands;  // per bar, as barCycleLoads finds it
+};
+
+SizingFigures sizingFigures(const Mechanism& doc, const CompiledMechanism& m, const CycleResult& r)
+{
+    SizingFigures out{sizeParts(doc, m, r), findBars(doc, m), {}};
+    out.bands = barEnvelopeBands(m, r, out.bars.bars, kBandStations);
+    return out;
+}
+
 // The N/V/M diagram of every bar at its critical position, one to a page
 // where they fit; `advance` reports each and may cancel.
-bool barDiagramsSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis, const SizingResult& sizing,
+bool barDiagramsSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis, const SizingFigures& found,
                         const std::function<bool()>& advance)
 {
     const auto& m = in.mechanism;
     const auto& r = in.result;
+    const SizingResult& sizing = found.sizing;
     f.subheading("Internal loads of the bars");
     f.paragraph(
         "Each bar below is drawn at its critical position: where its utilisation peaks, or, for a bar "
         "without a section and an allowable, where its bending moment |M| peaks. Utilisations are "
         "fractions of the allowables given, not a verdict that a part is safe.");
-    const BarList bars = findBars(*in.document, m);
     for (std::size_t b = 0; b < sizing.bars.size(); ++b) {
         if (!advance()) return false;
         const BarSizing& sized = sizing.bars[b];
         const int step = criticalStep(sized);
         if (step < 0) continue;
-        const BarCycleLoads cycle = barCycleLoads(m, r, bars.bars[b]);
+        // As barCycleLoads would find it; the sizing has the envelope already.
+        const BarCycleLoads cycle{found.bars.bars[b], found.bands[b], sized.envelope};
         const BarLoadDiagram figure(m, r, cycle, step, in.units);
         const QString why = sized.section && sized.section->utilisation
                                 ? QString("utilisation %1 peaks").arg(*sized.section->utilisation, 0, 'f', 3)
@@ -426,6 +444,18 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
         return false;
     }
     painter.setRenderHint(QPainter::Antialiasing);
+    // What the sizing chapter shows takes no painter: it is worked out on a
+    // second thread, in the order it is wanted, while this one writes the
+    // chapters before it. Only core code and Qt's fonts (thread-safe) run there.
+    std::packaged_task<SizingFigures()> sizingTask(
+        [&] { return in.document ? sizingFigures(*in.document, m, r) : SizingFigures{}; });
+    std::packaged_task<BearingPolarDiagrams()> polarTask([&] { return bearingPolarDiagrams(in); });
+    std::future<SizingFigures> sizingFound = sizingTask.get_future();
+    std::future<BearingPolarDiagrams> polarsFound = polarTask.get_future();
+    const std::jthread worker([&] {
+        sizingTask();
+        polarTask();
+    });
     // The drive is known from the mechanism as described, like the sizing.
     const std::optional<DriveResults> drive =
         in.document ? std::optional(driveResultsWithStudies(*in.document, m, r, in.summary.unreliable,
@@ -435,7 +465,9 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
     const auto& sections = reviewReportSections(drives);
     const std::vector<CriticalPosition> critical = criticalPositions(m, in.summary);
     const int bars = in.document ? int(findBars(*in.document, m).bars.size()) : 0;
-    const int total = 7 + int(drives) + int(critical.size()) + bars;
+    const int pins = int(std::count_if(m.joints.begin(), m.joints.end(),
+                                       [](const CompiledJoint& j) { return j.type == JointType::Pin; }));
+    const int total = 7 + int(drives) + int(critical.size()) + bars + (pins + 1) / 2;
     int done = 0;
     const auto advance = [&] { return !progress || progress(++done, total); };
     const CycleAxis axis = cycleAxis(m, r);
@@ -492,16 +524,16 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
     if (ok) {
         f.heading(sections[5]);
         if (in.document) {
-            const SizingResult sizing = sizeParts(*in.document, m, r);
-            utilisationTable(f, in, axis, sizing);
-            ok = barDiagramsSection(f, in, axis, sizing, advance);
+            const SizingFigures found = sizingFound.get();
+            utilisationTable(f, in, axis, found.sizing);
+            ok = barDiagramsSection(f, in, axis, found, advance);
         } else {
             f.paragraph(
                 "The parts are not known for this result (the mechanism changed while it was being solved): "
                 "write the report again once it is solved.",
                 palette::problem());
         }
-        if (ok) bearingPolarPages(f, in);
+        ok = ok && bearingPolarPages(f, polarsFound.get(), advance);
         ok = ok && advance();
     }
     int next = 6;  // the chapters after Sizing, numbered with or without Drive

@@ -106,6 +106,32 @@ TEST(BarEnvelopeBand, IsTheRangeOfEveryStepAtEachStationOnEverySample)
     }
 }
 
+// The report finds the bands of all bars in one pass over the cycle: each
+// the band of that bar alone, bit for bit, on samples whose bars differ in
+// length, loads part-way along and point masses.
+TEST(BarEnvelopeBand, AllBarsInOnePassAreEachBarsOwn)
+{
+    for (const char* sample : {"dwell_six_bar.json", "flap_folder.json", "punch_press.json", "tote_arm.json"}) {
+        SCOPED_TRACE(sample);
+        const Solved s = solveSample(sample);
+        ASSERT_GE(s.bars.bars.size(), 2u);
+        const auto together = barEnvelopeBands(s.m, s.r, s.bars.bars, 21);
+        ASSERT_EQ(together.size(), s.bars.bars.size());
+        for (std::size_t b = 0; b < s.bars.bars.size(); ++b) {
+            const auto alone = barEnvelopeBand(s.m, s.r, s.bars.bars[b], 21);
+            ASSERT_EQ(together[b].size(), alone.size()) << s.bars.bars[b].bodyName;
+            for (std::size_t i = 0; i < alone.size(); ++i) {
+                const BandStation &x = together[b][i], &y = alone[i];
+                EXPECT_TRUE(x.s == y.s && x.before == y.before) << s.bars.bars[b].bodyName << " station " << i;
+                for (int c = 0; c < 3; ++c) {
+                    EXPECT_EQ(component(x.most, c), component(y.most, c)) << s.bars.bars[b].bodyName << " " << i;
+                    EXPECT_EQ(component(x.least, c), component(y.least, c)) << s.bars.bars[b].bodyName << " " << i;
+                }
+            }
+        }
+    }
+}
+
 // A joint part-way along a bar (the six-bar's finger lever carries D inside
 // its section): the band lists that station on both sides, and the two sides
 // differ by the joint's force somewhere in the cycle.

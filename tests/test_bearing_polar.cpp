@@ -12,6 +12,7 @@
 #include "core/results/free_body.h"
 #include "render/bearing_polar_diagram.h"
 #include "render/palette.h"
+#include "render/review_report.h"
 #include "tests/mechanism_builders.h"
 #include "tests/recording_device.h"
 #include "tests/solved_mechanism.h"
@@ -403,6 +404,38 @@ TEST(BearingPolarReport, TheSizingChapterHasEveryPin)
         EXPECT_EQ(all.count(QString("Bearing load at %1").arg(pin)), 1) << pin;
     EXPECT_GT(all.indexOf("Bearing load at main_bearing"), chapter);
     EXPECT_EQ(all.count("Bearing load at ram_guide"), 0);  // a slider: no bearing
+}
+
+// The report tells how far it has got in steps that add up to its total, a
+// row of bearing diagrams being one (the press's three pins make two), and
+// stops where it is told to, saying so.
+TEST(BearingPolarReport, ProgressCountsEveryRowUpToItsTotalAndCanStop)
+{
+    const auto s = solveSample(kPress);
+    QTemporaryDir dir;
+    const QString pdf = dir.filePath("review.pdf");
+    const ui::ReviewReportInput in{s.m, s.r, s.s, "punch_press.json", ui::RenderUnits{}, &s.doc};
+    std::vector<std::pair<int, int>> calls;
+    QString error;
+    ASSERT_TRUE(ui::writeReviewReport(in, pdf, &error, [&](int done, int total) {
+        calls.emplace_back(done, total);
+        return true;
+    })) << error.toStdString();
+    ASSERT_FALSE(calls.empty());
+    for (std::size_t k = 0; k < calls.size(); ++k) {
+        EXPECT_EQ(calls[k].first, int(k) + 1);
+        EXPECT_EQ(calls[k].second, calls.front().second);
+    }
+    EXPECT_EQ(calls.back().first, calls.back().second) << "every step counted in the total, and no more";
+
+    const int stop = int(calls.size()) / 2;
+    int last = 0;
+    EXPECT_FALSE(ui::writeReviewReport(in, pdf, &error, [&](int done, int) {
+        last = done;
+        return done < stop;
+    }));
+    EXPECT_EQ(last, stop);
+    EXPECT_EQ(error, "report: cancelled");
 }
 
 // The view in the window, offscreen: a message until a joint is selected;

@@ -103,34 +103,55 @@ std::vector<double> pieceEnds(const BarModel& bar, const Pose& q, const std::vec
 std::vector<BandStation> barEnvelopeBand(const CompiledMechanism& m, const CycleResult& r, const BarModel& bar,
                                          int stations)
 {
+    return std::move(barEnvelopeBands(m, r, {bar}, stations).front());
+}
+
+std::vector<std::vector<BandStation>> barEnvelopeBands(const CompiledMechanism& m, const CycleResult& r,
+                                                       const std::vector<BarModel>& bars, int stations)
+{
     if (stations < 2)
         throw std::invalid_argument("an envelope band needs at least 2 stations (both ends), not " +
                                     std::to_string(stations));
-    const double tol = kSameStation * bar.length;
-    // One pass for the loads on the bar at every step and their piece ends,
-    // which fix the stations; a second for the values there.
-    std::vector<std::vector<BodyLoad>> onBar(r.steps.size());
-    if (r.steps.empty()) return bandStations(bar, {}, stations);
+    std::vector<std::vector<BandStation>> bands;
+    if (r.steps.empty()) {
+        for (const BarModel& bar : bars) bands.push_back(bandStations(bar, {}, stations));
+        return bands;
+    }
+    // One pass for the piece ends of every bar at every step, which fix the
+    // stations; a second for the values there. Each pass poses the
+    // mechanism once per step for all the bars, and finds the loads on a bar
+    // afresh (cheaper than keeping them for every step).
     BodyLoads acting(m, r.steps.front());
     std::vector<Eigen::Matrix2d> rotations;
-    std::vector<std::vector<double>> ends(r.steps.size());
-    std::vector<double> all;
-    for (std::size_t k = 0; k < r.steps.size(); ++k) {
-        const Pose q(r.steps[k].q, rotations);
-        acting.step(r.steps[k], q);
-        acting.on(bar.body, onBar[k]);
-        ends[k] = pieceEnds(bar, q, onBar[k]);
-        all.insert(all.end(), ends[k].begin(), ends[k].end());
+    std::vector<BodyLoad> onBar;
+    std::vector<std::vector<double>> all(bars.size());
+    for (const StepResult& step : r.steps) {
+        const Pose q(step.q, rotations);
+        acting.step(step, q);
+        for (std::size_t b = 0; b < bars.size(); ++b) {
+            acting.on(bars[b].body, onBar);
+            const std::vector<double> ends = pieceEnds(bars[b], q, onBar);
+            all[b].insert(all[b].end(), ends.begin(), ends.end());
+        }
     }
-    mergeClose(all, tol);
-    std::vector<BandStation> band = bandStations(bar, all, stations);
+    for (std::size_t b = 0; b < bars.size(); ++b) {
+        mergeClose(all[b], kSameStation * bars[b].length);
+        bands.push_back(bandStations(bars[b], all[b], stations));
+    }
 
     BarLoads along;
     for (std::size_t k = 0; k < r.steps.size(); ++k) {
-        along.set(m, bar, r.steps[k], Pose(r.steps[k].q, rotations), onBar[k]);
-        for (BandStation& st : band) widen(st.most, st.least, valueAt(along, ends[k], st, tol), k == 0);
+        const Pose q(r.steps[k].q, rotations);
+        acting.step(r.steps[k], q);
+        for (std::size_t b = 0; b < bars.size(); ++b) {
+            acting.on(bars[b].body, onBar);
+            const std::vector<double> ends = pieceEnds(bars[b], q, onBar);
+            along.set(m, bars[b], r.steps[k], q, onBar);
+            const double tol = kSameStation * bars[b].length;
+            for (BandStation& st : bands[b]) widen(st.most, st.least, valueAt(along, ends, st, tol), k == 0);
+        }
     }
-    return band;
+    return bands;
 }
 
 BarAtStep barAtStep(const CompiledMechanism& m, const BarModel& bar, const StepResult& s,

@@ -31,6 +31,10 @@ struct BandStation {
 // fewer than two stations.
 std::vector<BandStation> barEnvelopeBand(const CompiledMechanism& m, const CycleResult& r, const BarModel& bar,
                                          int stations);
+// The same for several bars in one pass over the cycle (each step posed once
+// for all of them), in the order given.
+std::vector<std::vector<BandStation>> barEnvelopeBands(const CompiledMechanism& m, const CycleResult& r,
+                                                       const std::vector<BarModel>& bars, int stations);
 
 // One step's N, V and M at the band's stations, and its exact peaks along
 // the bar (BarLoads::peaks), for drawing the step over its band.
