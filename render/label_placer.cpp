@@ -36,6 +36,12 @@ bool crosses(const QLineF& line, const QRectF& box)
     return false;
 }
 
+// Edges included: a line along a box's edge, or a box touching another, may still count.
+bool touches(const QRectF& a, const QRectF& b)
+{
+    return a.left() <= b.right() && b.left() <= a.right() && a.top() <= b.bottom() && b.top() <= a.bottom();
+}
+
 }  // namespace
 
 LabelPlacer::LabelPlacer(const QRectF& area, const QFont& font) : area_(area), font_(font) {}
@@ -44,13 +50,30 @@ void LabelPlacer::addObstacle(const QPainterPath& shape) { shapes_.push_back(sha
 void LabelPlacer::addObstacle(const QRectF& box) { boxes_.push_back(box); }
 void LabelPlacer::addObstacle(const QLineF& line) { lines_.push_back(line); }
 
-double LabelPlacer::cost(const QRectF& box) const
+// Whatever lies clear of every candidate place adds nothing to any cost, so
+// each label looks only at what is near it (a large drawing has hundreds of
+// labels and obstacles: testing all against all 64 places was most of its paint).
+LabelPlacer::Nearby LabelPlacer::nearby(const QRectF& region) const
+{
+    Nearby near;
+    for (const Placed& p : placed_)
+        if (touches(p.box, region)) near.placed.push_back(&p.box);
+    for (const QRectF& b : boxes_)
+        if (touches(b, region)) near.boxes.push_back(&b);
+    for (const QLineF& l : lines_)
+        if (touches(QRectF(l.p1(), l.p2()).normalized(), region)) near.lines.push_back(&l);
+    for (const QPainterPath& s : shapes_)
+        if (touches(s.controlPointRect(), region)) near.shapes.push_back(&s);
+    return near;
+}
+
+double LabelPlacer::cost(const QRectF& box, const Nearby& near) const
 {
     double c = 0.0;
-    for (const Placed& p : placed_) c += 50.0 * overlapArea(box, p.box);
-    for (const QRectF& b : boxes_) c += 4.0 * overlapArea(box, b);
-    for (const QLineF& l : lines_) c += crosses(l, box) ? 400.0 : 0.0;
-    for (const QPainterPath& s : shapes_) c += s.intersects(box) ? 300.0 : 0.0;
+    for (const QRectF* p : near.placed) c += 50.0 * overlapArea(box, *p);
+    for (const QRectF* b : near.boxes) c += 4.0 * overlapArea(box, *b);
+    for (const QLineF* l : near.lines) c += crosses(*l, box) ? 400.0 : 0.0;
+    for (const QPainterPath* s : near.shapes) c += s->intersects(box) ? 300.0 : 0.0;
     if (!area_.contains(box)) c += 5000.0 + 20.0 * (box.width() * box.height() - overlapArea(box, area_));
     return c;
 }
@@ -60,13 +83,17 @@ void LabelPlacer::add(const QString& text, QPointF anchor, QPointF push, const Q
     const QFontMetricsF metrics(font_);
     const QSizeF size = metrics.boundingRect(text).size() + QSizeF(2 * kPadding, 2 * kPadding);
     const double pushAngle = std::atan2(push.y(), push.x());
-    QRectF best;
-    double bestCost = std::numeric_limits<double>::infinity();
     // Rings of candidate places at distances in proportion to the text's
     // height, so a label set large (a zoomed screen view) can clear as much
     // of the drawing as a small one on paper.
     const double h = metrics.height();
-    for (const double distance : {0.5 * h, 1.6 * h, 3.0 * h, 4.5 * h})
+    const double distances[] = {0.5 * h, 1.6 * h, 3.0 * h, 4.5 * h};
+    // Every candidate lies within the farthest ring and the label's diagonal of the anchor (1 px to spare).
+    const double reach = distances[3] + std::hypot(size.width(), size.height()) + 1.0;
+    const Nearby near = nearby(QRectF(anchor - QPointF(reach, reach), anchor + QPointF(reach, reach)));
+    QRectF best;
+    double bestCost = std::numeric_limits<double>::infinity();
+    for (const double distance : distances)
         for (int k = 0; k < 16; ++k) {
             // Alternate either side of the push direction, nearest first.
             const int step = (k + 1) / 2 * (k % 2 ? 1 : -1);
@@ -76,7 +103,7 @@ void LabelPlacer::add(const QString& text, QPointF anchor, QPointF push, const Q
             const QPointF centre =
                 anchor + dir * distance + QPointF(dir.x() * size.width() / 2, dir.y() * size.height() / 2);
             const QRectF box(centre - QPointF(size.width() / 2, size.height() / 2), size);
-            const double c = cost(box) + 0.8 * distance + 2.0 * std::abs(step);
+            const double c = cost(box, near) + 0.8 * distance + 2.0 * std::abs(step);
             if (c < bestCost) {
                 bestCost = c;
                 best = box;

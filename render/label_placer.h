@@ -42,7 +42,14 @@ private:
         QPointF anchor;
         QColor ink;
     };
-    double cost(const QRectF& box) const;
+    // The obstacles and labels that may touch `region`, in the order added.
+    struct Nearby {
+        std::vector<const QRectF*> placed, boxes;
+        std::vector<const QLineF*> lines;
+        std::vector<const QPainterPath*> shapes;
+    };
+    Nearby nearby(const QRectF& region) const;
+    double cost(const QRectF& box, const Nearby& near) const;
 
     QRectF area_;
     QFont font_;

@@ -19,6 +19,7 @@
 #include <QDoubleSpinBox>
 #include <QListWidget>
 #include <QSlider>
+#include <QTabWidget>
 #include <QTest>
 #include <QVBoxLayout>
 
@@ -319,6 +320,35 @@ TEST(ResultsWidgets, HoverReadoutNeverWidensTheWindow)
     ASSERT_GT(plots->readoutText().size(), 300) << plots->readoutText().toStdString();
     EXPECT_LT(plots->minimumSizeHint().width(), 400);
     EXPECT_EQ(window.width(), 900);
+}
+
+// Behind another tab the plots are not drawn for each new result; shown
+// again, they are drawn at once with the newest one (nothing stale).
+TEST(ResultsWidgets, PlotsBehindATabAreDrawnWhenShownAgain)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult());
+    QTabWidget tabs;
+    auto* plots = new PlotStack(s.analysis.get());
+    tabs.addTab(plots, "plots");
+    tabs.addTab(new QWidget, "other");
+    tabs.resize(900, 700);
+    tabs.show();
+    QCoreApplication::processEvents();
+    int drawn = 0;
+    QObject::connect(plots->plot(), &QCustomPlot::afterReplot, [&drawn] { ++drawn; });
+    tabs.setCurrentIndex(1);
+    // An edit that changes the loads: gravity twice as strong.
+    s.doc.apply("heavier", [](Mechanism& m) { m.gravity *= 2.0; });
+    s.analysis->waitForIdle();
+    QCoreApplication::processEvents();
+    EXPECT_EQ(drawn, 0);
+    const QCPGraph* first = plots->plot()->graph(0);
+    ASSERT_NE(first, nullptr);
+    EXPECT_EQ(first->data()->at(1)->value, plots->panes().front().curves.front().series.values[1]);
+    tabs.setCurrentIndex(0);
+    QCoreApplication::processEvents();
+    EXPECT_EQ(drawn, 1);
 }
 
 }  // namespace

@@ -10,6 +10,7 @@
 #include "ui/canvas/sketch_painter.h"
 #include "ui/canvas/snapping.h"
 #include "ui/canvas/tool_palette.h"
+#include "ui/canvas/tools/select_tool.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/document/sketch_geometry.h"
 #include "ui/files/file_actions.h"
@@ -288,6 +289,47 @@ TEST_F(CanvasTest, AFailedSaveKeepsTheDocumentUnsavedAndAGoodOneKeepsABackup)
     EXPECT_FALSE(window.document()->isModified());
     EXPECT_EQ(loadMechanismFile((path + ".bak").toStdString()).mechanism.name, "edited");
     EXPECT_EQ(loadMechanismFile(path.toStdString()).mechanism.name, "edited again");
+}
+
+// The grid is kept as a picture between paints: after a zoom and a pan the
+// canvas must look exactly as one drawn afresh at that view.
+TEST_F(CanvasTest, TheGridFollowsZoomAndPan)
+{
+    drawFourBar();
+    window.analysis()->waitForIdle();  // both fits round the same solved cycle
+    CanvasView* canvas = window.canvas();
+    canvas->setTool(std::make_unique<SelectTool>(*canvas));  // no tool's preview in either picture
+    canvas->fitToView();
+    canvas->grab();  // the grid drawn once at the fitted view
+    canvas->zoomBy(1.25);
+    QMouseEvent press(QEvent::MouseButtonPress, QPointF(300, 300), canvas->mapToGlobal(QPointF(300, 300)),
+                      Qt::MiddleButton, Qt::MiddleButton, {});
+    QApplication::sendEvent(canvas, &press);
+    QMouseEvent move(QEvent::MouseMove, QPointF(337, 311), canvas->mapToGlobal(QPointF(337, 311)), Qt::NoButton,
+                     Qt::MiddleButton, {});
+    QApplication::sendEvent(canvas, &move);
+    QMouseEvent release(QEvent::MouseButtonRelease, QPointF(337, 311), canvas->mapToGlobal(QPointF(337, 311)),
+                        Qt::MiddleButton, Qt::NoButton, {});
+    QApplication::sendEvent(canvas, &release);
+    const QImage kept = canvas->grab().toImage();
+
+    CanvasView fresh(window.document(), window.analysis());
+    fresh.resize(canvas->size());
+    fresh.show();
+    ASSERT_TRUE(QTest::qWaitForWindowExposed(&fresh));
+    // The same view, reached without a picture of the grid on hand (the same fit, zoom and pan).
+    fresh.fitToView();
+    fresh.zoomBy(1.25);
+    QMouseEvent press2(QEvent::MouseButtonPress, QPointF(300, 300), fresh.mapToGlobal(QPointF(300, 300)),
+                       Qt::MiddleButton, Qt::MiddleButton, {});
+    QApplication::sendEvent(&fresh, &press2);
+    QMouseEvent move2(QEvent::MouseMove, QPointF(337, 311), fresh.mapToGlobal(QPointF(337, 311)), Qt::NoButton,
+                      Qt::MiddleButton, {});
+    QApplication::sendEvent(&fresh, &move2);
+    ASSERT_EQ(fresh.size(), canvas->size());
+    ASSERT_EQ(fresh.view().toScreen({0.1, 0.1}), canvas->view().toScreen({0.1, 0.1}));
+    // As pixels (a widget in a window and one on its own may grab to different formats).
+    EXPECT_EQ(kept.convertToFormat(QImage::Format_RGB32), fresh.grab().toImage().convertToFormat(QImage::Format_RGB32));
 }
 
 }  // namespace

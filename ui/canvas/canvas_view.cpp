@@ -128,14 +128,33 @@ Pointer CanvasView::pointer(const QPointF& pos, Qt::KeyboardModifiers mods) cons
 void CanvasView::paintEvent(QPaintEvent*)
 {
     QPainter p(this);
+    p.drawPixmap(0, 0, grid());
     p.setRenderHint(QPainter::Antialiasing);
-    paintGrid(p, view_, rect());
+    paintGridScale(p, view_, rect());
     const std::optional<Mechanism> posed = scrubbedPose();
     LabelPlacer labels(rect(), labelFont(font()));
     PaintContext c{p,     view_, posed ? *posed : doc_->mechanism(), doc_->selection(), analysis_->offendingItems(),
                    labels};
     paintSketch(c);
     tool_->paintPreview(p);
+}
+
+// The grid's lines change only with the view (pan, zoom, size), not with an
+// edit or a new result; drawn antialiased, they were half the canvas's
+// paint, so they are kept as a picture until the view changes.
+const QPixmap& CanvasView::grid()
+{
+    const qreal ratio = devicePixelRatioF();
+    if (grid_.isNull() || gridView_ != view_ || grid_.deviceIndependentSize() != QSizeF(size()) ||
+        grid_.devicePixelRatio() != ratio) {
+        grid_ = QPixmap(size() * ratio);
+        grid_.setDevicePixelRatio(ratio);
+        QPainter p(&grid_);
+        p.setRenderHint(QPainter::Antialiasing);
+        paintGrid(p, view_, rect());
+        gridView_ = view_;
+    }
+    return grid_;
 }
 
 void CanvasView::mousePressEvent(QMouseEvent* e)

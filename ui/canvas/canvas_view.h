@@ -6,6 +6,7 @@
 #include "ui/canvas/tools/tool.h"
 #include "ui/canvas/view_transform.h"
 
+#include <QPixmap>
 #include <QWidget>
 
 #include <memory>
@@ -62,6 +63,7 @@ private:
     void announce();
     std::optional<Mechanism> scrubbedPose() const;
     void fitAround(const std::vector<Vec2>& pts);
+    const QPixmap& grid();
 
     MechanismDocument* doc_;
     AnalysisState* analysis_;
@@ -71,6 +73,9 @@ private:
     bool fitPending_ = true;    // fit once the widget has its real size
     bool fitOnResult_ = false;  // an opened file: fit again to its range of motion once solved
     bool told_ = false;         // the tool left a note during this click: keep it instead of the hint
+    // The grid as last drawn, and the view it was drawn for (empty: draw again).
+    QPixmap grid_;
+    ViewTransform gridView_;
 };
 
 }  // namespace clevis::ui

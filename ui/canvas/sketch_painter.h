@@ -40,7 +40,10 @@ void paintSketch(PaintContext& c);  // everything below, in drawing order, then 
 // The font of the canvas's labels.
 QFont labelFont(const QFont& base);
 
+// The grid's lines and the origin, which change only with the view; its
+// scale, written in the chosen length unit at the bottom left.
 void paintGrid(QPainter& p, const ViewTransform& view, const QRectF& area);
+void paintGridScale(QPainter& p, const ViewTransform& view, const QRectF& area);
 void paintBodies(PaintContext& c);
 void paintJoints(PaintContext& c);  // pins, ground brackets, slider blocks, slots
 void paintDrivers(PaintContext& c);

@@ -23,6 +23,8 @@ public:
     // Shows the world box [lo, hi] centred in `viewport` with a margin.
     void fit(const Vec2& lo, const Vec2& hi, const QRectF& viewport);
 
+    bool operator==(const ViewTransform&) const = default;
+
 private:
     QPointF origin_{400, 300};  // screen position of the world origin
     double scale_ = 2000.0;     // px/m: 1 mm is 2 px

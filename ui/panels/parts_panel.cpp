@@ -38,6 +38,19 @@ Selection selectionOf(const QTreeWidgetItem* item)
             item->data(0, kLoadRole).toInt()};
 }
 
+// The same rows with the same words, roles and colours.
+bool sameRows(const QTreeWidgetItem* a, const QTreeWidgetItem* b)
+{
+    if (a->childCount() != b->childCount()) return false;
+    for (int c = 0; c < 2; ++c)
+        if (a->text(c) != b->text(c) || a->foreground(c) != b->foreground(c)) return false;
+    for (const int role : {kKindRole, kNameRole, kLoadRole})
+        if (a->data(0, role) != b->data(0, role)) return false;
+    for (int i = 0; i < a->childCount(); ++i)
+        if (!sameRows(a->child(i), b->child(i))) return false;
+    return true;
+}
+
 }  // namespace
 
 PartsPanel::PartsPanel(MechanismDocument* doc, AnalysisState* analysis, QWidget* parent)
@@ -57,14 +70,13 @@ PartsPanel::PartsPanel(MechanismDocument* doc, AnalysisState* analysis, QWidget*
 
 void PartsPanel::rebuild()
 {
-    syncing_ = true;
-    clear();
     const Mechanism& m = doc_->mechanism();
     const QStringList blamed = analysis_->offendingItems();
-    const auto group = [this](const QString& title, std::size_t count) {
-        auto* g = new QTreeWidgetItem(this, {title, QString::number(count)});
+    QList<QTreeWidgetItem*> groups;
+    const auto group = [&groups](const QString& title, std::size_t count) {
+        auto* g = new QTreeWidgetItem(QStringList{title, QString::number(count)});
         g->setFlags(Qt::ItemIsEnabled);
-        g->setExpanded(true);
+        groups << g;
         return g;
     };
     const auto row = [&](QTreeWidgetItem* parent, Selection::Kind kind, const std::string& name, const QString& what,
@@ -92,6 +104,18 @@ void PartsPanel::rebuild()
     QTreeWidgetItem* loads = group(tr("Loads"), m.loads.size());
     for (std::size_t i = 0; i < m.loads.size(); ++i)
         row(loads, Selection::Kind::Load, loadName(m.loads[i], int(i)), loadKind(m.loads[i]), int(i));
+    // A drag edits the document at every move of the mouse, most often with
+    // every row unchanged: the tree, its layout and its painting are kept then.
+    bool same = topLevelItemCount() == groups.size();
+    for (int i = 0; same && i < groups.size(); ++i) same = sameRows(topLevelItem(i), groups[i]);
+    if (same) {
+        qDeleteAll(groups);
+        return;
+    }
+    syncing_ = true;
+    clear();
+    addTopLevelItems(groups);
+    for (QTreeWidgetItem* g : groups) g->setExpanded(true);
     syncing_ = false;
     showSelection();
 }

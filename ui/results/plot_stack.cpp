@@ -193,7 +193,7 @@ void PlotStack::rebuild()
         joints_->clear();
         plot_->setMinimumHeight(0);  // no room kept for the panes that were
         showReadout(analysis_->errorText());
-        plot_->replot();
+        replotWhenSeen();
         return;
     }
     showReadout({});  // an earlier error, or values read off the old curves
@@ -303,7 +303,15 @@ void PlotStack::moveCursor(int step)
         c->point1->setCoords(x, 0);
         c->point2->setCoords(x, 1);
     }
-    plot_->replot(QCustomPlot::rpQueuedReplot);
+    replotWhenSeen();
+}
+
+// Behind another tab the plots are not drawn for every result or step: a
+// large mechanism's hundreds of curves would cost each edit for nothing.
+void PlotStack::replotWhenSeen()
+{
+    unseen_ = !plot_->isVisible();
+    if (!unseen_) plot_->replot(QCustomPlot::rpQueuedReplot);
 }
 
 double PlotStack::cursorX() const { return cursors_.empty() ? std::nan("") : cursors_.front()->point1->coords().x(); }
@@ -352,8 +360,9 @@ bool PlotStack::eventFilter(QObject* watched, QEvent* event)
     if (watched == plot_ && event->type() == QEvent::Resize && !legends_.empty() &&
         static_cast<QResizeEvent*>(event)->oldSize().width() != plot_->width()) {
         fitLegends();
-        plot_->replot(QCustomPlot::rpQueuedReplot);
+        replotWhenSeen();
     }
+    if (watched == plot_ && event->type() == QEvent::Show && unseen_) replotWhenSeen();
     return QWidget::eventFilter(watched, event);
 }
 

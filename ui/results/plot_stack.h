@@ -60,6 +60,7 @@ private:
     void pointerPressed(QMouseEvent* e);
     void pointerMoved(QMouseEvent* e);
     void showReadout(const QString& text);
+    void replotWhenSeen();
     int stepAtPixel(double x) const;
 
     AnalysisState* analysis_;
@@ -74,6 +75,7 @@ private:
     QLabel* peaks_;
     std::vector<QCPItemStraightLine*> cursors_;
     std::vector<QCPLegend*> legends_;  // one per pane, in pane order
+    bool unseen_ = false;              // changed while hidden: drawn again when next shown
 };
 
 }  // namespace clevis::ui

@@ -37,9 +37,13 @@ void paintGrid(QPainter& p, const ViewTransform& view, const QRectF& area)
     p.setPen(QPen(palette::gridMajor(), 2.0));
     p.drawLine(o - QPointF(10, 0), o + QPointF(10, 0));
     p.drawLine(o - QPointF(0, 10), o + QPointF(0, 10));
-    const QString scale = QStringLiteral("grid %1").arg(DisplayUnits::instance().formatLength(step));
-    drawLabel(p, area.bottomLeft() + QPointF(10, -10), scale, palette::groundHatch());
     p.restore();
+}
+
+void paintGridScale(QPainter& p, const ViewTransform& view, const QRectF& area)
+{
+    const QString scale = QStringLiteral("grid %1").arg(DisplayUnits::instance().formatLength(gridSpacing(view)));
+    drawLabel(p, area.bottomLeft() + QPointF(10, -10), scale, palette::groundHatch());
 }
 
 }  // namespace clevis::ui
