@@ -1,6 +1,7 @@
 #include "core/results/results_json.h"
 
 #include "core/file/file_units.h"
+#include "core/results/cylinder_ends.h"
 #include "core/results/drive_units.h"
 #include "core/results/json_writer.h"
 #include "core/solver/body_state.h"
@@ -26,7 +27,7 @@ json drivePositions(const CompiledMechanism& m, const StepResult& s)
 class StepWriter {
 public:
     StepWriter(JsonWriter& w, const CompiledMechanism& m, const CycleResult& r, const DriveResults* drive)
-        : w_(w), m_(m), r_(r), drive_(drive)
+        : w_(w), m_(m), r_(r), drive_(drive), ends_(cylinderEnds(m))
     {}
 
     void write(const StepResult& s)
@@ -44,6 +45,11 @@ public:
         w_.key("joints").beginObject();
         for (std::size_t j = 0; j < m_.joints.size(); ++j) joint(s, int(j));
         w_.endObject();
+        if (!ends_.empty()) {
+            w_.key("cylinder_ends").beginObject();
+            for (const CylinderEnd& end : ends_) cylinderEnd(s, end);
+            w_.endObject();
+        }
         w_.key("drivers").beginObject();
         for (std::size_t d = 0; d < m_.drivers.size(); ++d) {
             w_.key(m_.drivers[d].name).beginObject();
@@ -116,19 +122,28 @@ private:
     void joint(const StepResult& s, int j)
     {
         const CompiledJoint& cj = m_.joints[j];
-        const Reaction& reaction = s.joints[j];
-        const auto inFrame = [&](int body, const Vec2& global) -> Vec2 {
-            return rotation(-bodyAngle(s.q, body)) * global;
-        };
-        w_.key(cj.name).beginObject();
-        force(reaction.force);
-        w_.field("moment", reaction.moment);
+        reaction(cj.name, s.joints[j], bodyAngle(s.q, cj.body[0]), bodyAngle(s.q, cj.body[1]));
+    }
+
+    // A cylinder's end as a joint whose first body is the cylinder (its frame
+    // turned by φ_c, cylinder_ends.h) and second the body at that end.
+    void cylinderEnd(const StepResult& s, const CylinderEnd& end)
+    {
+        reaction(end.name, endReaction(m_, s, end), cylinderAngle(m_, s, end.driver), bodyAngle(s.q, end.body));
+    }
+
+    // `firstAngle` and `secondAngle`: the angles of the frames the two sides' bearings are fixed in.
+    void reaction(const std::string& name, const Reaction& r, double firstAngle, double secondAngle)
+    {
+        w_.key(name).beginObject();
+        force(r.force);
+        w_.field("moment", r.moment);
         w_.key("local").beginObject();
         w_.key("first").beginObject();
-        force(inFrame(cj.body[0], -reaction.force));
+        force(rotation(-firstAngle) * -r.force);
         w_.endObject();
         w_.key("second").beginObject();
-        force(inFrame(cj.body[1], reaction.force));
+        force(rotation(-secondAngle) * r.force);
         w_.endObject();
         w_.endObject();
         w_.endObject();
@@ -138,6 +153,7 @@ private:
     const CompiledMechanism& m_;
     const CycleResult& r_;
     const DriveResults* drive_;
+    const std::vector<CylinderEnd> ends_;
 };
 
 // `<key>_near_singular`: the peak's step is flagged; `<key>_near_toggle`: a
@@ -321,6 +337,8 @@ json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const Cycle
     addFlags(ground, "peak_moment", s.groundMoment);
     for (std::size_t j = 0; j < s.joints.size(); ++j)
         joints[s.joints[j].name] = jointSummary(m, r, s.joints[j], m.joints[j].type);
+    json ends = json::object();
+    for (const JointSummary& end : s.cylinderEnds) ends[end.name] = jointSummary(m, r, end, JointType::Pin);
     for (const auto& d : s.drivers) drivers[d.name] = driverSummary(d);
     if (drive) addDriveSummary(drivers, m, *drive);
     for (const auto& t : s.transmission)
@@ -335,6 +353,7 @@ json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const Cycle
                 {"energy_balance", energyBalance(s.energy)},
                 {"near_singular_steps", s.nearSingularSteps},
                 {"toggles", toggles}};
+    if (!ends.empty()) out["cylinder_ends"] = ends;
     if (drive && drive->found && drive->found->sizing) out["flywheel"] = flywheelJson(*drive->found->sizing);
     return out;
 }
