@@ -86,9 +86,11 @@ linear driver with a cylinder, the pressure and flow and whether the supply
 pressure suffices. Then, for every bar: the largest
 axial force, shear force and bending moment, the fibre stresses, the
 utilisation against the allowable the file gives, and the Euler loads. Then,
-for every pin and pin-in-slot joint: the peak force, and for one with pin
-data (its "pin" in the file) the mean pin shear stress, the bearing pressure
-and p·v, with their utilisations against the allowables the file gives.
+for every pin and pin-in-slot joint and each end of a cylinder (the pins
+DRIVER.cap and DRIVER.rod, listed with the joints): the peak force, and for
+one with pin data (its "pin" in the file) the mean pin shear stress, the
+bearing pressure and p·v, with their utilisations against the allowables the
+file gives.
 Utilisation is a figure to compare, not a verdict that a part is safe: rigid
 bodies and ideal joints; no service or dynamic factors, fatigue, stress
 concentrations or pin bending. Check each part under the codes that apply

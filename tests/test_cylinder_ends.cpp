@@ -7,6 +7,7 @@
 // text carry them; the end pins' file keys read, save and refuse bad values.
 #include "core/file/mechanism_file.h"
 #include "core/model/model_error.h"
+#include "core/results/bearing_polar.h"
 #include "core/results/cylinder_ends.h"
 #include "core/results/pin_sizing.h"
 #include "core/results/results_csv.h"
@@ -265,6 +266,36 @@ TEST(CylinderEnds, AnEndPinIsSizedAsAJointsPin)
     for (const StepResult& s : x.r.steps) v = std::max(v, std::abs(s.qd[2] - cylinderRate(x.m, s, 0)) * 0.03 / 2);
     EXPECT_GT(v, 0.0);
     EXPECT_DOUBLE_EQ(rod.slidingSpeed.value, v);
+}
+
+// The end's load on the body there in that body's frame (bearing_polar.h):
+// F' = Rot(−φ)·F, its peak the summary's; the bed turns up by over 60°, so a
+// load fixed in direction globally sweeps round in the bed's frame.
+TEST(CylinderEnds, TheBearingDiagramOfAnEndIsOnTheBodyThere)
+{
+    const Solved x = solve(tippingBed());
+    const std::vector<CylinderEnd> ends = cylinderEnds(x.m);
+    const BearingPolar rod = endBearingPolar(x.m, x.r, x.s, 1);
+    EXPECT_EQ(rod.pin, "lift_cylinder.rod");
+    EXPECT_EQ(rod.joint, -1);
+    EXPECT_EQ(rod.cylinderEnd, 1);
+    EXPECT_EQ(rod.body, 0);
+    EXPECT_EQ(rod.otherName, "lift_cylinder");
+    ASSERT_EQ(rod.force.size(), x.r.steps.size());
+    for (std::size_t i = 0; i < x.r.steps.size(); i += 20) {
+        const double phi = x.r.steps[i].q[2];
+        const Vec2 global = endReaction(x.m, x.r.steps[i], ends[1]).force;
+        const Vec2 expected(global.x() * std::cos(phi) + global.y() * std::sin(phi),
+                            -global.x() * std::sin(phi) + global.y() * std::cos(phi));
+        EXPECT_LT((rod.force[i] - expected).norm(), 1e-9 * global.norm());
+    }
+    EXPECT_EQ(rod.peak.value, x.s.cylinderEnds[1].peak.value);
+    EXPECT_TRUE(rod.sector.defined);
+    const BearingPolar cap = endBearingPolar(x.m, x.r, x.s, 0);
+    EXPECT_EQ(cap.body, kGround);
+    EXPECT_LT((cap.force.back() + endReaction(x.m, x.r.steps.back(), ends[1]).force).norm(), 1e-9 * cap.peak.value)
+        << "the frame's axes are the global ones";
+    EXPECT_THROW(endBearingPolar(x.m, x.r, x.s, 2), std::invalid_argument);
 }
 
 TEST(CylinderEnds, EndPinsReadSaveAndRefuseBadValues)
