@@ -7,11 +7,13 @@
 // text carry them; the end pins' file keys read, save and refuse bad values.
 #include "core/file/mechanism_file.h"
 #include "core/model/model_error.h"
+#include "core/results/bar_sizing.h"
 #include "core/results/bearing_polar.h"
 #include "core/results/cylinder_ends.h"
 #include "core/results/pin_sizing.h"
 #include "core/results/results_csv.h"
 #include "core/results/results_json.h"
+#include "core/results/sizing_json.h"
 #include "core/results/summary_text.h"
 #include "core/solver/applied_loads.h"
 #include "core/solver/body_state.h"
@@ -346,6 +348,17 @@ TEST(CylinderEnds, FilesAndTextCarryTheEndsAsJoints)
     EXPECT_EQ(summary["peak_step"].get<int>(), x.s.cylinderEnds[0].peak.step);
     EXPECT_EQ(summary["rms_n"].get<double>(), x.s.cylinderEnds[0].rms);
     EXPECT_FALSE(json["summary"]["joints"].contains("lift_cylinder.cap")) << "the file's joints stay the file's";
+    Mechanism sized = x.doc;
+    sized.drivers[0].endPins[0] = PinData{0.025};
+    const Solved y = solve(sized);
+    const nlohmann::json sizing = sizingToJson(y.m, y.r, sizeParts(y.doc, y.m, y.r));
+    ASSERT_EQ(sizing["pins"].size(), 1u);
+    EXPECT_EQ(sizing["pins"][0]["joint"], "hinge");
+    ASSERT_EQ(sizing["cylinder_ends"].size(), 2u);
+    EXPECT_EQ(sizing["cylinder_ends"][0]["end"], "lift_cylinder.cap");
+    EXPECT_EQ(sizing["cylinder_ends"][0]["pin"]["diameter_m"], 0.025);
+    EXPECT_EQ(sizing["cylinder_ends"][1]["end"], "lift_cylinder.rod");
+    EXPECT_TRUE(sizing["cylinder_ends"][1]["pin"].is_null());
 
     const std::string csv = resultsCsvText(x.m, x.r);
     const std::string header = csv.substr(0, csv.find('\n'));
