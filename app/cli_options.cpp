@@ -252,7 +252,8 @@ traces, the drive position marked every 30° (a round step for other drives),
 the peak, and whether the load reverses on the bearing. Forces in N.
 
 Options:
-  --joint NAME     the joint
+  --joint NAME     the joint, or a cylinder's end (DRIVER.cap at its first
+                   point, DRIVER.rod at its second: drawn on the body there)
   --body NAME      which of its two bodies (default: its second, on which the
                    reaction acts)
   --out F          the drawing, as SVG, PDF or PNG by its suffix

@@ -368,6 +368,29 @@ TEST(BearingPolarCommand, WritesSvgPdfAndPng)
     EXPECT_TRUE(QString::fromUtf8(frameFile.readAll()).contains("x (global)"));
 }
 
+// A cylinder's end named as a joint: drawn on the body there; another body refused.
+TEST(BearingPolarCommand, DrawsACylindersEnd)
+{
+    const std::string bed = std::string(CLEVIS_SAMPLES_DIR) + "/tipping_bed.json";
+    QTemporaryDir dir;
+    const QString svg = dir.filePath("rod.svg");
+    ASSERT_EQ(cli::runDrawCommand({"bearing-polar", bed, "--joint", "lift_cylinder.rod", "--out", svg.toStdString()}),
+              0);
+    QFile file(svg);
+    ASSERT_TRUE(file.open(QIODevice::ReadOnly));
+    EXPECT_TRUE(QString::fromUtf8(file.readAll()).contains("Bearing load at lift_cylinder.rod on bed"));
+    testing::internal::CaptureStderr();
+    EXPECT_EQ(cli::runDrawCommand({"bearing-polar", bed, "--joint", "lift_cylinder.rod", "--body", "ground", "--out",
+                                   svg.toStdString()}),
+              2);
+    const std::string err = testing::internal::GetCapturedStderr();
+    EXPECT_NE(err.find("on the body there only, bed"), std::string::npos) << err;
+    testing::internal::CaptureStderr();
+    EXPECT_EQ(cli::runDrawCommand({"bearing-polar", bed, "--joint", "ram", "--out", svg.toStdString()}), 2);
+    const std::string listed = testing::internal::GetCapturedStderr();
+    EXPECT_NE(listed.find("hinge, lift_cylinder.cap, lift_cylinder.rod"), std::string::npos) << listed;
+}
+
 TEST(BearingPolarCommand, NamesTheJointOrTheBodyThatIsWrong)
 {
     const auto fails = [](std::vector<std::string> args, int code, const std::string& named) {
