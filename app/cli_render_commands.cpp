@@ -180,8 +180,8 @@ int chooseCylinderEnd(const DrawOptions& o, const Solved& s)
     for (std::size_t e = 0; e < ends.size(); ++e) {
         if (ends[e].name != o.joint) continue;
         if (!o.body.empty() && findBody(s.m, o.body) != ends[e].body)
-            throw UsageError("--body " + o.body + ": the load at the cylinder end "" + o.joint +
-                             "" is drawn on the body there only, " + s.m.bodyName(ends[e].body));
+            throw UsageError("--body " + o.body + ": the load at the cylinder end \"" + o.joint +
+                             "\" is drawn on the body there only, " + s.m.bodyName(ends[e].body));
         return int(e);
     }
     return -1;
