@@ -86,9 +86,11 @@ linear driver with a cylinder, the pressure and flow and whether the supply
 pressure suffices. Then, for every bar: the largest
 axial force, shear force and bending moment, the fibre stresses, the
 utilisation against the allowable the file gives, and the Euler loads. Then,
-for every pin and pin-in-slot joint: the peak force, and for one with pin
-data (its "pin" in the file) the mean pin shear stress, the bearing pressure
-and p·v, with their utilisations against the allowables the file gives.
+for every pin and pin-in-slot joint and each end of a cylinder (the pins
+DRIVER.cap and DRIVER.rod, listed with the joints): the peak force, and for
+one with pin data (its "pin" in the file) the mean pin shear stress, the
+bearing pressure and p·v, with their utilisations against the allowables the
+file gives.
 Utilisation is a figure to compare, not a verdict that a part is safe: rigid
 bodies and ideal joints; no service or dynamic factors, fatigue, stress
 concentrations or pin bending. Check each part under the codes that apply
@@ -250,7 +252,8 @@ traces, the drive position marked every 30° (a round step for other drives),
 the peak, and whether the load reverses on the bearing. Forces in N.
 
 Options:
-  --joint NAME     the joint
+  --joint NAME     the joint, or a cylinder's end (DRIVER.cap at its first
+                   point, DRIVER.rod at its second: drawn on the body there)
   --body NAME      which of its two bodies (default: its second, on which the
                    reaction acts)
   --out F          the drawing, as SVG, PDF or PNG by its suffix

@@ -8,6 +8,7 @@
 #include "core/model/model_error.h"
 #include "core/results/bearing_polar.h"
 #include "core/results/cycle_summary.h"
+#include "core/results/cylinder_ends.h"
 #include "core/results/free_body.h"
 #include "core/solver/analysis_error.h"
 #include "core/solver/cycle_sweep.h"
@@ -126,6 +127,7 @@ std::pair<int, int> chooseJointSide(const DrawOptions& o, const Solved& s)
     if (found == joints.end()) {
         std::string names;
         for (const auto& j : joints) names += (names.empty() ? "" : ", ") + j.name;
+        for (const auto& end : cylinderEnds(s.m)) names += ", " + end.name;
         throw UsageError("--joint: no joint \"" + name + "\" (joints: " + names + ")");
     }
     if (o.body.empty()) return {int(found - joints.begin()), found->body[1]};
@@ -170,16 +172,40 @@ int drawFreeBody(const DrawOptions& o)
     return exported(figure, o.out, title, *solved, o.file);
 }
 
+// The cylinder end named by --joint (core/results/cylinder_ends.h), or -1
+// when it names none (a joint of the same name comes first). Its load is
+// drawn on the body there only.
+int chooseCylinderEnd(const DrawOptions& o, const Solved& s)
+{
+    for (const auto& j : s.m.joints)
+        if (j.name == o.joint) return -1;
+    const std::vector<CylinderEnd> ends = cylinderEnds(s.m);
+    for (std::size_t e = 0; e < ends.size(); ++e) {
+        if (ends[e].name != o.joint) continue;
+        if (!o.body.empty() && findBody(s.m, o.body) != ends[e].body)
+            throw UsageError("--body " + o.body + ": the load at the cylinder end \"" + o.joint +
+                             "\" is drawn on the body there only, " + s.m.bodyName(ends[e].body));
+        return int(e);
+    }
+    return -1;
+}
+
 int drawBearingPolar(const DrawOptions& o)
 {
     const auto solved = solve(o);
-    const auto [joint, body] = chooseJointSide(o, *solved);
+    const int end = chooseCylinderEnd(o, *solved);
+    BearingPolar polar;
+    if (end >= 0) {
+        polar = endBearingPolar(solved->m, solved->r, solved->s, end);
+    } else {
+        const auto [joint, body] = chooseJointSide(o, *solved);
+        polar = bearingPolar(solved->m, solved->r, solved->s, joint, body);
+    }
     ensureGuiApplication();
-    const ui::BearingPolarDiagram figure(
-        solved->m, solved->r, bearingPolar(solved->m, solved->r, solved->s, joint, body), {ui::RenderUnits{}});
-    const QString title = QString("Bearing load at %1 on %2")
-                              .arg(QString::fromStdString(solved->m.joints[joint].name),
-                                   QString::fromStdString(solved->m.bodyName(body)));
+    const QString title =
+        QString("Bearing load at %1 on %2")
+            .arg(QString::fromStdString(polar.pin), QString::fromStdString(solved->m.bodyName(polar.body)));
+    const ui::BearingPolarDiagram figure(solved->m, solved->r, std::move(polar), {ui::RenderUnits{}});
     return exported(figure, o.out, title, *solved, o.file);
 }
 

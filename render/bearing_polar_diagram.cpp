@@ -140,8 +140,7 @@ BearingPolarDiagram::BearingPolarDiagram(const CompiledMechanism& m, const Cycle
     }
     rings_ = ringValues(polar_.peak.value);
 
-    const QString joint = qs(m.joints[polar_.joint].name), body = qs(m.bodyName(polar_.body)),
-                  other = qs(m.bodyName(polar_.other));
+    const QString joint = qs(polar_.pin), body = qs(m.bodyName(polar_.body)), other = qs(polar_.otherName);
     title_ = QString("Bearing load at %1 on %2").arg(joint, body);
     caption_.push_back(
         {polar_.body == kGround

@@ -55,6 +55,10 @@ BearingPolarDiagrams bearingPolarDiagrams(const ReviewReportInput& in)
         diagrams.push_back(std::make_unique<BearingPolarDiagram>(
             m, in.result, bearingPolar(m, in.result, in.summary, int(j), body), BearingPolarOptions{in.units}));
     }
+    // A cylinder's ends on the body there, after the joints.
+    for (std::size_t e = 0; e < in.summary.cylinderEnds.size(); ++e)
+        diagrams.push_back(std::make_unique<BearingPolarDiagram>(
+            m, in.result, endBearingPolar(m, in.result, in.summary, int(e)), BearingPolarOptions{in.units}));
     return diagrams;
 }
 
@@ -70,7 +74,8 @@ bool bearingPolarPages(PageFlow& f, const BearingPolarDiagrams& diagrams, const 
         "the tip of the force traces, the drive position marked along it and the peak labelled. A load "
         "confined to a sector leaves the rest of the bore unloaded (a place for an oil hole or a split); "
         "one that sweeps 180° or more reverses on the bearing. A pin between two moving bodies is shown "
-        "in its second body's frame; a pin on the frame in the moving body's.");
+        "in its second body's frame; a pin on the frame in the moving body's; a cylinder's end on the body "
+        "there.");
     for (std::size_t k = 0; k < diagrams.size(); k += 2) {
         if (!advance()) return false;
         std::vector<const Figure*> row{diagrams[k].get()};

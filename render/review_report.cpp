@@ -233,10 +233,16 @@ void peakSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis
     const PeakAt overCycle{0.0, -1, s.nearSingularSteps > 0};
     bool flagged = false;
     for (const auto& j : s.joints) flagged |= j.peak.flagged.step >= 0 || j.peakMoment.flagged.step >= 0;
+    for (const auto& j : s.cylinderEnds) flagged |= j.peak.flagged.step >= 0;
     f.subheading("Joints");
     std::vector<QStringList> joints{{"Joint", "Peak |F|", "Where", "RMS |F|", "Peak slider moment"}};
     if (flagged) joints.front() << "Larger, near a toggle";
-    for (const auto& j : s.joints) {
+    // A cylinder's ends are pins (core/results/cylinder_ends.h), after the joints.
+    std::vector<const JointSummary*> rows;
+    for (const auto& j : s.joints) rows.push_back(&j);
+    for (const auto& j : s.cylinderEnds) rows.push_back(&j);
+    for (const JointSummary* row : rows) {
+        const JointSummary& j = *row;
         joints.push_back(
             {qs(j.name), markedValue(u.force(j.peak.value), j.peak), stepPlace(axis, j.peak.step),
              markedValue(u.force(j.rms), overCycle),
@@ -247,6 +253,10 @@ void peakSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis
     }
     f.table(joints, flagged ? std::vector<double>{0.08, 0.12, 0.2, 0.12, 0.18, 0.3}
                             : std::vector<double>{0.14, 0.18, 0.3, 0.18, 0.2});
+    if (!s.cylinderEnds.empty())
+        f.paragraph(
+            "A cylinder's two ends are pins, listed after the joints: \".cap\" at its first point, \".rod\" "
+            "at its second; both carry the cylinder's force, along its line.");
     f.subheading("Drivers");
     std::vector<QStringList> drivers{{"Driver", "Peak", "Where", "RMS", "Mean", "Peak power", "Regenerative", "Work"}};
     std::vector<QStringList> driverFlags{{"Driver", "Larger effort, near a toggle", "Larger power, near a toggle"}};
@@ -466,7 +476,8 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
     const std::vector<CriticalPosition> critical = criticalPositions(m, in.summary);
     const int bars = in.document ? int(findBars(*in.document, m).bars.size()) : 0;
     const int pins = int(std::count_if(m.joints.begin(), m.joints.end(),
-                                       [](const CompiledJoint& j) { return j.type == JointType::Pin; }));
+                                       [](const CompiledJoint& j) { return j.type == JointType::Pin; })) +
+                     int(in.summary.cylinderEnds.size());  // each end has its bearing diagram too
     const int total = 7 + int(drives) + int(critical.size()) + bars + (pins + 1) / 2;
     int done = 0;
     const auto advance = [&] { return !progress || progress(++done, total); };

@@ -369,6 +369,29 @@ TEST(BearingPolarCommand, WritesSvgPdfAndPng)
     EXPECT_TRUE(QString::fromUtf8(frameFile.readAll()).contains("x (global)"));
 }
 
+// A cylinder's end named as a joint: drawn on the body there; another body refused.
+TEST(BearingPolarCommand, DrawsACylindersEnd)
+{
+    const std::string bed = std::string(CLEVIS_SAMPLES_DIR) + "/tipping_bed.json";
+    QTemporaryDir dir;
+    const QString svg = dir.filePath("rod.svg");
+    ASSERT_EQ(cli::runDrawCommand({"bearing-polar", bed, "--joint", "lift_cylinder.rod", "--out", svg.toStdString()}),
+              0);
+    QFile file(svg);
+    ASSERT_TRUE(file.open(QIODevice::ReadOnly));
+    EXPECT_TRUE(QString::fromUtf8(file.readAll()).contains("Bearing load at lift_cylinder.rod on bed"));
+    testing::internal::CaptureStderr();
+    EXPECT_EQ(cli::runDrawCommand({"bearing-polar", bed, "--joint", "lift_cylinder.rod", "--body", "ground", "--out",
+                                   svg.toStdString()}),
+              2);
+    const std::string err = testing::internal::GetCapturedStderr();
+    EXPECT_NE(err.find("on the body there only, bed"), std::string::npos) << err;
+    testing::internal::CaptureStderr();
+    EXPECT_EQ(cli::runDrawCommand({"bearing-polar", bed, "--joint", "ram", "--out", svg.toStdString()}), 2);
+    const std::string listed = testing::internal::GetCapturedStderr();
+    EXPECT_NE(listed.find("hinge, lift_cylinder.cap, lift_cylinder.rod"), std::string::npos) << listed;
+}
+
 TEST(BearingPolarCommand, NamesTheJointOrTheBodyThatIsWrong)
 {
     const auto fails = [](std::vector<std::string> args, int code, const std::string& named) {
@@ -494,6 +517,63 @@ TEST(BearingPolarView, ShowsTheSelectedJointAtTheScrubbedStep)
     analysis.waitForIdle();
     QCoreApplication::processEvents();
     EXPECT_EQ(view.figure(), nullptr);  // nothing selected in the new mechanism
+}
+
+// A cylinder selected: its rod end on the body there, or its cap end (on the
+// frame, global axes) when chosen; a driver at a slider has no ends.
+TEST(BearingPolarView, ACylindersEndsOnTheBodiesThere)
+{
+    using namespace clevis::ui;
+    MechanismDocument doc;
+    doc.reset(loadMechanismFile(std::string(CLEVIS_SAMPLES_DIR) + "/tipping_bed.json").mechanism, "tipping_bed.json");
+    AnalysisState analysis(&doc);
+    analysis.waitForIdle();
+    QCoreApplication::processEvents();
+    ASSERT_TRUE(analysis.hasResult());
+    BearingPolarView view(&doc, &analysis);
+    view.resize(420, 560);
+    doc.setSelection({Selection::Kind::Driver, "lift_cylinder", -1});
+    ASSERT_NE(view.figure(), nullptr) << view.message().toStdString();
+    EXPECT_EQ(view.figure()->polar().pin, "lift_cylinder.rod");
+    EXPECT_EQ(view.figure()->polar().body, findBody(analysis.compiled(), "bed"));
+    ASSERT_EQ(view.frameChoice()->count(), 2);
+    EXPECT_TRUE(view.frameChoice()->itemText(0).contains("Rod end")) << view.frameChoice()->itemText(0).toStdString();
+    view.frameChoice()->setCurrentIndex(1);
+    ASSERT_NE(view.figure(), nullptr);
+    EXPECT_EQ(view.figure()->polar().pin, "lift_cylinder.cap");
+    EXPECT_EQ(view.figure()->polar().body, kGround);
+    EXPECT_TRUE(view.notesText().contains("Bearing load at lift_cylinder.cap on ground"))
+        << view.notesText().toStdString();
+
+    doc.reset(loadMechanismFile(kPress).mechanism, "punch_press.json");
+    analysis.waitForIdle();
+    QCoreApplication::processEvents();
+    doc.setSelection({Selection::Kind::Driver, QString::fromStdString(analysis.compiled().drivers[0].name), -1});
+    EXPECT_EQ(view.figure(), nullptr);
+    EXPECT_TRUE(view.message().contains("cylinder")) << view.message().toStdString();
+}
+
+// The report lists a cylinder's ends with the joints and draws their bearing loads.
+TEST(BearingPolarReport, ACylindersEndsAreInTheLoadsAndTheSizingChapter)
+{
+    QTemporaryDir dir;
+    const QString pdf = dir.filePath("review.pdf");
+    const std::string bed = std::string(CLEVIS_SAMPLES_DIR) + "/tipping_bed.json";
+    ASSERT_EQ(cli::runDrawCommand({"report", bed, "--out", pdf.toStdString()}), 0);
+    QProcess text;
+    text.start("pdftotext", {pdf, "-"});
+    ASSERT_TRUE(text.waitForFinished(60000));
+    const QString all = QString::fromUtf8(text.readAllStandardOutput()).simplified();
+    const qsizetype loads = all.indexOf("4 Peak loads"), sizing = all.indexOf("6 Sizing");
+    ASSERT_GE(loads, 0);
+    ASSERT_GT(sizing, loads);
+    for (const char* end : {"lift_cylinder.cap", "lift_cylinder.rod"}) {
+        const qsizetype row = all.indexOf(end, loads);
+        EXPECT_TRUE(row > loads && row < sizing) << end << " in the joints' peak table";
+    }
+    EXPECT_EQ(all.count("Bearing load at lift_cylinder.rod on bed"), 1);
+    EXPECT_EQ(all.count("Bearing load at lift_cylinder.cap on ground"), 1);
+    EXPECT_GT(all.indexOf("Bearing load at lift_cylinder.rod"), sizing);
 }
 
 }  // namespace

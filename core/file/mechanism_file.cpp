@@ -322,8 +322,12 @@ void readLinearPlace(const JsonNode& node, Driver& d)
         return;
     }
     const std::vector<JsonNode> ends = node.at("between").elements(2);
-    d.ends[0] = readPointRef(ends[0]);
-    d.ends[1] = readPointRef(ends[1]);
+    for (std::size_t side = 0; side < 2; ++side) {
+        // An end is a body point, and the pin there (core/results/cylinder_ends.h).
+        ends[side].object({"body", "at", "pin"});
+        d.ends[side] = BodyPointRef{ends[side].at("body").name(), ends[side].at("at").point()};
+        if (const auto pin = ends[side].find("pin")) d.endPins[side] = readPin(*pin, JointType::Pin);
+    }
     if (const auto position = node.find(kLinearKeys.offset.name))
         position->warn("applies only to a linear driver at a slider joint (ignored)");
 }

@@ -174,7 +174,12 @@ Json driverJson(const Driver& d)
     const DriverKeys& keys = driverKeysOf(d.type);
     Json out{{"name", d.name}, {"type", nameOf(kDriverTypes, d.type)}};
     if (d.ends[0] && d.ends[1]) {
-        out["between"] = Json::array({pointRef(*d.ends[0]), pointRef(*d.ends[1])});
+        out["between"] = Json::array();
+        for (std::size_t side = 0; side < 2; ++side) {
+            Json end = pointRef(*d.ends[side]);
+            if (d.endPins[side]) end["pin"] = pinJson(*d.endPins[side]);
+            out["between"].push_back(end);
+        }
     } else {
         out["joint"] = d.joint;
         put(out, keys.offset, d.offset);

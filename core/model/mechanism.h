@@ -200,6 +200,9 @@ struct Driver {
     std::optional<Flywheel> flywheel{};          // rotary
     std::optional<double> fluctuationTarget{};   // rotary: C_s = (ω_max − ω_min)/ω_mean, in (0, 2)
     std::optional<Cylinder> cylinder{};          // linear
+    // Linear between two points: the pin at each end (cap end first), for
+    // sizing as a joint's pin is; the cylinder's side has no thickness known.
+    std::optional<PinData> endPins[2]{};
 
     bool operator==(const Driver&) const = default;
 };

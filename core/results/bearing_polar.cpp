@@ -1,5 +1,7 @@
 #include "core/results/bearing_polar.h"
 
+#include "core/results/cylinder_ends.h"
+
 #include <algorithm>
 #include <cmath>
 #include <stdexcept>
@@ -53,6 +55,22 @@ LoadSector loadSector(const std::vector<Vec2>& forces, double floor)
     return out;
 }
 
+namespace {
+
+// The load's peak and the sector of its directions, from out.force: the
+// reliable steps are counted, as for the peak, unless every step is flagged.
+void describeLoad(BearingPolar& out, const CycleSummary& s, const Peak& peak)
+{
+    out.peak = peak;
+    const bool anyReliable = std::find(s.unreliable.begin(), s.unreliable.end(), false) != s.unreliable.end();
+    std::vector<Vec2> counted;
+    for (std::size_t i = 0; i < out.force.size(); ++i)
+        if (!anyReliable || !s.unreliable[i]) counted.push_back(out.force[i]);
+    out.sector = loadSector(counted, kDirectionFloor * out.peak.value);
+}
+
+}  // namespace
+
 BearingPolar bearingPolar(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s, int joint, int body)
 {
     if (joint < 0 || joint >= int(m.joints.size())) throw std::invalid_argument("bearingPolar: no such joint");
@@ -61,19 +79,30 @@ BearingPolar bearingPolar(const CompiledMechanism& m, const CycleResult& r, cons
         throw std::invalid_argument("bearingPolar: " + m.bodyName(body) + " is not a body of joint " + j.name);
     BearingPolar out;
     out.joint = joint;
+    out.pin = j.name;
     out.body = body;
     out.other = body == j.body[1] ? j.body[0] : j.body[1];
+    out.otherName = m.bodyName(out.other);
     const double sign = body == j.body[1] ? 1.0 : -1.0;  // the second body receives +R, the first −R
     for (std::size_t i = 0; i < r.steps.size(); ++i)
         out.force.push_back(intoBodyFrame(sign * r.steps[i].joints[joint].force, angleOf(r, i, body)));
-    out.peak = s.joints[joint].peak;
+    describeLoad(out, s, s.joints[joint].peak);
+    return out;
+}
 
-    // The directions counted: the reliable steps, as for the peak, unless every step is flagged.
-    const bool anyReliable = std::find(s.unreliable.begin(), s.unreliable.end(), false) != s.unreliable.end();
-    std::vector<Vec2> counted;
-    for (std::size_t i = 0; i < out.force.size(); ++i)
-        if (!anyReliable || !s.unreliable[i]) counted.push_back(out.force[i]);
-    out.sector = loadSector(counted, kDirectionFloor * out.peak.value);
+BearingPolar endBearingPolar(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s, int end)
+{
+    const std::vector<CylinderEnd> ends = cylinderEnds(m);
+    if (end < 0 || end >= int(ends.size())) throw std::invalid_argument("endBearingPolar: no such cylinder end");
+    const CylinderEnd& e = ends[std::size_t(end)];
+    BearingPolar out;
+    out.cylinderEnd = end;
+    out.pin = e.name;
+    out.body = e.body;
+    out.otherName = m.drivers[std::size_t(e.driver)].name;
+    for (std::size_t i = 0; i < r.steps.size(); ++i)
+        out.force.push_back(intoBodyFrame(endReaction(m, r.steps[i], e).force, angleOf(r, i, e.body)));
+    describeLoad(out, s, s.cylinderEnds[std::size_t(end)].peak);
     return out;
 }
 

@@ -31,6 +31,7 @@
 
 #include "core/results/cycle_summary.h"
 
+#include <string>
 #include <vector>
 
 namespace clevis {
@@ -49,9 +50,12 @@ struct LoadSector {
 };
 
 struct BearingPolar {
-    int joint = -1;
+    int joint = -1;           // or -1 for a cylinder's end
+    int cylinderEnd = -1;     // index into cylinderEnds(m) (cylinder_ends.h), or -1 for a joint
+    std::string pin;          // the joint's or the end's name
     int body = kGround;       // the body that receives the load, in whose frame it is given
-    int other = kGround;      // the joint's other body, which exerts it
+    int other = kGround;      // the joint's other body, which exerts it (a cylinder's end: none, kGround)
+    std::string otherName;    // the body's, or the cylinder's (its driver's) name
     std::vector<Vec2> force;  // N, per step, in the body's frame
     Peak peak;                // N, |F| over the cycle (the summary's peak of the joint)
     LoadSector sector;
@@ -60,6 +64,12 @@ struct BearingPolar {
 // `body` must be one of the joint's two bodies (kGround for the frame);
 // throws std::invalid_argument otherwise. `s` is summarize(m, r).
 BearingPolar bearingPolar(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s, int joint, int body);
+
+// The same for the pin at cylinder end `end` (an index into cylinderEnds(m)),
+// on the body there: F_B = +R, the end's reaction (cylinder_ends.h). The
+// cylinder's own side is not offered: in its frame the load lies on its
+// drawn line at every step.
+BearingPolar endBearingPolar(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s, int end);
 
 // The narrowest sector holding the directions of `forces` (see above).
 LoadSector loadSector(const std::vector<Vec2>& forces, double floor);

@@ -1,5 +1,6 @@
 #include "core/results/cycle_summary.h"
 
+#include "core/results/cylinder_ends.h"
 #include "core/results/step_integral.h"
 #include "core/solver/constraint_system.h"
 
@@ -76,16 +77,30 @@ std::pair<double, double> positiveAndNegative(const std::vector<StepResult>& ste
 
 namespace {
 
-JointSummary summarizeJoint(const CompiledMechanism& m, const Steps& steps, std::size_t j)
+// The peak and RMS of a load's magnitude |F| over the cycle.
+JointSummary summarizeLoad(std::string name, const Steps& steps, const StepValue& force)
 {
-    const StepValue force = [j](const StepResult& s) { return s.joints[j].force.norm(); };
     JointSummary out;
-    out.name = m.joints[j].name;
+    out.name = std::move(name);
     out.peak = largest(steps, force);
     out.rms = timeRms(steps.all, force);
+    return out;
+}
+
+JointSummary summarizeJoint(const CompiledMechanism& m, const Steps& steps, std::size_t j)
+{
+    JointSummary out =
+        summarizeLoad(m.joints[j].name, steps, [j](const StepResult& s) { return s.joints[j].force.norm(); });
     if (m.joints[j].type == JointType::Slider)
         out.peakMoment = largest(steps, [j](const StepResult& s) { return std::abs(s.joints[j].moment); });
     return out;
+}
+
+// A cylinder's end is a pin: its load is summed up as a pin joint's.
+JointSummary summarizeEnd(const CompiledMechanism& m, const Steps& steps, const CylinderEnd& end)
+{
+    return summarizeLoad(end.name, steps,
+                         [&m, end](const StepResult& s) { return endReaction(m, s, end).force.norm(); });
 }
 
 // Only a value of the right sign is a peak power or a peak regenerative power.
@@ -233,6 +248,7 @@ CycleSummary summarize(const CompiledMechanism& m, const CycleResult& r)
     out.unreliable = unreliableSteps(r);
     const Steps steps{r.steps, out.unreliable};
     for (std::size_t j = 0; j < m.joints.size(); ++j) out.joints.push_back(summarizeJoint(m, steps, j));
+    for (const CylinderEnd& end : cylinderEnds(m)) out.cylinderEnds.push_back(summarizeEnd(m, steps, end));
     for (std::size_t d = 0; d < m.drivers.size(); ++d) out.drivers.push_back(summarizeDriver(m, steps, d));
     out.groundForce = largest(steps, [](const StepResult& s) { return s.groundForce.norm(); });
     out.groundMoment = largest(steps, [](const StepResult& s) { return std::abs(s.groundMoment); });

@@ -111,6 +111,7 @@ struct NearToggle {
 
 struct CycleSummary {
     std::vector<JointSummary> joints;
+    std::vector<JointSummary> cylinderEnds;  // per cylinderEnds(m) (core/results/cylinder_ends.h)
     std::vector<DriverSummary> drivers;
     Peak groundForce;   // N, peak magnitude of the shaking force
     Peak groundMoment;  // N·m, peak |moment| about the origin

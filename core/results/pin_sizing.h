@@ -39,7 +39,8 @@ std::optional<BearingLength> bearingLengthOf(const Mechanism& doc, const Joint& 
 
 // Peaks use EnvelopePeak for their step (its station `s` is not used).
 struct PinSizing {
-    int joint = -1;
+    int joint = -1;        // index into the joints, or -1 for a cylinder's end
+    int cylinderEnd = -1;  // index into cylinderEnds(m) (cylinder_ends.h), or -1 for a joint
     std::string name;
     EnvelopePeak force;                    // N, the largest |F|
     std::optional<PinData> pin;            // none: only the force is reported
@@ -54,7 +55,10 @@ struct PinSizing {
 };
 
 // Every pin and pin-in-slot joint of `doc` (compiled as `m`, solved as `r`),
-// in the file's order; sliders have no pin and are left out.
+// in the file's order, then the pins at cylinders' ends (cylinder_ends.h),
+// whose sliding speed is the body's turning against the cylinder's line,
+// |ω_body − ω_c|, and whose bearing length defaults to the body's thickness
+// alone; sliders have no pin and are left out.
 std::vector<PinSizing> sizePins(const Mechanism& doc, const CompiledMechanism& m, const CycleResult& r);
 
 }  // namespace clevis

@@ -1,6 +1,7 @@
 #include "core/results/results_csv.h"
 
 #include "core/file/file_units.h"
+#include "core/results/cylinder_ends.h"
 #include "core/results/drive_units.h"
 
 #include <charconv>
@@ -68,6 +69,25 @@ void driveValues(std::vector<double>& v, const DriveResults& drive, const StepRe
         v.insert(v.end(), {fromSi(FileUnit::Rpm, motor.speed[step]), motor.torque[step]});
 }
 
+// Each cylinder end's reaction, as a joint's columns; after the drive's, so
+// that columns read by position before them stay where they were.
+std::vector<std::string> endHeader(const std::vector<CylinderEnd>& ends)
+{
+    std::vector<std::string> h;
+    for (const CylinderEnd& end : ends)
+        for (const char* column : {".fx [N]", ".fy [N]", ".moment [N·m]"}) h.push_back(end.name + column);
+    return h;
+}
+
+void endValues(std::vector<double>& v, const CompiledMechanism& m, const std::vector<CylinderEnd>& ends,
+               const StepResult& s)
+{
+    for (const CylinderEnd& end : ends) {
+        const Reaction r = endReaction(m, s, end);
+        v.insert(v.end(), {r.force.x(), r.force.y(), r.moment});
+    }
+}
+
 // Shortest form that reads back to the same double, with the comma after it
 // if asked (one append for both).
 void appendNumber(std::string& out, double v, bool comma)
@@ -102,6 +122,8 @@ void streamResultsCsv(std::string& text, const TextPieces* write, const Compiled
     std::vector<std::string> h = header(m, r);
     if (drive)
         for (auto& column : driveHeader(m, *drive)) h.push_back(std::move(column));
+    const std::vector<CylinderEnd> ends = cylinderEnds(m);
+    for (auto& column : endHeader(ends)) h.push_back(std::move(column));
     for (std::size_t i = 0; i < h.size(); ++i) {
         if (i) text += ',';
         text += csvField(h[i]);
@@ -112,7 +134,9 @@ void streamResultsCsv(std::string& text, const TextPieces* write, const Compiled
         rowValues(row, m, s);
         for (const double v : row) appendNumber(text, v, true);
         text += s.nearSingular ? "1" : "0";
+        extra.clear();
         if (drive) driveValues(extra, *drive, s, std::size_t(&s - r.steps.data()));
+        endValues(extra, m, ends, s);
         for (const double v : extra) {
             text += ',';
             appendNumber(text, v, false);

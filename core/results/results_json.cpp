@@ -1,6 +1,7 @@
 #include "core/results/results_json.h"
 
 #include "core/file/file_units.h"
+#include "core/results/cylinder_ends.h"
 #include "core/results/drive_units.h"
 #include "core/results/json_writer.h"
 #include "core/solver/body_state.h"
@@ -27,11 +28,12 @@ json drivePositions(const CompiledMechanism& m, const StepResult& s)
 class StepWriter {
 public:
     StepWriter(JsonWriter& w, const CompiledMechanism& m, const CycleResult& r, const DriveResults* drive)
-        : w_(w), m_(m), r_(r), drive_(drive)
+        : w_(w), m_(m), r_(r), drive_(drive), ends_(cylinderEnds(m))
     {
         for (const auto& d : m.drivers) driverKeys_.emplace_back(d.name);
         for (const auto& b : m.bodies) bodyKeys_.emplace_back(b.name);
         for (const auto& j : m.joints) jointKeys_.emplace_back(j.name);
+        for (const auto& end : ends_) endKeys_.emplace_back(end.name);
         for (const auto& pin : r.transmissionPins) pinKeys_.emplace_back(m.joints[pin.joint].name);
     }
 
@@ -54,6 +56,11 @@ public:
             unrotations_[std::size_t(b + 1)] = rotation(-bodyAngle(s.q, b));
         for (std::size_t j = 0; j < m_.joints.size(); ++j) joint(s, int(j));
         w_.endObject();
+        if (!ends_.empty()) {
+            w_.key(cylinderEnds_).beginObject();
+            for (std::size_t e = 0; e < ends_.size(); ++e) cylinderEnd(s, e);
+            w_.endObject();
+        }
         w_.key(drivers_).beginObject();
         for (std::size_t d = 0; d < m_.drivers.size(); ++d) {
             w_.key(driverKeys_[d]).beginObject();
@@ -125,19 +132,31 @@ private:
     void joint(const StepResult& s, int j)
     {
         const CompiledJoint& cj = m_.joints[j];
-        const Reaction& reaction = s.joints[j];
-        const auto inFrame = [&](int body, const Vec2& global) -> Vec2 {
-            return unrotations_[std::size_t(body + 1)] * global;
-        };
-        w_.key(jointKeys_[std::size_t(j)]).beginObject();
-        force(reaction.force);
-        w_.field(moment_, reaction.moment);
+        reaction(jointKeys_[std::size_t(j)], s.joints[j], unrotations_[std::size_t(cj.body[0] + 1)],
+                 unrotations_[std::size_t(cj.body[1] + 1)]);
+    }
+
+    // A cylinder's end as a joint whose first body is the cylinder (its frame
+    // turned by φ_c, cylinder_ends.h) and second the body at that end.
+    void cylinderEnd(const StepResult& s, std::size_t e)
+    {
+        const CylinderEnd& end = ends_[e];
+        reaction(endKeys_[e], endReaction(m_, s, end), rotation(-cylinderAngle(m_, s, end.driver)),
+                 unrotations_[std::size_t(end.body + 1)]);
+    }
+
+    // `first` and `second`: into the frames the two sides' bearings are fixed in.
+    void reaction(const JsonKey& key, const Reaction& r, const Eigen::Matrix2d& first, const Eigen::Matrix2d& second)
+    {
+        w_.key(key).beginObject();
+        force(r.force);
+        w_.field(moment_, r.moment);
         w_.key(local_).beginObject();
         w_.key(first_).beginObject();
-        force(inFrame(cj.body[0], -reaction.force));
+        force(first * -r.force);
         w_.endObject();
         w_.key(second_).beginObject();
-        force(inFrame(cj.body[1], reaction.force));
+        force(second * r.force);
         w_.endObject();
         w_.endObject();
         w_.endObject();
@@ -147,7 +166,8 @@ private:
     const CompiledMechanism& m_;
     const CycleResult& r_;
     const DriveResults* drive_;
-    std::vector<JsonKey> driverKeys_, bodyKeys_, jointKeys_, pinKeys_;
+    const std::vector<CylinderEnd> ends_;
+    std::vector<JsonKey> driverKeys_, bodyKeys_, jointKeys_, endKeys_, pinKeys_;
     std::vector<Eigen::Matrix2d> unrotations_;  // ground's, then each body's at the step
     const JsonKey t_{"t"}, driveKey_{"drive"}, bodies_{"bodies"}, joints_{"joints"}, drivers_{"drivers"};
     const JsonKey ground_{"ground"}, energy_{"energy"}, transmission_{"transmission_deg"};
@@ -155,6 +175,7 @@ private:
     const JsonKey kinetic_{"kinetic"}, gravity_{"gravity"}, spring_{"spring"}, fx_{"fx"}, fy_{"fy"};
     const JsonKey x_{"x"}, y_{"y"}, angle_{"angle_deg"}, vx_{"vx"}, vy_{"vy"}, omega_{"omega"};
     const JsonKey ax_{"ax"}, ay_{"ay"}, alpha_{"alpha"}, local_{"local"}, first_{"first"}, second_{"second"};
+    const JsonKey cylinderEnds_{"cylinder_ends"};
 };
 
 // `<key>_near_singular`: the peak's step is flagged; `<key>_near_toggle`: a
@@ -338,6 +359,8 @@ json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const Cycle
     addFlags(ground, "peak_moment", s.groundMoment);
     for (std::size_t j = 0; j < s.joints.size(); ++j)
         joints[s.joints[j].name] = jointSummary(m, r, s.joints[j], m.joints[j].type);
+    json ends = json::object();
+    for (const JointSummary& end : s.cylinderEnds) ends[end.name] = jointSummary(m, r, end, JointType::Pin);
     for (const auto& d : s.drivers) drivers[d.name] = driverSummary(d);
     if (drive) addDriveSummary(drivers, m, *drive);
     for (const auto& t : s.transmission)
@@ -352,6 +375,7 @@ json summaryToJson(const CompiledMechanism& m, const CycleResult& r, const Cycle
                 {"energy_balance", energyBalance(s.energy)},
                 {"near_singular_steps", s.nearSingularSteps},
                 {"toggles", toggles}};
+    if (!ends.empty()) out["cylinder_ends"] = ends;
     if (drive && drive->found && drive->found->sizing) out["flywheel"] = flywheelJson(*drive->found->sizing);
     return out;
 }

@@ -115,9 +115,21 @@ json sizingToJson(const CompiledMechanism& m, const CycleResult& r, const Sizing
     }
     json others = json::array();
     for (const NotABar& o : s.others) others.push_back({{"body", o.bodyName}, {"reason", o.reason}});
-    json pins = json::array();
-    for (const PinSizing& p : s.pins) pins.push_back(pinJson(m, r, p));
-    return {{"bars", bars}, {"not_bars", others}, {"pins", pins}};
+    // A cylinder's end pins in a list of their own: "pins" keeps the file's joints only.
+    json pins = json::array(), ends = json::array();
+    for (const PinSizing& p : s.pins) {
+        if (p.joint >= 0) {
+            pins.push_back(pinJson(m, r, p));
+            continue;
+        }
+        json end = pinJson(m, r, p);
+        end.erase("joint");
+        end["end"] = p.name;
+        ends.push_back(std::move(end));
+    }
+    json out = {{"bars", bars}, {"not_bars", others}, {"pins", pins}};
+    if (!ends.empty()) out["cylinder_ends"] = ends;
+    return out;
 }
 
 }  // namespace clevis

@@ -126,7 +126,7 @@ std::string pinsText(const CompiledMechanism& m, const CycleResult& r, const std
     if (bare)
         text +=
             "  A joint with no pin data shows its peak force only: give it a \"pin\" (diameter, allowables) "
-            "to size it.\n";
+            "to size it\n  (a cylinder's end: in its \"between\" point).\n";
     if (flagged)
         text +=
             "  " + std::string(kNearToggleMark) + " the peak is at a step near a singular position: not trustworthy.\n";

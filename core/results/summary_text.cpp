@@ -1,6 +1,7 @@
 #include "core/results/summary_text.h"
 
 #include "core/model/type_names.h"
+#include "core/results/cylinder_ends.h"
 #include "core/results/drive_units.h"
 #include "core/results/number_text.h"
 #include "core/results/text_table.h"
@@ -110,6 +111,8 @@ std::string heading(const CompiledMechanism& m, const CycleResult& r, const Cycl
     return text;
 }
 
+// The joints, then the pins at cylinders' ends (cylinder_ends.h), which
+// carry a force only.
 std::string jointSection(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s)
 {
     TextTable t({Align::Left, Align::Left, Align::Right, Align::Left, Align::Right, Align::Right, Align::Left});
@@ -119,14 +122,13 @@ std::string jointSection(const CompiledMechanism& m, const CycleResult& r, const
         sliders |= m.joints[j].type == JointType::Slider;
         flagged |= anyFlagged({&s.joints[j].peak, &s.joints[j].peakMoment});
     }
+    for (const JointSummary& end : s.cylinderEnds) flagged |= anyFlagged({&end.peak});
     if (sliders) header.insert(header.end(), {"Peak |M|", ""});
     if (flagged) header.insert(header.end(), {kFlaggedHeading, ""});
     t.addRow(header);
-    for (std::size_t j = 0; j < s.joints.size(); ++j) {
-        const JointSummary& js = s.joints[j];
-        const bool slider = m.joints[j].type == JointType::Slider;
-        std::vector<std::string> row{js.name, jointTypeName(m.joints[j].type), peakValue(js.peak, "N"),
-                                     at(m, r, js.peak), overCycle(s, js.rms, "N")};
+    const auto addRow = [&](const JointSummary& js, const std::string& type, bool slider) {
+        std::vector<std::string> row{js.name, type, peakValue(js.peak, "N"), at(m, r, js.peak),
+                                     overCycle(s, js.rms, "N")};
         if (slider) row.insert(row.end(), {peakValue(js.peakMoment, "N·m"), at(m, r, js.peakMoment)});
         else if (sliders) row.insert(row.end(), {"", ""});
         if (flagged) {
@@ -135,8 +137,15 @@ std::string jointSection(const CompiledMechanism& m, const CycleResult& r, const
             row.insert(row.end(), cells.begin(), cells.end());
         }
         t.addRow(row);
-    }
-    return "\nJoint loads (force between the two bodies; RMS weighted over time)\n" + t.render();
+    };
+    for (std::size_t j = 0; j < s.joints.size(); ++j)
+        addRow(s.joints[j], jointTypeName(m.joints[j].type), m.joints[j].type == JointType::Slider);
+    for (const JointSummary& end : s.cylinderEnds) addRow(end, kCylinderEndType, false);
+    std::string text = "\nJoint loads (force between the two bodies; RMS weighted over time)\n" + t.render();
+    if (!s.cylinderEnds.empty())
+        text +=
+            "  A cylinder end is the pin between the cylinder and the body there (.cap: the driver's first point).\n";
+    return text;
 }
 
 std::string driverSection(const CompiledMechanism& m, const CycleResult& r, const CycleSummary& s)

@@ -1,5 +1,6 @@
 #include "ui/results/bearing_polar_view.h"
 
+#include "core/results/cylinder_ends.h"
 #include "render/palette.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/document/mechanism_document.h"
@@ -67,15 +68,10 @@ BearingPolarView::BearingPolarView(MechanismDocument* doc, AnalysisState* analys
     refresh();
 }
 
-// The two bodies of `joint`, its second first; the choice is kept while the
-// same joint stays selected (scrubbing, units, a re-solve).
-void BearingPolarView::fillFrameChoice(int joint)
+// The choices `items` for the part `name`; the choice is kept while the
+// same part stays selected (scrubbing, units, a re-solve).
+void BearingPolarView::fillFrameChoice(const QString& name, const QStringList& items)
 {
-    const auto& m = analysis_->compiled();
-    const auto& j = m.joints[joint];
-    const QString name = QString::fromStdString(j.name);
-    const QStringList items{tr("In the frame of %1").arg(QString::fromStdString(m.bodyName(j.body[1]))),
-                            tr("In the frame of %1").arg(QString::fromStdString(m.bodyName(j.body[0])))};
     QStringList shown;
     for (int i = 0; i < frame_->count(); ++i) shown << frame_->itemText(i);
     if (name == frameJoint_ && shown == items) return;
@@ -86,32 +82,54 @@ void BearingPolarView::fillFrameChoice(int joint)
     frameJoint_ = name;
 }
 
+// The joint's load in the frame of its second body or its first, or, for a
+// cylinder, the load at its cap or rod end in the frame of the body there.
+std::optional<BearingPolar> BearingPolarView::chosenPolar(const Selection& s)
+{
+    const auto& m = analysis_->compiled();
+    const auto name = [](const std::string& text) { return QString::fromStdString(text); };
+    if (s.kind == Selection::Kind::Joint) {
+        for (std::size_t j = 0; j < m.joints.size(); ++j) {
+            const CompiledJoint& joint = m.joints[j];
+            if (name(joint.name) != s.name) continue;
+            fillFrameChoice(s.name, {tr("In the frame of %1").arg(name(m.bodyName(joint.body[1]))),
+                                     tr("In the frame of %1").arg(name(m.bodyName(joint.body[0])))});
+            const int body = joint.body[frame_->currentIndex() == 1 ? 0 : 1];
+            return bearingPolar(m, analysis_->result(), analysis_->summary(), int(j), body);
+        }
+        message_ = tr("%1 is not in the solved mechanism yet.").arg(s.name);
+        return std::nullopt;
+    }
+    const std::vector<CylinderEnd> ends = cylinderEnds(m);
+    for (std::size_t e = 0; e + 1 < ends.size(); e += 2) {
+        if (name(m.drivers[std::size_t(ends[e].driver)].name) != s.name) continue;
+        fillFrameChoice(s.name, {tr("Rod end, in the frame of %1").arg(name(m.bodyName(ends[e + 1].body))),
+                                 tr("Cap end, in the frame of %1").arg(name(m.bodyName(ends[e].body)))});
+        const int end = int(e) + (frame_->currentIndex() == 1 ? 0 : 1);
+        return endBearingPolar(m, analysis_->result(), analysis_->summary(), end);
+    }
+    message_ = tr("Select a joint or a cylinder to see its bearing load over the cycle.");
+    return std::nullopt;
+}
+
 void BearingPolarView::refresh()
 {
     figure_.reset();
     message_.clear();
     const Selection s = doc_->selection();
-    int joint = -1;
+    std::optional<BearingPolar> polar;
     if (analysis_->nothingDrawn()) message_ = tr("Draw a mechanism: the load on each joint's bearing shows here.");
     else if (!analysis_->hasResult()) message_ = tr("No solved cycle: %1").arg(analysis_->errorText());
-    else if (s.kind != Selection::Kind::Joint)
+    else if (s.kind != Selection::Kind::Joint && s.kind != Selection::Kind::Driver)
         message_ = tr("Select a joint to see its bearing load over the cycle, in the frame of either body.");
-    else {
-        const auto& joints = analysis_->compiled().joints;
-        for (std::size_t j = 0; j < joints.size() && joint < 0; ++j)
-            if (QString::fromStdString(joints[j].name) == s.name) joint = int(j);
-        if (joint < 0) message_ = tr("%1 is not in the solved mechanism yet.").arg(s.name);
-    }
-    if (joint >= 0) {
-        fillFrameChoice(joint);
-        const auto& m = analysis_->compiled();
-        const int body = m.joints[joint].body[frame_->currentIndex() == 1 ? 0 : 1];
+    else polar = chosenPolar(s);
+    if (polar) {
         // The plot fits the drawing area; its labels are set at the window's font size.
         const double side = std::max(1, std::min(drawing_->width(), drawing_->height()));
         const double textScale =
             std::max(1.0, kLabelShare * QFontInfo(font()).pixelSize() / (kPlotLabel * side / kPlotSide));
         figure_ = std::make_unique<BearingPolarDiagram>(
-            m, analysis_->result(), bearingPolar(m, analysis_->result(), analysis_->summary(), joint, body),
+            analysis_->compiled(), analysis_->result(), std::move(*polar),
             BearingPolarOptions{renderUnits(DisplayUnits::instance()), analysis_->currentStep(), true, textScale,
                                 side < kRoomyPlot});
     } else {

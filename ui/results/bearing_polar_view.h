@@ -1,6 +1,7 @@
 // The polar diagram of the selected joint's bearing load over the cycle, in
 // the frame of one of its two bodies (a choice above the drawing; the
-// joint's second body first, the one its reaction acts on), with the
+// joint's second body first, the one its reaction acts on) — or, for a
+// selected cylinder, at its rod or cap end on the body there — with the
 // scrubbed position pointed out on the curve, and the diagram's notes in the
 // window's font beside it. Redrawn when the selection, the
 // result, the step or the display units change; a message in its place when
@@ -12,6 +13,7 @@
 #include <QWidget>
 
 #include <memory>
+#include <optional>
 
 class QBoxLayout;
 class QComboBox;
@@ -22,6 +24,7 @@ namespace clevis::ui {
 
 class AnalysisState;
 class MechanismDocument;
+struct Selection;
 
 class BearingPolarView : public QWidget {
     Q_OBJECT
@@ -32,7 +35,8 @@ public:
     const BearingPolarDiagram* figure() const { return figure_.get(); }
     // Why there is no diagram; empty while one is shown.
     const QString& message() const { return message_; }
-    // Whose frame: the joint's second body (index 0) or its first (index 1).
+    // Whose frame: the joint's second body (index 0) or its first (index 1);
+    // for a cylinder, its rod end (0) or its cap end (1).
     QComboBox* frameChoice() const { return frame_; }
     // The diagram's title and notes, beside or under the plot.
     QString notesText() const;
@@ -46,7 +50,8 @@ protected:
 
 private:
     void refresh();
-    void fillFrameChoice(int joint);
+    void fillFrameChoice(const QString& name, const QStringList& items);
+    std::optional<BearingPolar> chosenPolar(const Selection& s);
 
     MechanismDocument* doc_;
     AnalysisState* analysis_;
@@ -55,7 +60,7 @@ private:
     QLabel* notes_;
     QScrollArea* notesArea_;  // the notes' scroll area, hidden with no diagram
     QBoxLayout* split_;
-    QString frameJoint_;  // the joint the choice was filled for
+    QString frameJoint_;  // the joint or cylinder the choice was filled for
     std::unique_ptr<BearingPolarDiagram> figure_;
     QString message_;
 };

@@ -109,6 +109,14 @@ void PeakTable::rebuild()
         for (int p = 0; p < int(sizing.pins.size()); ++p)
             if (sizing.pins[std::size_t(p)].joint == int(j)) pinFigures(rows.back(), p);
     }
+    // A cylinder's ends are pins, sized as a joint's (core/results/cylinder_ends.h).
+    for (std::size_t e = 0; e < s.cylinderEnds.size(); ++e) {
+        const JointSummary& end = s.cylinderEnds[e];
+        addRow(tr("cylinder end %1").arg(QString::fromStdString(end.name)), end.peak, u.force(end.peak.value),
+               {overCycle(u.force(end.rms)), "", "", ""}, u.force(end.peak.flagged.value));
+        for (int p = 0; p < int(sizing.pins.size()); ++p)
+            if (sizing.pins[std::size_t(p)].cylinderEnd == int(e)) pinFigures(rows.back(), p);
+    }
     for (const auto& d : s.drivers) {
         const auto effort = [&](double v) { return d.type == DriverType::Rotary ? u.torque(v) : u.force(v); };
         addRow(tr("driver %1").arg(QString::fromStdString(d.name)), d.peak, effort(d.peak.value),
