@@ -15,18 +15,30 @@ std::vector<double> collect(const CycleResult& r, const std::function<double(con
     return out;
 }
 
+CycleSeries reactionSeries(const std::string& name, const CycleResult& r, ReactionPart part, const RenderUnits& u,
+                           const std::function<Vec2(const StepResult&)>& force)
+{
+    static const char* suffix[] = {" |F|", " Fx", " Fy"};
+    const double k = u.forcePerNewton;
+    return {QString::fromStdString(name) + suffix[int(part)], u.forceSymbol, collect(r, [&](const StepResult& s) {
+                const Vec2 f = force(s);
+                return k * (part == ReactionPart::Magnitude ? f.norm() : part == ReactionPart::X ? f.x() : f.y());
+            })};
+}
+
 }  // namespace
 
 CycleSeries jointReactionSeries(const CompiledMechanism& m, const CycleResult& r, int joint, ReactionPart part,
                                 const RenderUnits& u)
 {
-    static const char* suffix[] = {" |F|", " Fx", " Fy"};
-    const double k = u.forcePerNewton;
-    return {QString::fromStdString(m.joints[joint].name) + suffix[int(part)], u.forceSymbol,
-            collect(r, [&](const StepResult& s) {
-                const Vec2& f = s.joints[joint].force;
-                return k * (part == ReactionPart::Magnitude ? f.norm() : part == ReactionPart::X ? f.x() : f.y());
-            })};
+    return reactionSeries(m.joints[joint].name, r, part, u,
+                          [joint](const StepResult& s) { return s.joints[joint].force; });
+}
+
+CycleSeries endReactionSeries(const CompiledMechanism& m, const CycleResult& r, const CylinderEnd& end,
+                              ReactionPart part, const RenderUnits& u)
+{
+    return reactionSeries(end.name, r, part, u, [&](const StepResult& s) { return endReaction(m, s, end).force; });
 }
 
 CycleSeries driverEffortSeries(const CompiledMechanism& m, const CycleResult& r, int driver, const RenderUnits& u)

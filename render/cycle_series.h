@@ -3,6 +3,7 @@
 // frame, transmission angles. Shared by the plot panes and the report.
 #pragma once
 
+#include "core/results/cylinder_ends.h"
 #include "core/results/results.h"
 #include "render/cycle_axis.h"
 #include "render/render_units.h"
@@ -23,6 +24,9 @@ enum class ReactionPart { Magnitude, X, Y };
 
 CycleSeries jointReactionSeries(const CompiledMechanism& m, const CycleResult& r, int joint, ReactionPart part,
                                 const RenderUnits& u);
+// The same for a cylinder's end pin (core/results/cylinder_ends.h).
+CycleSeries endReactionSeries(const CompiledMechanism& m, const CycleResult& r, const CylinderEnd& end,
+                              ReactionPart part, const RenderUnits& u);
 CycleSeries driverEffortSeries(const CompiledMechanism& m, const CycleResult& r, int driver, const RenderUnits& u);
 CycleSeries driverPowerSeries(const CompiledMechanism& m, const CycleResult& r, int driver);
 CycleSeries shakingForceSeries(const CycleResult& r, const RenderUnits& u);

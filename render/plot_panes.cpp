@@ -1,5 +1,6 @@
 #include "render/plot_panes.h"
 
+#include "core/results/cylinder_ends.h"
 #include "render/palette.h"
 
 namespace clevis::ui {
@@ -19,17 +20,17 @@ std::vector<PlotCurve> reactionCurves(const CompiledMechanism& m, const CycleRes
                                       const PaneChoice& choice)
 {
     std::vector<PlotCurve> curves;
-    const auto add = [&](int joint, ReactionPart part) {
-        curves.push_back({jointReactionSeries(m, r, joint, part, u), int(curves.size())});
+    // Each joint, then each cylinder end, reported as a joint is.
+    const auto add = [&](const std::string& name, const auto& series) {
+        if (choice.hiddenJoints.count(name)) return;
+        for (const ReactionPart part : {ReactionPart::Magnitude, ReactionPart::X, ReactionPart::Y})
+            if (part == ReactionPart::Magnitude || choice.components)
+                curves.push_back({series(part), int(curves.size())});
     };
-    for (std::size_t j = 0; j < m.joints.size(); ++j) {
-        if (choice.hiddenJoints.count(m.joints[j].name)) continue;
-        add(int(j), ReactionPart::Magnitude);
-        if (choice.components) {
-            add(int(j), ReactionPart::X);
-            add(int(j), ReactionPart::Y);
-        }
-    }
+    for (std::size_t j = 0; j < m.joints.size(); ++j)
+        add(m.joints[j].name, [&](ReactionPart part) { return jointReactionSeries(m, r, int(j), part, u); });
+    for (const CylinderEnd& end : cylinderEnds(m))
+        add(end.name, [&](ReactionPart part) { return endReactionSeries(m, r, end, part, u); });
     return curves;
 }
 

@@ -5,6 +5,7 @@
 #include "app/cli_render_commands.h"
 #include "core/file/mechanism_file.h"
 #include "core/results/cycle_summary.h"
+#include "core/results/cylinder_ends.h"
 #include "core/results/free_body.h"
 #include "core/solver/cycle_sweep.h"
 #include "render/plot_panes.h"
@@ -293,6 +294,29 @@ TEST(PlotPanes, FollowTheChoiceOfJointsAndComponents)
     const auto none = ui::plotPanes(solved.m, solved.r, ui::RenderUnits{},
                                     {{"main_bearing", "crank_pin", "wrist_pin", "ram_guide"}, false});
     EXPECT_EQ(none.front().title, "Drive torque");
+}
+
+// A cylinder's end pins are plotted as joints are, after them, and can be
+// hidden by name like a joint: the rod end's |F| is the cylinder's effort
+// (a two-force member), its components those of the end's reaction.
+TEST(PlotPanes, ACylindersEndPinsArePlottedAfterTheJoints)
+{
+    const Solved solved = solveFile(std::string(CLEVIS_SAMPLES_DIR) + "/tipping_bed.json");
+    const std::vector<CylinderEnd> ends = cylinderEnds(solved.m);
+    ASSERT_EQ(ends.size(), 2u);
+    const auto panes = ui::plotPanes(solved.m, solved.r, ui::RenderUnits{}, {{}, true});
+    ASSERT_FALSE(panes.empty());
+    const auto& curves = panes[0].curves;
+    ASSERT_EQ(curves.size(), 3 * (solved.m.joints.size() + 2));
+    const auto& rod = curves[curves.size() - 3];
+    EXPECT_EQ(rod.series.name.toStdString(), ends[1].name + " |F|");
+    const std::size_t k = solved.r.steps.size() / 2;
+    const int d = ends[1].driver;
+    EXPECT_NEAR(rod.series.values[k], std::abs(solved.r.steps[k].effort[std::size_t(d)]),
+                1e-9 * std::abs(solved.r.steps[k].effort[std::size_t(d)]));
+    EXPECT_EQ(curves.back().series.values[k], endReaction(solved.m, solved.r.steps[k], ends[1]).force.y());
+    const auto hidden = ui::plotPanes(solved.m, solved.r, ui::RenderUnits{}, {{ends[0].name, ends[1].name}, false});
+    EXPECT_EQ(hidden[0].curves.size(), solved.m.joints.size());
 }
 
 TEST(PlotPanes, TheReportDrawsEveryPaneUnderItsTitle)

@@ -1,6 +1,7 @@
 #include "ui/results/plot_stack.h"
 
 #include "core/results/cycle_summary.h"
+#include "core/results/cylinder_ends.h"
 #include "render/palette.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/shell/display_units.h"
@@ -117,18 +118,20 @@ void PlotStack::jointTicked(QListWidgetItem* item)
     rebuild();
 }
 
-// The list shows the mechanism's joints; the choice keeps joint names, so a
-// joint stays hidden across edits that keep its name.
+// The list shows the mechanism's joints, then its cylinders' end pins; the
+// choice keeps their names, so one stays hidden across edits that keep it.
 void PlotStack::listJoints(const CompiledMechanism& m)
 {
-    bool same = joints_->count() == int(m.joints.size());
-    for (int j = 0; same && j < joints_->count(); ++j)
-        same = joints_->item(j)->text().toStdString() == m.joints[j].name;
+    std::vector<std::string> names;
+    for (const auto& j : m.joints) names.push_back(j.name);
+    for (const auto& end : cylinderEnds(m)) names.push_back(end.name);
+    bool same = joints_->count() == int(names.size());
+    for (int j = 0; same && j < joints_->count(); ++j) same = joints_->item(j)->text().toStdString() == names[j];
     if (same) return;
     const QSignalBlocker block(joints_);
     joints_->clear();
-    for (const auto& j : m.joints) {
-        auto* item = new QListWidgetItem(QString::fromStdString(j.name), joints_);
+    for (const auto& name : names) {
+        auto* item = new QListWidgetItem(QString::fromStdString(name), joints_);
         item->setFlags(item->flags() | Qt::ItemIsUserCheckable);
     }
 }
