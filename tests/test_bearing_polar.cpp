@@ -36,6 +36,7 @@
 #include <Eigen/Geometry>
 
 #include <cmath>
+#include <filesystem>
 #include <tuple>
 
 using namespace clevis;
@@ -465,17 +466,27 @@ TEST(BearingPolarReport, ProgressCountsEveryRowUpToItsTotalAndCanStop)
 // then the joint's second body's frame, or its first's when chosen; the
 // scrubbed step pointed out by the blue arrow along that step's force; and
 // nothing of the old mechanism after another is opened.
+// A sample opened in the document and solved, the bearing view beside it.
+struct OpenSample {
+    explicit OpenSample(const std::string& path)
+    {
+        doc.reset(loadMechanismFile(path).mechanism,
+                  QString::fromStdString(std::filesystem::path(path).filename().string()));
+        analysis.waitForIdle();
+        QCoreApplication::processEvents();
+        view.resize(420, 560);
+    }
+    ui::MechanismDocument doc;
+    ui::AnalysisState analysis{&doc};
+    ui::BearingPolarView view{&doc, &analysis};
+};
+
 TEST(BearingPolarView, ShowsTheSelectedJointAtTheScrubbedStep)
 {
     using namespace clevis::ui;
-    MechanismDocument doc;
-    doc.reset(loadMechanismFile(kPress).mechanism, "punch_press.json");
-    AnalysisState analysis(&doc);
-    analysis.waitForIdle();
-    QCoreApplication::processEvents();
+    OpenSample open(kPress);
+    auto& [doc, analysis, view] = open;
     ASSERT_TRUE(analysis.hasResult());
-    BearingPolarView view(&doc, &analysis);
-    view.resize(420, 560);
     EXPECT_EQ(view.figure(), nullptr);
     EXPECT_TRUE(view.message().contains("Select a joint")) << view.message().toStdString();
 
@@ -524,14 +535,9 @@ TEST(BearingPolarView, ShowsTheSelectedJointAtTheScrubbedStep)
 TEST(BearingPolarView, ACylindersEndsOnTheBodiesThere)
 {
     using namespace clevis::ui;
-    MechanismDocument doc;
-    doc.reset(loadMechanismFile(std::string(CLEVIS_SAMPLES_DIR) + "/tipping_bed.json").mechanism, "tipping_bed.json");
-    AnalysisState analysis(&doc);
-    analysis.waitForIdle();
-    QCoreApplication::processEvents();
+    OpenSample open(std::string(CLEVIS_SAMPLES_DIR) + "/tipping_bed.json");
+    auto& [doc, analysis, view] = open;
     ASSERT_TRUE(analysis.hasResult());
-    BearingPolarView view(&doc, &analysis);
-    view.resize(420, 560);
     doc.setSelection({Selection::Kind::Driver, "lift_cylinder", -1});
     ASSERT_NE(view.figure(), nullptr) << view.message().toStdString();
     EXPECT_EQ(view.figure()->polar().pin, "lift_cylinder.rod");
