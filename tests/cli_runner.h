@@ -2,12 +2,12 @@
 // exit codes, messages and output files. CLEVIS_CLI_PATH is set by CMake.
 #pragma once
 
+#include "tests/file_text.h"
+
 #include <sys/wait.h>
 
 #include <cstdlib>
 #include <filesystem>
-#include <fstream>
-#include <sstream>
 #include <string>
 
 namespace clevis::test {
@@ -16,14 +16,6 @@ struct CliRun {
     int exitCode = -1;
     std::string out, err;
 };
-
-inline std::string readFile(const std::filesystem::path& path)
-{
-    std::ifstream in(path, std::ios::binary);
-    std::ostringstream text;
-    text << in.rdbuf();
-    return text.str();
-}
 
 inline std::string quoted(const std::filesystem::path& path) { return "'" + path.string() + "'"; }
 

@@ -6,6 +6,7 @@
 // limit (setrlimit) that stops the write half-way, and — where the test may
 // mount file systems — a read-only and a full tmpfs.
 #include "core/file/atomic_file.h"
+#include "tests/file_text.h"
 
 #include <gtest/gtest.h>
 
@@ -21,7 +22,6 @@
 #include <cstring>
 #include <filesystem>
 #include <fstream>
-#include <sstream>
 #include <vector>
 
 namespace clevis {
@@ -29,13 +29,7 @@ namespace {
 
 namespace fs = std::filesystem;
 
-std::string readFile(const fs::path& path)
-{
-    std::ifstream in(path, std::ios::binary);
-    std::ostringstream text;
-    text << in.rdbuf();
-    return text.str();
-}
+using test::readFile;
 
 void writePlainly(const fs::path& path, const std::string& text) { std::ofstream(path, std::ios::binary) << text; }
 

@@ -17,6 +17,7 @@
 #include "core/results/summary_text.h"
 #include "core/solver/applied_loads.h"
 #include "core/solver/body_state.h"
+#include "tests/file_text.h"
 #include "tests/mechanism_builders.h"
 #include "tests/solved_mechanism.h"
 
@@ -24,8 +25,6 @@
 #include <nlohmann/json.hpp>
 
 #include <cmath>
-#include <fstream>
-#include <sstream>
 #include <string>
 
 using namespace clevis;
@@ -39,13 +38,7 @@ namespace {
 using test::solve;
 using test::Solved;
 
-std::string tippingBedText()
-{
-    std::ifstream in(std::string(CLEVIS_SAMPLES_DIR) + "/tipping_bed.json");
-    std::stringstream text;
-    text << in.rdbuf();
-    return text.str();
-}
+std::string tippingBedText() { return test::readFile(std::string(CLEVIS_SAMPLES_DIR) + "/tipping_bed.json"); }
 
 Mechanism tippingBed() { return parseMechanism(tippingBedText()).mechanism; }
 

@@ -11,6 +11,7 @@
 #include "core/file/atomic_file.h"
 #include "core/file/mechanism_file.h"
 #include "tests/chain_generator.h"
+#include "tests/file_text.h"
 
 #include <gtest/gtest.h>
 
@@ -25,7 +26,6 @@
 #include <filesystem>
 #include <fstream>
 #include <random>
-#include <sstream>
 #include <string>
 #include <thread>
 
@@ -34,13 +34,7 @@ namespace {
 
 namespace fs = std::filesystem;
 
-std::string readFile(const fs::path& path)
-{
-    std::ifstream in(path, std::ios::binary);
-    std::ostringstream text;
-    text << in.rdbuf();
-    return text.str();
-}
+using test::readFile;
 
 // The chain at the largest size the limits allow, every rocker carrying a
 // force whose factor follows a table over the cycle: the tables make the file
