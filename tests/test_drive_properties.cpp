@@ -177,4 +177,40 @@ TEST(DriveProperties, TheSupplyPressureFollowsTheDisplayUnit)
     EXPECT_DOUBLE_EQ(*s.driver().cylinder->supplyPressure, 18e6);
 }
 
+// Each end of a cylinder has a pin of its own, sized as a joint's pin is
+// (results <driver>.cap and <driver>.rod): set through the form, one undo
+// command per edit, refused as the file reader refuses it.
+TEST(DriveProperties, ACylindersEndPinsAreSetThroughUndoAndRefusedLikeTheFile)
+{
+    defaultUnits();
+    DisplayUnits::instance().setLength(DisplayUnits::Length::Millimetre);
+    DriverInEditor s("tipping_bed", "lift_cylinder");
+    const Mechanism before = s.doc.mechanism();
+    ASSERT_NE(s.field<QCheckBox>("capPinData"), nullptr);
+    ASSERT_EQ(s.field<QLineEdit>("rodPinDiameter"), nullptr) << "no pin fields before the pin is ticked";
+
+    s.tick("rodPinData", true);
+    s.type("rodPinDiameter", "25");
+    s.type("rodAllowableShear", "120");
+    ASSERT_TRUE(s.driver().endPins[1]);
+    EXPECT_FALSE(s.driver().endPins[0]) << "the barrel end is untouched";
+    EXPECT_DOUBLE_EQ(s.driver().endPins[1]->diameter, 0.025);
+    EXPECT_DOUBLE_EQ(*s.driver().endPins[1]->allowableShear, 120e6);
+    // The bed has neither section nor plate: no bearing length to fall back on.
+    auto* fallback = s.field<QLabel>("rodBearingDefault");
+    ASSERT_NE(fallback, nullptr);
+    EXPECT_TRUE(fallback->text().contains("body at this end")) << fallback->text().toStdString();
+
+    const Mechanism kept = s.doc.mechanism();
+    s.type("rodPinDiameter", "-4");
+    const QString why = s.refusal();
+    EXPECT_TRUE(why.contains("lift_cylinder")) << why.toStdString();
+    EXPECT_EQ(s.doc.mechanism(), kept);
+
+    EXPECT_EQ(s.doc.undoStack()->count(), 3);
+    EXPECT_EQ(validateMechanism(s.doc.mechanism()), s.doc.mechanism());
+    while (s.doc.undoStack()->canUndo()) s.doc.undoStack()->undo();
+    EXPECT_EQ(s.doc.mechanism(), before);
+}
+
 }  // namespace

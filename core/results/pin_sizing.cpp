@@ -76,11 +76,7 @@ std::optional<BearingLength> bearingLength(const Mechanism& doc, const std::opti
                                            const std::vector<std::string>& bodies)
 {
     if (pin && pin->bearingLength) return BearingLength{*pin->bearingLength, ""};
-    std::optional<BearingLength> thinnest;
-    for (const std::string& body : bodies)
-        if (const auto t = thicknessOf(doc, body); t && (!thinnest || *t < thinnest->length))
-            thinnest = BearingLength{*t, body};
-    return thinnest;
+    return thinnestThickness(doc, bodies);
 }
 
 // The pin's data, bearing and notes; without data, only its force is sized.
@@ -99,9 +95,13 @@ void describe(PinSizing& p, const Mechanism& doc, const std::optional<PinData>& 
 
 }  // namespace
 
-std::optional<BearingLength> bearingLengthOf(const Mechanism& doc, const Joint& joint)
+std::optional<BearingLength> thinnestThickness(const Mechanism& doc, const std::vector<std::string>& bodies)
 {
-    return bearingLength(doc, joint.pin, {joint.bodies[0], joint.bodies[1]});
+    std::optional<BearingLength> thinnest;
+    for (const std::string& body : bodies)
+        if (const auto t = thicknessOf(doc, body); t && (!thinnest || *t < thinnest->length))
+            thinnest = BearingLength{*t, body};
+    return thinnest;
 }
 
 std::vector<PinSizing> sizePins(const Mechanism& doc, const CompiledMechanism& m, const CycleResult& r)

@@ -33,9 +33,10 @@ struct BearingLength {
     std::string fromBody;
 };
 
-// The bearing length of `joint` (in `doc`): the user's, else the thinnest
-// thickness among its bodies' sections and plates; none when neither is known.
-std::optional<BearingLength> bearingLengthOf(const Mechanism& doc, const Joint& joint);
+// The bearing length a pin through `bodies` (in `doc`) takes when none is
+// typed: the thinnest thickness among their sections and plates; none when
+// no body has one.
+std::optional<BearingLength> thinnestThickness(const Mechanism& doc, const std::vector<std::string>& bodies);
 
 // Peaks use EnvelopePeak for their step (its station `s` is not used).
 struct PinSizing {

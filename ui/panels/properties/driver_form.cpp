@@ -2,6 +2,7 @@
 #include "ui/document/mechanism_edits.h"
 #include "ui/document/sketch_geometry.h"
 #include "ui/panels/properties/forms.h"
+#include "ui/panels/properties/pin_fields.h"
 
 namespace clevis::ui {
 namespace {
@@ -164,6 +165,25 @@ void cylinderFields(FormBuilder& f, const Driver& driver, const std::function<Dr
     f.info({}, QObject::tr("Pushes on the full bore, pulls on the ring round the rod."));
 }
 
+// The pin at each end of a cylinder between two points, sized as a joint's
+// pin is; its results are named <driver>.cap and <driver>.rod.
+void endPinFields(FormBuilder& f, const Mechanism& m, const Driver& driver,
+                  const std::function<Driver&(Mechanism&)>& self)
+{
+    const QString qname = QString::fromStdString(driver.name);
+    for (int e = 0; e < 2; ++e) {
+        if (!driver.ends[e]) continue;
+        const QString end = e ? QStringLiteral("rod") : QStringLiteral("cap");
+        pinFields(f, m,
+                  {e ? QObject::tr("Rod end pin") : QObject::tr("Barrel end pin"),
+                   QObject::tr("Size %1.%2").arg(qname, end),
+                   QObject::tr("Set %1.%2 pin").arg(qname, end),
+                   end,
+                   {driver.ends[e]->body}},
+                  driver.endPins[e], [self, e](Mechanism& m) -> std::optional<PinData>& { return self(m).endPins[e]; });
+    }
+}
+
 }  // namespace
 
 void driverForm(FormBuilder& f, const Mechanism& m, const Driver& driver)
@@ -232,6 +252,7 @@ void driverForm(FormBuilder& f, const Mechanism& m, const Driver& driver)
         gearboxFields(f, driver, self);
         motorFields(f, m, driver, self);
     } else cylinderFields(f, driver, self);
+    endPinFields(f, m, driver, self);
 }
 
 }  // namespace clevis::ui

@@ -1,8 +1,8 @@
-#include "core/results/pin_sizing.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/document/mechanism_edits.h"
 #include "ui/document/sketch_geometry.h"
 #include "ui/panels/properties/forms.h"
+#include "ui/panels/properties/pin_fields.h"
 #include "ui/shell/display_units.h"
 
 #include <QStringList>
@@ -58,55 +58,6 @@ void compoundPinRows(FormBuilder& f, const Mechanism& m, const Joint& joint, con
     }
 }
 
-// Where the bearing length comes from when none is typed (pin_sizing.h).
-QString defaultBearingText(const Mechanism& m, Joint joint)
-{
-    joint.pin->bearingLength.reset();
-    const auto fallback = bearingLengthOf(m, joint);
-    if (!fallback)
-        return QObject::tr(
-            "No bearing length: neither body has a section or plate thickness. Type one to get the "
-            "bearing pressure and p·v.");
-    return QObject::tr("Bearing length by default: %1, the thickness of %2.")
-        .arg(DisplayUnits::instance().formatLength(fallback->length), QString::fromStdString(fallback->fromBody));
-}
-
-// The pin and its bearing, sized by clevis-cli analyze; the document checks
-// each value by the file reader's rules.
-void pinFields(FormBuilder& f, const Mechanism& m, const Joint& joint, const std::function<Joint&(Mechanism&)>& self)
-{
-    const QString undo = QObject::tr("Set %1 pin").arg(QString::fromStdString(joint.name));
-    f.heading(QObject::tr("Pin and bearing"));
-    f.check("pinData", QObject::tr("Size this pin"), joint.pin.has_value(), undo, [self](Mechanism& m, bool on) {
-        if (!on) self(m).pin.reset();
-        else if (!self(m).pin) self(m).pin = PinData{0.01};  // a 10 mm pin to start from
-    });
-    if (!joint.pin) return;
-    const PinData& p = *joint.pin;
-    const auto pin = [self](Mechanism& m) -> PinData& { return *self(m).pin; };
-    f.number("pinDiameter", QObject::tr("Pin diameter"), p.diameter, lengthQuantity(), undo,
-             [pin](Mechanism& m, double v) { pin(m).diameter = v; });
-    f.choice("shearPlanes", QObject::tr("Shear"),
-             {QObject::tr("single (one plane)"), QObject::tr("double (two planes)")}, p.shearPlanes == 2 ? 1 : 0, undo,
-             [pin](Mechanism& m, int i) { pin(m).shearPlanes = i + 1; });
-    f.optionalNumber("bearingLength", QObject::tr("Bearing length"), p.bearingLength, lengthQuantity(), undo,
-                     [pin](Mechanism& m, std::optional<double> v) { pin(m).bearingLength = v; });
-    if (!p.bearingLength) f.info({}, defaultBearingText(m, joint), QStringLiteral("bearingDefault"));
-    const QString none = QObject::tr("none");
-    f.optionalNumber(
-        "allowableShear", QObject::tr("Allowable shear"), p.allowableShear, megaQuantity(QStringLiteral("MPa"), 2),
-        undo, [pin](Mechanism& m, std::optional<double> v) { pin(m).allowableShear = v; }, none);
-    f.optionalNumber(
-        "allowablePressure", QObject::tr("Allowable pressure"), p.allowablePressure,
-        megaQuantity(QStringLiteral("MPa"), 2), undo,
-        [pin](Mechanism& m, std::optional<double> v) { pin(m).allowablePressure = v; }, none);
-    f.optionalNumber(
-        "allowablePv", QObject::tr("Allowable p·v"), p.allowablePv, megaQuantity(QStringLiteral("MPa·m/s"), 3), undo,
-        [pin](Mechanism& m, std::optional<double> v) { pin(m).allowablePv = v; }, none);
-    f.info({}, QObject::tr("Utilisations are fractions of the allowables you give, not a verdict that the pin is "
-                           "safe; leave one empty for none."));
-}
-
 }  // namespace
 
 void jointForm(FormBuilder& f, const Mechanism& m, const Joint& joint, const AnalysisState* analysis)
@@ -152,7 +103,14 @@ void jointForm(FormBuilder& f, const Mechanism& m, const Joint& joint, const Ana
     if (joint.bodies[0].empty() || joint.bodies[1].empty())
         f.info({}, QObject::tr("This pin is open: draw a link to it, or pick its bodies above."));
     if (joint.type == JointType::Pin) compoundPinRows(f, m, joint, analysis);
-    if (joint.type != JointType::Slider) pinFields(f, m, joint, self);
+    if (joint.type != JointType::Slider)
+        pinFields(f, m,
+                  {QObject::tr("Pin and bearing"),
+                   QObject::tr("Size this pin"),
+                   QObject::tr("Set %1 pin").arg(qname),
+                   {},
+                   {joint.bodies[0], joint.bodies[1]}},
+                  joint.pin, [self](Mechanism& m) -> std::optional<PinData>& { return self(m).pin; });
 }
 
 }  // namespace clevis::ui
