@@ -5,6 +5,7 @@
 #include "render/drawing_symbols.h"
 #include "render/label_placer.h"
 #include "render/palette.h"
+#include "render/polyline_decimation.h"
 
 #include <QFontMetricsF>
 #include <QPainter>
@@ -327,14 +328,22 @@ void BearingPolarDiagram::paintPlot(QPainter& p) const
 
     // The curve, straight between steps; dashed where a step is near a singular position.
     const auto& f = polar_.force;
+    // Each run of steps alike is one polyline (round joins draw what round-capped
+    // segments would), with only the points a printer can show.
     p.save();
     p.setClipRect(plot_);
-    for (std::size_t i = 1; i < f.size(); ++i) {
-        const bool flagged = unreliable_[i - 1] || unreliable_[i];
-        QPen pen(flagged ? palette::problem() : palette::ink(), 1.5, flagged ? Qt::DashLine : Qt::SolidLine,
-                 Qt::RoundCap, Qt::RoundJoin);
-        p.setPen(pen);
-        p.drawLine(QLineF(tip(f[i - 1]), tip(f[i])));
+    const double deviation = invisibleDeviation(p);
+    for (std::size_t first = 0; first + 1 < f.size();) {
+        const auto flagged = [&](std::size_t i) { return unreliable_[i] || unreliable_[i + 1]; };  // segment i → i+1
+        const bool dashed = flagged(first);
+        std::size_t last = first + 1;
+        while (last + 1 < f.size() && flagged(last) == dashed) ++last;
+        QPolygonF run;
+        for (std::size_t i = first; i <= last; ++i) run << tip(f[i]);
+        p.setPen(QPen(dashed ? palette::problem() : palette::ink(), 1.5, dashed ? Qt::DashLine : Qt::SolidLine,
+                      Qt::RoundCap, Qt::RoundJoin));
+        p.drawPolyline(decimatedPolyline(run, deviation));
+        first = last;
     }
     p.restore();
 
