@@ -5,6 +5,7 @@
 #include "render/cycle_chart.h"
 #include "render/free_body_painter.h"
 #include "render/palette.h"
+#include "render/polyline_decimation.h"
 
 #include <QFontMetricsF>
 #include <QPainter>
@@ -12,6 +13,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <iterator>
 
 namespace clevis::ui {
 namespace {
@@ -188,14 +190,20 @@ void BarLoadDiagram::paintPane(QPainter& p, int which) const
         p.drawText(QRectF(0, Y(t) - 7, plot.left() - 4, 14), Qt::AlignRight | Qt::AlignVCenter, tickText(t, ys));
     }
 
-    // The band behind, then the zero line, then the step's curve.
-    QPainterPath area;
+    // The band behind, then the zero line, then the step's curve; each edge
+    // with only the points a printer can show.
+    const double deviation = invisibleDeviation(p);
+    QPolygonF most, least, curve;
     for (std::size_t i = 0; i < band.size(); ++i) {
-        const QPointF pt(X(band[i].s), Y(value(band[i].most, which)));
-        if (i == 0) area.moveTo(pt);
-        else area.lineTo(pt);
+        most << QPointF(X(band[i].s), Y(value(band[i].most, which)));
+        least << QPointF(X(band[i].s), Y(value(band[i].least, which)));
+        curve << QPointF(X(band[i].s), Y(value(values[i], which)));
     }
-    for (std::size_t i = band.size(); i-- > 0;) area.lineTo(X(band[i].s), Y(value(band[i].least, which)));
+    QPolygonF outline = decimatedPolyline(most, deviation);
+    const QPolygonF lower = decimatedPolyline(least, deviation);
+    std::copy(lower.rbegin(), lower.rend(), std::back_inserter(outline));
+    QPainterPath area;
+    area.addPolygon(outline);
     area.closeSubpath();
     p.setPen(QPen(palette::link(), 0.8));
     p.setBrush(palette::linkFill());
@@ -203,14 +211,8 @@ void BarLoadDiagram::paintPane(QPainter& p, int which) const
     p.setBrush(Qt::NoBrush);
     p.setPen(QPen(palette::groundHatch(), 0.8));
     p.drawLine(QPointF(plot.left(), Y(0)), QPointF(plot.right(), Y(0)));
-    QPainterPath curve;
-    for (std::size_t i = 0; i < values.size(); ++i) {
-        const QPointF pt(X(band[i].s), Y(value(values[i], which)));
-        if (i == 0) curve.moveTo(pt);
-        else curve.lineTo(pt);
-    }
     p.setPen(QPen(palette::ink(), kCurveWidth, Qt::SolidLine, Qt::FlatCap, Qt::MiterJoin));
-    p.drawPath(curve);
+    p.drawPolyline(decimatedPolyline(curve, deviation));
     p.setPen(QPen(palette::ink(), 0.8));
     p.drawRect(plot);
 

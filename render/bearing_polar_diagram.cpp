@@ -5,6 +5,7 @@
 #include "render/drawing_symbols.h"
 #include "render/label_placer.h"
 #include "render/palette.h"
+#include "render/polyline_decimation.h"
 
 #include <QFontMetricsF>
 #include <QPainter>
@@ -23,6 +24,8 @@ constexpr double kTitlePixels = 13, kTextPixels = 10, kLabelPixels = 9;
 constexpr double kRingRoom = 24;               // between the outer ring and the plot's edge, for the axes' names
 constexpr std::size_t kCompactMarkLabels = 3;  // a compact plot names every third mark (every 90° of a crank)
 constexpr double kMarkRadius = 2.4, kPeakMark = 4.2, kPinRadius = 4, kNowRing = 5.5;
+// Marks whose tips lie within this many label sizes of the pin are named together.
+constexpr double kBunchedMarks = 2.5;
 
 QFont font(double pixels, bool bold = false)
 {
@@ -256,15 +259,46 @@ void BearingPolarDiagram::placeLabels()
         labels.add("peak " + u.force(polar_.peak.value), at, unit(at - centre));
     }
 
+    // Marks bunched at the pin (a load near zero for part of the cycle) share
+    // one label, their positions as runs: a dozen names round a few points
+    // cannot be told apart. The others are named one by one.
+    const std::size_t every = options_.compact ? kCompactMarkLabels : 1;
+    const double bunch = kBunchedMarks * kLabelPixels * options_.textScale;
+    std::vector<std::size_t> bunched;
+    for (std::size_t k = 0; k < marks_.size(); k += every) {
+        const QPointF d = tip(marks_[k].force) - centre;
+        if (std::hypot(d.x(), d.y()) < bunch) bunched.push_back(k);
+    }
+    if (bunched.size() < 2) bunched.clear();
+    // The marks are obstacles to every label placed after them; a shared
+    // label must clear them, so then they come first.
+    const auto markObstacles = [&] {
+        for (const PolarMark& mark : marks_)
+            labels.addObstacle(QRectF(tip(mark.force) - QPointF(kMarkRadius, kMarkRadius), QSizeF(2, 2) * kMarkRadius));
+    };
+    if (!bunched.empty()) {
+        markObstacles();
+        QStringList runs;
+        for (std::size_t i = 0; i < bunched.size();) {
+            std::size_t last = i;
+            while (last + 1 < bunched.size() && bunched[last + 1] == bunched[last] + every) ++last;
+            const QString first = markText(axis_, marks_[bunched[i]].position);
+            runs << (last == i ? first : first + "–" + markText(axis_, marks_[bunched[last]].position));
+            i = last + 1;
+        }
+        // Away from the peak, where the curve leaves room.
+        const QPointF away = polar_.peak.step >= 0 ? centre - tip(f[polar_.peak.step]) : QPointF(1, -1);
+        labels.add(runs.join(", "), centre, unit(away));
+    }
     // Each ring's value, along the side the load leaves most free.
     const double ringDeg = polar_.sector.defined && !polar_.sector.reverses ? polar_.sector.quietDeg : -45.0;
     for (std::size_t k = options_.compact ? rings_.size() - 1 : 0; k < rings_.size(); ++k)
         labels.add(ringText(u, rings_[k]), centre + pageDirection(ringDeg) * rings_[k] * pagePerNewton_,
                    pageDirection(ringDeg), palette::groundHatch());
 
-    for (const PolarMark& mark : marks_)
-        labels.addObstacle(QRectF(tip(mark.force) - QPointF(kMarkRadius, kMarkRadius), QSizeF(2, 2) * kMarkRadius));
-    for (std::size_t k = 0; k < marks_.size(); k += options_.compact ? kCompactMarkLabels : 1) {
+    if (bunched.empty()) markObstacles();
+    for (std::size_t k = 0; k < marks_.size(); k += every) {
+        if (std::find(bunched.begin(), bunched.end(), k) != bunched.end()) continue;
         const QPointF at = tip(marks_[k].force);
         labels.add(markText(axis_, marks_[k].position), at, unit(at - centre));
     }
@@ -327,14 +361,22 @@ void BearingPolarDiagram::paintPlot(QPainter& p) const
 
     // The curve, straight between steps; dashed where a step is near a singular position.
     const auto& f = polar_.force;
+    // Each run of steps alike is one polyline (round joins draw what round-capped
+    // segments would), with only the points a printer can show.
     p.save();
     p.setClipRect(plot_);
-    for (std::size_t i = 1; i < f.size(); ++i) {
-        const bool flagged = unreliable_[i - 1] || unreliable_[i];
-        QPen pen(flagged ? palette::problem() : palette::ink(), 1.5, flagged ? Qt::DashLine : Qt::SolidLine,
-                 Qt::RoundCap, Qt::RoundJoin);
-        p.setPen(pen);
-        p.drawLine(QLineF(tip(f[i - 1]), tip(f[i])));
+    const double deviation = invisibleDeviation(p);
+    for (std::size_t first = 0; first + 1 < f.size();) {
+        const auto flagged = [&](std::size_t i) { return unreliable_[i] || unreliable_[i + 1]; };  // segment i → i+1
+        const bool dashed = flagged(first);
+        std::size_t last = first + 1;
+        while (last + 1 < f.size() && flagged(last) == dashed) ++last;
+        QPolygonF run;
+        for (std::size_t i = first; i <= last; ++i) run << tip(f[i]);
+        p.setPen(QPen(dashed ? palette::problem() : palette::ink(), 1.5, dashed ? Qt::DashLine : Qt::SolidLine,
+                      Qt::RoundCap, Qt::RoundJoin));
+        p.drawPolyline(decimatedPolyline(run, deviation));
+        first = last;
     }
     p.restore();
 

@@ -8,6 +8,7 @@
 #include "render/palette.h"
 
 #include <cmath>
+#include <utility>
 
 namespace clevis::ui {
 namespace {
@@ -89,9 +90,12 @@ void motorSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axi
 void studySection(PageFlow& f, const ReviewReportInput& in, const RatioStudy& s, const Gearbox& g)
 {
     const auto& u = in.units;
-    const XyChart chart(ratioStudyContent(in.mechanism, s, g.ratio, u));
+    // The study's name heads it once, as the subheading, not again over its chart.
+    XyChartContent content = ratioStudyContent(in.mechanism, s, g.ratio, u);
+    const QString title = std::exchange(content.title, QString());
+    const XyChart chart(std::move(content));
     f.keep(chart.size().height() * f.width() / chart.size().width() + 90);  // the heading and words with the plot
-    f.subheading(QString("Gear ratio study for %1").arg(qs(in.mechanism.drivers[s.driver].name)));
+    f.subheading(title);
     f.paragraph(QString("The RMS and peak torque the motor needs at %1 gear ratios from %2 to %3 (a quarter to four "
                         "times the gearbox's %4, spaced evenly on a log scale), with the gearbox's efficiency and "
                         "inertias at each and %5. A larger ratio divides the load torque but multiplies the "

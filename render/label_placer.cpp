@@ -67,13 +67,21 @@ LabelPlacer::Nearby LabelPlacer::nearby(const QRectF& region) const
     return near;
 }
 
-double LabelPlacer::cost(const QRectF& box, const Nearby& near) const
+// Every term is at least zero: once the sum is past `bound` the place has
+// lost, and the rest (the shapes are the dear part) is not worked out. Below
+// it the sum is the whole cost, added in the same order as always.
+double LabelPlacer::cost(const QRectF& box, const Nearby& near, double bound) const
 {
+    constexpr double kLost = std::numeric_limits<double>::infinity();
     double c = 0.0;
     for (const QRectF* p : near.placed) c += 50.0 * overlapArea(box, *p);
+    if (c > bound) return kLost;
     for (const QRectF* b : near.boxes) c += 4.0 * overlapArea(box, *b);
-    for (const QLineF* l : near.lines) c += crosses(*l, box) ? 400.0 : 0.0;
-    for (const QPainterPath* s : near.shapes) c += s->intersects(box) ? 300.0 : 0.0;
+    if (c > bound) return kLost;
+    for (const QLineF* l : near.lines)
+        if (crosses(*l, box) && (c += 400.0) > bound) return kLost;
+    for (const QPainterPath* s : near.shapes)
+        if (s->intersects(box) && (c += 300.0) > bound) return kLost;
     if (!area_.contains(box)) c += 5000.0 + 20.0 * (box.width() * box.height() - overlapArea(box, area_));
     return c;
 }
@@ -102,8 +110,14 @@ void LabelPlacer::add(const QString& text, QPointF anchor, QPointF push, const Q
             // The box edge nearest the anchor sits `distance` away along dir.
             const QPointF centre =
                 anchor + dir * distance + QPointF(dir.x() * size.width() / 2, dir.y() * size.height() / 2);
+            // The distance and turn alone bound a place's cost from below: one
+            // that cannot cost less than the best so far is not looked at, nor
+            // is the rest of a cost once past it (the margin keeps rounding out).
+            const double penalty = 0.8 * distance + 2.0 * std::abs(step);
+            if (penalty >= bestCost) continue;
             const QRectF box(centre - QPointF(size.width() / 2, size.height() / 2), size);
-            const double c = cost(box, near) + 0.8 * distance + 2.0 * std::abs(step);
+            const double bound = bestCost - penalty + 1e-9 * (1.0 + bestCost);
+            const double c = cost(box, near, bound) + 0.8 * distance + 2.0 * std::abs(step);
             if (c < bestCost) {
                 bestCost = c;
                 best = box;

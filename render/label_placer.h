@@ -49,7 +49,7 @@ private:
         std::vector<const QPainterPath*> shapes;
     };
     Nearby nearby(const QRectF& region) const;
-    double cost(const QRectF& box, const Nearby& near) const;
+    double cost(const QRectF& box, const Nearby& near, double bound) const;  // infinite once past `bound`
 
     QRectF area_;
     QFont font_;

@@ -322,6 +322,8 @@ TEST(ReviewReportDrive, AChapterWithTheMotorDutyStudyAndCautionsWhenThereIsAGear
           QString("common practice, a rule of thumb"), QString("service factor for shock"),
           QString("Torque against speed at the motor shaft of main_motor"), QString("licensed engineer")})
         EXPECT_TRUE(text.simplified().contains(expected.simplified())) << expected.toStdString();
+    // The study is named once: as its heading, not again as its chart's title.
+    EXPECT_EQ(text.count("Gear ratio study for main_motor"), 1);
 }
 
 TEST(ReviewReportDrive, ACylinderHasItsTableAndNoDriveDataNoChapter)
