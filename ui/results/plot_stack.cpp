@@ -216,6 +216,7 @@ PlotStack::PaneParts PlotStack::addPane(const PlotPane& pane, QCPMarginGroup* ma
         g->addToLegend(legend);
         parts.graphs.push_back(g);
         auto* mark = new QCPItemTracer(plot_);
+        mark->setClipAxisRect(rect);  // an item is clipped to the first pane unless told
         mark->setGraph(g);
         mark->setStyle(QCPItemTracer::tsCircle);
         mark->setSize(7);
