@@ -290,6 +290,25 @@ TEST(DriveView, FollowsTheSelectedDriverAndAnEditedGearbox)
     EXPECT_EQ(w.view->driver(), 0);
 }
 
+// Hidden, the view leaves a new result alone; shown, it has the newest one.
+TEST(DriveView, HiddenItWaitsAndShownItHasTheNewestResult)
+{
+    Mechanism m = sample("tote_arm");
+    for (Driver& d : m.drivers) d.gearbox = Gearbox{50.0, 0.9, 1e-4, 0.0};
+    Window w(m);
+    ASSERT_EQ(w.view->driverChoice()->count(), 2);
+    w.view->hide();
+    w.doc.apply("no gearbox", [&](Mechanism& doc) { doc.drivers[1].gearbox.reset(); });
+    w.analysis->waitForIdle();
+    QCoreApplication::processEvents();
+    EXPECT_EQ(w.view->driverChoice()->count(), 2);  // not worked out while unseen
+    w.view->show();
+    QCoreApplication::processEvents();
+    EXPECT_EQ(w.view->driverChoice()->count(), 1);
+    EXPECT_EQ(w.view->driver(), 0);
+    EXPECT_EQ(w.view->figures().size(), 3u);
+}
+
 // ---- the report ----
 
 QString reportText(const Mechanism& doc)

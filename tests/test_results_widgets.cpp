@@ -18,6 +18,9 @@
 #include <QCheckBox>
 #include <QDoubleSpinBox>
 #include <QListWidget>
+#include <QPointer>
+#include <QScrollArea>
+#include <QScrollBar>
 #include <QSlider>
 #include <QTabWidget>
 #include <QTest>
@@ -359,4 +362,68 @@ int main(int argc, char** argv)
     QApplication app(argc, argv);
     testing::InitGoogleTest(&argc, argv);
     return RUN_ALL_TESTS();
+}
+
+// A result with the same curves keeps the panes and only sets their data; a
+// different set of curves builds them again.
+TEST(ResultsWidgets, PlotsKeepTheirPanesWhenTheCurvesStayTheSame)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult());
+    PlotStack plots(s.analysis.get());
+    const QPointer<QCPGraph> first = plots.plot()->graph(0);
+    plots.setChoice(plots.choice());
+    EXPECT_FALSE(first.isNull());
+    EXPECT_EQ(plots.plot()->graph(0), first.data());
+    plots.setChoice({{"main_bearing"}, false});
+    EXPECT_TRUE(first.isNull());
+}
+
+// Each curve's peak mark is drawn within its own pane, not clipped away by the first.
+TEST(ResultsWidgets, PeakMarksAreClippedToTheirOwnPane)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult());
+    PlotStack plots(s.analysis.get());
+    ASSERT_GT(plots.plot()->axisRectCount(), 1);
+    int marks = 0;
+    for (int i = 0; i < plots.plot()->itemCount(); ++i)
+        if (const auto* mark = qobject_cast<QCPItemTracer*>(plots.plot()->item(i))) {
+            ++marks;
+            EXPECT_EQ(mark->clipAxisRect(), mark->graph()->keyAxis()->axisRect());
+        }
+    EXPECT_EQ(marks, plots.plot()->graphCount());
+}
+
+// Only the panes in view are drawn at a replot; one scrolled into view is
+// drawn then, with its curves.
+TEST(ResultsWidgets, PanesScrolledIntoViewAreDrawn)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult());
+    QWidget window;
+    auto* plots = new PlotStack(s.analysis.get());
+    (new QVBoxLayout(&window))->addWidget(plots);
+    window.resize(900, 360);
+    window.show();
+    QCoreApplication::processEvents();
+    plots->plot()->replot();
+    const auto inked = [&] {  // pixels of a curve (coloured or dark) inside the last pane's axes
+        const QImage image = plots->plot()->grab().toImage();
+        const QRect last = plots->plot()->axisRect(plots->plot()->axisRectCount() - 1)->rect();
+        int n = 0;
+        for (int y = last.top() + 2; y < last.bottom() - 2; ++y)
+            for (int x = last.left() + 2; x < last.right() - 2; ++x)
+                n += QColor(image.pixel(x, y)).saturation() > 100 || qGray(image.pixel(x, y)) < 120;
+        return n;
+    };
+    EXPECT_EQ(inked(), 0);  // out of view: left out
+    QScrollArea* scroll = nullptr;
+    for (auto* area : plots->findChildren<QScrollArea*>())
+        if (area->widget() == plots->plot()) scroll = area;
+    ASSERT_NE(scroll, nullptr);
+    ASSERT_GT(scroll->verticalScrollBar()->maximum(), 0);
+    scroll->verticalScrollBar()->setValue(scroll->verticalScrollBar()->maximum());
+    QCoreApplication::processEvents();
+    EXPECT_GT(inked(), 50);
 }

@@ -97,6 +97,8 @@ QString DriveView::motionText() const { return motion_->text(); }
 void DriveView::solved()
 {
     if (analysis_->busy() && analysis_->hasResult()) return;
+    stale_ = !isVisible();  // the drive studies cost an edit for nothing while unseen
+    if (stale_) return;
     drive_.reset();
     if (analysis_->hasResult()) {
         const auto& m = analysis_->compiled();
@@ -129,13 +131,14 @@ void DriveView::solved()
 void DriveView::selectionMoved()
 {
     const Selection s = doc_->selection();
-    if (s.kind != Selection::Kind::Driver || !analysis_->hasResult()) return;
+    if (stale_ || s.kind != Selection::Kind::Driver || !analysis_->hasResult()) return;
     for (std::size_t i = 0; i < choices_.size(); ++i)
         if (qs(analysis_->compiled().drivers[choices_[i]].name) == s.name) choice_->setCurrentIndex(int(i));
 }
 
 void DriveView::showDriver()
 {
+    if (stale_) return;  // drive_ is not this result's: all is redone when shown
     driver_ = -1;
     message_.clear();
     if (analysis_->nothingDrawn()) message_ = tr("Draw a mechanism: what its motor or cylinder must give shows here.");
@@ -251,9 +254,15 @@ int DriveView::placeFigures(int across, int width, double scale)
     return height;
 }
 
+void DriveView::showEvent(QShowEvent* event)
+{
+    QWidget::showEvent(event);
+    if (stale_) solved();
+}
+
 bool DriveView::eventFilter(QObject* watched, QEvent* event)
 {
-    if (watched == scroll_->viewport() && event->type() == QEvent::Resize) layOutFigures();
+    if (watched == scroll_->viewport() && event->type() == QEvent::Resize && !stale_) layOutFigures();
     if (watched != canvas_ || event->type() != QEvent::Paint) return QWidget::eventFilter(watched, event);
     QPainter p(canvas_);
     p.fillRect(canvas_->rect(), palette::paper());

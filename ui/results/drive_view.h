@@ -7,6 +7,8 @@
 // figures (the first, or the only, by default). The figures stand side by
 // side as many as the panel's width takes, at the window's text size, and
 // scroll when they do not fit; the drive's warnings are said above them.
+// Hidden (behind another tab), the view does nothing for a new result; it
+// works out the newest one when it is shown.
 #pragma once
 
 #include "core/results/drive_train.h"
@@ -44,6 +46,7 @@ public:
 
 protected:
     bool eventFilter(QObject* watched, QEvent* event) override;
+    void showEvent(QShowEvent* event) override;
 
 private:
     void solved();          // a new result: its drive figures
@@ -65,6 +68,7 @@ private:
     std::vector<int> choices_;  // the compiled driver of each entry of choice_
     int driver_ = -1;
     QString message_;
+    bool stale_ = false;  // a result came while hidden: drive_ is an older one's
     std::vector<std::unique_ptr<Figure>> figures_;
     std::vector<QRectF> places_;  // where each figure is drawn on canvas_
 };

@@ -4,6 +4,7 @@
 #include "core/results/cylinder_ends.h"
 #include "render/palette.h"
 #include "ui/analysis/analysis_state.h"
+#include "ui/results/segment_graph.h"
 #include "ui/shell/display_units.h"
 
 #include <qcustomplot.h>
@@ -14,6 +15,7 @@
 #include <QListWidget>
 #include <QResizeEvent>
 #include <QScrollArea>
+#include <QScrollBar>
 #include <QSplitter>
 #include <QVBoxLayout>
 
@@ -35,6 +37,18 @@ void wrapLegend(QCPLegend* legend, int width)
     legend->setFillOrder(QCPLegend::foColumnsFirst, true);  // a new wrap only applies once rearranged
 }
 
+// The same curves under the same titles, units and pens: the panes can be kept.
+bool sameCurves(const std::vector<PlotPane>& a, const std::vector<PlotPane>& b)
+{
+    const auto same = [](const PlotPane& p, const PlotPane& q) {
+        return p.title == q.title && p.unit == q.unit && p.curves.size() == q.curves.size() &&
+               std::equal(p.curves.begin(), p.curves.end(), q.curves.begin(), [](const auto& c, const auto& d) {
+                   return c.series.name == d.series.name && c.pen == d.pen;
+               });
+    };
+    return a.size() == b.size() && std::equal(a.begin(), a.end(), b.begin(), same);
+}
+
 }  // namespace
 
 PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
@@ -43,6 +57,7 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     , joints_(new QListWidget(this))
     , components_(new QCheckBox(tr("Components Fx, Fy"), this))
     , plot_(new QCustomPlot(this))
+    , scroll_(nullptr)
     , readout_(new QLabel(this))
     , peaks_(new QLabel(this))
 {
@@ -77,11 +92,12 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     auto* centreLayout = new QVBoxLayout(centre);
     centreLayout->setContentsMargins(0, 0, 0, 0);
     // Each pane keeps a readable height; the stack scrolls when they do not fit.
-    auto* scroll = new QScrollArea(centre);
-    scroll->setWidgetResizable(true);
-    scroll->setFrameShape(QFrame::NoFrame);
-    scroll->setWidget(plot_);
-    centreLayout->addWidget(scroll, 1);
+    scroll_ = new QScrollArea(centre);
+    scroll_->setWidgetResizable(true);
+    scroll_->setFrameShape(QFrame::NoFrame);
+    scroll_->setWidget(plot_);
+    scroll_->viewport()->installEventFilter(this);
+    centreLayout->addWidget(scroll_, 1);
     centreLayout->addWidget(readout_);
     auto* split = new QSplitter(this);
     split->addWidget(side);
@@ -101,6 +117,16 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     });
     connect(plot_, &QCustomPlot::mousePress, this, &PlotStack::pointerPressed);
     connect(plot_, &QCustomPlot::mouseMove, this, &PlotStack::pointerMoved);
+    connect(scroll_->verticalScrollBar(), &QScrollBar::valueChanged, this, &PlotStack::scrolled);
+    // Panes out of view are left out of the widget's replots only; every
+    // layerable is visible again after it, for exports and hit tests.
+    connect(plot_, &QCustomPlot::beforeReplot, this, [this] { replotting_ = true; });
+    connect(plot_, &QCustomPlot::afterLayout, this, &PlotStack::leaveOutPanesOutOfView);
+    connect(plot_, &QCustomPlot::afterReplot, this, [this] {
+        replotting_ = false;
+        for (const PaneParts& parts : parts_)
+            for (QCPLayerable* l : layerables(parts)) l->setVisible(true);
+    });
     rebuild();
 }
 
@@ -147,27 +173,28 @@ void PlotStack::showChoice()
 }
 
 // A pane: a header row with its title and a legend of line samples, then
-// the axes; every pane numbers the x axis and names it, so any one scrolled
-// into view reads alone.
-QCPAxisRect* PlotStack::addPane(const PlotPane& pane)
+// the axes with a graph and a peak mark per curve and the cursor; every pane
+// numbers the x axis and names it, so any one scrolled into view reads alone.
+PlotStack::PaneParts PlotStack::addPane(const PlotPane& pane, QCPMarginGroup* margins)
 {
-    auto* header = new QCPLayoutGrid;
+    PaneParts parts;
+    parts.header = new QCPLayoutGrid;
     const int row = plot_->plotLayout()->rowCount();
-    plot_->plotLayout()->addElement(row, 0, header);
+    plot_->plotLayout()->addElement(row, 0, parts.header);
     plot_->plotLayout()->setRowStretchFactor(row, 0.001);  // as tall as its text, the axes take the rest
     auto* title = new QCPTextElement(plot_, pane.title, QFont(font().family(), font().pointSize(), QFont::Bold));
     title->setTextFlags(Qt::AlignLeft | Qt::AlignVCenter);
-    header->addElement(0, 0, title);
+    parts.header->addElement(0, 0, title);
     auto* legend = new QCPLegend;
-    header->addElement(0, 1, legend);
-    header->setColumnStretchFactors({0.001, 1});
+    parts.header->addElement(0, 1, legend);
+    parts.header->setColumnStretchFactors({0.001, 1});
     legend->setFillOrder(QCPLegend::foColumnsFirst);
     legend->setBorderPen(Qt::NoPen);
     legend->setBrush(Qt::NoBrush);
     legend->setIconSize(26, 18);  // rows tall enough for the underscores in names
     legend->setFont(font());
     legend->setLayer("legend");
-    legends_.push_back(legend);
+    parts.legend = legend;
 
     auto* rect = new QCPAxisRect(plot_);
     rect->axis(QCPAxis::atLeft)->setLabel(pane.unit);
@@ -177,21 +204,49 @@ QCPAxisRect* PlotStack::addPane(const PlotPane& pane)
     rect->axis(QCPAxis::atBottom)->setLabelPadding(1);
     rect->setRangeDrag(Qt::Orientations());
     rect->setRangeZoom(Qt::Orientations());
+    rect->setMarginGroup(QCP::msLeft | QCP::msRight, margins);
     plot_->plotLayout()->addElement(plot_->plotLayout()->rowCount(), 0, rect);
-    return rect;
+    parts.rect = rect;
+    QCPAxis* xa = rect->axis(QCPAxis::atBottom);
+    QCPAxis* ya = rect->axis(QCPAxis::atLeft);
+    for (const PlotCurve& c : pane.curves) {
+        QCPGraph* g = new SegmentGraph(xa, ya);
+        g->setName(c.series.name);
+        g->setPen(curvePen(c.pen));
+        g->addToLegend(legend);
+        parts.graphs.push_back(g);
+        auto* mark = new QCPItemTracer(plot_);
+        mark->setClipAxisRect(rect);  // an item is clipped to the first pane unless told
+        mark->setGraph(g);
+        mark->setStyle(QCPItemTracer::tsCircle);
+        mark->setSize(7);
+        mark->setPen(QPen(g->pen().color(), 1.2));
+        mark->setBrush(Qt::white);
+        parts.marks.push_back(mark);
+    }
+    parts.cursor = new QCPItemStraightLine(plot_);
+    parts.cursor->setClipAxisRect(rect);
+    parts.cursor->point1->setAxes(xa, ya);
+    parts.cursor->point2->setAxes(xa, ya);
+    parts.cursor->setPen(QPen(palette::driver(), 1.2));
+    return parts;
 }
 
-void PlotStack::rebuild()
+void PlotStack::clearPlot()
 {
     plot_->clearItems();
     plot_->clearPlottables();
     plot_->plotLayout()->clear();
-    cursors_.clear();
-    legends_.clear();
-    panes_.clear();
+    parts_.clear();
+}
+
+void PlotStack::rebuild()
+{
     peaks_->clear();
     if (!analysis_->hasResult()) {
         // Nothing of an earlier result may stay on screen beside the reason.
+        clearPlot();
+        panes_.clear();
         const QSignalBlocker blockJoints(joints_);
         joints_->clear();
         plot_->setMinimumHeight(0);  // no room kept for the panes that were
@@ -201,14 +256,21 @@ void PlotStack::rebuild()
     }
     showReadout({});  // an earlier error, or values read off the old curves
     const auto& m = analysis_->compiled();
+    const QString oldLabel = axis_.label;
     axis_ = cycleAxis(m, analysis_->result());
     listJoints(m);
     showChoice();
-    panes_ = plotPanes(m, analysis_->result(), renderUnits(DisplayUnits::instance()), choice_);
-    auto* margins = new QCPMarginGroup(plot_);
+    std::vector<PlotPane> panes = plotPanes(m, analysis_->result(), renderUnits(DisplayUnits::instance()), choice_);
+    const bool keep = !parts_.empty() && axis_.label == oldLabel && sameCurves(panes, panes_);
+    panes_ = std::move(panes);
+    if (!keep) {
+        clearPlot();
+        auto* margins = new QCPMarginGroup(plot_);
+        for (const PlotPane& pane : panes_) parts_.push_back(addPane(pane, margins));
+    }
     QStringList peakLines;
-    for (const PlotPane& pane : panes_) peakLines << drawPane(pane, margins);
-    fitLegends();
+    for (std::size_t i = 0; i < panes_.size(); ++i) peakLines << fillPane(panes_[i], parts_[i]);
+    if (!keep) fitLegends();
     peaks_->setText(peakLines.join("\n"));
     moveCursor(analysis_->currentStep());
 }
@@ -217,44 +279,31 @@ void PlotStack::rebuild()
 void PlotStack::fitLegends()
 {
     int extraRows = 0;
-    for (QCPLegend* legend : legends_) {
-        wrapLegend(legend, plot_->width() * 3 / 4);
-        extraRows += std::max(0, legend->rowCount() - 1);
+    for (const PaneParts& parts : parts_) {
+        wrapLegend(parts.legend, plot_->width() * 3 / 4);
+        extraRows += std::max(0, parts.legend->rowCount() - 1);
     }
     plot_->setMinimumHeight(kPaneHeight * int(panes_.size()) + extraRows * fontMetrics().height() + 20);
 }
 
-// Draws one pane's curves with their peaks marked, the shading and the
-// cursor; returns the peak lines for the list beside the plots.
-QStringList PlotStack::drawPane(const PlotPane& pane, QCPMarginGroup* margins)
+// Sets one pane's curves, their peaks, the ranges and the shading; returns
+// the peak lines for the list beside the plots.
+QStringList PlotStack::fillPane(const PlotPane& pane, PaneParts& parts)
 {
     const CycleResult& r = analysis_->result();
     const QVector<double> x(axis_.values.begin(), axis_.values.end());
     const double end = plannedEnd(axis_, r);
-    QCPAxisRect* rect = addPane(pane);
-    rect->setMarginGroup(QCP::msLeft | QCP::msRight, margins);
-    QCPAxis* xa = rect->axis(QCPAxis::atBottom);
-    QCPAxis* ya = rect->axis(QCPAxis::atLeft);
+    QCPAxis* xa = parts.rect->axis(QCPAxis::atBottom);
+    QCPAxis* ya = parts.rect->axis(QCPAxis::atLeft);
     xa->setRange(std::min({x.front(), x.back(), end}), std::max({x.front(), x.back(), end}));
     const std::vector<bool> unreliable = unreliableSteps(r);
     QStringList peakLines;
     double lo = 0, hi = 0;
-    for (const PlotCurve& c : pane.curves) {
-        const CycleSeries& s = c.series;
-        QCPGraph* g = plot_->addGraph(xa, ya);
-        g->setName(s.name);
-        g->setPen(curvePen(c.pen));
-        g->setData(x, QVector<double>(s.values.begin(), s.values.end()), true);
-        g->addToLegend(legends_.back());
+    for (std::size_t i = 0; i < pane.curves.size(); ++i) {
+        const CycleSeries& s = pane.curves[i].series;
+        parts.graphs[i]->setData(x, QVector<double>(s.values.begin(), s.values.end()), true);
         const CurvePeak peak = curvePeak(s.values, unreliable);
-        const int k = peak.step;
-        auto* mark = new QCPItemTracer(plot_);
-        mark->setGraph(g);
-        mark->setGraphKey(x[k]);
-        mark->setStyle(QCPItemTracer::tsCircle);
-        mark->setSize(7);
-        mark->setPen(QPen(g->pen().color(), 1.2));
-        mark->setBrush(Qt::white);
+        parts.marks[i]->setGraphKey(x[peak.step]);
         peakLines << tr("%1: %2").arg(s.name, peakText(s, axis_, peak));
         for (const double v : s.values) {
             lo = std::min(lo, v);
@@ -263,27 +312,24 @@ QStringList PlotStack::drawPane(const PlotPane& pane, QCPMarginGroup* margins)
     }
     const double pad = std::max(1e-9, 0.08 * (hi - lo));
     ya->setRange(lo - (lo < 0 ? pad : 0), hi + pad);
+    for (QCPAbstractItem* old : parts.shades) plot_->removeItem(old);
+    parts.shades.clear();
     QColor flagged = palette::problem();
     flagged.setAlphaF(0.15);
     for (const auto& [a, b] : unreliableRuns(unreliable))
-        shade(rect, x[std::max(a - 1, 0)], x[std::min<int>(b + 1, x.size() - 1)], flagged);
+        shade(parts, x[std::max(a - 1, 0)], x[std::min<int>(b + 1, x.size() - 1)], flagged);
     if (end != x.back()) {
         QColor unreached = palette::groundHatch();
         unreached.setAlphaF(0.2);
-        shade(rect, x.back(), end, unreached);
+        shade(parts, x.back(), end, unreached);
     }
-    auto* cursor = new QCPItemStraightLine(plot_);
-    cursor->setClipAxisRect(rect);
-    cursor->point1->setAxes(xa, ya);
-    cursor->point2->setAxes(xa, ya);
-    cursor->setPen(QPen(palette::driver(), 1.2));
-    cursors_.push_back(cursor);
     return peakLines;
 }
 
 // A band over the pane's full height between two axis values.
-void PlotStack::shade(QCPAxisRect* rect, double from, double to, QColor colour)
+void PlotStack::shade(PaneParts& parts, double from, double to, QColor colour)
 {
+    QCPAxisRect* rect = parts.rect;
     auto* box = new QCPItemRect(plot_);
     box->setClipAxisRect(rect);
     for (QCPItemPosition* corner : {box->topLeft, box->bottomRight}) {
@@ -296,15 +342,54 @@ void PlotStack::shade(QCPAxisRect* rect, double from, double to, QColor colour)
     box->setPen(Qt::NoPen);
     box->setBrush(colour);
     box->setLayer("background");
+    parts.shades.push_back(box);
+}
+
+// Everything drawn for a pane: its layout elements (their axes, grids and
+// graphs go with them) and its items.
+std::vector<QCPLayerable*> PlotStack::layerables(const PaneParts& parts) const
+{
+    std::vector<QCPLayerable*> out{parts.header, parts.rect, parts.cursor};
+    out.insert(out.end(), parts.graphs.begin(), parts.graphs.end());
+    out.insert(out.end(), parts.marks.begin(), parts.marks.end());
+    out.insert(out.end(), parts.shades.begin(), parts.shades.end());
+    return out;
+}
+
+bool PlotStack::inView(const PaneParts& parts) const
+{
+    const QRect view(plot_->mapFrom(scroll_->viewport(), QPoint(0, 0)), scroll_->viewport()->size());
+    const QRect pane = parts.header->outerRect().united(parts.rect->outerRect());
+    return pane.intersects(view);
+}
+
+// A replot of the widget, its layout done: the panes scrolled out of view are
+// left out (most of a replot is the curves); scrolled() draws them when they
+// come into view.
+void PlotStack::leaveOutPanesOutOfView()
+{
+    if (!replotting_) return;  // an export's drawing: every pane
+    const bool shown = plot_->isVisible();
+    for (PaneParts& parts : parts_) {
+        parts.drawn = !shown || inView(parts);
+        if (!parts.drawn)
+            for (QCPLayerable* l : layerables(parts)) l->setVisible(false);
+    }
+}
+
+void PlotStack::scrolled()
+{
+    for (const PaneParts& parts : parts_)
+        if (!parts.drawn && inView(parts)) return plot_->replot();
 }
 
 void PlotStack::moveCursor(int step)
 {
     if (!analysis_->hasResult() || step < 0 || step >= int(axis_.values.size())) return;
     const double x = axis_.values[step];
-    for (QCPItemStraightLine* c : cursors_) {
-        c->point1->setCoords(x, 0);
-        c->point2->setCoords(x, 1);
+    for (const PaneParts& parts : parts_) {
+        parts.cursor->point1->setCoords(x, 0);
+        parts.cursor->point2->setCoords(x, 1);
     }
     replotWhenSeen();
 }
@@ -317,7 +402,10 @@ void PlotStack::replotWhenSeen()
     if (!unseen_) plot_->replot(QCustomPlot::rpQueuedReplot);
 }
 
-double PlotStack::cursorX() const { return cursors_.empty() ? std::nan("") : cursors_.front()->point1->coords().x(); }
+double PlotStack::cursorX() const
+{
+    return parts_.empty() ? std::nan("") : parts_.front().cursor->point1->coords().x();
+}
 
 int PlotStack::stepAtPixel(double px) const
 {
@@ -334,12 +422,12 @@ QPoint PlotStack::pixelForStep(int step) const
 
 void PlotStack::pointerPressed(QMouseEvent* e)
 {
-    if (e->button() == Qt::LeftButton && !cursors_.empty()) analysis_->setCurrentStep(stepAtPixel(e->position().x()));
+    if (e->button() == Qt::LeftButton && !parts_.empty()) analysis_->setCurrentStep(stepAtPixel(e->position().x()));
 }
 
 void PlotStack::pointerMoved(QMouseEvent* e)
 {
-    if (cursors_.empty()) return;
+    if (parts_.empty()) return;
     const int step = stepAtPixel(e->position().x());
     if (e->buttons() & Qt::LeftButton) analysis_->setCurrentStep(step);
     QStringList parts{tr("%1 = %2").arg(axis_.name, axis_.format(axis_.values[step]))};
@@ -360,12 +448,13 @@ bool PlotStack::eventFilter(QObject* watched, QEvent* event)
 {
     if (watched == readout_ && event->type() == QEvent::Resize) showReadout(fullReadout_);
     // A new width may wrap the legends otherwise; the height they set must not start it again.
-    if (watched == plot_ && event->type() == QEvent::Resize && !legends_.empty() &&
+    if (watched == plot_ && event->type() == QEvent::Resize && !parts_.empty() &&
         static_cast<QResizeEvent*>(event)->oldSize().width() != plot_->width()) {
         fitLegends();
         replotWhenSeen();
     }
     if (watched == plot_ && event->type() == QEvent::Show && unseen_) replotWhenSeen();
+    if (watched == scroll_->viewport() && event->type() == QEvent::Resize) scrolled();  // a taller view shows more
     return QWidget::eventFilter(watched, event);
 }
 

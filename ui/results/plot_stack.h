@@ -5,7 +5,9 @@
 // AnalysisState::currentStep and a click or drag on any pane moves it;
 // hovering reads the values out with units on one elided line; each curve's
 // peak is marked and listed; flagged steps and the unreachable end of the
-// cycle are shaded.
+// cycle are shaded. A new result with the same curves only sets their data
+// (the panes, legends and layout stay); only the panes in view are drawn,
+// and those scrolled into view are drawn then.
 #pragma once
 
 #include "render/cycle_axis.h"
@@ -15,14 +17,20 @@
 
 class QCheckBox;
 class QCustomPlot;
+class QCPAbstractItem;
 class QCPAxisRect;
+class QCPGraph;
 class QCPItemStraightLine;
+class QCPItemTracer;
+class QCPLayerable;
+class QCPLayoutGrid;
 class QCPLegend;
 class QCPMarginGroup;
 class QLabel;
 class QListWidget;
 class QListWidgetItem;
 class QMouseEvent;
+class QScrollArea;
 
 namespace clevis::ui {
 
@@ -48,14 +56,31 @@ protected:
     bool eventFilter(QObject* watched, QEvent* event) override;
 
 private:
+    // What one pane is drawn with, kept while its curves stay the same.
+    struct PaneParts {
+        QCPLayoutGrid* header = nullptr;  // the title and the legend
+        QCPLegend* legend = nullptr;
+        QCPAxisRect* rect = nullptr;
+        std::vector<QCPGraph*> graphs;  // one per curve
+        std::vector<QCPItemTracer*> marks;
+        std::vector<QCPAbstractItem*> shades;
+        QCPItemStraightLine* cursor = nullptr;
+        bool drawn = false;  // at the last replot
+    };
+
     void rebuild();
     void listJoints(const CompiledMechanism& m);
     void showChoice();
     void jointTicked(QListWidgetItem* item);
-    QStringList drawPane(const PlotPane& pane, QCPMarginGroup* margins);
-    QCPAxisRect* addPane(const PlotPane& pane);
+    void clearPlot();
+    PaneParts addPane(const PlotPane& pane, QCPMarginGroup* margins);
+    QStringList fillPane(const PlotPane& pane, PaneParts& parts);
     void fitLegends();
-    void shade(QCPAxisRect* rect, double from, double to, QColor colour);
+    void shade(PaneParts& parts, double from, double to, QColor colour);
+    std::vector<QCPLayerable*> layerables(const PaneParts& parts) const;
+    bool inView(const PaneParts& parts) const;
+    void leaveOutPanesOutOfView();
+    void scrolled();
     void moveCursor(int step);
     void pointerPressed(QMouseEvent* e);
     void pointerMoved(QMouseEvent* e);
@@ -71,11 +96,12 @@ private:
     QListWidget* joints_;
     QCheckBox* components_;
     QCustomPlot* plot_;
+    QScrollArea* scroll_;
     QLabel* readout_;
     QLabel* peaks_;
-    std::vector<QCPItemStraightLine*> cursors_;
-    std::vector<QCPLegend*> legends_;  // one per pane, in pane order
-    bool unseen_ = false;              // changed while hidden: drawn again when next shown
+    std::vector<PaneParts> parts_;  // one per pane, in pane order
+    bool unseen_ = false;           // changed while hidden: drawn again when next shown
+    bool replotting_ = false;       // inside a replot of the widget (not an export's drawing)
 };
 
 }  // namespace clevis::ui
