@@ -16,6 +16,7 @@
 #include "ui/files/file_actions.h"
 #include "ui/panels/property_editor.h"
 #include "ui/panels/status_line.h"
+#include "ui/shell/display_units.h"
 #include "ui/shell/main_window.h"
 
 #include <QAction>
@@ -330,6 +331,57 @@ TEST_F(CanvasTest, TheGridFollowsZoomAndPan)
     ASSERT_EQ(fresh.view().toScreen({0.1, 0.1}), canvas->view().toScreen({0.1, 0.1}));
     // As pixels (a widget in a window and one on its own may grab to different formats).
     EXPECT_EQ(kept.convertToFormat(QImage::Format_RGB32), fresh.grab().toImage().convertToFormat(QImage::Format_RGB32));
+}
+
+// Counts the events of one type that reach a widget.
+class EventCount : public QObject {
+public:
+    EventCount(QObject* watched, QEvent::Type type) : type_(type) { watched->installEventFilter(this); }
+    int count = 0;
+
+protected:
+    bool eventFilter(QObject*, QEvent* e) override
+    {
+        if (e->type() == type_) ++count;
+        return false;
+    }
+
+private:
+    QEvent::Type type_;
+};
+
+// A drag edits at every move of the mouse, and a result follows each edit.
+// The canvas draws the pin where it now is once: the result blames nothing
+// and the cycle is at its start, so it adds nothing to the picture. The
+// selected pin's form shows the result's forces, so it is built once, when
+// the result comes, and then shows the pin where it now is.
+TEST_F(CanvasTest, EachMoveOfADragPaintsTheCanvasAndBuildsThePinsFormOnce)
+{
+    drawFourBar();
+    useTool("Select");
+    window.analysis()->waitForIdle();
+    QTest::mousePress(window.canvas(), Qt::LeftButton, {}, at(0.17, 0.12));
+    ASSERT_EQ(window.document()->selection().name.toStdString(), "pin 4");
+    window.analysis()->waitForIdle();
+    QCoreApplication::processEvents();
+    auto* editor = window.findChild<PropertyEditor*>();
+    EventCount paints(window.canvas(), QEvent::Paint);
+    EventCount forms(editor->viewport(), QEvent::ChildAdded);  // each form built is a new page in the editor
+    for (const double x : {0.18, 0.19}) {
+        const int paintsBefore = paints.count, formsBefore = forms.count;
+        dragTo(x, 0.12);
+        window.analysis()->waitForIdle();
+        QCoreApplication::sendPostedEvents();
+        QCoreApplication::processEvents();
+        ASSERT_TRUE(window.analysis()->errorText().isEmpty()) << window.analysis()->errorText().toStdString();
+        EXPECT_EQ(paints.count - paintsBefore, 1) << "at x = " << x;
+        EXPECT_EQ(forms.count - formsBefore, 1) << "at x = " << x;
+        const auto* shownX = editor->findChild<QLineEdit*>(QStringLiteral("atX"));
+        ASSERT_NE(shownX, nullptr);
+        EXPECT_NEAR(DisplayUnits::instance().lengthToSi(shownX->text().toDouble()), x, 1e-9)
+            << shownX->text().toStdString();
+    }
+    QTest::mouseRelease(window.canvas(), Qt::LeftButton, {}, at(0.19, 0.12));
 }
 
 }  // namespace

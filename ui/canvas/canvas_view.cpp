@@ -65,7 +65,7 @@ CanvasView::CanvasView(MechanismDocument* doc, AnalysisState* analysis, QWidget*
             fitOnResult_ = false;
             fitToView();
         }
-        update();
+        if (drawsFromResult()) update();
     });
     connect(analysis_, &AnalysisState::currentStepChanged, this, qOverload<>(&QWidget::update));
     connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, qOverload<>(&QWidget::update));
@@ -88,6 +88,14 @@ std::optional<Mechanism> CanvasView::scrubbedPose() const
     if (!analysis_->hasResult() || analysis_->currentStep() == 0) return std::nullopt;
     return posedMechanism(doc_->mechanism(), analysis_->compiled(),
                           analysis_->result().steps[analysis_->currentStep()]);
+}
+
+// At the drawn pose the canvas takes from a result only the parts it
+// blames; a drag brings a result at every move, most often blaming the same
+// parts, and repainting then would draw the same picture a second time.
+bool CanvasView::drawsFromResult() const
+{
+    return analysis_->currentStep() != 0 || analysis_->offendingItems() != paintedProblems_;
 }
 
 void CanvasView::announce() { emit hintChanged(tool_->hint()); }
@@ -133,8 +141,8 @@ void CanvasView::paintEvent(QPaintEvent*)
     paintGridScale(p, view_, rect());
     const std::optional<Mechanism> posed = scrubbedPose();
     LabelPlacer labels(rect(), labelFont(font()));
-    PaintContext c{p,     view_, posed ? *posed : doc_->mechanism(), doc_->selection(), analysis_->offendingItems(),
-                   labels};
+    paintedProblems_ = analysis_->offendingItems();
+    PaintContext c{p, view_, posed ? *posed : doc_->mechanism(), doc_->selection(), paintedProblems_, labels};
     paintSketch(c);
     tool_->paintPreview(p);
 }

@@ -7,6 +7,7 @@
 #include "ui/canvas/view_transform.h"
 
 #include <QPixmap>
+#include <QStringList>
 #include <QWidget>
 
 #include <memory>
@@ -64,6 +65,7 @@ private:
     std::optional<Mechanism> scrubbedPose() const;
     void fitAround(const std::vector<Vec2>& pts);
     const QPixmap& grid();
+    bool drawsFromResult() const;  // whether the newest result changes what was last painted
 
     MechanismDocument* doc_;
     AnalysisState* analysis_;
@@ -76,6 +78,7 @@ private:
     // The grid as last drawn, and the view it was drawn for (empty: draw again).
     QPixmap grid_;
     ViewTransform gridView_;
+    QStringList paintedProblems_;  // the parts the last paint drew as blamed
 };
 
 }  // namespace clevis::ui
