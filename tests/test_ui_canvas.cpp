@@ -384,4 +384,31 @@ TEST_F(CanvasTest, EachMoveOfADragPaintsTheCanvasAndBuildsThePinsFormOnce)
     QTest::mouseRelease(window.canvas(), Qt::LeftButton, {}, at(0.19, 0.12));
 }
 
+// The labels are kept between paints while the drawing and the view stay as
+// they are (a paint for a selection places none). After a pin is moved the
+// canvas must look exactly as one that never placed a label before the edit.
+TEST_F(CanvasTest, LabelsKeptBetweenPaintsFollowAnEdit)
+{
+    drawFourBar();
+    useTool("Select");
+    window.analysis()->waitForIdle();
+    CanvasView* canvas = window.canvas();
+    canvas->fitToView();
+    CanvasView fresh(window.document(), window.analysis());
+    fresh.resize(canvas->size());
+    fresh.fitToView();  // the same view, while hidden: nothing painted, no label placed
+    canvas->grab();
+    window.document()->setSelection({Selection::Kind::Body, QStringLiteral("link 2"), -1});
+    canvas->grab();
+    window.document()->apply("Move pin 4", [](Mechanism& m) { m.joints[3].at = {0.15, 0.10}; });
+    window.analysis()->waitForIdle();
+    QCoreApplication::processEvents();
+    ASSERT_TRUE(window.analysis()->errorText().isEmpty()) << window.analysis()->errorText().toStdString();
+    const QImage kept = canvas->grab().toImage();
+    fresh.show();
+    ASSERT_TRUE(QTest::qWaitForWindowExposed(&fresh));
+    ASSERT_EQ(fresh.view().toScreen({0.1, 0.1}), canvas->view().toScreen({0.1, 0.1}));
+    EXPECT_EQ(kept.convertToFormat(QImage::Format_RGB32), fresh.grab().toImage().convertToFormat(QImage::Format_RGB32));
+}
+
 }  // namespace

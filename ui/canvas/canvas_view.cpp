@@ -68,7 +68,10 @@ CanvasView::CanvasView(MechanismDocument* doc, AnalysisState* analysis, QWidget*
         if (drawsFromResult()) update();
     });
     connect(analysis_, &AnalysisState::currentStepChanged, this, qOverload<>(&QWidget::update));
-    connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, qOverload<>(&QWidget::update));
+    connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, [this] {
+        labels_.reset();  // their words carry units
+        update();
+    });
 }
 
 CanvasView::~CanvasView() = default;
@@ -140,9 +143,12 @@ void CanvasView::paintEvent(QPaintEvent*)
     p.setRenderHint(QPainter::Antialiasing);
     paintGridScale(p, view_, rect());
     const std::optional<Mechanism> posed = scrubbedPose();
-    LabelPlacer labels(rect(), labelFont(font()));
+    const Mechanism& shown = posed ? *posed : doc_->mechanism();
+    bool placed = false;
+    LabelPlacer& labels = labelsFor(shown, placed);
     paintedProblems_ = analysis_->offendingItems();
-    PaintContext c{p, view_, posed ? *posed : doc_->mechanism(), doc_->selection(), paintedProblems_, labels};
+    PaintContext c{p, view_, shown, doc_->selection(), paintedProblems_, labels};
+    c.labelsPlaced = placed;
     paintSketch(c);
     tool_->paintPreview(p);
 }
@@ -163,6 +169,24 @@ const QPixmap& CanvasView::grid()
         gridView_ = view_;
     }
     return grid_;
+}
+
+// A label's place depends only on the drawing, the view, the canvas's size
+// and font; placing them all was most of a paint at a large machine. A paint for
+// a selection, a hover or a drawing tool's preview leaves them all alone and
+// paints the labels where they already are; `placed` says so.
+LabelPlacer& CanvasView::labelsFor(const Mechanism& shown, bool& placed)
+{
+    placed =
+        labels_ && labelledView_ == view_ && labelledSize_ == size() && labelledFont_ == font() && labelled_ == shown;
+    if (!placed) {
+        labels_.emplace(rect(), labelFont(font()));
+        labelled_ = shown;
+        labelledView_ = view_;
+        labelledSize_ = size();
+        labelledFont_ = font();
+    }
+    return *labels_;
 }
 
 void CanvasView::mousePressEvent(QMouseEvent* e)

@@ -3,6 +3,7 @@
 // middle or right button. It keeps no part of the mechanism itself.
 #pragma once
 
+#include "render/label_placer.h"
 #include "ui/canvas/tools/tool.h"
 #include "ui/canvas/view_transform.h"
 
@@ -66,6 +67,7 @@ private:
     void fitAround(const std::vector<Vec2>& pts);
     const QPixmap& grid();
     bool drawsFromResult() const;  // whether the newest result changes what was last painted
+    LabelPlacer& labelsFor(const Mechanism& shown, bool& placed);
 
     MechanismDocument* doc_;
     AnalysisState* analysis_;
@@ -79,6 +81,12 @@ private:
     QPixmap grid_;
     ViewTransform gridView_;
     QStringList paintedProblems_;  // the parts the last paint drew as blamed
+    // The labels as last placed, and the drawing, view, size and font they were placed for (none: place again).
+    std::optional<LabelPlacer> labels_;
+    Mechanism labelled_;
+    ViewTransform labelledView_;
+    QSize labelledSize_;
+    QFont labelledFont_;
 };
 
 }  // namespace clevis::ui
