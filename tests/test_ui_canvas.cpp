@@ -26,8 +26,10 @@
 #include <QLabel>
 #include <QLineEdit>
 #include <QPainter>
+#include <QScreen>
 #include <QTemporaryDir>
 #include <QTest>
+#include <QWindow>
 
 #include <gtest/gtest.h>
 
@@ -409,6 +411,39 @@ TEST_F(CanvasTest, LabelsKeptBetweenPaintsFollowAnEdit)
     ASSERT_TRUE(QTest::qWaitForWindowExposed(&fresh));
     ASSERT_EQ(fresh.view().toScreen({0.1, 0.1}), canvas->view().toScreen({0.1, 0.1}));
     EXPECT_EQ(kept.convertToFormat(QImage::Format_RGB32), fresh.grab().toImage().convertToFormat(QImage::Format_RGB32));
+}
+
+// A new selection repaints only round the halos of the part selected before
+// and the one selected now. What the screen then shows must be the canvas
+// drawn afresh: no halo left behind, none cut short.
+TEST_F(CanvasTest, ASelectionRepaintsWhatItsHalosCover)
+{
+    drawFourBar();
+    useTool("Select");
+    window.analysis()->waitForIdle();
+    CanvasView* canvas = window.canvas();
+    canvas->fitToView();
+    window.document()->setSelection({});
+    const auto onScreen = [&] {
+        QCoreApplication::processEvents();
+        const QPoint corner = canvas->mapTo(&window, QPoint(0, 0));
+        return window.windowHandle()
+            ->screen()
+            ->grabWindow(window.winId(), corner.x(), corner.y(), canvas->width(), canvas->height())
+            .toImage()
+            .convertToFormat(QImage::Format_RGB32);
+    };
+    const auto drawnAfresh = [&] { return canvas->grab().toImage().convertToFormat(QImage::Format_RGB32); };
+    const QImage none = onScreen();
+    ASSERT_EQ(none, drawnAfresh()) << "the screen must show the canvas for this test to compare anything";
+    for (const Selection& s : {Selection{Selection::Kind::Body, QStringLiteral("link 2"), -1},
+                               Selection{Selection::Kind::Joint, QStringLiteral("pin 4"), -1},
+                               Selection{Selection::Kind::Body, QStringLiteral("link 3"), -1}, Selection{}}) {
+        window.document()->setSelection(s);
+        const QImage shown = onScreen();
+        EXPECT_EQ(shown, drawnAfresh()) << s.name.toStdString();
+        EXPECT_EQ(shown == none, s.kind == Selection::Kind::None) << s.name.toStdString();
+    }
 }
 
 }  // namespace

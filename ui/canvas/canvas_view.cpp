@@ -4,6 +4,7 @@
 #include "ui/analysis/analysis_state.h"
 #include "ui/canvas/hit_test.h"
 #include "ui/canvas/sketch_painter.h"
+#include "ui/canvas/sketch_style.h"
 #include "ui/canvas/tools/select_tool.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/document/sketch_geometry.h"
@@ -14,10 +15,15 @@
 #include <QPainter>
 #include <QWheelEvent>
 
+#include <algorithm>
 #include <cmath>
 
 namespace clevis::ui {
 namespace {
+
+// A selected part's halo beyond its outline: half its pen (8 px wider than the
+// part's stroke, PaintContext::haloPen) and antialiasing, with room to spare.
+constexpr double kHaloReach = 12.0;
 
 // Every point the drawing uses, for fitting the view around it.
 std::vector<Vec2> drawnPoints(const Mechanism& m)
@@ -55,7 +61,12 @@ CanvasView::CanvasView(MechanismDocument* doc, AnalysisState* analysis, QWidget*
     setFocusPolicy(Qt::StrongFocus);
     setAcceptDrops(false);  // files dropped here go to the main window
     connect(doc_, &MechanismDocument::mechanismChanged, this, qOverload<>(&QWidget::update));
-    connect(doc_, &MechanismDocument::selectionChanged, this, qOverload<>(&QWidget::update));
+    connect(doc_, &MechanismDocument::selectionChanged, this, [this] {
+        // Only the halos of the part that was selected and of the one that is
+        // change: a click on a large machine need not draw all of it again.
+        update(haloArea(haloed_).united(haloArea(doc_->selection())));
+        haloed_ = doc_->selection();
+    });
     connect(doc_, &MechanismDocument::documentReset, this, [this] {
         fitOnResult_ = true;
         fitAround(drawnPoints(doc_->mechanism()));  // the result on hand is the previous file's
@@ -99,6 +110,30 @@ std::optional<Mechanism> CanvasView::scrubbedPose() const
 bool CanvasView::drawsFromResult() const
 {
     return analysis_->currentStep() != 0 || analysis_->offendingItems() != paintedProblems_;
+}
+
+// Where a selected part's halo can reach on screen: round its outline or
+// pin, by the bar's half width, the halo's and a pixel of antialiasing. The
+// whole canvas for the parts drawn without one outline (drivers, loads).
+QRect CanvasView::haloArea(const Selection& s) const
+{
+    if (s.kind == Selection::Kind::None) return {};
+    const std::optional<Mechanism> posed = scrubbedPose();
+    const Mechanism& m = posed ? *posed : doc_->mechanism();
+    const std::string name = s.name.toStdString();
+    std::vector<Vec2> pts;
+    if (s.kind == Selection::Kind::Body) pts = bodyOutline(m, name);
+    const int joint = s.kind == Selection::Kind::Joint ? jointIndex(m, name) : -1;
+    if (joint >= 0) pts.push_back(m.joints[std::size_t(joint)].at);
+    if (pts.empty()) return rect();
+    QPointF lo = view_.toScreen(pts[0]), hi = lo;
+    for (const Vec2& p : pts) {
+        const QPointF at = view_.toScreen(p);
+        lo = QPointF(std::min(lo.x(), at.x()), std::min(lo.y(), at.y()));
+        hi = QPointF(std::max(hi.x(), at.x()), std::max(hi.y(), at.y()));
+    }
+    const double reach = style::kBarWidth / 2 + kHaloReach;
+    return QRectF(lo, hi).adjusted(-reach, -reach, reach, reach).toAlignedRect();
 }
 
 void CanvasView::announce() { emit hintChanged(tool_->hint()); }

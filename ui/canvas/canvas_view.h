@@ -68,6 +68,7 @@ private:
     const QPixmap& grid();
     bool drawsFromResult() const;  // whether the newest result changes what was last painted
     LabelPlacer& labelsFor(const Mechanism& shown, bool& placed);
+    QRect haloArea(const Selection& s) const;
 
     MechanismDocument* doc_;
     AnalysisState* analysis_;
@@ -81,6 +82,7 @@ private:
     QPixmap grid_;
     ViewTransform gridView_;
     QStringList paintedProblems_;  // the parts the last paint drew as blamed
+    Selection haloed_;             // the part drawn with the selection's halo
     // The labels as last placed, and the drawing, view, size and font they were placed for (none: place again).
     std::optional<LabelPlacer> labels_;
     Mechanism labelled_;
