@@ -5,10 +5,12 @@
 // result and repaint. Timed in wall-clock time from the mouse move until the
 // solve is published and no repaint is pending (the work spans two threads,
 // so CPU time of one would miss part of it). Also timed: from an empty window
-// to the first frame painted with the mechanism open and solved.
+// to the first frame painted with the mechanism open and solved; and a click
+// that selects a part.
 //
 // Cases: the six-bar sample and a generated 20-body four-bar chain; for the
-// first frame also a 201-body machine (a fan of 100 four-bars on one crank). Run under
+// first frame and the click also a 201-body machine (a fan of 100 four-bars on
+// one crank). Run under
 // the offscreen platform (set QT_QPA_PLATFORM=offscreen, done by main when
 // no platform is set).
 #include "app/heap_reuse.h"
@@ -109,6 +111,37 @@ void EditLatency(benchmark::State& state)
     state.SetLabel(sampleName(which));
 }
 BENCHMARK(EditLatency)->ArgName("mechanism")->Arg(0)->Arg(1)->UseManualTime()->Unit(benchmark::kMillisecond);
+
+// A click that selects a part, alternately a moving pin and the first
+// joint: the canvas draws the selection, the parts list marks its row, the
+// property editor shows its form. Nothing is solved.
+void SelectPart(benchmark::State& state)
+{
+    const int which = int(state.range(0));
+    QTemporaryDir recovery;
+    MainWindow w(recovery.path());
+    w.resize(1600, 1000);
+    w.show();
+    w.document()->reset(sample(which), sampleName(which));
+    settle(w);
+    w.canvas()->fitToView();
+    settle(w);
+    QWidget* canvas = w.canvas();
+    const QPointF pins[] = {movingPin(w), w.canvas()->view().toScreen(w.document()->mechanism().joints[0].at)};
+    int clicks = 0;
+    for (auto _ : state) {
+        const QPointF at = pins[++clicks % 2];
+        const auto start = Clock::now();
+        mouse(canvas, QEvent::MouseButtonPress, at, Qt::LeftButton);
+        mouse(canvas, QEvent::MouseButtonRelease, at, Qt::NoButton);
+        settle(w);
+        state.SetIterationTime(std::chrono::duration<double>(Clock::now() - start).count());
+    }
+    if (w.document()->selection().kind != clevis::ui::Selection::Kind::Joint)
+        state.SkipWithError("the click selected no pin: nothing was timed");
+    state.SetLabel(sampleName(which));
+}
+BENCHMARK(SelectPart)->ArgName("mechanism")->Arg(0)->Arg(1)->Arg(2)->UseManualTime()->Unit(benchmark::kMillisecond);
 
 void OpenToFirstFrame(benchmark::State& state)
 {

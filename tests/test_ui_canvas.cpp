@@ -16,6 +16,7 @@
 #include "ui/files/file_actions.h"
 #include "ui/panels/property_editor.h"
 #include "ui/panels/status_line.h"
+#include "ui/shell/display_units.h"
 #include "ui/shell/main_window.h"
 
 #include <QAction>
@@ -25,8 +26,10 @@
 #include <QLabel>
 #include <QLineEdit>
 #include <QPainter>
+#include <QScreen>
 #include <QTemporaryDir>
 #include <QTest>
+#include <QWindow>
 
 #include <gtest/gtest.h>
 
@@ -330,6 +333,117 @@ TEST_F(CanvasTest, TheGridFollowsZoomAndPan)
     ASSERT_EQ(fresh.view().toScreen({0.1, 0.1}), canvas->view().toScreen({0.1, 0.1}));
     // As pixels (a widget in a window and one on its own may grab to different formats).
     EXPECT_EQ(kept.convertToFormat(QImage::Format_RGB32), fresh.grab().toImage().convertToFormat(QImage::Format_RGB32));
+}
+
+// Counts the events of one type that reach a widget.
+class EventCount : public QObject {
+public:
+    EventCount(QObject* watched, QEvent::Type type) : type_(type) { watched->installEventFilter(this); }
+    int count = 0;
+
+protected:
+    bool eventFilter(QObject*, QEvent* e) override
+    {
+        if (e->type() == type_) ++count;
+        return false;
+    }
+
+private:
+    QEvent::Type type_;
+};
+
+// A drag edits at every move of the mouse, and a result follows each edit.
+// The canvas draws the pin where it now is once: the result blames nothing
+// and the cycle is at its start, so it adds nothing to the picture. The
+// selected pin's form shows the result's forces, so it is built once, when
+// the result comes, and then shows the pin where it now is.
+TEST_F(CanvasTest, EachMoveOfADragPaintsTheCanvasAndBuildsThePinsFormOnce)
+{
+    drawFourBar();
+    useTool("Select");
+    window.analysis()->waitForIdle();
+    QTest::mousePress(window.canvas(), Qt::LeftButton, {}, at(0.17, 0.12));
+    ASSERT_EQ(window.document()->selection().name.toStdString(), "pin 4");
+    window.analysis()->waitForIdle();
+    QCoreApplication::processEvents();
+    auto* editor = window.findChild<PropertyEditor*>();
+    EventCount paints(window.canvas(), QEvent::Paint);
+    EventCount forms(editor->viewport(), QEvent::ChildAdded);  // each form built is a new page in the editor
+    for (const double x : {0.18, 0.19}) {
+        const int paintsBefore = paints.count, formsBefore = forms.count;
+        dragTo(x, 0.12);
+        window.analysis()->waitForIdle();
+        QCoreApplication::sendPostedEvents();
+        QCoreApplication::processEvents();
+        ASSERT_TRUE(window.analysis()->errorText().isEmpty()) << window.analysis()->errorText().toStdString();
+        EXPECT_EQ(paints.count - paintsBefore, 1) << "at x = " << x;
+        EXPECT_EQ(forms.count - formsBefore, 1) << "at x = " << x;
+        const auto* shownX = editor->findChild<QLineEdit*>(QStringLiteral("atX"));
+        ASSERT_NE(shownX, nullptr);
+        EXPECT_NEAR(DisplayUnits::instance().lengthToSi(shownX->text().toDouble()), x, 1e-9)
+            << shownX->text().toStdString();
+    }
+    QTest::mouseRelease(window.canvas(), Qt::LeftButton, {}, at(0.19, 0.12));
+}
+
+// The labels are kept between paints while the drawing and the view stay as
+// they are (a paint for a selection places none). After a pin is moved the
+// canvas must look exactly as one that never placed a label before the edit.
+TEST_F(CanvasTest, LabelsKeptBetweenPaintsFollowAnEdit)
+{
+    drawFourBar();
+    useTool("Select");
+    window.analysis()->waitForIdle();
+    CanvasView* canvas = window.canvas();
+    canvas->fitToView();
+    CanvasView fresh(window.document(), window.analysis());
+    fresh.resize(canvas->size());
+    fresh.fitToView();  // the same view, while hidden: nothing painted, no label placed
+    canvas->grab();
+    window.document()->setSelection({Selection::Kind::Body, QStringLiteral("link 2"), -1});
+    canvas->grab();
+    window.document()->apply("Move pin 4", [](Mechanism& m) { m.joints[3].at = {0.15, 0.10}; });
+    window.analysis()->waitForIdle();
+    QCoreApplication::processEvents();
+    ASSERT_TRUE(window.analysis()->errorText().isEmpty()) << window.analysis()->errorText().toStdString();
+    const QImage kept = canvas->grab().toImage();
+    fresh.show();
+    ASSERT_TRUE(QTest::qWaitForWindowExposed(&fresh));
+    ASSERT_EQ(fresh.view().toScreen({0.1, 0.1}), canvas->view().toScreen({0.1, 0.1}));
+    EXPECT_EQ(kept.convertToFormat(QImage::Format_RGB32), fresh.grab().toImage().convertToFormat(QImage::Format_RGB32));
+}
+
+// A new selection repaints only round the halos of the part selected before
+// and the one selected now. What the screen then shows must be the canvas
+// drawn afresh: no halo left behind, none cut short.
+TEST_F(CanvasTest, ASelectionRepaintsWhatItsHalosCover)
+{
+    drawFourBar();
+    useTool("Select");
+    window.analysis()->waitForIdle();
+    CanvasView* canvas = window.canvas();
+    canvas->fitToView();
+    window.document()->setSelection({});
+    const auto onScreen = [&] {
+        QCoreApplication::processEvents();
+        const QPoint corner = canvas->mapTo(&window, QPoint(0, 0));
+        return window.windowHandle()
+            ->screen()
+            ->grabWindow(window.winId(), corner.x(), corner.y(), canvas->width(), canvas->height())
+            .toImage()
+            .convertToFormat(QImage::Format_RGB32);
+    };
+    const auto drawnAfresh = [&] { return canvas->grab().toImage().convertToFormat(QImage::Format_RGB32); };
+    const QImage none = onScreen();
+    ASSERT_EQ(none, drawnAfresh()) << "the screen must show the canvas for this test to compare anything";
+    for (const Selection& s : {Selection{Selection::Kind::Body, QStringLiteral("link 2"), -1},
+                               Selection{Selection::Kind::Joint, QStringLiteral("pin 4"), -1},
+                               Selection{Selection::Kind::Body, QStringLiteral("link 3"), -1}, Selection{}}) {
+        window.document()->setSelection(s);
+        const QImage shown = onScreen();
+        EXPECT_EQ(shown, drawnAfresh()) << s.name.toStdString();
+        EXPECT_EQ(shown == none, s.kind == Selection::Kind::None) << s.name.toStdString();
+    }
 }
 
 }  // namespace

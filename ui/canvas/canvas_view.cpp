@@ -4,6 +4,7 @@
 #include "ui/analysis/analysis_state.h"
 #include "ui/canvas/hit_test.h"
 #include "ui/canvas/sketch_painter.h"
+#include "ui/canvas/sketch_style.h"
 #include "ui/canvas/tools/select_tool.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/document/sketch_geometry.h"
@@ -14,10 +15,15 @@
 #include <QPainter>
 #include <QWheelEvent>
 
+#include <algorithm>
 #include <cmath>
 
 namespace clevis::ui {
 namespace {
+
+// A selected part's halo beyond its outline: half its pen (8 px wider than the
+// part's stroke, PaintContext::haloPen) and antialiasing, with room to spare.
+constexpr double kHaloReach = 12.0;
 
 // Every point the drawing uses, for fitting the view around it.
 std::vector<Vec2> drawnPoints(const Mechanism& m)
@@ -55,7 +61,12 @@ CanvasView::CanvasView(MechanismDocument* doc, AnalysisState* analysis, QWidget*
     setFocusPolicy(Qt::StrongFocus);
     setAcceptDrops(false);  // files dropped here go to the main window
     connect(doc_, &MechanismDocument::mechanismChanged, this, qOverload<>(&QWidget::update));
-    connect(doc_, &MechanismDocument::selectionChanged, this, qOverload<>(&QWidget::update));
+    connect(doc_, &MechanismDocument::selectionChanged, this, [this] {
+        // Only the halos of the part that was selected and of the one that is
+        // change: a click on a large machine need not draw all of it again.
+        update(haloArea(haloed_).united(haloArea(doc_->selection())));
+        haloed_ = doc_->selection();
+    });
     connect(doc_, &MechanismDocument::documentReset, this, [this] {
         fitOnResult_ = true;
         fitAround(drawnPoints(doc_->mechanism()));  // the result on hand is the previous file's
@@ -65,10 +76,13 @@ CanvasView::CanvasView(MechanismDocument* doc, AnalysisState* analysis, QWidget*
             fitOnResult_ = false;
             fitToView();
         }
-        update();
+        if (drawsFromResult()) update();
     });
     connect(analysis_, &AnalysisState::currentStepChanged, this, qOverload<>(&QWidget::update));
-    connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, qOverload<>(&QWidget::update));
+    connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, [this] {
+        labels_.reset();  // their words carry units
+        update();
+    });
 }
 
 CanvasView::~CanvasView() = default;
@@ -88,6 +102,38 @@ std::optional<Mechanism> CanvasView::scrubbedPose() const
     if (!analysis_->hasResult() || analysis_->currentStep() == 0) return std::nullopt;
     return posedMechanism(doc_->mechanism(), analysis_->compiled(),
                           analysis_->result().steps[analysis_->currentStep()]);
+}
+
+// At the drawn pose the canvas takes from a result only the parts it
+// blames; a drag brings a result at every move, most often blaming the same
+// parts, and repainting then would draw the same picture a second time.
+bool CanvasView::drawsFromResult() const
+{
+    return analysis_->currentStep() != 0 || analysis_->offendingItems() != paintedProblems_;
+}
+
+// Where a selected part's halo can reach on screen: round its outline or
+// pin, by the bar's half width, the halo's and a pixel of antialiasing. The
+// whole canvas for the parts drawn without one outline (drivers, loads).
+QRect CanvasView::haloArea(const Selection& s) const
+{
+    if (s.kind == Selection::Kind::None) return {};
+    const std::optional<Mechanism> posed = scrubbedPose();
+    const Mechanism& m = posed ? *posed : doc_->mechanism();
+    const std::string name = s.name.toStdString();
+    std::vector<Vec2> pts;
+    if (s.kind == Selection::Kind::Body) pts = bodyOutline(m, name);
+    const int joint = s.kind == Selection::Kind::Joint ? jointIndex(m, name) : -1;
+    if (joint >= 0) pts.push_back(m.joints[std::size_t(joint)].at);
+    if (pts.empty()) return rect();
+    QPointF lo = view_.toScreen(pts[0]), hi = lo;
+    for (const Vec2& p : pts) {
+        const QPointF at = view_.toScreen(p);
+        lo = QPointF(std::min(lo.x(), at.x()), std::min(lo.y(), at.y()));
+        hi = QPointF(std::max(hi.x(), at.x()), std::max(hi.y(), at.y()));
+    }
+    const double reach = style::kBarWidth / 2 + kHaloReach;
+    return QRectF(lo, hi).adjusted(-reach, -reach, reach, reach).toAlignedRect();
 }
 
 void CanvasView::announce() { emit hintChanged(tool_->hint()); }
@@ -132,9 +178,12 @@ void CanvasView::paintEvent(QPaintEvent*)
     p.setRenderHint(QPainter::Antialiasing);
     paintGridScale(p, view_, rect());
     const std::optional<Mechanism> posed = scrubbedPose();
-    LabelPlacer labels(rect(), labelFont(font()));
-    PaintContext c{p,     view_, posed ? *posed : doc_->mechanism(), doc_->selection(), analysis_->offendingItems(),
-                   labels};
+    const Mechanism& shown = posed ? *posed : doc_->mechanism();
+    bool placed = false;
+    LabelPlacer& labels = labelsFor(shown, placed);
+    paintedProblems_ = analysis_->offendingItems();
+    PaintContext c{p, view_, shown, doc_->selection(), paintedProblems_, labels};
+    c.labelsPlaced = placed;
     paintSketch(c);
     tool_->paintPreview(p);
 }
@@ -155,6 +204,24 @@ const QPixmap& CanvasView::grid()
         gridView_ = view_;
     }
     return grid_;
+}
+
+// A label's place depends only on the drawing, the view, the canvas's size
+// and font; placing them all was most of a paint at a large machine. A paint for
+// a selection, a hover or a drawing tool's preview leaves them all alone and
+// paints the labels where they already are; `placed` says so.
+LabelPlacer& CanvasView::labelsFor(const Mechanism& shown, bool& placed)
+{
+    placed =
+        labels_ && labelledView_ == view_ && labelledSize_ == size() && labelledFont_ == font() && labelled_ == shown;
+    if (!placed) {
+        labels_.emplace(rect(), labelFont(font()));
+        labelled_ = shown;
+        labelledView_ = view_;
+        labelledSize_ = size();
+        labelledFont_ = font();
+    }
+    return *labels_;
 }
 
 void CanvasView::mousePressEvent(QMouseEvent* e)

@@ -3,10 +3,12 @@
 // middle or right button. It keeps no part of the mechanism itself.
 #pragma once
 
+#include "render/label_placer.h"
 #include "ui/canvas/tools/tool.h"
 #include "ui/canvas/view_transform.h"
 
 #include <QPixmap>
+#include <QStringList>
 #include <QWidget>
 
 #include <memory>
@@ -64,6 +66,9 @@ private:
     std::optional<Mechanism> scrubbedPose() const;
     void fitAround(const std::vector<Vec2>& pts);
     const QPixmap& grid();
+    bool drawsFromResult() const;  // whether the newest result changes what was last painted
+    LabelPlacer& labelsFor(const Mechanism& shown, bool& placed);
+    QRect haloArea(const Selection& s) const;
 
     MechanismDocument* doc_;
     AnalysisState* analysis_;
@@ -76,6 +81,14 @@ private:
     // The grid as last drawn, and the view it was drawn for (empty: draw again).
     QPixmap grid_;
     ViewTransform gridView_;
+    QStringList paintedProblems_;  // the parts the last paint drew as blamed
+    Selection haloed_;             // the part drawn with the selection's halo
+    // The labels as last placed, and the drawing, view, size and font they were placed for (none: place again).
+    std::optional<LabelPlacer> labels_;
+    Mechanism labelled_;
+    ViewTransform labelledView_;
+    QSize labelledSize_;
+    QFont labelledFont_;
 };
 
 }  // namespace clevis::ui

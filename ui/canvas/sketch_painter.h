@@ -26,6 +26,9 @@ struct PaintContext {
     // Each body's outline (bodyOutline), in the order of mechanism.bodies;
     // paintSketch finds them once for all the painters.
     std::vector<std::vector<Vec2>> outlines{};
+    // The labels were placed by an earlier paint of this same drawing at
+    // this same view: they are painted as placed then, not placed again.
+    bool labelsPlaced = false;
 
     // A part's label beside `anchor`, pushed away from it along `push`.
     void label(const QString& text, QPointF anchor, QPointF push, const QColor& colour);

@@ -22,13 +22,18 @@ PropertyEditor::PropertyEditor(MechanismDocument* doc, AnalysisState* analysis, 
     setObjectName(QStringLiteral("propertyEditor"));
     setWidgetResizable(true);
     setFrameShape(QFrame::NoFrame);
-    connect(doc_, &MechanismDocument::mechanismChanged, this, &PropertyEditor::scheduleRebuild);
-    connect(doc_, &MechanismDocument::selectionChanged, this, &PropertyEditor::scheduleRebuild);
-    connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, &PropertyEditor::scheduleRebuild);
-    // A joint's form shows the forces at the shown position.
+    // A joint's form shows the forces at the shown position, so it is built
+    // again when a result comes. After an edit a solve is always under way
+    // (the analysis hears of the edit first) and its result follows: the form
+    // is built then, once, not also for the edit (a drag edits at every move).
     const auto jointShown = [this] {
         if (doc_->selection().kind == Selection::Kind::Joint) scheduleRebuild();
     };
+    connect(doc_, &MechanismDocument::mechanismChanged, this, [this] {
+        if (!analysis_ || !analysis_->busy() || doc_->selection().kind != Selection::Kind::Joint) scheduleRebuild();
+    });
+    connect(doc_, &MechanismDocument::selectionChanged, this, &PropertyEditor::scheduleRebuild);
+    connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, &PropertyEditor::scheduleRebuild);
     if (analysis_) {
         connect(analysis_, &AnalysisState::resultChanged, this, jointShown);
         connect(analysis_, &AnalysisState::currentStepChanged, this, jointShown);

@@ -29,7 +29,7 @@ QPen PaintContext::haloPen(Selection::Kind kind, const std::string& name, double
 
 void PaintContext::label(const QString& text, QPointF anchor, QPointF push, const QColor& colour)
 {
-    labels.add(text, anchor, push, colour);
+    if (!labelsPlaced) labels.add(text, anchor, push, colour);
 }
 
 QFont labelFont(const QFont& base)
@@ -74,7 +74,7 @@ void paintSketch(PaintContext& c)
 {
     c.outlines.clear();
     for (const Body& b : c.mechanism.bodies) c.outlines.push_back(bodyOutline(c.mechanism, b.name));
-    addObstacles(c);
+    if (!c.labelsPlaced) addObstacles(c);
     paintBodies(c);
     paintLoads(c);
     paintJoints(c);
