@@ -13,6 +13,7 @@
 #include <QHBoxLayout>
 #include <QLabel>
 #include <QListWidget>
+#include <QPlainTextEdit>
 #include <QResizeEvent>
 #include <QScrollArea>
 #include <QScrollBar>
@@ -59,15 +60,19 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     , plot_(new QCustomPlot(this))
     , scroll_(nullptr)
     , readout_(new QLabel(this))
-    , peaks_(new QLabel(this))
+    , peaks_(new QPlainTextEdit(this))
 {
     setObjectName("plotStack");
     plot_->setObjectName("cyclePlots");
     plot_->setMouseTracking(true);
     joints_->setToolTip(tr("Tick the joints whose reaction is plotted"));
-    peaks_->setTextInteractionFlags(Qt::TextSelectableByMouse);
-    peaks_->setAlignment(Qt::AlignTop | Qt::AlignLeft);
-    peaks_->setWordWrap(true);
+    // Read-only text rather than a word-wrapped label: it lays out only the
+    // lines in view when a result brings new peaks (a label measured its whole
+    // text again, a tenth of an edit), and scrolls when the lines do not fit.
+    peaks_->setReadOnly(true);
+    peaks_->setFrameShape(QFrame::NoFrame);
+    peaks_->viewport()->setAutoFillBackground(false);
+    peaks_->setObjectName("peakList");
     readout_->setTextInteractionFlags(Qt::TextSelectableByMouse);
     // The readout is one line elided to the room there is: a long one must not widen the window.
     readout_->setSizePolicy(QSizePolicy::Ignored, QSizePolicy::Preferred);
@@ -83,11 +88,7 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     sideLayout->addWidget(components_);
     sideLayout->addWidget(new QLabel(tr("Peaks"), side));
     // One line per curve: however many there are, the list scrolls rather than being cut off.
-    auto* peakScroll = new QScrollArea(side);
-    peakScroll->setWidgetResizable(true);
-    peakScroll->setFrameShape(QFrame::NoFrame);
-    peakScroll->setWidget(peaks_);
-    sideLayout->addWidget(peakScroll, 2);
+    sideLayout->addWidget(peaks_, 2);
     auto* centre = new QWidget(this);
     auto* centreLayout = new QVBoxLayout(centre);
     centreLayout->setContentsMargins(0, 0, 0, 0);
@@ -271,7 +272,7 @@ void PlotStack::rebuild()
     QStringList peakLines;
     for (std::size_t i = 0; i < panes_.size(); ++i) peakLines << fillPane(panes_[i], parts_[i]);
     if (!keep) fitLegends();
-    peaks_->setText(peakLines.join("\n"));
+    peaks_->setPlainText(peakLines.join("\n"));
     moveCursor(analysis_->currentStep());
 }
 
@@ -458,7 +459,7 @@ bool PlotStack::eventFilter(QObject* watched, QEvent* event)
     return QWidget::eventFilter(watched, event);
 }
 
-QString PlotStack::peakListText() const { return peaks_->text(); }
+QString PlotStack::peakListText() const { return peaks_->toPlainText(); }
 QString PlotStack::readoutText() const { return fullReadout_; }
 
 }  // namespace clevis::ui

@@ -29,6 +29,7 @@ class QCPMarginGroup;
 class QLabel;
 class QListWidget;
 class QListWidgetItem;
+class QPlainTextEdit;
 class QMouseEvent;
 class QScrollArea;
 
@@ -98,7 +99,7 @@ private:
     QCustomPlot* plot_;
     QScrollArea* scroll_;
     QLabel* readout_;
-    QLabel* peaks_;
+    QPlainTextEdit* peaks_;
     std::vector<PaneParts> parts_;  // one per pane, in pane order
     bool unseen_ = false;           // changed while hidden: drawn again when next shown
     bool replotting_ = false;       // inside a replot of the widget (not an export's drawing)
