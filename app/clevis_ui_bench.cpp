@@ -77,17 +77,28 @@ QPointF movingPin(MainWindow& w)
     return {};
 }
 
+// A window as the edit and click cases use it: the sample open, solved and
+// fitted to the canvas.
+struct OpenWindow {
+    QTemporaryDir recovery;
+    MainWindow w{recovery.path()};
+
+    explicit OpenWindow(int which)
+    {
+        w.resize(1600, 1000);
+        w.show();
+        w.document()->reset(sample(which), sampleName(which));
+        settle(w);
+        w.canvas()->fitToView();
+        settle(w);
+    }
+};
+
 void EditLatency(benchmark::State& state)
 {
     const int which = int(state.range(0));
-    QTemporaryDir recovery;
-    MainWindow w(recovery.path());
-    w.resize(1600, 1000);
-    w.show();
-    w.document()->reset(sample(which), sampleName(which));
-    settle(w);
-    w.canvas()->fitToView();
-    settle(w);
+    OpenWindow open(which);
+    MainWindow& w = open.w;
     QWidget* canvas = w.canvas();
     const QPointF pin = movingPin(w);
     mouse(canvas, QEvent::MouseButtonPress, pin, Qt::LeftButton);
@@ -118,14 +129,8 @@ BENCHMARK(EditLatency)->ArgName("mechanism")->Arg(0)->Arg(1)->UseManualTime()->U
 void SelectPart(benchmark::State& state)
 {
     const int which = int(state.range(0));
-    QTemporaryDir recovery;
-    MainWindow w(recovery.path());
-    w.resize(1600, 1000);
-    w.show();
-    w.document()->reset(sample(which), sampleName(which));
-    settle(w);
-    w.canvas()->fitToView();
-    settle(w);
+    OpenWindow open(which);
+    MainWindow& w = open.w;
     QWidget* canvas = w.canvas();
     const QPointF pins[] = {movingPin(w), w.canvas()->view().toScreen(w.document()->mechanism().joints[0].at)};
     int clicks = 0;
