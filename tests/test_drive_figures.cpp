@@ -266,11 +266,13 @@ TEST(DriveView, ACylinderHasItsTwoFiguresAndNoDriveDataSaysHowToGiveIt)
     Window bed(sample("tipping_bed"));
     EXPECT_EQ(bed.view->figures().size(), 2u);
     EXPECT_TRUE(bed.view->driverChoice()->currentText().contains("cylinder"));
+    EXPECT_TRUE(bed.view->driverChoice()->isVisible());
 
     Window sixBar(sample("dwell_six_bar"));
     EXPECT_LT(sixBar.view->driver(), 0);
     EXPECT_TRUE(sixBar.view->figures().empty());
     EXPECT_TRUE(sixBar.view->message().contains("gearbox")) << sixBar.view->message().toStdString();
+    EXPECT_FALSE(sixBar.view->driverChoice()->isVisible()) << "no drive to choose: no empty choice shown";
 }
 
 TEST(DriveView, FollowsTheSelectedDriverAndAnEditedGearbox)

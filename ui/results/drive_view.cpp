@@ -124,6 +124,7 @@ void DriveView::solved()
         choice_->setCurrentIndex(std::max(0, choice_->findText(kept)));
     }
     choice_->setEnabled(choices_.size() > 1);
+    choice_->setVisible(!choices_.empty());  // an empty choice above the message says nothing
     selectionMoved();
     showDriver();
 }
