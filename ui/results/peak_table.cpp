@@ -101,22 +101,20 @@ void PeakTable::rebuild()
         }
         rows.push_back(std::move(row));
     };
+    // A joint's row, or a cylinder end's (sized as a joint's pin is,
+    // core/results/cylinder_ends.h), with its pin's figures where it has any.
     const SizingResult& sizing = analysis_->sizing();
-    for (std::size_t j = 0; j < s.joints.size(); ++j) {
-        const JointSummary& joint = s.joints[j];
-        addRow(tr("joint %1").arg(QString::fromStdString(joint.name)), joint.peak, u.force(joint.peak.value),
-               {overCycle(u.force(joint.rms)), "", "", ""}, u.force(joint.peak.flagged.value));
-        for (int p = 0; p < int(sizing.pins.size()); ++p)
-            if (sizing.pins[std::size_t(p)].joint == int(j)) pinFigures(rows.back(), p);
-    }
-    // A cylinder's ends are pins, sized as a joint's (core/results/cylinder_ends.h).
-    for (std::size_t e = 0; e < s.cylinderEnds.size(); ++e) {
-        const JointSummary& end = s.cylinderEnds[e];
-        addRow(tr("cylinder end %1").arg(QString::fromStdString(end.name)), end.peak, u.force(end.peak.value),
-               {overCycle(u.force(end.rms)), "", "", ""}, u.force(end.peak.flagged.value));
-        for (int p = 0; p < int(sizing.pins.size()); ++p)
-            if (sizing.pins[std::size_t(p)].cylinderEnd == int(e)) pinFigures(rows.back(), p);
-    }
+    const auto pinRows = [&](const QString& kind, const std::vector<JointSummary>& pins, int PinSizing::*index) {
+        for (std::size_t k = 0; k < pins.size(); ++k) {
+            const JointSummary& pin = pins[k];
+            addRow(kind.arg(QString::fromStdString(pin.name)), pin.peak, u.force(pin.peak.value),
+                   {overCycle(u.force(pin.rms)), "", "", ""}, u.force(pin.peak.flagged.value));
+            for (int p = 0; p < int(sizing.pins.size()); ++p)
+                if (sizing.pins[std::size_t(p)].*index == int(k)) pinFigures(rows.back(), p);
+        }
+    };
+    pinRows(tr("joint %1"), s.joints, &PinSizing::joint);
+    pinRows(tr("cylinder end %1"), s.cylinderEnds, &PinSizing::cylinderEnd);
     for (const auto& d : s.drivers) {
         const auto effort = [&](double v) { return d.type == DriverType::Rotary ? u.torque(v) : u.force(v); };
         addRow(tr("driver %1").arg(QString::fromStdString(d.name)), d.peak, effort(d.peak.value),
