@@ -19,6 +19,7 @@
 #include "core/solver/body_state.h"
 #include "tests/file_text.h"
 #include "tests/mechanism_builders.h"
+#include "tests/sample_file.h"
 #include "tests/solved_mechanism.h"
 
 #include <gtest/gtest.h>
@@ -31,14 +32,10 @@ using namespace clevis;
 
 namespace {
 
-#ifndef CLEVIS_SAMPLES_DIR
-#error "CLEVIS_SAMPLES_DIR must name the samples folder"
-#endif
-
 using test::solve;
 using test::Solved;
 
-std::string tippingBedText() { return test::readFile(std::string(CLEVIS_SAMPLES_DIR) + "/tipping_bed.json"); }
+std::string tippingBedText() { return test::readFile(test::samplePath("tipping_bed")); }
 
 Mechanism tippingBed() { return parseMechanism(tippingBedText()).mechanism; }
 

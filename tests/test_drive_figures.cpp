@@ -14,6 +14,7 @@
 #include "render/drive_figures.h"
 #include "render/review_report.h"
 #include "tests/recording_device.h"
+#include "tests/sample_file.h"
 #include "tests/solved_mechanism.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/document/mechanism_document.h"
@@ -38,9 +39,7 @@ using test::Solved;
 
 namespace {
 
-std::string samplePath(const std::string& name) { return std::string(CLEVIS_SAMPLES_DIR) + "/" + name + ".json"; }
-
-Mechanism sample(const std::string& name) { return loadMechanismFile(samplePath(name)).mechanism; }
+Mechanism sample(const std::string& name) { return test::loadSample(name); }
 
 // The press with a motor characteristic given as a line or as a table.
 Mechanism pressWithMotor(bool table)

@@ -5,6 +5,7 @@
 // nothing changes.
 #include "core/file/file_units.h"
 #include "core/file/mechanism_file.h"
+#include "tests/sample_file.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/panels/property_editor.h"
 #include "ui/shell/display_units.h"
@@ -24,7 +25,7 @@ using namespace clevis::ui;
 
 namespace {
 
-std::string samplePath(const std::string& name) { return std::string(CLEVIS_SAMPLES_DIR) + "/" + name + ".json"; }
+using test::samplePath;
 
 // A sample open with one of its drivers selected in the property editor.
 struct DriverInEditor {

@@ -12,6 +12,7 @@
 #include "core/solver/cycle_sweep.h"
 #include "tests/mechanism_builders.h"
 #include "tests/python_check.h"
+#include "tests/sample_file.h"
 #include "tests/solved_mechanism.h"
 
 #include <gtest/gtest.h>
@@ -23,14 +24,10 @@ using namespace clevis;
 
 namespace {
 
-#ifndef CLEVIS_SAMPLES_DIR
-#error "CLEVIS_SAMPLES_DIR must name the samples folder"
-#endif
-
 using test::solve;
 using test::Solved;
 
-Mechanism punchPress() { return loadMechanismFile(std::string(CLEVIS_SAMPLES_DIR) + "/punch_press.json").mechanism; }
+Mechanism punchPress() { return test::loadSample("punch_press"); }
 
 std::size_t jointIndex(const Mechanism& m, const std::string& name)
 {

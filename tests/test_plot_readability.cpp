@@ -11,6 +11,7 @@
 #include "render/plot_panes.h"
 #include "tests/qstring_printer.h"
 #include "tests/recording_device.h"
+#include "tests/sample_file.h"
 #include "tests/solved_mechanism.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/document/mechanism_document.h"
@@ -38,7 +39,7 @@ namespace {
 
 const char* const kSamples[] = {"dwell_six_bar", "punch_press", "flap_folder", "tipping_bed", "tote_arm"};
 
-std::string samplePath(const std::string& name) { return std::string(CLEVIS_SAMPLES_DIR) + "/" + name + ".json"; }
+using test::samplePath;
 
 // The step of a curve's largest |value|.
 int peakOf(const std::vector<double>& v)
