@@ -5,6 +5,7 @@
 #include "core/model/materials.h"
 #include "core/model/type_names.h"
 #include "core/results/bar_sizing.h"
+#include "core/results/cylinder_ends.h"
 #include "core/results/drive_units.h"
 #include "core/results/summary_text.h"
 #include "core/results/utilisation_ranking.h"
@@ -421,14 +422,33 @@ const std::vector<QString>& reviewReportSections(bool drive)
 
 std::vector<CriticalPosition> criticalPositions(const CompiledMechanism& m, const CycleSummary& s)
 {
-    std::vector<CriticalPosition> out;
-    std::set<std::pair<int, int>> seen;
-    for (std::size_t j = 0; j < s.joints.size() && int(out.size()) < kMaxDiagrams; ++j) {
-        const int step = s.joints[j].peak.step;
+    // Every pin, a cylinder's end pins with the joints, with the body it is
+    // cut from; the most heavily loaded first, so that a large machine's
+    // diagrams are those of its worst pins.
+    struct Candidate {
+        double load;
+        CriticalPosition at;
+    };
+    std::vector<Candidate> pins;
+    for (std::size_t j = 0; j < s.joints.size(); ++j) {
         const auto& joint = m.joints[j];
         const int body = joint.body[1] != kGround ? joint.body[1] : joint.body[0];
-        if (step < 0 || body == kGround || !seen.insert({body, step}).second) continue;
-        out.push_back({QString("peak at joint %1").arg(qs(joint.name)), body, step});
+        pins.push_back(
+            {s.joints[j].peak.value, {QString("peak at joint %1").arg(qs(joint.name)), body, s.joints[j].peak.step}});
+    }
+    const std::vector<CylinderEnd> ends = cylinderEnds(m);
+    for (std::size_t e = 0; e < ends.size() && e < s.cylinderEnds.size(); ++e)
+        pins.push_back(
+            {s.cylinderEnds[e].peak.value,
+             {QString("peak at cylinder end %1").arg(qs(ends[e].name)), ends[e].body, s.cylinderEnds[e].peak.step}});
+    std::stable_sort(pins.begin(), pins.end(), [](const Candidate& a, const Candidate& b) { return a.load > b.load; });
+
+    std::vector<CriticalPosition> out;
+    std::set<std::pair<int, int>> seen;
+    for (const auto& [load, at] : pins) {
+        if (int(out.size()) == kMaxDiagrams) break;
+        if (at.step < 0 || at.body == kGround || !seen.insert({at.body, at.step}).second) continue;
+        out.push_back(at);
     }
     return out;
 }
@@ -518,7 +538,8 @@ bool writeReviewReport(const ReviewReportInput& in, const QString& path, QString
     if (ok) {
         f.heading(sections[4]);
         f.paragraph(
-            "Each body below is cut free at the position where one of its joints carries its peak load; "
+            "Each body below is cut free at the position where one of its pins (a joint or a cylinder's end) "
+            "carries its peak load, the most heavily loaded pins first; "
             "the kinetic diagram beside it holds m·a_G and I_G·α, and the equations under it close to the residual "
             "shown.");
         for (const auto& c : critical) {

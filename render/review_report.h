@@ -48,8 +48,9 @@ struct CycleAxis;
 QString stepPlace(const CycleAxis& axis, int step);
 QString markedValue(const QString& value, const PeakAt& p);
 
-// A critical position: the step where a joint carries its peak, and the body
-// whose free-body diagram shows it.
+// A critical position: the step where a pin (a joint or a cylinder's end)
+// carries its peak, and the body whose free-body diagram shows it. At most
+// eight, the most heavily loaded pins first, one for each body and step.
 struct CriticalPosition {
     QString reason;  // e.g. "peak at joint A"
     int body = -1;

@@ -246,6 +246,38 @@ TEST(ReviewReport, RendersEveryPageWithItsSectionsAndThePeakTable)
     }
 }
 
+// The report cuts a body free where a pin carries its peak: a cylinder's end
+// pins count as the joints do, and the most heavily loaded come first.
+TEST(ReviewReport, CutsBodiesFreeAtTheCylinderEndsPeaksToo)
+{
+    const Solved bed = solveFile(std::string(CLEVIS_SAMPLES_DIR) + "/tipping_bed.json");
+    const auto ends = cylinderEnds(bed.m);
+    ASSERT_EQ(ends.size(), 2u);
+    const CylinderEnd& rod = ends[1];  // the cap end is on ground: nothing to cut free there
+    ASSERT_EQ(rod.side, CylinderSide::Rod);
+    ASSERT_NE(rod.body, kGround);
+
+    const auto critical = ui::criticalPositions(bed.m, bed.s);
+    const auto atRod = std::find_if(critical.begin(), critical.end(), [&](const ui::CriticalPosition& c) {
+        return c.reason == QString("peak at cylinder end %1").arg(QString::fromStdString(rod.name));
+    });
+    ASSERT_NE(atRod, critical.end());
+    EXPECT_EQ(atRod->body, rod.body);
+    EXPECT_EQ(atRod->step, bed.s.cylinderEnds[1].peak.step);
+
+    // On the six-bar, the joints' diagrams come heaviest first.
+    const Solved six = solveFile(std::string(CLEVIS_SAMPLES_DIR) + "/dwell_six_bar.json");
+    const auto drawn = ui::criticalPositions(six.m, six.s);
+    std::vector<double> loads;
+    for (const auto& c : drawn)
+        for (const auto& j : six.s.joints)
+            if (c.reason == QString("peak at joint %1").arg(QString::fromStdString(j.name)))
+                loads.push_back(j.peak.value);
+    ASSERT_EQ(loads.size(), drawn.size());
+    ASSERT_GE(loads.size(), 3u);
+    EXPECT_TRUE(std::is_sorted(loads.rbegin(), loads.rend()));
+}
+
 std::vector<QString> paneTitles(const std::vector<ui::PlotPane>& panes)
 {
     std::vector<QString> titles;
