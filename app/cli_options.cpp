@@ -17,14 +17,14 @@ const char* const kOverview = R"(clevis-cli: the forces in a planar linkage over
 
 Usage:
   clevis-cli analyze FILE [--steps N] [--json OUT] [--csv OUT] [--ratio-study FROM:TO:N]
-  clevis-cli fbd FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT) --out F.svg|F.pdf|F.png
+  clevis-cli fbd FILE --body NAME (--at-deg A | --at-t T | --at-peak PIN) --out F.svg|F.pdf|F.png
                  [--steps N] [--dalembert]
   clevis-cli report FILE --out review.pdf [--steps N]
   clevis-cli bearing-polar FILE --joint NAME [--body NAME] --out F.svg|F.pdf|F.png
                  [--steps N]
-  clevis-cli internal-loads FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)
+  clevis-cli internal-loads FILE --body NAME (--at-deg A | --at-t T | --at-peak PIN)
                  [--stations N] [--steps N] [--json OUT] [--csv OUT]
-  clevis-cli bar-diagram FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)
+  clevis-cli bar-diagram FILE --body NAME (--at-deg A | --at-t T | --at-peak PIN)
                  --out F.svg|F.pdf|F.png [--steps N]
   clevis-cli analyze --help
   clevis-cli COMMAND --help
@@ -38,7 +38,8 @@ Commands:
   fbd        draw one body's free-body diagram at one position (with numbers):
              --at-deg A  at the first rotary driver's angle A (degrees, modulo
                          360°), --at-t T at time T s, or
-                         --at-peak JOINT where that joint's load peaks;
+                         --at-peak PIN where that pin's load peaks (a joint,
+                         or a cylinder's end DRIVER.cap or DRIVER.rod);
              --dalembert draws the inertia force and couple on the body
   bearing-polar
              draw the load one joint puts on one of its bodies over the whole
@@ -139,7 +140,7 @@ Exit status:
 )";
 
 const char* const kInternalLoadsHelp =
-    R"(Usage: clevis-cli internal-loads FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)
+    R"(Usage: clevis-cli internal-loads FILE --body NAME (--at-deg A | --at-t T | --at-peak PIN)
                  [--stations N] [--steps N] [--json OUT] [--csv OUT]
 
 Prints the internal loads of the bar NAME at one position: the axial force N,
@@ -155,7 +156,8 @@ Options:
                    360°), solved at exactly that angle (the first time in the
                    cycle it is reached)
   --at-t T         at time T s, solved at exactly that time
-  --at-peak JOINT  at the solved position where that joint's load peaks
+  --at-peak PIN    at the solved position where that pin's load peaks: a
+                   joint, or a cylinder's end (DRIVER.cap, DRIVER.rod)
   --stations N     stations along the bar, N >= 2, both ends included
                    (default 21); the envelope uses the same stations
   --steps N        intervals over the cycle (default: the file's setting)
@@ -178,7 +180,7 @@ Exit status:
 )";
 
 const char* const kBarDiagramHelp =
-    R"(Usage: clevis-cli bar-diagram FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)
+    R"(Usage: clevis-cli bar-diagram FILE --body NAME (--at-deg A | --at-t T | --at-peak PIN)
                  --out F.svg|F.pdf|F.png [--steps N]
 
 Draws the internal loads of the bar NAME at one position: three diagrams
@@ -194,7 +196,8 @@ Options:
   --at-deg A       where the first rotary driver is at A degrees (modulo
                    360°), solved at exactly that angle
   --at-t T         at time T s, solved at exactly that time
-  --at-peak JOINT  at the solved position where that joint's load peaks
+  --at-peak PIN    at the solved position where that pin's load peaks: a
+                   joint, or a cylinder's end (DRIVER.cap, DRIVER.rod)
   --out F          the drawing, as SVG, PDF or PNG by its suffix
   --steps N        intervals over the cycle (default: the file's setting)
   (--name=value works too)
@@ -214,7 +217,7 @@ Exit status:
 )";
 
 const char* const kFbdHelp =
-    R"(Usage: clevis-cli fbd FILE --body NAME (--at-deg A | --at-t T | --at-peak JOINT)
+    R"(Usage: clevis-cli fbd FILE --body NAME (--at-deg A | --at-t T | --at-peak PIN)
                  --out F.svg|F.pdf|F.png [--steps N] [--dalembert]
 
 Draws the free-body diagram of the body NAME at one position: every force and
@@ -226,7 +229,8 @@ Options:
   --at-deg A       where the first rotary driver is at A degrees (modulo
                    360°), solved at exactly that angle
   --at-t T         at time T s, solved at exactly that time
-  --at-peak JOINT  at the solved position where that joint's load peaks
+  --at-peak PIN    at the solved position where that pin's load peaks: a
+                   joint, or a cylinder's end (DRIVER.cap, DRIVER.rod)
   --out F          the drawing, as SVG, PDF or PNG by its suffix
   --steps N        intervals over the cycle (default: the file's setting)
   --dalembert      also draw the inertia force and couple on the body
@@ -395,7 +399,7 @@ bool takePosition(const OptionWord& o, ArgumentReader& in, PositionChoice& at, i
 {
     if (o.name == "--at-deg") at.degrees = parseNumber(o.name, in.valueOf(o.name, o.attached));
     else if (o.name == "--at-t") at.time = parseNumber(o.name, in.valueOf(o.name, o.attached));
-    else if (o.name == "--at-peak") at.peakOfJoint = in.valueOf(o.name, o.attached);
+    else if (o.name == "--at-peak") at.peakOfPin = in.valueOf(o.name, o.attached);
     else return false;
     ++given;
     return true;

@@ -38,7 +38,7 @@ struct AnalyzeOptions {
 struct PositionChoice {
     std::optional<double> degrees;  // first rotary driver's angle, solved exactly
     std::optional<double> time;     // s, solved exactly
-    std::string peakOfJoint;        // the stored step where this joint's load peaks
+    std::string peakOfPin;          // the stored step where this pin's load peaks (pin_peak.h)
 };
 struct InternalLoadsOptions {
     std::string file, body;

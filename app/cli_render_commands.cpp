@@ -10,6 +10,7 @@
 #include "core/results/cycle_summary.h"
 #include "core/results/cylinder_ends.h"
 #include "core/results/free_body.h"
+#include "core/results/pin_peak.h"
 #include "core/solver/analysis_error.h"
 #include "core/solver/cycle_sweep.h"
 #include "core/solver/exact_position.h"
@@ -88,14 +89,10 @@ int stepAtTime(Solved& s, double t)
     return insertStep(s.r, solveAtTime(s.m, s.r, std::clamp(t, steps.front().t, steps.back().t)));
 }
 
-int stepAtPeak(const Solved& s, const std::string& joint)
+int stepAtPeak(const Solved& s, const std::string& pin)
 {
-    std::string names;
-    for (const auto& j : s.s.joints) {
-        if (j.name == joint) return j.peak.step;
-        names += (names.empty() ? "" : ", ") + j.name;
-    }
-    throw UsageError("--at-peak: no joint \"" + joint + "\" (joints: " + names + ")");
+    if (const auto step = pinPeakStep(s.s, pin)) return *step;
+    throw UsageError("--at-peak: no pin \"" + pin + "\" (pins: " + listOf(pinNames(s.s)) + ")");
 }
 
 // The parser has checked that exactly one position is given.
@@ -103,7 +100,7 @@ int chooseStep(const PositionChoice& at, Solved& s)
 {
     if (at.degrees) return stepAtDegrees(s, *at.degrees);
     if (at.time) return stepAtTime(s, *at.time);
-    return stepAtPeak(s, at.peakOfJoint);
+    return stepAtPeak(s, at.peakOfPin);
 }
 
 int chooseBody(const std::string& name, const Solved& s)

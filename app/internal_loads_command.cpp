@@ -7,6 +7,7 @@
 #include "core/results/bar_envelope.h"
 #include "core/results/cycle_summary.h"
 #include "core/results/drive_units.h"
+#include "core/results/pin_peak.h"
 #include "core/results/sizing_json.h"
 #include "core/solver/analysis_error.h"
 #include "core/solver/cycle_sweep.h"
@@ -52,12 +53,8 @@ StepResult chooseStep(const PositionChoice& at, const CompiledMechanism& m, cons
         return solveAtTime(m, r, *at.time);
     }
     const CycleSummary summary = summarize(m, r);
-    std::vector<std::string> names;
-    for (const auto& j : summary.joints) {
-        if (j.name == at.peakOfJoint) return r.steps[std::size_t(j.peak.step)];
-        names.push_back(j.name);
-    }
-    throw Refused("--at-peak: no joint \"" + at.peakOfJoint + "\" (joints: " + listOf(names) + ")");
+    if (const auto step = pinPeakStep(summary, at.peakOfPin)) return r.steps[std::size_t(*step)];
+    throw Refused("--at-peak: no pin \"" + at.peakOfPin + "\" (pins: " + listOf(pinNames(summary)) + ")");
 }
 
 std::string positionText(const CompiledMechanism& m, const StepResult& s)

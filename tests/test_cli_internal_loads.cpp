@@ -83,7 +83,7 @@ TEST_F(CliInternalLoads, RefusesUnknownBodyAndJointNamingThem)
     EXPECT_TRUE(contains(r.err, "rocker")) << r.err;
     r = run("internal-loads '" + kSixBar + "' --body rocker --at-peak Q");
     EXPECT_EQ(r.exitCode, 1);
-    EXPECT_TRUE(contains(r.err, "no joint \"Q\"")) << r.err;
+    EXPECT_TRUE(contains(r.err, "no pin \"Q\"")) << r.err;
 }
 
 TEST_F(CliInternalLoads, RefusesFewerThanTwoStationsAndAmbiguousPositions)

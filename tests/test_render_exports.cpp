@@ -199,6 +199,27 @@ QString tool(const QString& program, const QStringList& args)
     return QString::fromUtf8(p.readAllStandardOutput());
 }
 
+// --at-peak takes a cylinder's end pin as it takes a joint, so that the
+// report's diagram at that peak can be drawn alone.
+TEST(FbdCommand, DrawsABodyWhereACylinderEndPeaks)
+{
+    const std::string bedFile = std::string(CLEVIS_SAMPLES_DIR) + "/tipping_bed.json";
+    const Solved bed = solveFile(bedFile);
+    QTemporaryDir dir;
+    const QString svg = dir.filePath("bed.svg");
+    ASSERT_EQ(run("fbd", {bedFile, "--body", "bed", "--at-peak", "lift_cylinder.rod", "--out", svg.toStdString()}), 0);
+    QFile f(svg);
+    ASSERT_TRUE(f.open(QIODevice::ReadOnly));
+    const QString text = QString::fromUtf8(f.readAll());
+    const std::string peak = ui::RenderUnits().force(bed.s.cylinderEnds[1].peak.value).toStdString();
+    EXPECT_TRUE(text.contains(QString::fromStdString(peak))) << peak;
+
+    testing::internal::CaptureStderr();
+    EXPECT_EQ(run("fbd", {bedFile, "--body", "bed", "--at-peak", "lift_cylinder", "--out", svg.toStdString()}), 2);
+    const std::string err = testing::internal::GetCapturedStderr();
+    EXPECT_NE(err.find("lift_cylinder.rod"), std::string::npos) << err;  // the names it takes are listed
+}
+
 TEST(ReviewReport, RendersEveryPageWithItsSectionsAndThePeakTable)
 {
     const Solved solved = solveFile(kPress);
