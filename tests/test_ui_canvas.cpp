@@ -7,6 +7,8 @@
 #include "tests/canvas_fixture.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/canvas/canvas_view.h"
+#include "ui/canvas/driver_symbol.h"
+#include "ui/canvas/hit_test.h"
 #include "ui/canvas/sketch_painter.h"
 #include "ui/canvas/snapping.h"
 #include "ui/canvas/tool_palette.h"
@@ -447,3 +449,32 @@ TEST_F(CanvasTest, ASelectionRepaintsWhatItsHalosCover)
 }
 
 }  // namespace
+
+// A motor's arc leaves a gap where its crank is, so a short crank can be
+// picked along its whole length; the rest of the arc picks the motor, and the
+// arc turns the way the motor does.
+TEST(MotorSymbol, LeavesItsCrankFreeToPickAndTurnsWithTheMotor)
+{
+    Mechanism m = loadMechanismFile(CLEVIS_TEST_DATA "/drawn_four_bar.json").mechanism;
+    m.joints[2].at = {-0.04, 0.03};  // the crank points up and to the left, 50 mm long
+    ViewTransform view;
+    view.zoomAt(view.toScreen({0, 0}), 0.43);  // 43 px: a short crank on screen
+    const QPointF pin = view.toScreen({0, 0});
+    const QPointF alongCrank = (view.toScreen({-0.04, 0.03}) - pin) / 50.0;  // 1 mm along it, in px
+
+    // The crank's middle lies on the motor's circle of kMotorRadius.
+    const QPointF middle = pin + alongCrank * 25;
+    ASSERT_NEAR(QLineF(pin, middle).length(), 21.5, 0.1);
+    EXPECT_EQ(partAt(m, view, middle), (Selection{Selection::Kind::Body, "link 1", -1}));
+    EXPECT_EQ(partAt(m, view, pin - alongCrank * 17 / 21.5 * 25),  // opposite the crank, on the arc
+              (Selection{Selection::Kind::Driver, "motor 1", -1}));
+
+    const auto forwards = motorArc(m, view, m.drivers[0]);
+    ASSERT_TRUE(forwards);
+    EXPECT_GT(forwards->spanDeg, 0);  // 60 rpm: counter-clockwise
+    std::get<ConstantSpeed>(m.drivers[0].motion).speed *= -1;
+    const auto backwards = motorArc(m, view, m.drivers[0]);
+    ASSERT_TRUE(backwards);
+    EXPECT_LT(backwards->spanDeg, 0);
+    EXPECT_EQ(partAt(m, view, middle), (Selection{Selection::Kind::Body, "link 1", -1}));
+}

@@ -1,5 +1,6 @@
 #include "ui/canvas/hit_test.h"
 
+#include "ui/canvas/driver_symbol.h"
 #include "ui/canvas/sketch_style.h"
 #include "ui/document/sketch_geometry.h"
 
@@ -53,10 +54,10 @@ bool nearDriver(const Mechanism& m, const ViewTransform& view, const Driver& d, 
 {
     if (d.ends[0] && d.ends[1])
         return distanceToSegment(s, view.toScreen(d.ends[0]->at), view.toScreen(d.ends[1]->at)) <= style::kHitPixels;
-    const int j = jointIndex(m, d.joint);
-    if (j < 0) return false;
-    const double r = QLineF(s, view.toScreen(m.joints[j].at)).length();
-    return std::abs(r - style::kMotorRadius) <= style::kHitPixels * 0.8;
+    if (const auto arc = motorArc(m, view, d)) return nearMotorArc(*arc, s, style::kHitPixels * 0.8);
+    if (const auto slide = slideArrow(m, view, d))
+        return distanceToSegment(s, slide->p1(), slide->p2()) <= style::kHitPixels;
+    return false;
 }
 
 }  // namespace

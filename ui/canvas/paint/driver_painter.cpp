@@ -1,5 +1,6 @@
 #include "render/drawing_symbols.h"
 #include "render/palette.h"
+#include "ui/canvas/driver_symbol.h"
 #include "ui/canvas/sketch_painter.h"
 #include "ui/canvas/sketch_style.h"
 #include "ui/document/sketch_geometry.h"
@@ -62,24 +63,20 @@ void paintDrivers(PaintContext& c)
         if (j < 0) continue;
         const QPointF at = c.view.toScreen(c.mechanism.joints[j].at);
         p.setBrush(Qt::NoBrush);
-        if (d.type == DriverType::Rotary) {
+        if (const auto arc = motorArc(c.mechanism, c.view, d)) {
             const QPen halo = c.haloPen(Selection::Kind::Driver, d.name, 2.2);
             if (halo.style() != Qt::NoPen) {
                 p.setPen(halo);
                 p.drawEllipse(at, style::kMotorRadius, style::kMotorRadius);
             }
             const ArrowStyle arrow = sketchArrow(QPen(palette::driver(), 2.2, Qt::SolidLine, Qt::FlatCap));
-            drawArcArrow(p, at, style::kMotorRadius, 120, 250, arrow);
-        } else {
-            // At a slider: a double-headed arrow along the slide.
-            const double a = qDegreesToRadians(c.mechanism.joints[j].axisDeg);
-            const QPointF u(std::cos(a), -std::sin(a)), n(-u.y(), u.x());
-            const QPointF mid = at + n * (style::kBlockSize * 0.9);
+            drawArcArrow(p, arc->centre, style::kMotorRadius, arc->startDeg, arc->spanDeg, arrow);
+        } else if (const auto slide = slideArrow(c.mechanism, c.view, d)) {
             p.setPen(c.haloPen(Selection::Kind::Driver, d.name, 2.2));
-            p.drawLine(mid - u * 22, mid + u * 22);
+            p.drawLine(*slide);
             const ArrowStyle arrow = sketchArrow(QPen(palette::driver(), 2.2));
-            drawArrow(p, mid, mid + u * 22, arrow);
-            drawArrow(p, mid, mid - u * 22, arrow);
+            drawArrow(p, slide->center(), slide->p2(), arrow);
+            drawArrow(p, slide->center(), slide->p1(), arrow);
         }
         c.label(QString::fromStdString(d.name) + "  " + motionLabel(d), at, QPointF(-0.7, -0.7), palette::driver());
     }
