@@ -102,10 +102,13 @@ void MechanismSketch::paint(QPainter& p, const QRectF& target) const
         labels.add(QString::fromStdString(j.name), at, n > 1 ? away / n : QPointF(0.7, 0.7));
     }
     for (const auto& [name, centre] : bodyNames) labels.add(name, centre, QPointF(0, -1));
-    for (const auto& d : mechanism_.drivers) {
+    for (std::size_t i = 0; i < mechanism_.drivers.size(); ++i) {
+        const auto& d = mechanism_.drivers[i];
         if (d.type != DriverType::Rotary) continue;
         const QPointF at = frame.map(pointPosition(q, mechanism_.joints[d.joint].point[1]));
-        drawCoupleArrow(p, at, 14, true, figureArrow(palette::driver(), 1.4));
+        // Turning the way the driver turns at the drawn step.
+        const bool counterClockwise = i >= step_.driveRate.size() || step_.driveRate[i] >= 0;
+        drawCoupleArrow(p, at, 14, counterClockwise, figureArrow(palette::driver(), 1.4));
     }
     labels.paint(p, palette::ink(), palette::paper());
     p.setPen(palette::ink());

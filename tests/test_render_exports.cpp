@@ -8,12 +8,16 @@
 #include "core/results/cylinder_ends.h"
 #include "core/results/free_body.h"
 #include "core/solver/cycle_sweep.h"
+#include "render/mechanism_sketch.h"
 #include "render/plot_panes.h"
 #include "render/render_units.h"
 #include "render/review_report.h"
 
 #include <QDir>
 #include <QFile>
+#include <QGuiApplication>
+#include <QImage>
+#include <QPainter>
 #include <QProcess>
 #include <QRegularExpression>
 #include <QTemporaryDir>
@@ -297,6 +301,38 @@ TEST(ReviewReport, CutsBodiesFreeAtTheCylinderEndsPeaksToo)
     ASSERT_EQ(loads.size(), drawn.size());
     ASSERT_GE(loads.size(), 3u);
     EXPECT_TRUE(std::is_sorted(loads.rbegin(), loads.rend()));
+}
+
+// The report's sketch shows a motor turning the way it turns: the same step
+// with the rate's sign changed draws a different arrow, and only the arrow.
+TEST(MechanismSketch, TheMotorsArrowTurnsWithTheMotor)
+{
+    if (!QCoreApplication::instance()) {  // fonts need one; kept for the rest of the run, as the commands keep theirs
+        static int argc = 1;
+        static char name[] = "clevis_render_tests";
+        static char* argv[] = {name, nullptr};
+        static QGuiApplication app(argc, argv);
+    }
+    const Solved flap = solveFile(std::string(CLEVIS_SAMPLES_DIR) + "/flap_folder.json");
+    StepResult turned = flap.r.steps.front();
+    turned.driveRate[0] = -turned.driveRate[0];
+    const auto picture = [&](const StepResult& step) {
+        QImage image(515, 330, QImage::Format_RGB32);
+        image.fill(Qt::white);
+        QPainter p(&image);
+        ui::MechanismSketch(flap.m, step, "").paint(p, image.rect());
+        return image;
+    };
+    const QImage forwards = picture(flap.r.steps.front()), backwards = picture(turned);
+    ASSERT_EQ(forwards.size(), backwards.size());
+    // Every pixel that differs lies within the arrow's reach of the driven pin.
+    QRect changed;
+    for (int y = 0; y < forwards.height(); ++y)
+        for (int x = 0; x < forwards.width(); ++x)
+            if (forwards.pixel(x, y) != backwards.pixel(x, y)) changed |= QRect(x, y, 1, 1);
+    ASSERT_FALSE(changed.isEmpty());
+    EXPECT_LE(changed.width(), 40);
+    EXPECT_LE(changed.height(), 40);
 }
 
 std::vector<QString> paneTitles(const std::vector<ui::PlotPane>& panes)
