@@ -5,6 +5,8 @@
 #include <QFontMetricsF>
 #include <QPdfWriter>
 
+#include <algorithm>
+
 namespace clevis::ui {
 namespace {
 
@@ -14,6 +16,30 @@ constexpr double kMargin = 40.0, kFooter = 24.0;
 double bottom() { return kPageHeight - kMargin - kFooter; }
 
 }  // namespace
+
+std::vector<double> tableColumnWidths(const std::vector<QStringList>& rows, const std::vector<double>& shares,
+                                      double width)
+{
+    const QFontMetricsF headFont(reportFont(kTableFont, true)), bodyFont(reportFont(kTableFont));
+    std::vector<double> given(shares.size()), need(shares.size(), 0.0);
+    for (std::size_t c = 0; c < shares.size(); ++c) given[c] = shares[c] * width;
+    for (std::size_t r = 0; r < rows.size(); ++r)
+        for (std::size_t c = 0; c < shares.size() && c < std::size_t(rows[r].size()); ++c)
+            need[c] = std::max(need[c], (r == 0 ? headFont : bodyFont).horizontalAdvance(rows[r][int(c)]) + kCellGap);
+    double deficit = 0, spare = 0;
+    for (std::size_t c = 0; c < given.size(); ++c) {
+        deficit += std::max(0.0, need[c] - given[c]);
+        spare += std::max(0.0, given[c] - need[c]);
+    }
+    if (deficit == 0) return given;
+    const double taken = std::min(deficit, spare);
+    std::vector<double> out(given.size());
+    for (std::size_t c = 0; c < given.size(); ++c)
+        out[c] = need[c] > given[c] ? given[c] + (need[c] - given[c]) * taken / deficit
+                 : spare > 0        ? given[c] - (given[c] - need[c]) * taken / spare
+                                    : given[c];
+    return out;
+}
 
 QFont reportFont(int pixels, bool bold)
 {
@@ -93,16 +119,21 @@ void PageFlow::table(const std::vector<QStringList>& rows, const std::vector<dou
                      const std::function<QColor(int, int)>& shade)
 {
     constexpr double kRow = 13.0;
+    const std::vector<double> widths = tableColumnWidths(rows, columns, width());
     const auto drawRow = [&](const QStringList& row, int index) {
         const bool head = index == 0;
-        painter_.setFont(reportFont(8, head));
+        const QFont font = reportFont(kTableFont, head);
+        const QFontMetricsF metrics(font);
+        painter_.setFont(font);
         painter_.setPen(palette::ink());
         double x = kMargin;
-        for (int c = 0; c < row.size() && c < int(columns.size()); ++c) {
+        for (int c = 0; c < row.size() && c < int(widths.size()); ++c) {
             if (const QColor fill = shade ? shade(index, c) : QColor(); fill.isValid())
-                painter_.fillRect(QRectF(x - 2, y_ + 0.5, columns[c] * width(), kRow - 1), fill);
-            painter_.drawText(QRectF(x, y_, columns[c] * width() - 4, kRow), Qt::AlignLeft | Qt::AlignVCenter, row[c]);
-            x += columns[c] * width();
+                painter_.fillRect(QRectF(x - 2, y_ + 0.5, widths[c], kRow - 1), fill);
+            const double room = widths[c] - kCellGap;
+            painter_.drawText(QRectF(x, y_, room, kRow), Qt::AlignLeft | Qt::AlignVCenter,
+                              metrics.elidedText(row[c], Qt::ElideRight, room));
+            x += widths[c];
         }
         y_ += kRow;
         painter_.setPen(QPen(head ? palette::groundHatch() : palette::gridMinor(), head ? 0.8 : 0.5));

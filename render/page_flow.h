@@ -25,7 +25,8 @@ public:
     void heading(const QString& text);  // a numbered section starts a new page when little room is left
     void subheading(const QString& text);
     void paragraph(const QString& text, const QColor& colour = QColor(), bool bold = false);
-    // Columns as fractions of the content width; the first row is the heading.
+    // Columns as fractions of the content width, widened where a column's
+    // text needs more and another can spare it; the first row is the heading.
     // `shade` (row, column), row 0 the heading, gives a cell's background;
     // an invalid colour leaves it plain.
     void table(const std::vector<QStringList>& rows, const std::vector<double>& columns,
@@ -50,5 +51,16 @@ private:
 };
 
 QFont reportFont(int pixels, bool bold = false);
+
+// A table's column widths in points: the shares of `width`, widened where a
+// column's longest text (the first row in bold, as drawn) needs more, the room
+// taken from the columns with some to spare, in proportion to what they
+// spare. Where the width cannot hold every text, the short columns share what
+// there is and their texts are shortened with "…" when drawn, never cut off
+// unseen.
+std::vector<double> tableColumnWidths(const std::vector<QStringList>& rows, const std::vector<double>& shares,
+                                      double width);
+inline constexpr int kTableFont = 8;     // px, a table's text
+inline constexpr double kCellGap = 4.0;  // pt between a cell's text and the next column
 
 }  // namespace clevis::ui

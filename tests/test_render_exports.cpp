@@ -9,12 +9,14 @@
 #include "core/results/free_body.h"
 #include "core/solver/cycle_sweep.h"
 #include "render/mechanism_sketch.h"
+#include "render/page_flow.h"
 #include "render/plot_panes.h"
 #include "render/render_units.h"
 #include "render/review_report.h"
 
 #include <QDir>
 #include <QFile>
+#include <QFontMetricsF>
 #include <QGuiApplication>
 #include <QImage>
 #include <QPainter>
@@ -303,16 +305,58 @@ TEST(ReviewReport, CutsBodiesFreeAtTheCylinderEndsPeaksToo)
     EXPECT_TRUE(std::is_sorted(loads.rbegin(), loads.rend()));
 }
 
+// Fonts need an application object; it is kept for the rest of the run, as
+// the drawing commands keep theirs.
+void ensureFonts()
+{
+    if (QCoreApplication::instance()) return;
+    static int argc = 1;
+    static char name[] = "clevis_render_tests";
+    static char* argv[] = {name, nullptr};
+    static QGuiApplication app(argc, argv);
+}
+
+// A report table's column widens to hold its longest text, taking the room
+// from columns that spare it; where nothing can be spared, every width stays
+// finite and the total stays the page's.
+TEST(ReportTable, ColumnsWidenToTheirTextFromColumnsWithRoomToSpare)
+{
+    ensureFonts();
+    const std::vector<QStringList> drivers{
+        {"Driver", "Peak", "Where", "RMS", "Mean", "Peak power", "Regenerative", "Work"},
+        {"lift_cylinder", "32525 N", "0.8000 s (step 16)", "21322 N", "19972 N", "4582 W", "–", "23766 J"}};
+    const std::vector<double> shares{0.11, 0.12, 0.2, 0.11, 0.11, 0.12, 0.12, 0.11};
+    const double page = 515;
+    const QFontMetricsF head(ui::reportFont(ui::kTableFont, true)), body(ui::reportFont(ui::kTableFont));
+    const auto need = [&](int c) {
+        return std::max(head.horizontalAdvance(drivers[0][c]), body.horizontalAdvance(drivers[1][c])) + ui::kCellGap;
+    };
+    ASSERT_GT(need(6), shares[6] * page);  // "Regenerative" does not fit its share
+
+    const std::vector<double> widths = ui::tableColumnWidths(drivers, shares, page);
+    ASSERT_EQ(widths.size(), shares.size());
+    double total = 0;
+    for (int c = 0; c < int(widths.size()); ++c) {
+        EXPECT_GE(widths[c], need(c) - 1e-9) << drivers[0][c].toStdString();
+        total += widths[c];
+    }
+    EXPECT_NEAR(total, page, 1e-9);
+
+    // Far too narrow a page: the texts are shortened, the columns still fill it.
+    const std::vector<double> cramped = ui::tableColumnWidths(drivers, shares, 120);
+    total = 0;
+    for (const double w : cramped) {
+        EXPECT_TRUE(std::isfinite(w) && w > 0);
+        total += w;
+    }
+    EXPECT_NEAR(total, 120, 1e-9);
+}
+
 // The report's sketch shows a motor turning the way it turns: the same step
 // with the rate's sign changed draws a different arrow, and only the arrow.
 TEST(MechanismSketch, TheMotorsArrowTurnsWithTheMotor)
 {
-    if (!QCoreApplication::instance()) {  // fonts need one; kept for the rest of the run, as the commands keep theirs
-        static int argc = 1;
-        static char name[] = "clevis_render_tests";
-        static char* argv[] = {name, nullptr};
-        static QGuiApplication app(argc, argv);
-    }
+    ensureFonts();
     const Solved flap = solveFile(std::string(CLEVIS_SAMPLES_DIR) + "/flap_folder.json");
     StepResult turned = flap.r.steps.front();
     turned.driveRate[0] = -turned.driveRate[0];
