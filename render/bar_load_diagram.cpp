@@ -86,7 +86,6 @@ BarLoadDiagram::BarLoadDiagram(const CompiledMechanism& m, const CycleResult& r,
     , units_(std::move(units))
     , atStep_(barAtStep(m, cycle.bar, r.steps.at(std::size_t(step)), cycle.band))
     , size_(width, 0)
-    , stacked_(width < kNarrow)
 {
     layOut();
 }
@@ -136,6 +135,14 @@ void BarLoadDiagram::layOut()
     panes_[2].title = QString("Bending moment M (%1)").arg(units_.torqueSymbol);
     panes_[2].rows = {{"largest |M|", here(pk.moment, true, torque), cycle(env.moment, torque)}};
 
+    const TableColumns columns = tableColumns();
+    const QFontMetricsF metrics(font(10));
+    stacked_ = size_.width() < kNarrow;
+    for (const Pane& pane : panes_)
+        for (const PeakRow& r : pane.rows)
+            stacked_ = stacked_ || metrics.horizontalAdvance(r.here) > columns.hereWidth ||
+                       metrics.horizontalAdvance(r.cycle) > columns.cycleWidth;
+
     const double textWidth = size_.width() - 2 * kMargin;
     double y = 22 + wrappedHeight(caption_, font(10), textWidth) + wrappedHeight(ends_, font(10), textWidth) + 8;
     for (Pane& pane : panes_) {
@@ -146,6 +153,15 @@ void BarLoadDiagram::layOut()
     }
     noteBox_ = QRectF(kMargin, y, textWidth, wrappedHeight(note_, font(9), textWidth));
     size_.setHeight(noteBox_.bottom() + 6);
+}
+
+BarLoadDiagram::TableColumns BarLoadDiagram::tableColumns() const
+{
+    constexpr double kLabel = 84;
+    const double width = size_.width() - 2 * kMargin;
+    const double hereWidth = std::min(180.0, (width - kLabel) / 2);
+    const double cycleLeft = kMargin + kLabel + hereWidth + 6;
+    return {kLabel, kMargin + kLabel, hereWidth, cycleLeft, size_.width() - kMargin - cycleLeft};
 }
 
 void BarLoadDiagram::paintPane(QPainter& p, int which) const
@@ -240,7 +256,9 @@ void BarLoadDiagram::paintPane(QPainter& p, int which) const
     // The axis title between the end names, then the peak table.
     p.setPen(palette::ink());
     double y = plot.bottom() + kTickRow;
-    const double width = size_.width() - 2 * kMargin, label = 84;
+    const double width = size_.width() - 2 * kMargin;
+    const TableColumns columns = tableColumns();
+    const double label = columns.label;
     const auto cell = [&](double x, double w, const QString& text, bool bold = false) {
         p.setFont(font(10, bold));
         p.drawText(QRectF(x, y, w, kRow), Qt::AlignLeft | Qt::AlignVCenter,
@@ -266,15 +284,13 @@ void BarLoadDiagram::paintPane(QPainter& p, int which) const
         }
         return;
     }
-    const double hereWidth = std::min(180.0, (width - label) / 2);
-    const double cycleLeft = kMargin + label + hereWidth + 6, cycleWidth = size_.width() - kMargin - cycleLeft;
-    cell(kMargin + label, hereWidth, "at this position", true);
-    cell(cycleLeft, cycleWidth, "over the cycle", true);
+    cell(columns.hereLeft, columns.hereWidth, "at this position", true);
+    cell(columns.cycleLeft, columns.cycleWidth, "over the cycle", true);
     y += kRow;
     for (const PeakRow& r : pane.rows) {
         cell(kMargin, label, r.what);
-        cell(kMargin + label, hereWidth, r.here);
-        cell(cycleLeft, cycleWidth, r.cycle);
+        cell(columns.hereLeft, columns.hereWidth, r.here);
+        cell(columns.cycleLeft, columns.cycleWidth, r.cycle);
         y += kRow;
     }
 }

@@ -54,6 +54,11 @@ private:
         QRectF plot;
         double top = 0;  // of its title row
     };
+    // Left edge and width of the side-by-side table's columns, in figure units.
+    struct TableColumns {
+        double label, hereLeft, hereWidth, cycleLeft, cycleWidth;
+    };
+    TableColumns tableColumns() const;
     void layOut();
     void paintPane(QPainter& p, int which) const;
     double value(const BarStation& s, int which) const;  // in display units
@@ -68,7 +73,10 @@ private:
     QString caption_, ends_, note_;
     QRectF noteBox_;
     Pane panes_[3];
-    bool stacked_ = false;  // the table's two columns one under the other (a narrow figure)
+    // The table's two columns one under the other: in a narrow figure, or
+    // where a peak's text (a two-motor arm's positions) is longer than its
+    // column beside the other.
+    bool stacked_ = false;
 };
 
 }  // namespace clevis::ui

@@ -283,6 +283,24 @@ TEST(BarLoadDiagram, NoTwoTextsOverlapAtAnyWidth)
     }
 }
 
+// At the widths the report and the desktop draw it, every peak's text is
+// whole: a two-motor arm's positions put the table's columns one under the
+// other rather than cut them short.
+TEST(BarLoadDiagram, EveryPeaksTextIsWholeAtTheUsualWidths)
+{
+    for (const char* sample : {"dwell_six_bar.json", "punch_press.json", "tote_arm.json", "flap_folder.json"}) {
+        const Solved s = solveSample(sample);
+        for (const BarModel& bar : s.bars.bars) {
+            const auto cycle = ui::barCycleLoads(s.m, s.r, bar);
+            for (const double width : {560.0, 515.0})
+                for (const int step : {0, int(s.r.steps.size()) / 3})
+                    for (const RecordedText& t : textsOf(ui::BarLoadDiagram(s.m, s.r, cycle, step, {}, width)))
+                        EXPECT_FALSE(t.text.contains(QChar(0x2026)))
+                            << sample << " " << bar.bodyName << " width " << width << ": " << t.text.toStdString();
+        }
+    }
+}
+
 // ---- clevis-cli bar-diagram ----------------------------------------------
 
 TEST_F(CliScratch, ExportsValidSvgPdfAndPngAtTheAskedAngle)
