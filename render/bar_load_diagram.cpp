@@ -56,6 +56,22 @@ double wrappedHeight(const QString& text, const QFont& f, double width)
     return QFontMetricsF(f).boundingRect(QRectF(0, 0, width, 1e6), Qt::TextWordWrap, text).height();
 }
 
+// `text` over as many lines of `width` as it needs, broken after its commas
+// (a peak's drive positions); a clause longer than a line is elided when drawn.
+QStringList clauseLines(const QString& text, const QFontMetricsF& metrics, double width)
+{
+    QStringList lines;
+    for (const QString& clause : text.split(", ")) {
+        const QString joined = lines.isEmpty() ? clause : lines.back() + ", " + clause;
+        if (!lines.isEmpty() && metrics.horizontalAdvance(joined + ",") <= width) lines.back() = joined;
+        else {
+            if (!lines.isEmpty()) lines.back() += ",";
+            lines.push_back(clause);
+        }
+    }
+    return lines;
+}
+
 void paintMark(QPainter& p, QPointF at, bool cycle)
 {
     if (cycle) {
@@ -143,12 +159,16 @@ void BarLoadDiagram::layOut()
             stacked_ = stacked_ || metrics.horizontalAdvance(r.here) > columns.hereWidth ||
                        metrics.horizontalAdvance(r.cycle) > columns.cycleWidth;
 
-    const double textWidth = size_.width() - 2 * kMargin;
+    const double textWidth = size_.width() - 2 * kMargin, stackedWidth = textWidth - columns.label;
     double y = 22 + wrappedHeight(caption_, font(10), textWidth) + wrappedHeight(ends_, font(10), textWidth) + 8;
     for (Pane& pane : panes_) {
         pane.top = y;
         pane.plot = QRectF(kPlotLeft, y + kPaneTitle, size_.width() - kPlotLeft - kPlotRight, kPlotHeight);
-        const int rows = 1 + (stacked_ ? 2 * int(pane.rows.size()) : 1 + int(pane.rows.size()));
+        int rows = 1 + (stacked_ ? 0 : 1 + int(pane.rows.size()));
+        if (stacked_)
+            for (const PeakRow& r : pane.rows)
+                rows += int(clauseLines("here " + r.here, metrics, stackedWidth).size() +
+                            clauseLines("cycle " + r.cycle, metrics, stackedWidth).size());
         y = pane.plot.bottom() + kTickRow + rows * kRow + kPaneGap;
     }
     noteBox_ = QRectF(kMargin, y, textWidth, wrappedHeight(note_, font(9), textWidth));
@@ -275,12 +295,14 @@ void BarLoadDiagram::paintPane(QPainter& p, int which) const
     axisCell(plot.right() - third, QString("%1 ▸").arg(endName(cycle_.bar.ends[1])), Qt::AlignRight);
     y += kRow;
     if (stacked_) {
+        const QFontMetricsF metrics(font(10));
         for (const PeakRow& r : pane.rows) {
             cell(kMargin, label, r.what, true);
-            cell(kMargin + label, width - label, "here " + r.here);
-            y += kRow;
-            cell(kMargin + label, width - label, "cycle " + r.cycle);
-            y += kRow;
+            for (const QString& text : {"here " + r.here, "cycle " + r.cycle})
+                for (const QString& line : clauseLines(text, metrics, width - label)) {
+                    cell(kMargin + label, width - label, line);
+                    y += kRow;
+                }
         }
         return;
     }

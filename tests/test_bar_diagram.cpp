@@ -292,7 +292,7 @@ TEST(BarLoadDiagram, EveryPeaksTextIsWholeAtTheUsualWidths)
         const Solved s = solveSample(sample);
         for (const BarModel& bar : s.bars.bars) {
             const auto cycle = ui::barCycleLoads(s.m, s.r, bar);
-            for (const double width : {560.0, 515.0})
+            for (const double width : {560.0, 515.0, 420.0})
                 for (const int step : {0, int(s.r.steps.size()) / 3})
                     for (const RecordedText& t : textsOf(ui::BarLoadDiagram(s.m, s.r, cycle, step, {}, width)))
                         EXPECT_FALSE(t.text.contains(QChar(0x2026)))
@@ -439,7 +439,8 @@ TEST_F(BarLoadViewTest, FollowsARename)
     settle();
     select("rocker");
     ASSERT_NE(view()->figure(), nullptr);
-    ASSERT_EQ(window.document()->apply("Rename", [](Mechanism& m) { ui::edits::renameBody(m, "rocker", "arm"); }), QString());
+    ASSERT_EQ(window.document()->apply("Rename", [](Mechanism& m) { ui::edits::renameBody(m, "rocker", "arm"); }),
+              QString());
     select("arm");
     EXPECT_EQ(view()->figure(), nullptr) << "nothing drawn under the old name while the edit is solved";
     settle();
