@@ -16,10 +16,15 @@ int run(const clevis::cli::Command& command, char** argv)
     using namespace clevis::cli;
     if (const auto* help = std::get_if<HelpRequest>(&command)) std::cout << helpText(help->topic);
     else if (std::holds_alternative<VersionRequest>(command)) std::cout << "clevis-cli " CLEVIS_VERSION "\n";
-    else if (const auto* loads = std::get_if<InternalLoadsOptions>(&command))
-        return runInternalLoads(*loads, std::cout, std::cerr);
     else if (std::holds_alternative<DrawOptions>(command)) return handOverToDrawingProgram(argv, std::cerr);
-    else return runAnalyze(std::get<AnalyzeOptions>(command), std::cout, std::cerr);
+    else {
+        // Only the commands that solve set the allocator up: the help has no
+        // use for a heap of huge pages.
+        clevis::app::keepFreedHeapForReuse();
+        if (const auto* loads = std::get_if<InternalLoadsOptions>(&command))
+            return runInternalLoads(*loads, std::cout, std::cerr);
+        return runAnalyze(std::get<AnalyzeOptions>(command), std::cout, std::cerr);
+    }
     return kExitOk;
 }
 
@@ -28,7 +33,6 @@ int run(const clevis::cli::Command& command, char** argv)
 int main(int argc, char** argv)
 {
     using namespace clevis::cli;
-    clevis::app::keepFreedHeapForReuse();
     const std::vector<std::string> args(argv + 1, argv + argc);
     try {
         return run(parseCommandLine(args), argv);

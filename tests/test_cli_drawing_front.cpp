@@ -36,15 +36,21 @@ protected:
     fs::path dir_, press_;
 };
 
-// The shared libraries an ELF file asks the loader for (its NEEDED entries),
-// as binutils' objdump prints them.
-std::vector<std::string> neededLibraries(const fs::path& elf, const fs::path& scratch)
+// An ELF file's program headers and dynamic section, as binutils' objdump
+// prints them.
+std::string elfHeaders(const fs::path& elf, const fs::path& scratch)
 {
     const fs::path listing = scratch / "objdump.txt";
     const std::string command = "objdump -p " + quoted(elf) + " >" + quoted(listing);
     EXPECT_EQ(std::system(command.c_str()), 0) << command;
+    return readFile(listing);
+}
+
+// The shared libraries an ELF file asks the loader for (its NEEDED entries).
+std::vector<std::string> neededLibraries(const std::string& headers)
+{
     std::vector<std::string> needed;
-    std::istringstream lines(readFile(listing));
+    std::istringstream lines(headers);
     const std::regex entry(R"(^\s*NEEDED\s+(\S+))");
     std::smatch m;
     for (std::string line; std::getline(lines, line);)
@@ -54,11 +60,23 @@ std::vector<std::string> neededLibraries(const fs::path& elf, const fs::path& sc
 
 TEST_F(DrawingFront, TheAnalysisProgramNeedsNoQtOrGuiLibrary)
 {
-    const std::vector<std::string> needed = neededLibraries(CLEVIS_CLI_PATH, dir_);
-    ASSERT_FALSE(needed.empty()) << "no NEEDED entries read: is objdump there?";
+    const std::string headers = elfHeaders(CLEVIS_CLI_PATH, dir_);
+    ASSERT_TRUE(contains(headers, "file format elf")) << "not read: is objdump there?\n" << headers;
     const std::regex gui(R"(Qt|qcustomplot|^libGL|^libEGL|^libX|^libxcb|^libxkb|fontconfig|freetype|^libpng|glib)",
                          std::regex::icase);
-    for (const std::string& library : needed) EXPECT_FALSE(std::regex_search(library, gui)) << library;
+    for (const std::string& library : neededLibraries(headers))
+        EXPECT_FALSE(std::regex_search(library, gui)) << library;
+}
+
+// Linked whole (app/CMakeLists.txt), clevis-cli starts without the loader: no
+// shared library is looked up, mapped and bound at each start, most of what
+// its start-up cost beyond the system's own (README, "Start-up").
+TEST_F(DrawingFront, TheAnalysisProgramStartsWithoutTheLoader)
+{
+    const std::string headers = elfHeaders(CLEVIS_CLI_PATH, dir_);
+    ASSERT_TRUE(contains(headers, "file format elf")) << "not read: is objdump there?\n" << headers;
+    EXPECT_FALSE(contains(headers, "INTERP")) << headers;
+    EXPECT_TRUE(neededLibraries(headers).empty()) << headers;
 }
 
 #ifdef CLEVIS_DRAW_BUILT
