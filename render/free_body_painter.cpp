@@ -507,20 +507,20 @@ void FreeBodyPainter::paint(QPainter& p, const QRectF& target) const
 // "=" between the free body and the kinetic diagram; turned a quarter when the kinetic diagram is under it.
 void FreeBodyPainter::paintEquals(QPainter& p) const
 {
-    p.save();
     p.setFont(font(t(28)));
     p.setPen(palette::ink());
     if (options_.kinetic == KineticPlacement::Beside) {
         p.drawText(QRectF(bodyPanel_.right(), kineticPanel_.top(), kineticPanel_.left() - bodyPanel_.right(),
                           kineticPanel_.height()),
                    Qt::AlignCenter, "=");
-    } else {
-        const QRectF gap(bodyPanel_.left(), bodyPanel_.bottom(), bodyPanel_.width(),
-                         kineticPanel_.top() - bodyPanel_.bottom());
-        p.translate(gap.center());
-        p.rotate(90);
-        p.drawText(QRectF(-gap.height() / 2, -gap.width() / 2, gap.height(), gap.width()), Qt::AlignCenter, "=");
+        return;
     }
+    const QRectF gap(bodyPanel_.left(), bodyPanel_.bottom(), bodyPanel_.width(),
+                     kineticPanel_.top() - bodyPanel_.bottom());
+    p.save();
+    p.translate(gap.center());
+    p.rotate(90);
+    p.drawText(QRectF(-gap.height() / 2, -gap.width() / 2, gap.height(), gap.width()), Qt::AlignCenter, "=");
     p.restore();
 }
 
