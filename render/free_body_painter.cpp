@@ -1,6 +1,5 @@
 #include "render/free_body_painter.h"
 
-#include "core/results/body_points_at_step.h"
 #include "core/results/drive_units.h"
 #include "render/body_outline.h"
 #include "render/drawing_symbols.h"
@@ -13,6 +12,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <limits>
 
 namespace clevis::ui {
 namespace {
@@ -21,8 +21,8 @@ namespace {
 // multiplied by the zoom (`g`), text, symbols and the gaps between lines of
 // text by the text scale (`t`); both are 1 on the page.
 // Drawn to scale:
-constexpr double kContentWidth = 960;  // both panels side by side
-constexpr double kBodyPanelWidth = 600, kKineticOffset = 640;
+constexpr double kContentWidth = 960;  // both panels side by side; the equations and the table
+constexpr double kBodyPanelWidth = 600, kKineticWidth = 320;
 constexpr double kDrawingHeight = 374;  // a panel's drawing, between its heading and its scale bars
 constexpr double kMaxArrow = 115;       // the largest force's arrow length
 constexpr double kArrowRoom = 130;      // kept free around the body for arrows
@@ -35,6 +35,14 @@ constexpr double kMinArrow = 12;   // shorter forces are still drawn this long
 constexpr double kHalfWidth = 11;  // a link's drawn half width
 constexpr double kPinRadius = 5;
 constexpr double kCoupleRadius = 21;
+constexpr double kEqualsGap = 40;       // between the panels, with the "=" in it
+constexpr double kSecondScaleRow = 16;  // the scale bars' second row, in a narrow panel
+constexpr double kLabelClearance = 16;  // a panel is at least its widest label and this wide
+// A view draws to scale no smaller than this share of its text's scale: the
+// page's drawing is laid out for its text at one to one, and below about two
+// fifths of that the labels crowd the body and each other (found by looking
+// at the samples' bodies).
+constexpr double kReadableZoom = 0.4;
 
 QFont font(double pixels, bool bold = false)
 {
@@ -110,6 +118,52 @@ std::vector<Mark> marksFor(const FreeBodyItem& item, const RenderUnits& u, doubl
         out.push_back({item.at, Vec2::Zero(), item.couple, true, style, coupleText(u, coupleName, item.couple)});
     }
     return out;
+}
+
+// Every mark on the free body: the loads and, with d'Alembert, the inertia loads.
+std::vector<Mark> bodyMarks(const FreeBodyDiagram& d, const RenderUnits& u, double coupleFloor, bool dAlembert,
+                            double s)
+{
+    std::vector<Mark> marks;
+    for (const auto& item : d.items)
+        for (Mark& mark : marksFor(item, u, coupleFloor, s)) marks.push_back(std::move(mark));
+    if (dAlembert) {
+        if (d.inertiaForce().norm() > 1e-9)
+            marks.push_back(
+                {d.cg, -d.inertiaForce(), 0, false, inertiaStyle(s), forceText(u, "−m·a_G", -d.inertiaForce())});
+        if (std::abs(d.inertiaCouple()) > coupleFloor)
+            marks.push_back({d.cg, Vec2::Zero(), -d.inertiaCouple(), true, inertiaStyle(s),
+                             coupleText(u, "−I_G·α", -d.inertiaCouple())});
+    }
+    return marks;
+}
+
+// m·a_G and I_G·α, for the kinetic diagram.
+std::vector<Mark> kineticMarks(const FreeBodyDiagram& d, const RenderUnits& u, double coupleFloor, double s)
+{
+    std::vector<Mark> marks;
+    if (d.inertiaForce().norm() > 1e-9)
+        marks.push_back({d.cg, d.inertiaForce(), 0, false, inertiaStyle(s), forceText(u, "m·a_G", d.inertiaForce())});
+    if (std::abs(d.inertiaCouple()) > coupleFloor)
+        marks.push_back(
+            {d.cg, Vec2::Zero(), d.inertiaCouple(), true, inertiaStyle(s), coupleText(u, "I_G·α", d.inertiaCouple())});
+    return marks;
+}
+
+// As wide as the label placer makes the widest of these marks' labels (its padding included).
+double widestLabel(const std::vector<Mark>& marks, const QFont& f)
+{
+    const QFontMetricsF metrics(f);
+    double widest = 0;
+    for (const Mark& mark : marks) widest = std::max(widest, metrics.boundingRect(mark.label).width() + 4);
+    return widest;
+}
+
+std::vector<Vec2> loadPoints(const FreeBodyDiagram& d)
+{
+    std::vector<Vec2> at;
+    for (const auto& item : d.items) at.push_back(item.at);
+    return at;
 }
 
 QPointF unit(QPointF v)
@@ -228,12 +282,22 @@ private:
     QPointF centroid_;
 };
 
+QFont headingFont(double s) { return font(12 * s, true); }
+
 void panelHeading(QPainter& p, const QRectF& area, const QString& text, double s)
 {
-    p.setFont(font(12 * s, true));
+    p.setFont(headingFont(s));
     p.setPen(palette::ink());
     p.drawText(QPointF(area.left(), area.top() + 12 * s), text);
 }
+
+QString bodyHeading(bool dAlembert)
+{
+    return dAlembert ? "Free body with inertia loads (d'Alembert): every sum is zero" : "Free body";
+}
+
+const char* const kKineticHeading = "Kinetic diagram";
+const char* const kNoInertia = "m·a_G = 0 and I_G·α = 0 (at rest or massless)";
 
 // A bar `length` long from `from` with end ticks, and its caption after it.
 void scaleBar(QPainter& p, QPointF from, double length, const QString& caption, double s)
@@ -260,30 +324,158 @@ QString stepCaption(const CompiledMechanism& m, const CycleResult& r, int step)
 FreeBodyPainter::FreeBodyPainter(const CompiledMechanism& m, const CycleResult& r, FreeBodyDiagram d,
                                  FreeBodyPaintOptions options)
     : mechanism_(m), result_(r), diagram_(std::move(d)), options_(std::move(options))
-{}
+{
+    points_ = bodyPointsAt(mechanism_, result_.steps[diagram_.step], diagram_.body);
+    largest_ = diagram_.inertiaForce().norm();
+    for (const auto& item : diagram_.items) largest_ = std::max(largest_, item.force.norm());
+    pagePerNewton_ = largest_ > 0 ? g(kMaxArrow) / largest_ : 0.0;
+    double bodySize = 0;
+    for (const auto& a : points_) bodySize = std::max(bodySize, (a.at - diagram_.cg).norm());
+    coupleFloor_ = kNegligibleCouple * std::max(1.0, largest_ * std::max(bodySize, 0.01));
+    layOut();
+}
 
 double FreeBodyPainter::margin() const { return t(kMargin); }
 
-// The drawing or the text, whichever is wider.
-double FreeBodyPainter::contentWidth() const { return std::max(g(kContentWidth), t(kContentWidth)); }
-
-QRectF FreeBodyPainter::panel(double left, double width) const
+// The halves or the text, whichever is wider.
+double FreeBodyPainter::contentWidth() const
 {
-    return {left, margin() + t(kTitleHeight), width, t(kHeadingBand) + g(kDrawingHeight) + t(kScaleBand)};
+    return std::max(t(kContentWidth), std::max(bodyHalf().right(), kineticHalf().right()) - margin());
 }
 
-QRectF FreeBodyPainter::bodyPanel() const
+double FreeBodyPainter::scaleBand() const { return t(kScaleBand + (scaleBars_.twoRows ? kSecondScaleRow : 0)); }
+
+QRectF FreeBodyPainter::drawingOf(const QRectF& panel) const
 {
-    return panel(margin(), g(options_.dAlembert ? kContentWidth : kBodyPanelWidth));
+    return panel.adjusted(0, t(kHeadingBand), 0, -scaleBand());
 }
 
-QRectF FreeBodyPainter::bodyDrawing() const { return bodyPanel().adjusted(0, t(kHeadingBand), 0, -t(kScaleBand)); }
+// Force arrows to scale, the body drawn to scale: a bar for each under the
+// free body, in one row where the panel is wide enough for it.
+FreeBodyPainter::ScaleBars FreeBodyPainter::scaleBars(double panelWidth) const
+{
+    const QFontMetricsF metrics(font(t(kSmallestText)));
+    const auto barWidth = [&](double length, const QString& caption) {
+        return length + t(6) + metrics.horizontalAdvance(caption);
+    };
+    ScaleBars b;
+    double next = t(260);  // where the drawing's bar starts, clear of the force bar
+    if (pagePerNewton_ > 0) {
+        const double value = niceBelow(largest_ * 0.6);
+        b.forceLength = value * pagePerNewton_;
+        b.forceCaption = "force scale " + options_.units.force(value);
+        next = std::max(next, barWidth(b.forceLength, b.forceCaption) + t(20));
+    }
+    const QRectF drawing(0, 0, panelWidth, g(kDrawingHeight));
+    const double worldScale =
+        BodyPanel(points_, diagram_.cg, loadPoints(diagram_), drawing, g(kArrowRoom), pagePerNewton_, 1).frame().scale;
+    const double metres = niceBelow(t(90) / worldScale);
+    b.drawingLength = metres * worldScale;
+    b.drawingCaption = "drawing scale " + options_.units.length(metres);
+    b.forceFrom = {0, -t(14)};
+    b.drawingFrom = {next, -t(14)};
+    b.width = next + barWidth(b.drawingLength, b.drawingCaption);
+    if (b.width > panelWidth) {
+        b.twoRows = true;
+        b.forceFrom = {0, -t(14 + kSecondScaleRow)};
+        b.drawingFrom = {0, -t(14)};
+        b.width = std::max(b.forceLength > 0 ? barWidth(b.forceLength, b.forceCaption) : 0.0,
+                           barWidth(b.drawingLength, b.drawingCaption));
+    }
+    return b;
+}
+
+// The panels: drawn to scale, and at least as wide as their headings and
+// their widest labels at the text's size.
+void FreeBodyPainter::layOut()
+{
+    const double s = options_.textScale;
+    const QFont labels = font(t(kLabelPixels));
+    const QFontMetricsF heading(headingFont(s));
+    const double top = margin() + t(kTitleHeight);
+    const double bodyWidth =
+        std::max({g(options_.dAlembert ? kContentWidth : kBodyPanelWidth),
+                  widestLabel(bodyMarks(diagram_, options_.units, coupleFloor_, options_.dAlembert, s), labels) +
+                      t(kLabelClearance),
+                  heading.horizontalAdvance(bodyHeading(options_.dAlembert))});
+    scaleBars_ = scaleBars(bodyWidth);
+    bodyPanel_ = QRectF(margin(), top, bodyWidth, t(kHeadingBand) + g(kDrawingHeight) + scaleBand());
+    if (options_.dAlembert) return;
+    const std::vector<Mark> kinetic = kineticMarks(diagram_, options_.units, coupleFloor_, s);
+    const double kineticWidth =
+        std::max({widestLabel(kinetic, labels) + t(kLabelClearance), heading.horizontalAdvance(kKineticHeading),
+                  kinetic.empty() ? QFontMetricsF(labels).horizontalAdvance(kNoInertia) : 0.0});
+    if (options_.kinetic == KineticPlacement::Beside)
+        kineticPanel_ = QRectF(bodyPanel_.right() + t(kEqualsGap), top, std::max(g(kKineticWidth), kineticWidth),
+                               bodyPanel_.height());
+    else
+        kineticPanel_ = QRectF(margin(), bodyPanel_.bottom() + t(kEqualsGap), std::max(bodyWidth, kineticWidth),
+                               bodyPanel_.height());
+}
+
+QRectF FreeBodyPainter::bodyPanel() const { return bodyPanel_; }
+
+QRectF FreeBodyPainter::bodyDrawing() const { return drawingOf(bodyPanel_); }
+
+QRectF FreeBodyPainter::bodyHalf() const
+{
+    return {bodyPanel_.topLeft(), QSizeF(std::max(bodyPanel_.width(), scaleBars_.width), bodyPanel_.height())};
+}
+
+QRectF FreeBodyPainter::kineticHalf() const { return kineticPanel_; }
 
 QSizeF FreeBodyPainter::size() const
 {
     const int rows = options_.table ? int(diagram_.items.size()) + (options_.dAlembert ? 2 : 0) + 1 : 0;
-    return {contentWidth() + 2 * margin(),
-            bodyPanel().bottom() + t(kEquationHeight + rows * kRowHeight) + 2 * margin()};
+    const double below = std::max(bodyPanel_.bottom(), kineticPanel_.bottom());
+    return {contentWidth() + 2 * margin(), below + t(kEquationHeight + rows * kRowHeight) + 2 * margin()};
+}
+
+FreeBodyPaintOptions FreeBodyPainter::fitted(const CompiledMechanism& m, const CycleResult& r, const FreeBodyDiagram& d,
+                                             FreeBodyPaintOptions options, QSizeF room, double minZoom, double maxZoom)
+{
+    // How far the halves at `zoom`, with the page's margin round them, overfill the room across and down.
+    const auto overfill = [&](double zoom) {
+        options.zoom = zoom;
+        const FreeBodyPainter f(m, r, d, options);
+        const QSizeF halves = f.bodyHalf().united(f.kineticHalf()).size() + 2 * QSizeF(f.margin(), f.margin());
+        return QSizeF(halves.width() / room.width(), halves.height() / room.height());
+    };
+    const auto fits = [](QSizeF over) { return over.width() <= 1 && over.height() <= 1; };
+    const double readable = std::clamp(kReadableZoom * options.textScale, minZoom, maxZoom);
+    FreeBodyPaintOptions best = options;
+    best.zoom = readable;
+    double bestZoom = 0;
+    // Where nothing fits at the readable zoom: the placement that fits across, else the one overfilling least.
+    std::pair<bool, double> leastOverfill{true, std::numeric_limits<double>::infinity()};
+    for (const KineticPlacement placement : {KineticPlacement::Beside, KineticPlacement::Below}) {
+        if (options.dAlembert && placement == KineticPlacement::Below) continue;  // no kinetic diagram
+        options.kinetic = placement;
+        const QSizeF smallest = overfill(readable);
+        if (!fits(smallest)) {
+            const std::pair<bool, double> over{smallest.width() > 1, std::max(smallest.width(), smallest.height())};
+            if (bestZoom == 0 && over < leastOverfill) {
+                best = options;
+                best.zoom = readable;
+                leastOverfill = over;
+            }
+            continue;
+        }
+        // The halves grow with the zoom: the largest that fits, by bisection on its logarithm.
+        double low = std::log(readable), high = std::log(maxZoom);
+        if (fits(overfill(maxZoom))) low = high;
+        while (high - low > 1e-4) {
+            const double mid = 0.5 * (low + high);
+            (fits(overfill(std::exp(mid))) ? low : high) = mid;
+        }
+        const double zoom = std::exp(low);
+        if (zoom > bestZoom * (1 + 1e-3)) {  // under the free body only where that shows the drawing larger
+            best = options;
+            best.zoom = zoom;
+            bestZoom = zoom;
+        }
+    }
+    return best;
 }
 
 void FreeBodyPainter::paint(QPainter& p, const QRectF& target) const
@@ -294,94 +486,78 @@ void FreeBodyPainter::paint(QPainter& p, const QRectF& target) const
     p.fillRect(QRectF(QPointF(0, 0), size()), palette::paper());
     paintTitle(p);
 
-    const StepResult& step = result_.steps[diagram_.step];
-    const std::vector<BodyPointOf> points = bodyPointsAt(mechanism_, step, diagram_.body);
-    double largest = diagram_.inertiaForce().norm();
-    for (const auto& item : diagram_.items) largest = std::max(largest, item.force.norm());
-    const double pagePerNewton = largest > 0 ? g(kMaxArrow) / largest : 0.0;
-    double bodySize = 0;
-    for (const auto& a : points) bodySize = std::max(bodySize, (a.at - diagram_.cg).norm());
-    const double coupleFloor = kNegligibleCouple * std::max(1.0, largest * std::max(bodySize, 0.01));
-
-    std::vector<Mark> marks;
-    for (const auto& item : diagram_.items)
-        for (Mark& mark : marksFor(item, options_.units, coupleFloor, s)) marks.push_back(std::move(mark));
-    if (options_.dAlembert) {
-        if (diagram_.inertiaForce().norm() > 1e-9)
-            marks.push_back({diagram_.cg, -diagram_.inertiaForce(), 0, false, inertiaStyle(s),
-                             forceText(options_.units, "−m·a_G", -diagram_.inertiaForce())});
-        if (std::abs(diagram_.inertiaCouple()) > coupleFloor)
-            marks.push_back({diagram_.cg, Vec2::Zero(), -diagram_.inertiaCouple(), true, inertiaStyle(s),
-                             coupleText(options_.units, "−I_G·α", -diagram_.inertiaCouple())});
-    }
-
-    const QRectF bodyArea = bodyPanel();
-    panelHeading(p, bodyArea,
-                 options_.dAlembert ? "Free body with inertia loads (d'Alembert): every sum is zero" : "Free body", s);
-    std::vector<Vec2> loadPoints;
-    for (const auto& item : diagram_.items) loadPoints.push_back(item.at);
+    panelHeading(p, bodyPanel_, bodyHeading(options_.dAlembert), s);
     const QRectF drawing = bodyDrawing();
-    const QRectF labelArea = drawing.adjusted(0, 0, 0, -t(4));
-    BodyPanel body(points, diagram_.cg, loadPoints, drawing, g(kArrowRoom), pagePerNewton, s);
-    LabelPlacer labels(labelArea, font(t(kLabelPixels)));
+    BodyPanel body(points_, diagram_.cg, loadPoints(diagram_), drawing, g(kArrowRoom), pagePerNewton_, s);
+    LabelPlacer labels(drawing.adjusted(0, 0, 0, -t(4)), font(t(kLabelPixels)));
     body.paintBody(p);
-    body.paintMarks(p, marks, labels);
+    body.paintMarks(p, bodyMarks(diagram_, options_.units, coupleFloor_, options_.dAlembert, s), labels);
     labels.paint(p, palette::ink(), palette::paper());
-
     if (!options_.dAlembert) {
-        const QRectF kineticArea = panel(margin() + g(kKineticOffset), g(kContentWidth - kKineticOffset));
-        const QRectF kineticDrawing = kineticArea.adjusted(0, t(kHeadingBand), 0, -t(kScaleBand));
-        p.setFont(font(t(28)));
-        p.setPen(palette::ink());
-        p.drawText(
-            QRectF(bodyArea.right(), kineticArea.top(), kineticArea.left() - bodyArea.right(), kineticArea.height()),
-            Qt::AlignCenter, "=");
-        panelHeading(p, kineticArea, "Kinetic diagram", s);
-        BodyPanel kinetic(points, diagram_.cg, {}, kineticDrawing, g(kArrowRoom), pagePerNewton, s);
-        std::vector<Mark> km;
-        if (diagram_.inertiaForce().norm() > 1e-9)
-            km.push_back({diagram_.cg, diagram_.inertiaForce(), 0, false, inertiaStyle(s),
-                          forceText(options_.units, "m·a_G", diagram_.inertiaForce())});
-        if (std::abs(diagram_.inertiaCouple()) > coupleFloor)
-            km.push_back({diagram_.cg, Vec2::Zero(), diagram_.inertiaCouple(), true, inertiaStyle(s),
-                          coupleText(options_.units, "I_G·α", diagram_.inertiaCouple())});
-        LabelPlacer kineticLabels(kineticDrawing.adjusted(0, 0, 0, -t(4)), font(t(kLabelPixels)));
-        p.save();
-        p.setOpacity(0.55);  // the kinetic body is a reference shape, not a load carrier
-        kinetic.paintBody(p);
-        p.restore();
-        kinetic.paintMarks(p, km, kineticLabels);
-        kineticLabels.paint(p, palette::ink(), palette::paper());
-        if (km.empty()) {
-            p.setFont(font(t(kLabelPixels)));
-            p.drawText(QPointF(kineticArea.left(), kineticDrawing.bottom() - t(10)),
-                       "m·a_G = 0 and I_G·α = 0 (at rest or massless)");
-        }
+        paintEquals(p);
+        paintKinetic(p);
     }
-
-    paintScaleBars(p, largest, pagePerNewton, body.frame().scale);
-    paintEquations(p, bodyArea.bottom() + t(6));
-    if (options_.table) paintTable(p, bodyArea.bottom() + t(kEquationHeight));
+    paintScaleBars(p);
+    const double below = std::max(bodyPanel_.bottom(), kineticPanel_.bottom());
+    paintEquations(p, below + t(6));
+    if (options_.table) paintTable(p, below + t(kEquationHeight));
     p.restore();
 }
 
-// Force arrows to scale, the body drawn to scale: a bar for each under the free body.
-void FreeBodyPainter::paintScaleBars(QPainter& p, double largest, double pagePerNewton, double worldScale) const
+// "=" between the free body and the kinetic diagram; turned a quarter when the kinetic diagram is under it.
+void FreeBodyPainter::paintEquals(QPainter& p) const
+{
+    p.setFont(font(t(28)));
+    p.setPen(palette::ink());
+    if (options_.kinetic == KineticPlacement::Beside) {
+        p.drawText(QRectF(bodyPanel_.right(), kineticPanel_.top(), kineticPanel_.left() - bodyPanel_.right(),
+                          kineticPanel_.height()),
+                   Qt::AlignCenter, "=");
+        return;
+    }
+    const QRectF gap(bodyPanel_.left(), bodyPanel_.bottom(), bodyPanel_.width(),
+                     kineticPanel_.top() - bodyPanel_.bottom());
+    p.save();
+    p.translate(gap.center());
+    p.rotate(90);
+    p.drawText(QRectF(-gap.height() / 2, -gap.width() / 2, gap.height(), gap.width()), Qt::AlignCenter, "=");
+    p.restore();
+}
+
+void FreeBodyPainter::paintKinetic(QPainter& p) const
 {
     const double s = options_.textScale;
-    const double y = bodyPanel().bottom() - t(14);
+    const QRectF drawing = drawingOf(kineticPanel_);
+    panelHeading(p, kineticPanel_, kKineticHeading, s);
+    // Under the free body it is fitted as the free body is (the same points in
+    // a drawing of the same size), so the two bodies line up at one scale.
+    const bool under = options_.kinetic == KineticPlacement::Below;
+    const BodyPanel kinetic(points_, diagram_.cg, under ? loadPoints(diagram_) : std::vector<Vec2>{},
+                            under ? QRectF(drawing.topLeft(), bodyDrawing().size()) : drawing, g(kArrowRoom),
+                            pagePerNewton_, s);
+    const std::vector<Mark> marks = kineticMarks(diagram_, options_.units, coupleFloor_, s);
+    LabelPlacer labels(drawing.adjusted(0, 0, 0, -t(4)), font(t(kLabelPixels)));
+    p.save();
+    p.setOpacity(0.55);  // the kinetic body is a reference shape, not a load carrier
+    kinetic.paintBody(p);
+    p.restore();
+    kinetic.paintMarks(p, marks, labels);
+    labels.paint(p, palette::ink(), palette::paper());
+    if (marks.empty()) {
+        p.setFont(font(t(kLabelPixels)));
+        p.drawText(QPointF(kineticPanel_.left(), drawing.bottom() - t(10)), kNoInertia);
+    }
+}
+
+void FreeBodyPainter::paintScaleBars(QPainter& p) const
+{
+    const double s = options_.textScale;
+    const QPointF corner = bodyPanel_.bottomLeft();
     p.setFont(font(t(kSmallestText)));
     p.setPen(QPen(palette::ink(), 1.2 * s));
-    double next = margin() + t(260);  // where the drawing's bar starts, clear of the force bar
-    if (pagePerNewton > 0) {
-        const double value = niceBelow(largest * 0.6);
-        const QString caption = "force scale " + options_.units.force(value);
-        scaleBar(p, QPointF(margin(), y), value * pagePerNewton, caption, s);
-        next = std::max(next,
-                        margin() + value * pagePerNewton + t(26) + QFontMetricsF(p.font()).horizontalAdvance(caption));
-    }
-    const double metres = niceBelow(t(90) / worldScale);
-    scaleBar(p, QPointF(next, y), metres * worldScale, "drawing scale " + options_.units.length(metres), s);
+    if (scaleBars_.forceLength > 0)
+        scaleBar(p, corner + scaleBars_.forceFrom, scaleBars_.forceLength, scaleBars_.forceCaption, s);
+    scaleBar(p, corner + scaleBars_.drawingFrom, scaleBars_.drawingLength, scaleBars_.drawingCaption, s);
 }
 
 void FreeBodyPainter::paintTitle(QPainter& p) const

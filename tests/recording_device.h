@@ -67,6 +67,26 @@ private:
     QPen pen_;
 };
 
+// The runs of one text drawn in pieces (a font shapes Greek letters and
+// symbols as runs of their own) joined again: a run that starts on the same
+// baseline where the one before it ended.
+inline std::vector<RecordedText> joinedRuns(const std::vector<RecordedText>& texts)
+{
+    std::vector<RecordedText> joined;
+    for (const RecordedText& t : texts) {
+        if (!joined.empty()) {
+            RecordedText& last = joined.back();
+            if (std::abs(last.at.y() - t.at.y()) < 0.5 && std::abs(last.box.right() - t.box.left()) < 1.0) {
+                last.text += t.text;
+                last.box |= t.box;
+                continue;
+            }
+        }
+        joined.push_back(t);
+    }
+    return joined;
+}
+
 class RecordingDevice final : public QPaintDevice {
 public:
     explicit RecordingDevice(QSize size, int dpi = 72) : size_(size) { engine.dpi = dpi; }

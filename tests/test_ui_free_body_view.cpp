@@ -115,6 +115,71 @@ TEST_F(FreeBodyViewTest, LoadLabelsDoNotOverlapWhenFitted)
         }
 }
 
+// The texts of the two halves as drawn in the view: the free body's heading,
+// load labels and scale bars, and the kinetic diagram's heading and labels.
+struct Halves {
+    std::vector<DrawnText> body, kinetic;
+    QRectF bodyBox, kineticBox;  // round each half's texts
+};
+
+Halves halvesDrawnBy(QWidget& w)
+{
+    Halves h;
+    for (const DrawnText& t : test::joinedRuns(textDrawnBy(w))) {
+        const bool kinetic = t.text == "Kinetic diagram" || t.text.startsWith(QStringLiteral("m·a_G")) ||
+                             t.text.startsWith(QStringLiteral("I_G·α:"));
+        const bool label = t.text.contains(QStringLiteral("∠")) || t.text.endsWith(QStringLiteral(" cw")) ||
+                           t.text.endsWith(QStringLiteral(" ccw"));
+        const bool body = t.text == "Free body" || t.text.startsWith("force scale") ||
+                          t.text.startsWith("drawing scale") || (label && !kinetic);
+        if (kinetic) {
+            h.kinetic.push_back(t);
+            h.kineticBox |= t.box;
+        } else if (body) {
+            h.body.push_back(t);
+            h.bodyBox |= t.box;
+        }
+    }
+    return h;
+}
+
+// Fitted in a view taller than wide (a dock down the side of a laptop's
+// screen), both halves are whole in the canvas and apart: the kinetic
+// diagram is under the free body, not cut off at the right.
+TEST_F(FreeBodyViewTest, BothHalvesAreWholeAndApartInANarrowTallView)
+{
+    view->resize(360, 740);
+    for (const char* name : {"crank", "coupler_plate", "rocker", "finger_lever"}) {
+        doc.setSelection({});
+        select(name);
+        const Halves h = halvesDrawnBy(*view);
+        ASSERT_GE(h.kinetic.size(), 2u) << name;  // the heading and a label at least
+        ASSERT_GE(h.body.size(), 4u) << name;
+        const QRectF canvasArea = QRectF(canvas()->geometry()).adjusted(-0.5, -0.5, 0.5, 0.5);
+        for (const auto* half : {&h.body, &h.kinetic})
+            for (const DrawnText& t : *half)
+                EXPECT_TRUE(canvasArea.contains(t.box)) << name << ": '" << t.text.toStdString() << "' cut off";
+        EXPECT_FALSE(h.bodyBox.intersects(h.kineticBox)) << name;
+        EXPECT_GT(h.kineticBox.top(), h.bodyBox.bottom()) << name << ": the kinetic diagram is under the free body";
+    }
+}
+
+// In a wide view the kinetic diagram stays beside the free body, both whole.
+TEST_F(FreeBodyViewTest, AWideViewKeepsTheHalvesSideBySide)
+{
+    view->resize(1400, 520);
+    for (const char* name : {"crank", "coupler_plate", "rocker"}) {
+        doc.setSelection({});
+        select(name);
+        const Halves h = halvesDrawnBy(*view);
+        ASSERT_GE(h.kinetic.size(), 2u) << name;
+        const QRectF canvasArea = QRectF(canvas()->geometry()).adjusted(-0.5, -0.5, 0.5, 0.5);
+        EXPECT_TRUE(canvasArea.contains(h.bodyBox | h.kineticBox)) << name;
+        EXPECT_GT(h.kineticBox.left(), h.bodyBox.left() + 0.5 * h.bodyBox.width()) << name;
+        EXPECT_LT(h.kineticBox.top(), h.bodyBox.center().y()) << name << ": beside, not under";
+    }
+}
+
 TEST_F(FreeBodyViewTest, NothingSelectedShowsAMessageInTheMiddle)
 {
     doc.setSelection({});

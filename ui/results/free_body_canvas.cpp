@@ -38,6 +38,7 @@ void FreeBodyCanvas::showFigure(const CompiledMechanism& m, const CycleResult& r
     message_.clear();
     options.zoom = zoom_;
     options.textScale = textScale();
+    options.kinetic = kinetic_;
     figure_ = std::make_unique<FreeBodyPainter>(m, r, std::move(d), std::move(options));
     if (refit || fitted_) fit();
     update();
@@ -58,6 +59,7 @@ void FreeBodyCanvas::relayout()
     FreeBodyPaintOptions options = figure_->options();
     options.zoom = zoom_;
     options.textScale = textScale();
+    options.kinetic = kinetic_;
     figure_ = std::make_unique<FreeBodyPainter>(*mechanism_, *result_, figure_->diagram(), std::move(options));
     keepInView();
     update();
@@ -92,27 +94,31 @@ void FreeBodyCanvas::zoomBy(double factor, QPointF about)
 void FreeBodyCanvas::zoomIn() { zoomBy(kStep, QRectF(rect()).center()); }
 void FreeBodyCanvas::zoomOut() { zoomBy(1 / kStep, QRectF(rect()).center()); }
 
-// Shows the free-body panel (heading, body and loads, scale bars) whole and
-// as large as the widget allows; the title is above it and the equations and
-// the table under it, a drag away. The panel's size is a + b·zoom (its text
-// keeps its size), so the zoom that fits follows from its size at two zooms.
+// Shows both halves (the free body with its heading and scale bars, and the
+// kinetic diagram) whole and as large as the widget allows, the kinetic
+// diagram beside or under the free body as the painter finds best for the
+// widget's shape; the title is above them and the equations and the table
+// under them, a drag away.
 void FreeBodyCanvas::fit()
 {
     if (!figure_) return;
-    const auto panelAt = [&](double zoom) {
-        FreeBodyPaintOptions options = figure_->options();
-        options.zoom = zoom;
-        return FreeBodyPainter(*mechanism_, *result_, figure_->diagram(), options).bodyPanel();
-    };
-    const double pad = 2 * panelAt(1).left();  // the page's margin on either side
-    const QSizeF one = panelAt(1).size(), perZoom = panelAt(2).size() - one, fixed = one - perZoom;
-    const double zoom = std::min((width() - pad - fixed.width()) / perZoom.width(),
-                                 (height() - pad - fixed.height()) / perZoom.height());
-    zoom_ = std::clamp(zoom, kMinZoom, kMaxZoom);
-    const QRectF panel = panelAt(zoom_);
-    origin_ = QRectF(rect()).center() - panel.center();
+    FreeBodyPaintOptions options = figure_->options();
+    options.textScale = textScale();
+    options =
+        FreeBodyPainter::fitted(*mechanism_, *result_, figure_->diagram(), options, QSizeF(size()), kMinZoom, kMaxZoom);
+    zoom_ = options.zoom;
+    kinetic_ = options.kinetic;
     fitted_ = true;
     relayout();
+    // Centred across and down where the halves fit; where they do not, their
+    // start shows (the free body's heading and left edge), the rest a drag away.
+    const QRectF halves = figure_->bodyHalf().united(figure_->kineticHalf());
+    const double margin = halves.left();
+    const auto place = [&](double start, double extent, double view) {
+        return extent + 2 * margin <= view ? (view - extent) / 2 - start : margin - start;
+    };
+    origin_ = {place(halves.left(), halves.width(), width()), place(halves.top(), halves.height(), height())};
+    keepInView();
 }
 
 void FreeBodyCanvas::paintEvent(QPaintEvent*)

@@ -1,9 +1,10 @@
 // The free-body figure as a live drawing in a window: painted by the same
 // painter as the exports, its text and symbols at the interface's font size,
 // the drawing zoomed with the wheel, + and − (about the pointer or the view's
-// centre) and moved by dragging. "Fit" shows the free body whole; the title is
-// above it, the equations and the table under it, a drag away. With no figure
-// it shows a short message in its middle.
+// centre) and moved by dragging. "Fit" shows the free body and the kinetic
+// diagram whole, side by side or one under the other as the view's shape
+// suits; the title is above them, the equations and the table under them, a
+// drag away. With no figure it shows a short message in its middle.
 #pragma once
 
 #include "render/free_body_painter.h"
@@ -61,6 +62,7 @@ private:
     std::unique_ptr<FreeBodyPainter> figure_;
     QString message_;
     double zoom_ = 1.0;
+    KineticPlacement kinetic_ = KineticPlacement::Beside;  // as the last fit found, kept while zooming
     QPointF origin_;
     bool fitted_ = true;  // shown whole and kept so when the widget is resized
     std::optional<QPointF> dragFrom_;
