@@ -17,6 +17,7 @@
 #include <QApplication>
 #include <QCheckBox>
 #include <QDoubleSpinBox>
+#include <QHeaderView>
 #include <QListWidget>
 #include <QPointer>
 #include <QScrollArea>
@@ -159,6 +160,30 @@ TEST(ResultsWidgets, PeakTableRowJumpsToThePeak)
     QTest::mouseClick(table.viewport(), Qt::LeftButton, Qt::NoModifier,
                       table.visualRect(table.model()->index(row, 0)).center());
     EXPECT_EQ(s.analysis->currentStep(), expected);
+}
+
+// Hidden, the table keeps its rows current but does not measure them; shown,
+// every column is as wide as its widest cell.
+TEST(ResultsWidgets, PeakTableFitsItsColumnsWhileShown)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult());
+    PeakTable table(s.analysis.get());
+    table.resize(700, 300);
+    EXPECT_GT(table.rowCount(), 0);
+    EXPECT_EQ(table.horizontalHeader()->sectionResizeMode(PeakTable::kPartColumn), QHeaderView::Fixed);
+    table.show();
+    QCoreApplication::processEvents();
+    for (int c = 0; c < table.columnCount(); ++c) {
+        if (table.isColumnHidden(c)) continue;
+        EXPECT_EQ(table.horizontalHeader()->sectionResizeMode(c), QHeaderView::ResizeToContents);
+        for (int r = 0; r < table.rowCount(); ++r)
+            if (const QTableWidgetItem* cell = table.item(r, c); cell && table.columnSpan(r, c) == 1)
+                EXPECT_GE(table.columnWidth(c), QFontMetrics(cell->font()).horizontalAdvance(cell->text()))
+                    << "row " << r << ", column " << c;
+    }
+    table.hide();
+    EXPECT_EQ(table.horizontalHeader()->sectionResizeMode(PeakTable::kPartColumn), QHeaderView::Fixed);
 }
 
 // With allowables set, each bar's utilisation is the larger of its stress

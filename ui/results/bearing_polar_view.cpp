@@ -115,6 +115,11 @@ std::optional<BearingPolar> BearingPolarView::chosenPolar(const Selection& s)
 void BearingPolarView::refresh()
 {
     figure_.reset();
+    // Behind another tab (where the default layout puts it) the diagram and
+    // its notes, laid out again with the dock they sit in, would cost every
+    // edit for nothing; they are worked out when the view is shown.
+    stale_ = !isVisible();
+    if (stale_) return;
     message_.clear();
     const Selection s = doc_->selection();
     std::optional<BearingPolar> polar;
@@ -149,6 +154,12 @@ QString BearingPolarView::notesText() const
     QString html = QString("<b>%1</b>").arg(figure_->title().toHtmlEscaped());
     for (const QString& p : figure_->paragraphs()) html += QString("<p>%1</p>").arg(p.toHtmlEscaped());
     return html;
+}
+
+void BearingPolarView::showEvent(QShowEvent* event)
+{
+    QWidget::showEvent(event);
+    if (stale_) refresh();
 }
 
 void BearingPolarView::resizeEvent(QResizeEvent* event)

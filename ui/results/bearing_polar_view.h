@@ -4,8 +4,9 @@
 // selected cylinder, at its rod or cap end on the body there — with the
 // scrubbed position pointed out on the curve, and the diagram's notes in the
 // window's font beside it. Redrawn when the selection, the
-// result, the step or the display units change; a message in its place when
-// no joint is selected or nothing is solved.
+// result, the step or the display units change, or when shown after such a
+// change while hidden; a message in its place when no joint is selected or
+// nothing is solved.
 #pragma once
 
 #include "render/bearing_polar_diagram.h"
@@ -47,6 +48,7 @@ protected:
     bool eventFilter(QObject* watched, QEvent* event) override;
     // The notes beside the plot in a wide panel, under it in a tall one.
     void resizeEvent(QResizeEvent* event) override;
+    void showEvent(QShowEvent* event) override;  // brings a view left stale while hidden up to date
 
 private:
     void refresh();
@@ -63,6 +65,7 @@ private:
     QString frameJoint_;  // the joint or cylinder the choice was filled for
     std::unique_ptr<BearingPolarDiagram> figure_;
     QString message_;
+    bool stale_ = false;  // changed while hidden: refreshed when next shown
 };
 
 }  // namespace clevis::ui

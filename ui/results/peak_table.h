@@ -28,6 +28,10 @@ public:
 
     static constexpr int kPartColumn = 0, kUtilisationColumn = 1, kPeakColumn = 2, kWhereColumn = 3, kLargerColumn = 8;
 
+protected:
+    void showEvent(QShowEvent* event) override;
+    void hideEvent(QHideEvent* event) override;
+
 private:
     struct Row {
         QString part;

@@ -79,6 +79,10 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     readout_->installEventFilter(this);
     plot_->installEventFilter(this);
     plot_->setAutoAddPlottableToLegend(false);  // each pane has a legend of its own
+    // Nothing is drawn on the overlay; as a buffer of its own, as tall as all
+    // the panes, it was cleared at every replot and laid over the rest at
+    // every paint for nothing.
+    plot_->layer("overlay")->setMode(QCPLayer::lmLogical);
 
     auto* side = new QWidget(this);
     auto* sideLayout = new QVBoxLayout(side);
