@@ -9,6 +9,7 @@
 #include "ui/document/mechanism_document.h"
 #include "ui/results/drive_scrubber.h"
 #include "ui/results/free_body_view.h"
+#include "ui/results/in_sight.h"
 #include "ui/results/peak_table.h"
 #include "ui/results/plot_stack.h"
 #include "ui/shell/display_units.h"
@@ -16,9 +17,12 @@
 #include <qcustomplot.h>
 #include <QApplication>
 #include <QCheckBox>
+#include <QDockWidget>
 #include <QDoubleSpinBox>
 #include <QHeaderView>
+#include <QLabel>
 #include <QListWidget>
+#include <QMainWindow>
 #include <QPointer>
 #include <QScrollArea>
 #include <QScrollBar>
@@ -182,8 +186,36 @@ TEST(ResultsWidgets, PeakTableFitsItsColumnsWhileShown)
                 EXPECT_GE(table.columnWidth(c), QFontMetrics(cell->font()).horizontalAdvance(cell->text()))
                     << "row " << r << ", column " << c;
     }
-    table.hide();
-    EXPECT_EQ(table.horizontalHeader()->sectionResizeMode(PeakTable::kPartColumn), QHeaderView::Fixed);
+}
+
+// A panel behind another's tab is visible to Qt but out of sight; choosing
+// its tab brings it into sight and calls its watch.
+TEST(ResultsWidgets, APanelBehindATabIsOutOfSightUntilItsTabIsChosen)
+{
+    QMainWindow window;
+    window.resize(600, 400);
+    auto* front = new QDockWidget("front", &window);
+    auto* back = new QDockWidget("back", &window);
+    auto* frontView = new QLabel("front view");
+    auto* backView = new QLabel("back view");
+    int called = 0;
+    new SightWatch(backView, [&called] { ++called; });  // before the view is put in its dock
+    front->setWidget(frontView);
+    back->setWidget(backView);
+    window.addDockWidget(Qt::BottomDockWidgetArea, front);
+    window.tabifyDockWidget(front, back);
+    front->raise();
+    window.show();
+    QCoreApplication::processEvents();
+    EXPECT_TRUE(inSight(frontView));
+    EXPECT_TRUE(backView->isVisible());  // what isVisible() alone would take as seen
+    EXPECT_FALSE(inSight(backView));
+    called = 0;
+    back->raise();
+    QCoreApplication::processEvents();
+    EXPECT_EQ(called, 1);
+    EXPECT_TRUE(inSight(backView));
+    EXPECT_FALSE(inSight(frontView));
 }
 
 // With allowables set, each bar's utilisation is the larger of its stress

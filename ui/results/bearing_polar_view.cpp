@@ -4,6 +4,7 @@
 #include "render/palette.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/document/mechanism_document.h"
+#include "ui/results/in_sight.h"
 #include "ui/shell/display_units.h"
 
 #include <QComboBox>
@@ -64,6 +65,12 @@ BearingPolarView::BearingPolarView(MechanismDocument* doc, AnalysisState* analys
     connect(analysis_, &AnalysisState::resultChanged, this, &BearingPolarView::refresh);
     connect(analysis_, &AnalysisState::currentStepChanged, this, &BearingPolarView::refresh);
     connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, &BearingPolarView::refresh);
+    new SightWatch(this, [this] {
+        if (stale_) {
+            stale_ = false;
+            workOut();
+        }
+    });
     connect(frame_, &QComboBox::currentIndexChanged, this, &BearingPolarView::refresh);
     refresh();
 }
@@ -117,9 +124,14 @@ void BearingPolarView::refresh()
     figure_.reset();
     // Behind another tab (where the default layout puts it) the diagram and
     // its notes, laid out again with the dock they sit in, would cost every
-    // edit for nothing; they are worked out when the view is shown.
-    stale_ = !isVisible();
-    if (stale_) return;
+    // edit for nothing; they are worked out when the view comes into sight.
+    stale_ = !inSight(this);
+    if (!stale_) workOut();
+}
+
+void BearingPolarView::workOut()
+{
+    figure_.reset();
     message_.clear();
     const Selection s = doc_->selection();
     std::optional<BearingPolar> polar;
@@ -154,12 +166,6 @@ QString BearingPolarView::notesText() const
     QString html = QString("<b>%1</b>").arg(figure_->title().toHtmlEscaped());
     for (const QString& p : figure_->paragraphs()) html += QString("<p>%1</p>").arg(p.toHtmlEscaped());
     return html;
-}
-
-void BearingPolarView::showEvent(QShowEvent* event)
-{
-    QWidget::showEvent(event);
-    if (stale_) refresh();
 }
 
 void BearingPolarView::resizeEvent(QResizeEvent* event)

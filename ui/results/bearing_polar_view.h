@@ -4,8 +4,8 @@
 // selected cylinder, at its rod or cap end on the body there — with the
 // scrubbed position pointed out on the curve, and the diagram's notes in the
 // window's font beside it. Redrawn when the selection, the
-// result, the step or the display units change, or when shown after such a
-// change while hidden; a message in its place when no joint is selected or
+// result, the step or the display units change (out of sight: when it comes
+// into sight); a message in its place when no joint is selected or
 // nothing is solved.
 #pragma once
 
@@ -48,10 +48,10 @@ protected:
     bool eventFilter(QObject* watched, QEvent* event) override;
     // The notes beside the plot in a wide panel, under it in a tall one.
     void resizeEvent(QResizeEvent* event) override;
-    void showEvent(QShowEvent* event) override;  // brings a view left stale while hidden up to date
 
 private:
-    void refresh();
+    void refresh();  // now when in sight, else when it comes into sight
+    void workOut();
     void fillFrameChoice(const QString& name, const QStringList& items);
     std::optional<BearingPolar> chosenPolar(const Selection& s);
 
@@ -65,7 +65,7 @@ private:
     QString frameJoint_;  // the joint or cylinder the choice was filled for
     std::unique_ptr<BearingPolarDiagram> figure_;
     QString message_;
-    bool stale_ = false;  // changed while hidden: refreshed when next shown
+    bool stale_ = false;  // changed out of sight: worked out when it comes into sight
 };
 
 }  // namespace clevis::ui

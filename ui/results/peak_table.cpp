@@ -5,6 +5,7 @@
 #include "render/cycle_axis.h"
 #include "render/palette.h"
 #include "ui/analysis/analysis_state.h"
+#include "ui/results/in_sight.h"
 #include "ui/shell/display_units.h"
 
 #include <QHeaderView>
@@ -51,7 +52,7 @@ PeakTable::PeakTable(AnalysisState* analysis, QWidget* parent) : QTableWidget(pa
     setSelectionBehavior(SelectRows);
     setSelectionMode(SingleSelection);
     verticalHeader()->hide();
-    horizontalHeader()->setSectionResizeMode(QHeaderView::Fixed);  // fitted to the contents while shown
+    new SightWatch(this, [this] { fitColumns(true); });
     connect(this, &QTableWidget::cellClicked, this, [this](int row, int) {
         if (const int step = stepOfRow(row); step >= 0) analysis_->setCurrentStep(step);
     });
@@ -60,20 +61,9 @@ PeakTable::PeakTable(AnalysisState* analysis, QWidget* parent) : QTableWidget(pa
     rebuild();
 }
 
-// The columns fit their contents only while the table is seen: fitting
-// measures every cell's text again after each result, a twentieth of an edit
-// at a 20-body chain while the table waits behind the plots' tab. The rows
-// stay current either way.
-void PeakTable::showEvent(QShowEvent* event)
+void PeakTable::fitColumns(bool fit)
 {
-    horizontalHeader()->setSectionResizeMode(QHeaderView::ResizeToContents);
-    QTableWidget::showEvent(event);
-}
-
-void PeakTable::hideEvent(QHideEvent* event)
-{
-    horizontalHeader()->setSectionResizeMode(QHeaderView::Fixed);
-    QTableWidget::hideEvent(event);
+    horizontalHeader()->setSectionResizeMode(fit ? QHeaderView::ResizeToContents : QHeaderView::Fixed);
 }
 
 int PeakTable::stepOfRow(int row) const
@@ -84,6 +74,11 @@ int PeakTable::stepOfRow(int row) const
 
 void PeakTable::rebuild()
 {
+    // The columns fit their contents only while the table is in sight: fitting
+    // measures every cell's text again after each result, a twentieth of an
+    // edit at a 20-body chain while the table waits behind the plots' tab. The
+    // rows stay current either way.
+    fitColumns(inSight(this));
     setRowCount(0);
     if (!analysis_->hasResult()) return;
     const auto& m = analysis_->compiled();

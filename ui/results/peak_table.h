@@ -28,10 +28,6 @@ public:
 
     static constexpr int kPartColumn = 0, kUtilisationColumn = 1, kPeakColumn = 2, kWhereColumn = 3, kLargerColumn = 8;
 
-protected:
-    void showEvent(QShowEvent* event) override;
-    void hideEvent(QHideEvent* event) override;
-
 private:
     struct Row {
         QString part;
@@ -44,6 +40,7 @@ private:
     };
 
     void rebuild();
+    void fitColumns(bool fit);  // to the contents, or left as they are
     Row barRow(int index, const std::function<QString(int)>& where) const;
     void pinFigures(Row& row, int index) const;
     void setUtilisation(Row& row, const std::optional<PartUtilisation>& u) const;
