@@ -218,6 +218,38 @@ TEST(ResultsWidgets, APanelBehindATabIsOutOfSightUntilItsTabIsChosen)
     EXPECT_FALSE(inSight(frontView));
 }
 
+// Plots in a panel behind another's tab are not replotted for a new step;
+// they are when their tab is chosen.
+TEST(ResultsWidgets, PlotsBehindATabAreDrawnWhenTheirTabIsChosen)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult());
+    QMainWindow window;
+    window.resize(900, 600);
+    auto* front = new QDockWidget("front", &window);
+    auto* back = new QDockWidget("plots", &window);
+    front->setWidget(new QLabel("front view"));
+    auto* plots = new PlotStack(s.analysis.get());
+    back->setWidget(plots);
+    window.addDockWidget(Qt::BottomDockWidgetArea, front);
+    window.tabifyDockWidget(front, back);
+    front->raise();
+    window.show();
+    QCoreApplication::processEvents();
+    int replots = 0;
+    QObject::connect(plots->plot(), &QCustomPlot::afterReplot, [&replots] { ++replots; });
+    s.analysis->setCurrentStep(5);
+    QCoreApplication::processEvents();
+    EXPECT_EQ(replots, 0);
+    back->raise();
+    QCoreApplication::processEvents();
+    EXPECT_GE(replots, 1);
+    const int before = replots;
+    s.analysis->setCurrentStep(6);
+    QCoreApplication::processEvents();
+    EXPECT_GT(replots, before);  // in sight: each step drawn
+}
+
 // With allowables set, each bar's utilisation is the larger of its stress
 // against the allowable and its compression against the Euler load, as the
 // sizing computes them; the most loaded part is at the top, the shade deepens

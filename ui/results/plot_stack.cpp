@@ -4,6 +4,7 @@
 #include "core/results/cylinder_ends.h"
 #include "render/palette.h"
 #include "ui/analysis/analysis_state.h"
+#include "ui/results/in_sight.h"
 #include "ui/results/segment_graph.h"
 #include "ui/shell/display_units.h"
 
@@ -123,6 +124,11 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     connect(plot_, &QCustomPlot::mousePress, this, &PlotStack::pointerPressed);
     connect(plot_, &QCustomPlot::mouseMove, this, &PlotStack::pointerMoved);
     connect(scroll_->verticalScrollBar(), &QScrollBar::valueChanged, this, &PlotStack::scrolled);
+    new SightWatch(plot_, [this] {
+        if (!unseen_) return;
+        unseen_ = false;
+        plot_->replot(QCustomPlot::rpQueuedReplot);
+    });
     // Panes out of view are left out of the widget's replots only; every
     // layerable is visible again after it, for exports and hit tests.
     connect(plot_, &QCustomPlot::beforeReplot, this, [this] { replotting_ = true; });
@@ -403,7 +409,7 @@ void PlotStack::moveCursor(int step)
 // large mechanism's hundreds of curves would cost each edit for nothing.
 void PlotStack::replotWhenSeen()
 {
-    unseen_ = !plot_->isVisible();
+    unseen_ = !inSight(plot_);
     if (!unseen_) plot_->replot(QCustomPlot::rpQueuedReplot);
 }
 
@@ -458,7 +464,6 @@ bool PlotStack::eventFilter(QObject* watched, QEvent* event)
         fitLegends();
         replotWhenSeen();
     }
-    if (watched == plot_ && event->type() == QEvent::Show && unseen_) replotWhenSeen();
     if (watched == scroll_->viewport() && event->type() == QEvent::Resize) scrolled();  // a taller view shows more
     return QWidget::eventFilter(watched, event);
 }
