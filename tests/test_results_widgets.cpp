@@ -231,11 +231,15 @@ TEST(ResultsWidgets, PlotsBehindATabAreDrawnWhenTheirTabIsChosen)
     front->setWidget(new QLabel("front view"));
     auto* plots = new PlotStack(s.analysis.get());
     back->setWidget(plots);
+    // As the window arranges its panels: shown first, then tabbed.
     window.addDockWidget(Qt::BottomDockWidgetArea, front);
-    window.tabifyDockWidget(front, back);
-    front->raise();
+    window.addDockWidget(Qt::BottomDockWidgetArea, back);
     window.show();
     QCoreApplication::processEvents();
+    window.tabifyDockWidget(front, back);
+    front->raise();
+    QCoreApplication::processEvents();
+    ASSERT_TRUE(plots->plot()->isVisible());  // to Qt, behind the tab as in front of it
     int replots = 0;
     QObject::connect(plots->plot(), &QCustomPlot::afterReplot, [&replots] { ++replots; });
     s.analysis->setCurrentStep(5);

@@ -39,6 +39,12 @@ BearingPolarView::BearingPolarView(MechanismDocument* doc, AnalysisState* analys
     , split_(new QBoxLayout(QBoxLayout::LeftToRight))
 {
     setObjectName("bearingPolarView");
+    sight_ = new SightWatch(this, [this] {
+        if (stale_) {
+            stale_ = false;
+            workOut();
+        }
+    });
     frame_->setToolTip(tr("Whose frame the load is seen in: either body of the joint"));
     frame_->setSizeAdjustPolicy(QComboBox::AdjustToMinimumContentsLengthWithIcon);
     frame_->setMinimumContentsLength(12);
@@ -65,12 +71,6 @@ BearingPolarView::BearingPolarView(MechanismDocument* doc, AnalysisState* analys
     connect(analysis_, &AnalysisState::resultChanged, this, &BearingPolarView::refresh);
     connect(analysis_, &AnalysisState::currentStepChanged, this, &BearingPolarView::refresh);
     connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, &BearingPolarView::refresh);
-    new SightWatch(this, [this] {
-        if (stale_) {
-            stale_ = false;
-            workOut();
-        }
-    });
     connect(frame_, &QComboBox::currentIndexChanged, this, &BearingPolarView::refresh);
     refresh();
 }
@@ -125,7 +125,7 @@ void BearingPolarView::refresh()
     // Behind another tab (where the default layout puts it) the diagram and
     // its notes, laid out again with the dock they sit in, would cost every
     // edit for nothing; they are worked out when the view comes into sight.
-    stale_ = !inSight(this);
+    stale_ = !sight_->seen();
     if (!stale_) workOut();
 }
 

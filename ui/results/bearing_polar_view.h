@@ -23,6 +23,8 @@ class QScrollArea;
 
 namespace clevis::ui {
 
+class SightWatch;
+
 class AnalysisState;
 class MechanismDocument;
 struct Selection;
@@ -65,7 +67,8 @@ private:
     QString frameJoint_;  // the joint or cylinder the choice was filled for
     std::unique_ptr<BearingPolarDiagram> figure_;
     QString message_;
-    bool stale_ = false;  // changed out of sight: worked out when it comes into sight
+    SightWatch* sight_ = nullptr;  // whether it is seen
+    bool stale_ = false;           // changed out of sight: worked out when it comes into sight
 };
 
 }  // namespace clevis::ui

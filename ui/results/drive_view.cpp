@@ -46,6 +46,12 @@ DriveView::DriveView(MechanismDocument* doc, AnalysisState* analysis, QWidget* p
     , canvas_(new QWidget)
 {
     setObjectName("driveView");
+    sight_ = new SightWatch(this, [this] {
+        if (stale_ && !(analysis_->busy() && analysis_->hasResult())) {  // else the result coming will do
+            stale_ = false;
+            workOut();
+        }
+    });
     choice_->setObjectName("driveChoice");
     choice_->setToolTip(tr("Whose drive: every driver with a gearbox, a motor characteristic or a cylinder"));
     choice_->setSizeAdjustPolicy(QComboBox::AdjustToContents);  // the driver's whole name and kind
@@ -79,12 +85,6 @@ DriveView::DriveView(MechanismDocument* doc, AnalysisState* analysis, QWidget* p
     connect(doc_, &MechanismDocument::selectionChanged, this, &DriveView::selectionMoved);
     connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, &DriveView::showDriver);
     connect(choice_, &QComboBox::currentIndexChanged, this, &DriveView::showDriver);
-    new SightWatch(this, [this] {
-        if (stale_ && !(analysis_->busy() && analysis_->hasResult())) {  // else the result coming will do
-            stale_ = false;
-            workOut();
-        }
-    });
     solved();
 }
 
@@ -104,7 +104,7 @@ QString DriveView::motionText() const { return motion_->text(); }
 void DriveView::solved()
 {
     if (analysis_->busy() && analysis_->hasResult()) return;
-    stale_ = !inSight(this);  // the drive studies cost an edit for nothing while unseen
+    stale_ = !sight_->seen();  // the drive studies cost an edit for nothing while unseen
     if (!stale_) workOut();
 }
 

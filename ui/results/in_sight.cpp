@@ -14,7 +14,14 @@ SightWatch::SightWatch(QWidget* view, std::function<void()> cameIntoSight)
     followDock();
 }
 
-// The dock is found again whenever the view is moved to another parent.
+bool SightWatch::seen()
+{
+    followDock();
+    return inSight(view_);
+}
+
+// The dock is found again whenever the view is moved to another parent, or
+// asked whether it is seen (a widget holding it may have been moved).
 void SightWatch::followDock()
 {
     QWidget* dock = view_->parentWidget();

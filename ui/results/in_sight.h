@@ -17,11 +17,14 @@ namespace clevis::ui {
 bool inSight(const QWidget* view);
 
 // Calls `cameIntoSight` when `view` is shown, or when the tab of the dock it
-// sits in is chosen; the view may be put in its dock after this is set up.
+// sits in is chosen. The view (or a widget holding it) may be put in its dock
+// after this is set up: the dock is looked for again at each seen().
 class SightWatch : public QObject {
     Q_OBJECT
 public:
     SightWatch(QWidget* view, std::function<void()> cameIntoSight);
+
+    bool seen();  // inSight(view), its dock's tab followed from now on
 
 protected:
     bool eventFilter(QObject* watched, QEvent* event) override;

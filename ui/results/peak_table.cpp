@@ -41,6 +41,10 @@ void shadeByUtilisation(QTableWidgetItem& item, double utilisation)
 PeakTable::PeakTable(AnalysisState* analysis, QWidget* parent) : QTableWidget(parent), analysis_(analysis)
 {
     setObjectName("peakTable");
+    sight_ = new SightWatch(this, [this] { fitColumns(true); });
+    connect(this, &QTableWidget::cellClicked, this, [this](int row, int) {
+        if (const int step = stepOfRow(row); step >= 0) analysis_->setCurrentStep(step);
+    });
     setColumnCount(kLargerColumn + 1);
     setHorizontalHeaderLabels({tr("Part"), tr("Utilisation"), tr("Peak"), tr("Where"), tr("RMS"), tr("Mean"),
                                tr("Peak power"), tr("Work per cycle"), tr("Larger, near a toggle")});
@@ -52,10 +56,6 @@ PeakTable::PeakTable(AnalysisState* analysis, QWidget* parent) : QTableWidget(pa
     setSelectionBehavior(SelectRows);
     setSelectionMode(SingleSelection);
     verticalHeader()->hide();
-    new SightWatch(this, [this] { fitColumns(true); });
-    connect(this, &QTableWidget::cellClicked, this, [this](int row, int) {
-        if (const int step = stepOfRow(row); step >= 0) analysis_->setCurrentStep(step);
-    });
     connect(analysis_, &AnalysisState::resultChanged, this, &PeakTable::rebuild);
     connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, &PeakTable::rebuild);
     rebuild();
@@ -78,7 +78,7 @@ void PeakTable::rebuild()
     // measures every cell's text again after each result, a twentieth of an
     // edit at a 20-body chain while the table waits behind the plots' tab. The
     // rows stay current either way.
-    fitColumns(inSight(this));
+    fitColumns(sight_->seen());
     setRowCount(0);
     if (!analysis_->hasResult()) return;
     const auto& m = analysis_->compiled();

@@ -17,6 +17,8 @@
 
 namespace clevis::ui {
 
+class SightWatch;
+
 class AnalysisState;
 
 class PeakTable : public QTableWidget {
@@ -47,6 +49,7 @@ private:
     void addRowItems(const Row& row);
 
     AnalysisState* analysis_;
+    SightWatch* sight_ = nullptr;  // whether it is seen
 };
 
 }  // namespace clevis::ui

@@ -64,6 +64,11 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     , peaks_(new QPlainTextEdit(this))
 {
     setObjectName("plotStack");
+    sight_ = new SightWatch(plot_, [this] {
+        if (!unseen_) return;
+        unseen_ = false;
+        plot_->replot(QCustomPlot::rpQueuedReplot);
+    });
     plot_->setObjectName("cyclePlots");
     plot_->setMouseTracking(true);
     joints_->setToolTip(tr("Tick the joints whose reaction is plotted"));
@@ -124,11 +129,6 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     connect(plot_, &QCustomPlot::mousePress, this, &PlotStack::pointerPressed);
     connect(plot_, &QCustomPlot::mouseMove, this, &PlotStack::pointerMoved);
     connect(scroll_->verticalScrollBar(), &QScrollBar::valueChanged, this, &PlotStack::scrolled);
-    new SightWatch(plot_, [this] {
-        if (!unseen_) return;
-        unseen_ = false;
-        plot_->replot(QCustomPlot::rpQueuedReplot);
-    });
     // Panes out of view are left out of the widget's replots only; every
     // layerable is visible again after it, for exports and hit tests.
     connect(plot_, &QCustomPlot::beforeReplot, this, [this] { replotting_ = true; });
@@ -409,7 +409,7 @@ void PlotStack::moveCursor(int step)
 // large mechanism's hundreds of curves would cost each edit for nothing.
 void PlotStack::replotWhenSeen()
 {
-    unseen_ = !inSight(plot_);
+    unseen_ = !sight_->seen();
     if (!unseen_) plot_->replot(QCustomPlot::rpQueuedReplot);
 }
 
