@@ -516,6 +516,7 @@ struct OpenSample {
         analysis.waitForIdle();
         QCoreApplication::processEvents();
         view.resize(420, 560);
+        view.show();  // a hidden view is worked out only when shown
     }
     ui::MechanismDocument doc;
     ui::AnalysisState analysis{&doc};
@@ -569,6 +570,24 @@ TEST(BearingPolarView, ShowsTheSelectedJointAtTheScrubbedStep)
     analysis.waitForIdle();
     QCoreApplication::processEvents();
     EXPECT_EQ(view.figure(), nullptr);  // nothing selected in the new mechanism
+}
+
+// Hidden (behind another tab), the view works nothing out for a new
+// selection or result; shown, it is the selection's at the current result.
+TEST(BearingPolarView, WorkedOutWhenShownNotWhileHidden)
+{
+    using namespace clevis::ui;
+    OpenSample open(kPress);
+    auto& [doc, analysis, view] = open;
+    ASSERT_TRUE(analysis.hasResult());
+    view.hide();
+    doc.setSelection({Selection::Kind::Joint, "crank_pin", -1});
+    analysis.setCurrentStep(160);
+    EXPECT_EQ(view.figure(), nullptr);
+    view.show();
+    ASSERT_NE(view.figure(), nullptr);
+    EXPECT_EQ(view.figure()->polar().body, findBody(analysis.compiled(), "connecting_rod"));
+    EXPECT_EQ(view.figure()->options().currentStep, 160);
 }
 
 // A cylinder selected: its rod end on the body there, or its cap end (on the

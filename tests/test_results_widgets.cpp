@@ -9,6 +9,7 @@
 #include "ui/document/mechanism_document.h"
 #include "ui/results/drive_scrubber.h"
 #include "ui/results/free_body_view.h"
+#include "ui/results/in_sight.h"
 #include "ui/results/peak_table.h"
 #include "ui/results/plot_stack.h"
 #include "ui/shell/display_units.h"
@@ -16,8 +17,12 @@
 #include <qcustomplot.h>
 #include <QApplication>
 #include <QCheckBox>
+#include <QDockWidget>
 #include <QDoubleSpinBox>
+#include <QHeaderView>
+#include <QLabel>
 #include <QListWidget>
+#include <QMainWindow>
 #include <QPointer>
 #include <QScrollArea>
 #include <QScrollBar>
@@ -159,6 +164,94 @@ TEST(ResultsWidgets, PeakTableRowJumpsToThePeak)
     QTest::mouseClick(table.viewport(), Qt::LeftButton, Qt::NoModifier,
                       table.visualRect(table.model()->index(row, 0)).center());
     EXPECT_EQ(s.analysis->currentStep(), expected);
+}
+
+// Hidden, the table keeps its rows current but does not measure them; shown,
+// every column is as wide as its widest cell.
+TEST(ResultsWidgets, PeakTableFitsItsColumnsWhileShown)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult());
+    PeakTable table(s.analysis.get());
+    table.resize(700, 300);
+    EXPECT_GT(table.rowCount(), 0);
+    EXPECT_EQ(table.horizontalHeader()->sectionResizeMode(PeakTable::kPartColumn), QHeaderView::Fixed);
+    table.show();
+    QCoreApplication::processEvents();
+    for (int c = 0; c < table.columnCount(); ++c) {
+        if (table.isColumnHidden(c)) continue;
+        EXPECT_EQ(table.horizontalHeader()->sectionResizeMode(c), QHeaderView::ResizeToContents);
+        for (int r = 0; r < table.rowCount(); ++r)
+            if (const QTableWidgetItem* cell = table.item(r, c); cell && table.columnSpan(r, c) == 1)
+                EXPECT_GE(table.columnWidth(c), QFontMetrics(cell->font()).horizontalAdvance(cell->text()))
+                    << "row " << r << ", column " << c;
+    }
+}
+
+// A panel behind another's tab is visible to Qt but out of sight; choosing
+// its tab brings it into sight and calls its watch.
+TEST(ResultsWidgets, APanelBehindATabIsOutOfSightUntilItsTabIsChosen)
+{
+    QMainWindow window;
+    window.resize(600, 400);
+    auto* front = new QDockWidget("front", &window);
+    auto* back = new QDockWidget("back", &window);
+    auto* frontView = new QLabel("front view");
+    auto* backView = new QLabel("back view");
+    int called = 0;
+    new SightWatch(backView, [&called] { ++called; });  // before the view is put in its dock
+    front->setWidget(frontView);
+    back->setWidget(backView);
+    window.addDockWidget(Qt::BottomDockWidgetArea, front);
+    window.tabifyDockWidget(front, back);
+    front->raise();
+    window.show();
+    QCoreApplication::processEvents();
+    EXPECT_TRUE(inSight(frontView));
+    EXPECT_TRUE(backView->isVisible());  // what isVisible() alone would take as seen
+    EXPECT_FALSE(inSight(backView));
+    called = 0;
+    back->raise();
+    QCoreApplication::processEvents();
+    EXPECT_EQ(called, 1);
+    EXPECT_TRUE(inSight(backView));
+    EXPECT_FALSE(inSight(frontView));
+}
+
+// Plots in a panel behind another's tab are not replotted for a new step;
+// they are when their tab is chosen.
+TEST(ResultsWidgets, PlotsBehindATabAreDrawnWhenTheirTabIsChosen)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult());
+    QMainWindow window;
+    window.resize(900, 600);
+    auto* front = new QDockWidget("front", &window);
+    auto* back = new QDockWidget("plots", &window);
+    front->setWidget(new QLabel("front view"));
+    auto* plots = new PlotStack(s.analysis.get());
+    back->setWidget(plots);
+    // As the window arranges its panels: shown first, then tabbed.
+    window.addDockWidget(Qt::BottomDockWidgetArea, front);
+    window.addDockWidget(Qt::BottomDockWidgetArea, back);
+    window.show();
+    QCoreApplication::processEvents();
+    window.tabifyDockWidget(front, back);
+    front->raise();
+    QCoreApplication::processEvents();
+    ASSERT_TRUE(plots->plot()->isVisible());  // to Qt, behind the tab as in front of it
+    int replots = 0;
+    QObject::connect(plots->plot(), &QCustomPlot::afterReplot, [&replots] { ++replots; });
+    s.analysis->setCurrentStep(5);
+    QCoreApplication::processEvents();
+    EXPECT_EQ(replots, 0);
+    back->raise();
+    QCoreApplication::processEvents();
+    EXPECT_GE(replots, 1);
+    const int before = replots;
+    s.analysis->setCurrentStep(6);
+    QCoreApplication::processEvents();
+    EXPECT_GT(replots, before);  // in sight: each step drawn
 }
 
 // With allowables set, each bar's utilisation is the larger of its stress

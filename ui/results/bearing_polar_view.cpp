@@ -4,6 +4,7 @@
 #include "render/palette.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/document/mechanism_document.h"
+#include "ui/results/in_sight.h"
 #include "ui/shell/display_units.h"
 
 #include <QComboBox>
@@ -38,6 +39,12 @@ BearingPolarView::BearingPolarView(MechanismDocument* doc, AnalysisState* analys
     , split_(new QBoxLayout(QBoxLayout::LeftToRight))
 {
     setObjectName("bearingPolarView");
+    sight_ = new SightWatch(this, [this] {
+        if (stale_) {
+            stale_ = false;
+            workOut();
+        }
+    });
     frame_->setToolTip(tr("Whose frame the load is seen in: either body of the joint"));
     frame_->setSizeAdjustPolicy(QComboBox::AdjustToMinimumContentsLengthWithIcon);
     frame_->setMinimumContentsLength(12);
@@ -113,6 +120,16 @@ std::optional<BearingPolar> BearingPolarView::chosenPolar(const Selection& s)
 }
 
 void BearingPolarView::refresh()
+{
+    figure_.reset();
+    // Behind another tab (where the default layout puts it) the diagram and
+    // its notes, laid out again with the dock they sit in, would cost every
+    // edit for nothing; they are worked out when the view comes into sight.
+    stale_ = !sight_->seen();
+    if (!stale_) workOut();
+}
+
+void BearingPolarView::workOut()
 {
     figure_.reset();
     message_.clear();

@@ -4,8 +4,9 @@
 // selected cylinder, at its rod or cap end on the body there — with the
 // scrubbed position pointed out on the curve, and the diagram's notes in the
 // window's font beside it. Redrawn when the selection, the
-// result, the step or the display units change; a message in its place when
-// no joint is selected or nothing is solved.
+// result, the step or the display units change (out of sight: when it comes
+// into sight); a message in its place when no joint is selected or
+// nothing is solved.
 #pragma once
 
 #include "render/bearing_polar_diagram.h"
@@ -21,6 +22,8 @@ class QLabel;
 class QScrollArea;
 
 namespace clevis::ui {
+
+class SightWatch;
 
 class AnalysisState;
 class MechanismDocument;
@@ -49,7 +52,8 @@ protected:
     void resizeEvent(QResizeEvent* event) override;
 
 private:
-    void refresh();
+    void refresh();  // now when in sight, else when it comes into sight
+    void workOut();
     void fillFrameChoice(const QString& name, const QStringList& items);
     std::optional<BearingPolar> chosenPolar(const Selection& s);
 
@@ -63,6 +67,8 @@ private:
     QString frameJoint_;  // the joint or cylinder the choice was filled for
     std::unique_ptr<BearingPolarDiagram> figure_;
     QString message_;
+    SightWatch* sight_ = nullptr;  // whether it is seen
+    bool stale_ = false;           // changed out of sight: worked out when it comes into sight
 };
 
 }  // namespace clevis::ui

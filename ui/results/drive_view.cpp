@@ -8,6 +8,7 @@
 #include "render/palette.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/document/mechanism_document.h"
+#include "ui/results/in_sight.h"
 #include "ui/shell/display_units.h"
 
 #include <QComboBox>
@@ -45,6 +46,12 @@ DriveView::DriveView(MechanismDocument* doc, AnalysisState* analysis, QWidget* p
     , canvas_(new QWidget)
 {
     setObjectName("driveView");
+    sight_ = new SightWatch(this, [this] {
+        if (stale_ && !(analysis_->busy() && analysis_->hasResult())) {  // else the result coming will do
+            stale_ = false;
+            workOut();
+        }
+    });
     choice_->setObjectName("driveChoice");
     choice_->setToolTip(tr("Whose drive: every driver with a gearbox, a motor characteristic or a cylinder"));
     choice_->setSizeAdjustPolicy(QComboBox::AdjustToContents);  // the driver's whole name and kind
@@ -97,8 +104,12 @@ QString DriveView::motionText() const { return motion_->text(); }
 void DriveView::solved()
 {
     if (analysis_->busy() && analysis_->hasResult()) return;
-    stale_ = !isVisible();  // the drive studies cost an edit for nothing while unseen
-    if (stale_) return;
+    stale_ = !sight_->seen();  // the drive studies cost an edit for nothing while unseen
+    if (!stale_) workOut();
+}
+
+void DriveView::workOut()
+{
     drive_.reset();
     if (analysis_->hasResult()) {
         const auto& m = analysis_->compiled();
@@ -253,12 +264,6 @@ int DriveView::placeFigures(int across, int width, double scale)
     const int height = int(std::ceil(top + rowHeight));
     canvas_->resize(width, height);
     return height;
-}
-
-void DriveView::showEvent(QShowEvent* event)
-{
-    QWidget::showEvent(event);
-    if (stale_) solved();
 }
 
 bool DriveView::eventFilter(QObject* watched, QEvent* event)

@@ -27,6 +27,8 @@ class QScrollArea;
 
 namespace clevis::ui {
 
+class SightWatch;
+
 class AnalysisState;
 class MechanismDocument;
 
@@ -46,10 +48,10 @@ public:
 
 protected:
     bool eventFilter(QObject* watched, QEvent* event) override;
-    void showEvent(QShowEvent* event) override;
 
 private:
-    void solved();          // a new result: its drive figures
+    void solved();          // a new result: its drive figures, now when in sight
+    void workOut();         // the drive figures of the result on hand
     void selectionMoved();  // the selected driver, when it has drive data
     void showDriver();
     void layOutFigures();
@@ -68,7 +70,8 @@ private:
     std::vector<int> choices_;  // the compiled driver of each entry of choice_
     int driver_ = -1;
     QString message_;
-    bool stale_ = false;  // a result came while hidden: drive_ is an older one's
+    SightWatch* sight_ = nullptr;  // whether it is seen
+    bool stale_ = false;           // a result came out of sight: drive_ is an older one's
     std::vector<std::unique_ptr<Figure>> figures_;
     std::vector<QRectF> places_;  // where each figure is drawn on canvas_
 };

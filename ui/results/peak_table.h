@@ -17,6 +17,8 @@
 
 namespace clevis::ui {
 
+class SightWatch;
+
 class AnalysisState;
 
 class PeakTable : public QTableWidget {
@@ -40,12 +42,14 @@ private:
     };
 
     void rebuild();
+    void fitColumns(bool fit);  // to the contents, or left as they are
     Row barRow(int index, const std::function<QString(int)>& where) const;
     void pinFigures(Row& row, int index) const;
     void setUtilisation(Row& row, const std::optional<PartUtilisation>& u) const;
     void addRowItems(const Row& row);
 
     AnalysisState* analysis_;
+    SightWatch* sight_ = nullptr;  // whether it is seen
 };
 
 }  // namespace clevis::ui

@@ -4,6 +4,7 @@
 #include "core/results/cylinder_ends.h"
 #include "render/palette.h"
 #include "ui/analysis/analysis_state.h"
+#include "ui/results/in_sight.h"
 #include "ui/results/segment_graph.h"
 #include "ui/shell/display_units.h"
 
@@ -63,6 +64,11 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     , peaks_(new QPlainTextEdit(this))
 {
     setObjectName("plotStack");
+    sight_ = new SightWatch(plot_, [this] {
+        if (!unseen_) return;
+        unseen_ = false;
+        plot_->replot(QCustomPlot::rpQueuedReplot);
+    });
     plot_->setObjectName("cyclePlots");
     plot_->setMouseTracking(true);
     joints_->setToolTip(tr("Tick the joints whose reaction is plotted"));
@@ -79,6 +85,10 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     readout_->installEventFilter(this);
     plot_->installEventFilter(this);
     plot_->setAutoAddPlottableToLegend(false);  // each pane has a legend of its own
+    // Nothing is drawn on the overlay; as a buffer of its own, as tall as all
+    // the panes, it was cleared at every replot and laid over the rest at
+    // every paint for nothing.
+    plot_->layer("overlay")->setMode(QCPLayer::lmLogical);
 
     auto* side = new QWidget(this);
     auto* sideLayout = new QVBoxLayout(side);
@@ -399,7 +409,7 @@ void PlotStack::moveCursor(int step)
 // large mechanism's hundreds of curves would cost each edit for nothing.
 void PlotStack::replotWhenSeen()
 {
-    unseen_ = !plot_->isVisible();
+    unseen_ = !sight_->seen();
     if (!unseen_) plot_->replot(QCustomPlot::rpQueuedReplot);
 }
 
@@ -454,7 +464,6 @@ bool PlotStack::eventFilter(QObject* watched, QEvent* event)
         fitLegends();
         replotWhenSeen();
     }
-    if (watched == plot_ && event->type() == QEvent::Show && unseen_) replotWhenSeen();
     if (watched == scroll_->viewport() && event->type() == QEvent::Resize) scrolled();  // a taller view shows more
     return QWidget::eventFilter(watched, event);
 }

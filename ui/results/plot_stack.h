@@ -35,6 +35,8 @@ class QScrollArea;
 
 namespace clevis::ui {
 
+class SightWatch;
+
 class AnalysisState;
 
 class PlotStack : public QWidget {
@@ -101,6 +103,7 @@ private:
     QLabel* readout_;
     QPlainTextEdit* peaks_;
     std::vector<PaneParts> parts_;  // one per pane, in pane order
+    SightWatch* sight_ = nullptr;   // whether it is seen
     bool unseen_ = false;           // changed while hidden: drawn again when next shown
     bool replotting_ = false;       // inside a replot of the widget (not an export's drawing)
 };

@@ -1,0 +1,40 @@
+// Whether a results view can be seen, and a call when it comes into sight.
+// A panel behind another panel's tab stays visible to Qt (isVisible() is
+// true, no hide or show event comes): it is only moved off the window's
+// edge, and its dock reports the tab being chosen. Views that cost an edit
+// only for what is seen ask this instead of isVisible().
+#pragma once
+
+#include <QObject>
+
+#include <functional>
+
+class QWidget;
+
+namespace clevis::ui {
+
+// Shown, and with some of it on the window (not off its edge behind a tab).
+bool inSight(const QWidget* view);
+
+// Calls `cameIntoSight` when `view` is shown, or when the tab of the dock it
+// sits in is chosen. The view (or a widget holding it) may be put in its dock
+// after this is set up: the dock is looked for again at each seen().
+class SightWatch : public QObject {
+    Q_OBJECT
+public:
+    SightWatch(QWidget* view, std::function<void()> cameIntoSight);
+
+    bool seen();  // inSight(view), its dock's tab followed from now on
+
+protected:
+    bool eventFilter(QObject* watched, QEvent* event) override;
+
+private:
+    void followDock();
+
+    QWidget* view_;
+    std::function<void()> cameIntoSight_;
+    QObject* dock_ = nullptr;  // whose tab changes are followed
+};
+
+}  // namespace clevis::ui
