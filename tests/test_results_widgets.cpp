@@ -30,6 +30,7 @@
 #include <QTabWidget>
 #include <QTest>
 #include <QVBoxLayout>
+#include <QWheelEvent>
 
 #include <gtest/gtest.h>
 
@@ -519,4 +520,29 @@ TEST(ResultsWidgets, PanesScrolledIntoViewAreDrawn)
     scroll->verticalScrollBar()->setValue(scroll->verticalScrollBar()->maximum());
     QCoreApplication::processEvents();
     EXPECT_GT(inked(), 50);
+}
+
+// The wheel over the plots scrolls the stack of panes, as over any list.
+TEST(ResultsWidgets, TheWheelOverThePlotsScrollsTheStack)
+{
+    Session s;
+    ASSERT_TRUE(s.analysis->hasResult());
+    QWidget window;
+    auto* plots = new PlotStack(s.analysis.get());
+    (new QVBoxLayout(&window))->addWidget(plots);
+    window.resize(900, 360);
+    window.show();
+    QCoreApplication::processEvents();
+    QScrollArea* scroll = nullptr;
+    for (auto* area : plots->findChildren<QScrollArea*>())
+        if (area->widget() == plots->plot()) scroll = area;
+    ASSERT_NE(scroll, nullptr);
+    ASSERT_GT(scroll->verticalScrollBar()->maximum(), 0);
+    ASSERT_EQ(scroll->verticalScrollBar()->value(), 0);
+
+    const QPointF at = QRectF(plots->plot()->axisRect(0)->rect()).center();  // over the first pane's curves
+    QWheelEvent down(at, plots->plot()->mapToGlobal(at), QPoint(), QPoint(0, -120), Qt::NoButton, Qt::NoModifier,
+                     Qt::NoScrollPhase, false);
+    QCoreApplication::sendEvent(plots->plot(), &down);
+    EXPECT_GT(scroll->verticalScrollBar()->value(), 0);
 }

@@ -10,6 +10,7 @@
 
 #include <qcustomplot.h>
 #include <QCheckBox>
+#include <QCoreApplication>
 #include <QEvent>
 #include <QHBoxLayout>
 #include <QLabel>
@@ -465,6 +466,12 @@ bool PlotStack::eventFilter(QObject* watched, QEvent* event)
         replotWhenSeen();
     }
     if (watched == scroll_->viewport() && event->type() == QEvent::Resize) scrolled();  // a taller view shows more
+    // The plots take the wheel and do nothing with it (they neither zoom nor
+    // pan): it scrolls the stack, as over any other list of panes.
+    if (watched == plot_ && event->type() == QEvent::Wheel) {
+        QCoreApplication::sendEvent(scroll_->verticalScrollBar(), event);
+        return true;
+    }
     return QWidget::eventFilter(watched, event);
 }
 
