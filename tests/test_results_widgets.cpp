@@ -57,6 +57,25 @@ struct Session {
     }
 };
 
+// A plot stack alone in `window`, shown at `size`.
+PlotStack* showPlots(QWidget& window, Session& s, QSize size)
+{
+    auto* plots = new PlotStack(s.analysis.get());
+    (new QVBoxLayout(&window))->addWidget(plots);
+    window.resize(size);
+    window.show();
+    QCoreApplication::processEvents();
+    return plots;
+}
+
+// The scroll area the stack's panes scroll in.
+QScrollArea* paneScroll(PlotStack* plots)
+{
+    for (auto* area : plots->findChildren<QScrollArea*>())
+        if (area->widget() == plots->plot()) return area;
+    return nullptr;
+}
+
 TEST(ResultsWidgets, ScrubberMovesThePlotCursorAndTheStep)
 {
     Session s;
@@ -404,11 +423,7 @@ TEST(ResultsWidgets, HoverReadoutNeverWidensTheWindow)
     Session s;
     ASSERT_TRUE(s.analysis->hasResult());
     QWidget window;
-    auto* plots = new PlotStack(s.analysis.get());
-    (new QVBoxLayout(&window))->addWidget(plots);
-    window.resize(900, 700);
-    window.show();
-    QCoreApplication::processEvents();
+    PlotStack* plots = showPlots(window, s, {900, 700});
     plots->findChild<QCheckBox*>()->setChecked(true);  // Fx, Fy too: the longest readout
     plots->plot()->replot();
     QTest::mouseMove(plots->plot(), plots->pixelForStep(100));
@@ -496,11 +511,7 @@ TEST(ResultsWidgets, PanesScrolledIntoViewAreDrawn)
     Session s;
     ASSERT_TRUE(s.analysis->hasResult());
     QWidget window;
-    auto* plots = new PlotStack(s.analysis.get());
-    (new QVBoxLayout(&window))->addWidget(plots);
-    window.resize(900, 360);
-    window.show();
-    QCoreApplication::processEvents();
+    PlotStack* plots = showPlots(window, s, {900, 360});
     plots->plot()->replot();
     const auto inked = [&] {  // pixels of a curve (coloured or dark) inside the last pane's axes
         const QImage image = plots->plot()->grab().toImage();
@@ -512,9 +523,7 @@ TEST(ResultsWidgets, PanesScrolledIntoViewAreDrawn)
         return n;
     };
     EXPECT_EQ(inked(), 0);  // out of view: left out
-    QScrollArea* scroll = nullptr;
-    for (auto* area : plots->findChildren<QScrollArea*>())
-        if (area->widget() == plots->plot()) scroll = area;
+    QScrollArea* scroll = paneScroll(plots);
     ASSERT_NE(scroll, nullptr);
     ASSERT_GT(scroll->verticalScrollBar()->maximum(), 0);
     scroll->verticalScrollBar()->setValue(scroll->verticalScrollBar()->maximum());
@@ -528,14 +537,8 @@ TEST(ResultsWidgets, TheWheelOverThePlotsScrollsTheStack)
     Session s;
     ASSERT_TRUE(s.analysis->hasResult());
     QWidget window;
-    auto* plots = new PlotStack(s.analysis.get());
-    (new QVBoxLayout(&window))->addWidget(plots);
-    window.resize(900, 360);
-    window.show();
-    QCoreApplication::processEvents();
-    QScrollArea* scroll = nullptr;
-    for (auto* area : plots->findChildren<QScrollArea*>())
-        if (area->widget() == plots->plot()) scroll = area;
+    PlotStack* plots = showPlots(window, s, {900, 360});
+    QScrollArea* scroll = paneScroll(plots);
     ASSERT_NE(scroll, nullptr);
     ASSERT_GT(scroll->verticalScrollBar()->maximum(), 0);
     ASSERT_EQ(scroll->verticalScrollBar()->value(), 0);
