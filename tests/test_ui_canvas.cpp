@@ -388,6 +388,23 @@ TEST_F(CanvasTest, EachMoveOfADragPaintsTheCanvasAndBuildsThePinsFormOnce)
     QTest::mouseRelease(window.canvas(), Qt::LeftButton, {}, at(0.19, 0.12));
 }
 
+// A plain pin's form shows nothing solved, so neither a new shown step nor a
+// new result builds it again; it is built for the edit itself.
+TEST_F(CanvasTest, APlainPinsFormIsNotBuiltAgainForTheShownStep)
+{
+    drawFourBar();
+    useTool("Select");
+    window.analysis()->waitForIdle();
+    click(0.17, 0.12);
+    ASSERT_EQ(window.document()->selection().name.toStdString(), "pin 4");
+    QCoreApplication::processEvents();
+    auto* editor = window.findChild<PropertyEditor*>();
+    EventCount forms(editor->viewport(), QEvent::ChildAdded);  // each form built is a new page in the editor
+    window.analysis()->setCurrentStep(window.analysis()->currentStep() + 10);
+    QCoreApplication::processEvents();
+    EXPECT_EQ(forms.count, 0);
+}
+
 // The labels are kept between paints while the drawing and the view stay as
 // they are (a paint for a selection places none). After a pin is moved the
 // canvas must look exactly as one that never placed a label before the edit.

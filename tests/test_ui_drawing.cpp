@@ -130,6 +130,24 @@ TEST_F(DrawingTest, ACompoundPinListsItsBodiesAndTheForceOfEachJoint)
         ASSERT_NE(row, nullptr) << "no force listed for " << j.name;
         EXPECT_TRUE(row->text().endsWith(DisplayUnits::instance().forceSymbol())) << row->text().toStdString();
     }
+
+    // Another shown step: the forces listed are that step's.
+    const int step = window.analysis()->currentStep() + 90;
+    window.analysis()->setCurrentStep(step);
+    QCoreApplication::processEvents();
+    const auto& compiled = window.analysis()->compiled().joints;
+    for (int i : jointsAtB()) {
+        const Joint& j = mechanism().joints[i];
+        const auto k = std::find_if(compiled.begin(), compiled.end(), [&](const auto& c) { return c.name == j.name; });
+        ASSERT_NE(k, compiled.end());
+        const double force =
+            window.analysis()->result().steps[std::size_t(step)].joints[k - compiled.begin()].force.norm();
+        auto* row = editor->findChild<QLabel*>(QStringLiteral("force:") + QString::fromStdString(j.name));
+        ASSERT_NE(row, nullptr);
+        EXPECT_TRUE(
+            row->text().endsWith(DisplayUnits::instance().formatForce(force).replace(QLatin1Char(' '), QChar(0x00A0))))
+            << row->text().toStdString();
+    }
 }
 
 // The dyad's link joins the six-bar at B by a second joint on one of the

@@ -22,21 +22,29 @@ PropertyEditor::PropertyEditor(MechanismDocument* doc, AnalysisState* analysis, 
     setObjectName(QStringLiteral("propertyEditor"));
     setWidgetResizable(true);
     setFrameShape(QFrame::NoFrame);
-    // A joint's form shows the forces at the shown position, so it is built
-    // again when a result comes. After an edit a solve is always under way
-    // (the analysis hears of the edit first) and its result follows: the form
-    // is built then, once, not also for the edit (a drag edits at every move).
-    const auto jointShown = [this] {
-        if (doc_->selection().kind == Selection::Kind::Joint) scheduleRebuild();
+    // The form of a joint at a compound pin shows the forces at the shown
+    // position, so it is built again when a result comes. After an edit a
+    // solve is always under way (the analysis hears of the edit first) and its
+    // result follows: that form is built then, once, not also for the edit (a
+    // drag edits at every move). Every other form is built for the edit, while
+    // the solve runs, and shows the new values at once.
+    const auto showsResults = [this] {
+        const Selection s = doc_->selection();
+        const Mechanism& m = doc_->mechanism();
+        const int j = s.kind == Selection::Kind::Joint ? jointIndex(m, s.name.toStdString()) : -1;
+        return j >= 0 && jointFormShowsResults(m, m.joints[std::size_t(j)]);
     };
-    connect(doc_, &MechanismDocument::mechanismChanged, this, [this] {
-        if (!analysis_ || !analysis_->busy() || doc_->selection().kind != Selection::Kind::Joint) scheduleRebuild();
+    const auto resultShown = [this, showsResults] {
+        if (showsResults()) scheduleRebuild();
+    };
+    connect(doc_, &MechanismDocument::mechanismChanged, this, [this, showsResults] {
+        if (!analysis_ || !analysis_->busy() || !showsResults()) scheduleRebuild();
     });
     connect(doc_, &MechanismDocument::selectionChanged, this, &PropertyEditor::scheduleRebuild);
     connect(&DisplayUnits::instance(), &DisplayUnits::changed, this, &PropertyEditor::scheduleRebuild);
     if (analysis_) {
-        connect(analysis_, &AnalysisState::resultChanged, this, jointShown);
-        connect(analysis_, &AnalysisState::currentStepChanged, this, jointShown);
+        connect(analysis_, &AnalysisState::resultChanged, this, resultShown);
+        connect(analysis_, &AnalysisState::currentStepChanged, this, resultShown);
     }
     rebuildNow();
 }

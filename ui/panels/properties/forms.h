@@ -11,6 +11,9 @@ void bodyForm(FormBuilder& f, const Mechanism& m, const Body& body);
 class AnalysisState;
 // With a solved analysis, a compound pin's form lists each of its joints' forces.
 void jointForm(FormBuilder& f, const Mechanism& m, const Joint& joint, const AnalysisState* analysis);
+// Whether the joint's form shows solved values (the forces at a compound
+// pin), and so must be built again when a result or the shown step changes.
+bool jointFormShowsResults(const Mechanism& m, const Joint& joint);
 void driverForm(FormBuilder& f, const Mechanism& m, const Driver& driver);
 void loadForm(FormBuilder& f, const Mechanism& m, int loadIndex);
 

@@ -30,8 +30,8 @@ int choiceIndex(const QStringList& choices, const std::string& body)
 // between them at the position shown (the reaction of results.h).
 void compoundPinRows(FormBuilder& f, const Mechanism& m, const Joint& joint, const AnalysisState* analysis)
 {
+    if (!jointFormShowsResults(m, joint)) return;
     const std::vector<int> stack = pinsAt(m, joint.at);
-    if (stack.size() < 2) return;
     QStringList bodies;
     for (const auto& b : bodiesOf(m, stack)) bodies << QString::fromStdString(b);
     f.heading(QObject::tr("Compound pin"));
@@ -59,6 +59,11 @@ void compoundPinRows(FormBuilder& f, const Mechanism& m, const Joint& joint, con
 }
 
 }  // namespace
+
+bool jointFormShowsResults(const Mechanism& m, const Joint& joint)
+{
+    return joint.type == JointType::Pin && pinsAt(m, joint.at).size() >= 2;
+}
 
 void jointForm(FormBuilder& f, const Mechanism& m, const Joint& joint, const AnalysisState* analysis)
 {
