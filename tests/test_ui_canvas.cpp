@@ -397,11 +397,12 @@ TEST_F(CanvasTest, APlainPinsFormIsNotBuiltAgainForTheShownStep)
     window.analysis()->waitForIdle();
     click(0.17, 0.12);
     ASSERT_EQ(window.document()->selection().name.toStdString(), "pin 4");
-    QCoreApplication::processEvents();
+    window.analysis()->waitForIdle();
+    QTest::qWait(50);  // the form for the selection is built
     auto* editor = window.findChild<PropertyEditor*>();
     EventCount forms(editor->viewport(), QEvent::ChildAdded);  // each form built is a new page in the editor
     window.analysis()->setCurrentStep(window.analysis()->currentStep() + 10);
-    QCoreApplication::processEvents();
+    QTest::qWait(50);
     EXPECT_EQ(forms.count, 0);
 }
 
