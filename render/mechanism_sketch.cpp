@@ -106,8 +106,11 @@ void MechanismSketch::paint(QPainter& p, const QRectF& target) const
         const auto& d = mechanism_.drivers[i];
         if (d.type != DriverType::Rotary) continue;
         const QPointF at = frame.map(pointPosition(q, mechanism_.joints[d.joint].point[1]));
-        // Turning the way the driver turns at the drawn step.
-        const bool counterClockwise = i >= step_.driveRate.size() || step_.driveRate[i] >= 0;
+        // Turning the way the driven body turns at the drawn step: the
+        // driver's rate is the second body's against the first, the other way
+        // round when the second is the frame.
+        const bool onFirst = mechanism_.joints[d.joint].body[1] == kGround;
+        const bool counterClockwise = i >= step_.driveRate.size() || (step_.driveRate[i] >= 0) != onFirst;
         drawCoupleArrow(p, at, 14, counterClockwise, figureArrow(palette::driver(), 1.4));
     }
     labels.paint(p, palette::ink(), palette::paper());

@@ -495,4 +495,12 @@ TEST(MotorSymbol, LeavesItsCrankFreeToPickAndTurnsWithTheMotor)
     ASSERT_TRUE(backwards);
     EXPECT_LT(backwards->spanDeg, 0);
     EXPECT_EQ(partAt(m, view, middle), (Selection{Selection::Kind::Body, "link 1", -1}));
+
+    // The driver turns the joint's second body against its first: with the
+    // crank first and the frame second, the crank turns the other way.
+    std::swap(m.joints[0].bodies[0], m.joints[0].bodies[1]);
+    ASSERT_EQ(m.joints[0].bodies[1], kGroundName);
+    const auto crankFirst = motorArc(m, view, m.drivers[0]);
+    ASSERT_TRUE(crankFirst);
+    EXPECT_GT(crankFirst->spanDeg, 0);
 }

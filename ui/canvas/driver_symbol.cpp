@@ -44,9 +44,11 @@ std::optional<MotorArc> motorArc(const Mechanism& m, const ViewTransform& view, 
         if (!outline.empty()) mean /= double(outline.size());
         if (QLineF(centre, mean).length() > 1) gapCentre = screenAngleDeg(mean - centre);
     }
-    // The arc starts at one side of the gap and goes round to the other.
+    // The arc starts at one side of the gap and goes round to the other. The
+    // driver turns the second body against the first; drawn on the first
+    // (the second being ground), the turn is the other way.
     const double halfGap = (360 - kArcSpanDeg) / 2;
-    if (turnsClockwise(d)) return MotorArc{centre, gapCentre - halfGap, -kArcSpanDeg};
+    if (turnsClockwise(d) != (driven == joint.bodies[0])) return MotorArc{centre, gapCentre - halfGap, -kArcSpanDeg};
     return MotorArc{centre, gapCentre + halfGap, kArcSpanDeg};
 }
 

@@ -15,7 +15,7 @@ namespace clevis::ui {
 // A rotary driver: an arc arrow of kMotorRadius round its pin, 250° of the
 // circle. Its gap faces the driven body (the joint's second body, or its
 // first when the second is ground), so the symbol does not cover a short
-// crank, and it turns the way the driver first turns.
+// crank, and it turns the way the driven body first turns.
 // Angles in degrees, counter-clockwise as the reader sees the screen.
 struct MotorArc {
     QPointF centre;
