@@ -310,6 +310,24 @@ TEST(DriveView, HiddenItWaitsAndShownItHasTheNewestResult)
     EXPECT_EQ(w.view->figures().size(), 3u);
 }
 
+// Never seen before its result came (a panel behind another's tab at start),
+// shown, it has that result's figures.
+TEST(DriveView, FirstShownAfterItsResultItHasItsFigures)
+{
+    MechanismDocument doc;
+    doc.reset(sample("tipping_bed"), {});
+    AnalysisState analysis(&doc);
+    DriveView view(&doc, &analysis);
+    view.resize(1200, 300);
+    analysis.waitForIdle();
+    QCoreApplication::processEvents();
+    EXPECT_TRUE(view.figures().empty());  // not worked out while unseen
+    view.show();
+    QCoreApplication::processEvents();
+    EXPECT_GE(view.driver(), 0) << view.message().toStdString();
+    EXPECT_EQ(view.figures().size(), 2u);
+}
+
 // ---- the report ----
 
 QString reportText(const Mechanism& doc)

@@ -208,8 +208,8 @@ TEST(ResultsWidgets, PeakTableFitsItsColumnsWhileShown)
     }
 }
 
-// A panel behind another's tab is visible to Qt but out of sight; choosing
-// its tab brings it into sight and calls its watch.
+// A panel behind another's tab is visible to Qt but out of sight; work asked
+// of it waits, and choosing its tab brings it into sight and does the work.
 TEST(ResultsWidgets, APanelBehindATabIsOutOfSightUntilItsTabIsChosen)
 {
     QMainWindow window;
@@ -219,7 +219,10 @@ TEST(ResultsWidgets, APanelBehindATabIsOutOfSightUntilItsTabIsChosen)
     auto* frontView = new QLabel("front view");
     auto* backView = new QLabel("back view");
     int called = 0;
-    new SightWatch(backView, [&called] { ++called; });  // before the view is put in its dock
+    auto* watch = new SightWatch(backView, [&called] {  // before the view is put in its dock
+        ++called;
+        return true;
+    });
     front->setWidget(frontView);
     back->setWidget(backView);
     window.addDockWidget(Qt::BottomDockWidgetArea, front);
@@ -231,9 +234,13 @@ TEST(ResultsWidgets, APanelBehindATabIsOutOfSightUntilItsTabIsChosen)
     EXPECT_TRUE(backView->isVisible());  // what isVisible() alone would take as seen
     EXPECT_FALSE(inSight(backView));
     called = 0;
+    watch->request();
+    EXPECT_EQ(called, 0);
+    EXPECT_TRUE(watch->pending());
     back->raise();
     QCoreApplication::processEvents();
     EXPECT_EQ(called, 1);
+    EXPECT_FALSE(watch->pending());
     EXPECT_TRUE(inSight(backView));
     EXPECT_FALSE(inSight(frontView));
 }

@@ -40,10 +40,8 @@ BearingPolarView::BearingPolarView(MechanismDocument* doc, AnalysisState* analys
 {
     setObjectName("bearingPolarView");
     sight_ = new SightWatch(this, [this] {
-        if (stale_) {
-            stale_ = false;
-            workOut();
-        }
+        workOut();
+        return true;
     });
     frame_->setToolTip(tr("Whose frame the load is seen in: either body of the joint"));
     frame_->setSizeAdjustPolicy(QComboBox::AdjustToMinimumContentsLengthWithIcon);
@@ -125,8 +123,7 @@ void BearingPolarView::refresh()
     // Behind another tab (where the default layout puts it) the diagram and
     // its notes, laid out again with the dock they sit in, would cost every
     // edit for nothing; they are worked out when the view comes into sight.
-    stale_ = !sight_->seen();
-    if (!stale_) workOut();
+    sight_->request();
 }
 
 void BearingPolarView::workOut()

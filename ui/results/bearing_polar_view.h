@@ -67,8 +67,7 @@ private:
     QString frameJoint_;  // the joint or cylinder the choice was filled for
     std::unique_ptr<BearingPolarDiagram> figure_;
     QString message_;
-    SightWatch* sight_ = nullptr;  // whether it is seen
-    bool stale_ = false;           // changed out of sight: worked out when it comes into sight
+    SightWatch* sight_ = nullptr;  // works the diagram out when it is seen
 };
 
 }  // namespace clevis::ui

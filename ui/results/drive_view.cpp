@@ -47,10 +47,9 @@ DriveView::DriveView(MechanismDocument* doc, AnalysisState* analysis, QWidget* p
 {
     setObjectName("driveView");
     sight_ = new SightWatch(this, [this] {
-        if (stale_ && !(analysis_->busy() && analysis_->hasResult())) {  // else the result coming will do
-            stale_ = false;
-            workOut();
-        }
+        if (analysis_->busy() && analysis_->hasResult()) return false;  // the result coming will do it
+        workOut();
+        return true;
     });
     choice_->setObjectName("driveChoice");
     choice_->setToolTip(tr("Whose drive: every driver with a gearbox, a motor characteristic or a cylinder"));
@@ -104,8 +103,7 @@ QString DriveView::motionText() const { return motion_->text(); }
 void DriveView::solved()
 {
     if (analysis_->busy() && analysis_->hasResult()) return;
-    stale_ = !sight_->seen();  // the drive studies cost an edit for nothing while unseen
-    if (!stale_) workOut();
+    sight_->request();  // the drive studies cost an edit for nothing while unseen
 }
 
 void DriveView::workOut()
@@ -143,14 +141,14 @@ void DriveView::workOut()
 void DriveView::selectionMoved()
 {
     const Selection s = doc_->selection();
-    if (stale_ || s.kind != Selection::Kind::Driver || !analysis_->hasResult()) return;
+    if (sight_->pending() || s.kind != Selection::Kind::Driver || !analysis_->hasResult()) return;
     for (std::size_t i = 0; i < choices_.size(); ++i)
         if (qs(analysis_->compiled().drivers[choices_[i]].name) == s.name) choice_->setCurrentIndex(int(i));
 }
 
 void DriveView::showDriver()
 {
-    if (stale_) return;  // drive_ is not this result's: all is redone when shown
+    if (sight_->pending()) return;  // drive_ is not this result's: all is redone when shown
     driver_ = -1;
     message_.clear();
     if (analysis_->nothingDrawn()) message_ = tr("Draw a mechanism: what its motor or cylinder must give shows here.");
@@ -268,7 +266,7 @@ int DriveView::placeFigures(int across, int width, double scale)
 
 bool DriveView::eventFilter(QObject* watched, QEvent* event)
 {
-    if (watched == scroll_->viewport() && event->type() == QEvent::Resize && !stale_) layOutFigures();
+    if (watched == scroll_->viewport() && event->type() == QEvent::Resize && !sight_->pending()) layOutFigures();
     if (watched != canvas_ || event->type() != QEvent::Paint) return QWidget::eventFilter(watched, event);
     QPainter p(canvas_);
     p.fillRect(canvas_->rect(), palette::paper());

@@ -70,8 +70,7 @@ private:
     std::vector<int> choices_;  // the compiled driver of each entry of choice_
     int driver_ = -1;
     QString message_;
-    SightWatch* sight_ = nullptr;  // whether it is seen
-    bool stale_ = false;           // a result came out of sight: drive_ is an older one's
+    SightWatch* sight_ = nullptr;  // works a result out when it is seen; pending: drive_ is an older one's
     std::vector<std::unique_ptr<Figure>> figures_;
     std::vector<QRectF> places_;  // where each figure is drawn on canvas_
 };

@@ -7,8 +7,7 @@ namespace clevis::ui {
 
 bool inSight(const QWidget* view) { return view->isVisible() && !view->visibleRegion().isEmpty(); }
 
-SightWatch::SightWatch(QWidget* view, std::function<void()> cameIntoSight)
-    : QObject(view), view_(view), cameIntoSight_(std::move(cameIntoSight))
+SightWatch::SightWatch(QWidget* view, std::function<bool()> work) : QObject(view), view_(view), work_(std::move(work))
 {
     view_->installEventFilter(this);
     followDock();
@@ -18,6 +17,26 @@ bool SightWatch::seen()
 {
     followDock();
     return inSight(view_);
+}
+
+void SightWatch::request()
+{
+    if (seen()) doWork();
+    else pending_ = true;
+}
+
+bool SightWatch::pending() const { return pending_; }
+
+void SightWatch::cameIntoSight()
+{
+    if (pending_) doWork();
+}
+
+// Not pending while it runs: the work may ask pending() of its own view.
+void SightWatch::doWork()
+{
+    pending_ = false;
+    pending_ = !work_();
 }
 
 // The dock is found again whenever the view is moved to another parent, or
@@ -31,14 +50,14 @@ void SightWatch::followDock()
     dock_ = dock;
     if (dock_)
         connect(static_cast<QDockWidget*>(dock), &QDockWidget::visibilityChanged, this, [this](bool seen) {
-            if (seen) cameIntoSight_();
+            if (seen) cameIntoSight();
         });
 }
 
 bool SightWatch::eventFilter(QObject* watched, QEvent* event)
 {
     if (watched == view_ && event->type() == QEvent::ParentChange) followDock();
-    if (watched == view_ && event->type() == QEvent::Show) cameIntoSight_();
+    if (watched == view_ && event->type() == QEvent::Show) cameIntoSight();
     return QObject::eventFilter(watched, event);
 }
 

@@ -41,7 +41,10 @@ void shadeByUtilisation(QTableWidgetItem& item, double utilisation)
 PeakTable::PeakTable(AnalysisState* analysis, QWidget* parent) : QTableWidget(parent), analysis_(analysis)
 {
     setObjectName("peakTable");
-    sight_ = new SightWatch(this, [this] { fitColumns(true); });
+    sight_ = new SightWatch(this, [this] {
+        fitColumns(true);
+        return true;
+    });
     connect(this, &QTableWidget::cellClicked, this, [this](int row, int) {
         if (const int step = stepOfRow(row); step >= 0) analysis_->setCurrentStep(step);
     });
@@ -78,7 +81,8 @@ void PeakTable::rebuild()
     // measures every cell's text again after each result, a twentieth of an
     // edit at a 20-body chain while the table waits behind the plots' tab. The
     // rows stay current either way.
-    fitColumns(sight_->seen());
+    fitColumns(false);
+    sight_->request();
     setRowCount(0);
     if (!analysis_->hasResult()) return;
     const auto& m = analysis_->compiled();

@@ -66,9 +66,8 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
 {
     setObjectName("plotStack");
     sight_ = new SightWatch(plot_, [this] {
-        if (!unseen_) return;
-        unseen_ = false;
         plot_->replot(QCustomPlot::rpQueuedReplot);
+        return true;
     });
     plot_->setObjectName("cyclePlots");
     plot_->setMouseTracking(true);
@@ -408,11 +407,7 @@ void PlotStack::moveCursor(int step)
 
 // Behind another tab the plots are not drawn for every result or step: a
 // large mechanism's hundreds of curves would cost each edit for nothing.
-void PlotStack::replotWhenSeen()
-{
-    unseen_ = !sight_->seen();
-    if (!unseen_) plot_->replot(QCustomPlot::rpQueuedReplot);
-}
+void PlotStack::replotWhenSeen() { sight_->request(); }
 
 double PlotStack::cursorX() const
 {

@@ -103,8 +103,7 @@ private:
     QLabel* readout_;
     QPlainTextEdit* peaks_;
     std::vector<PaneParts> parts_;  // one per pane, in pane order
-    SightWatch* sight_ = nullptr;   // whether it is seen
-    bool unseen_ = false;           // changed while hidden: drawn again when next shown
+    SightWatch* sight_ = nullptr;   // replots when seen: changes while hidden are drawn when next shown
     bool replotting_ = false;       // inside a replot of the widget (not an export's drawing)
 };
 
