@@ -139,7 +139,23 @@ Exit status:
   2  wrong command line
 )";
 
-const char* const kInternalLoadsHelp =
+// The position options and the bar's sign convention read the same in every
+// command that takes them.
+const std::string kPositionOptions = R"(  --at-deg A       where the first rotary driver is at A degrees (modulo
+                   360°), solved at exactly that angle (the first time in the
+                   cycle it is reached)
+  --at-t T         at time T s, solved at exactly that time
+  --at-peak PIN    at the solved position where that pin's load peaks: a
+                   joint, or a cylinder's end (DRIVER.cap, DRIVER.rod)
+)";
+
+const std::string kBarSigns = R"(
+Signs (docs/method.md, "Internal loads along a bar"): N > 0 is tension. Look
+along the bar from its first end to its second with its left side up: V and M
+then have the beam-table signs (V > 0 at a left-hand support, M > 0 sagging).
+)";
+
+const std::string kInternalLoadsHelp =
     R"(Usage: clevis-cli internal-loads FILE --body NAME (--at-deg A | --at-t T | --at-peak PIN)
                  [--stations N] [--steps N] [--json OUT] [--csv OUT]
 
@@ -152,24 +168,16 @@ joints; the output says how its mass is laid along it.
 
 Options:
   --body NAME      the bar
-  --at-deg A       where the first rotary driver is at A degrees (modulo
-                   360°), solved at exactly that angle (the first time in the
-                   cycle it is reached)
-  --at-t T         at time T s, solved at exactly that time
-  --at-peak PIN    at the solved position where that pin's load peaks: a
-                   joint, or a cylinder's end (DRIVER.cap, DRIVER.rod)
-  --stations N     stations along the bar, N >= 2, both ends included
+)" + kPositionOptions +
+    R"(  --stations N     stations along the bar, N >= 2, both ends included
                    (default 21); the envelope uses the same stations
   --steps N        intervals over the cycle (default: the file's setting)
   --json OUT       write the stations and the envelope as JSON to OUT
   --csv OUT        write the stations as CSV to OUT (s_m, axial_N, shear_N,
                    moment_Nm)
   (--name=value works too)
-
-Signs (docs/method.md, "Internal loads along a bar"): N > 0 is tension. Look
-along the bar from its first end to its second with its left side up: V and M
-then have the beam-table signs (V > 0 at a left-hand support, M > 0 sagging).
-
+)" + kBarSigns +
+    R"(
 Exit status:
   0  done, and the cycle is trustworthy
   1  FILE cannot be read or analysed; NAME is not a body or not a bar; the
@@ -179,7 +187,7 @@ Exit status:
   2  wrong command line
 )";
 
-const char* const kBarDiagramHelp =
+const std::string kBarDiagramHelp =
     R"(Usage: clevis-cli bar-diagram FILE --body NAME (--at-deg A | --at-t T | --at-peak PIN)
                  --out F.svg|F.pdf|F.png [--steps N]
 
@@ -193,19 +201,12 @@ in N·m. A bar is a body with a section, or a body with exactly two joints.
 
 Options:
   --body NAME      the bar
-  --at-deg A       where the first rotary driver is at A degrees (modulo
-                   360°), solved at exactly that angle
-  --at-t T         at time T s, solved at exactly that time
-  --at-peak PIN    at the solved position where that pin's load peaks: a
-                   joint, or a cylinder's end (DRIVER.cap, DRIVER.rod)
-  --out F          the drawing, as SVG, PDF or PNG by its suffix
+)" + kPositionOptions +
+    R"(  --out F          the drawing, as SVG, PDF or PNG by its suffix
   --steps N        intervals over the cycle (default: the file's setting)
   (--name=value works too)
-
-Signs (docs/method.md, "Internal loads along a bar"): N > 0 is tension. Look
-along the bar from its first end to its second with its left side up: V and M
-then have the beam-table signs (V > 0 at a left-hand support, M > 0 sagging).
-
+)" + kBarSigns +
+    R"(
 Exit status:
   0  done, and the cycle is trustworthy
   1  FILE cannot be read or analysed; NAME is not a body or not a bar (the
@@ -216,7 +217,7 @@ Exit status:
      or a position the solved cycle does not reach
 )";
 
-const char* const kFbdHelp =
+const std::string kFbdHelp =
     R"(Usage: clevis-cli fbd FILE --body NAME (--at-deg A | --at-t T | --at-peak PIN)
                  --out F.svg|F.pdf|F.png [--steps N] [--dalembert]
 
@@ -226,12 +227,8 @@ the sums ΣFx, ΣFy and ΣM_G beside m·aGx, m·aGy and I_G·α.
 
 Options:
   --body NAME      the body
-  --at-deg A       where the first rotary driver is at A degrees (modulo
-                   360°), solved at exactly that angle
-  --at-t T         at time T s, solved at exactly that time
-  --at-peak PIN    at the solved position where that pin's load peaks: a
-                   joint, or a cylinder's end (DRIVER.cap, DRIVER.rod)
-  --out F          the drawing, as SVG, PDF or PNG by its suffix
+)" + kPositionOptions +
+    R"(  --out F          the drawing, as SVG, PDF or PNG by its suffix
   --steps N        intervals over the cycle (default: the file's setting)
   --dalembert      also draw the inertia force and couple on the body
   (--name=value works too)
