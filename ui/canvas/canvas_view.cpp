@@ -184,6 +184,7 @@ void CanvasView::paintEvent(QPaintEvent*)
     paintedProblems_ = analysis_->offendingItems();
     PaintContext c{p, view_, shown, doc_->selection(), paintedProblems_, labels};
     c.labelsPlaced = placed;
+    c.shapes = &bodyShapes_;
     paintSketch(c);
     tool_->paintPreview(p);
 }

@@ -4,6 +4,7 @@
 #pragma once
 
 #include "render/label_placer.h"
+#include "ui/canvas/paint/body_shapes.h"
 #include "ui/canvas/tools/tool.h"
 #include "ui/canvas/view_transform.h"
 
@@ -81,6 +82,7 @@ private:
     // The grid as last drawn, and the view it was drawn for (empty: draw again).
     QPixmap grid_;
     ViewTransform gridView_;
+    BodyShapes bodyShapes_;        // each body's shape as last drawn, with the screen points it was drawn round
     QStringList paintedProblems_;  // the parts the last paint drew as blamed
     Selection haloed_;             // the part drawn with the selection's halo
     // The labels as last placed, and the drawing, view, size and font they were placed for (none: place again).

@@ -6,6 +6,7 @@
 
 #include "core/model/mechanism.h"
 #include "render/label_placer.h"
+#include "ui/canvas/paint/body_shapes.h"
 #include "ui/canvas/view_transform.h"
 #include "ui/document/mechanism_document.h"
 
@@ -26,6 +27,9 @@ struct PaintContext {
     // Each body's outline (bodyOutline), in the order of mechanism.bodies;
     // paintSketch finds them once for all the painters.
     std::vector<std::vector<Vec2>> outlines{};
+    // The bodies' shapes as kept by an earlier paint (the canvas's); none:
+    // paintSketch makes them for this paint alone.
+    BodyShapes* shapes = nullptr;
     // The labels were placed by an earlier paint of this same drawing at
     // this same view: they are painted as placed then, not placed again.
     bool labelsPlaced = false;

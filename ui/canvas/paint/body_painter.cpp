@@ -1,21 +1,9 @@
-#include "render/body_outline.h"
 #include "render/palette.h"
+#include "ui/canvas/paint/body_shapes.h"
 #include "ui/canvas/sketch_painter.h"
-#include "ui/canvas/sketch_style.h"
-
-#include <QPainterPath>
 
 namespace clevis::ui {
 namespace {
-
-// A bar is the segment between its pins widened into a rounded slot; a plate
-// is its pins' hull with the same rounded margin, so pins never sit on an edge.
-QPainterPath bodyShape(const std::vector<Vec2>& outline, const ViewTransform& view)
-{
-    std::vector<QPointF> screen;
-    for (const Vec2& p : outline) screen.push_back(view.toScreen(p));
-    return bodyOutlinePath(screen, style::kBarWidth / 2);
-}
 
 // A body's name sits by the middle of its outline, pushed off a bar to the
 // side facing up the screen.
@@ -42,15 +30,16 @@ void paintBodies(PaintContext& c)
         const Body& body = c.mechanism.bodies[b];
         const std::vector<Vec2>& outline = c.outlines[b];
         if (outline.empty()) continue;
-        const QPainterPath shape = bodyShape(outline, c.view);
-        p.setBrush(Qt::NoBrush);
-        p.setPen(c.haloPen(Selection::Kind::Body, body.name, 1.6));
-        p.drawPath(shape);
+        std::vector<QPointF> screen;
+        for (const Vec2& at : outline) screen.push_back(c.view.toScreen(at));
+        const BodyShapes::Shape& shape = c.shapes->shape(b, screen);
+        const QPen halo = c.haloPen(Selection::Kind::Body, body.name, BodyShapes::edgePen().widthF());
+        if (halo.style() != Qt::NoPen) p.strokePath(shape.outline, halo);
         QColor fill = palette::linkFill();
         if (outline.size() >= 3) fill.setAlpha(200);  // plates overlap the bars under them
-        p.setBrush(fill);
-        p.setPen(QPen(palette::link(), 1.6));
-        p.drawPath(shape);
+        p.fillPath(shape.outline, fill);
+        // The edge's stroke as kept: the same pixels as drawing the outline with its pen.
+        p.fillPath(shape.edge, BodyShapes::edgePen().brush());
         labelBody(c, body, outline);
     }
     p.restore();

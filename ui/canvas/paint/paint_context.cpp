@@ -74,6 +74,10 @@ void paintSketch(PaintContext& c)
 {
     c.outlines.clear();
     for (const Body& b : c.mechanism.bodies) c.outlines.push_back(bodyOutline(c.mechanism, b.name));
+    BodyShapes ownShapes;  // for this paint alone when none are kept
+    BodyShapes* const kept = c.shapes;
+    if (!kept) c.shapes = &ownShapes;
+    c.shapes->keepFirst(c.mechanism.bodies.size());
     if (!c.labelsPlaced) addObstacles(c);
     paintBodies(c);
     paintLoads(c);
@@ -81,6 +85,7 @@ void paintSketch(PaintContext& c)
     paintDrivers(c);
     paintMasses(c);
     c.labels.paint(c.painter, palette::ink(), palette::paper());
+    c.shapes = kept;
 }
 
 void drawZigZag(QPainter& p, const QPointF& a, const QPointF& b)
