@@ -434,11 +434,12 @@ QSizeF FreeBodyPainter::size() const
 FreeBodyPaintOptions FreeBodyPainter::fitted(const CompiledMechanism& m, const CycleResult& r, const FreeBodyDiagram& d,
                                              FreeBodyPaintOptions options, QSizeF room, double minZoom, double maxZoom)
 {
-    // How far the halves at `zoom`, with the page's margin round them, overfill the room across and down.
+    // How far the halves at `zoom`, with the gap round them, overfill the room across and down.
+    const double gap = fittedGap(options.textScale);
     const auto overfill = [&](double zoom) {
         options.zoom = zoom;
         const FreeBodyPainter f(m, r, d, options);
-        const QSizeF halves = f.bodyHalf().united(f.kineticHalf()).size() + 2 * QSizeF(f.margin(), f.margin());
+        const QSizeF halves = f.bodyHalf().united(f.kineticHalf()).size() + 2 * QSizeF(gap, gap);
         return QSizeF(halves.width() / room.width(), halves.height() / room.height());
     };
     const auto fits = [](QSizeF over) { return over.width() <= 1 && over.height() <= 1; };

@@ -56,8 +56,8 @@ public:
     QRectF kineticHalf() const;
 
     // The zoom (from `minZoom` to `maxZoom`) and placement that show both
-    // halves whole and largest in `room` (output units, the page's margin
-    // left round them), the text at `options.textScale`: the kinetic diagram
+    // halves whole and largest in `room` (output units, `fittedGap` left
+    // round them), the text at `options.textScale`: the kinetic diagram
     // goes under the free body when that shows the drawing larger. The zoom
     // stays where the labels have room (two fifths of the text's scale); where the
     // halves do not fit there, the placement that fits across (else the one
@@ -67,6 +67,10 @@ public:
     // The smallest text's size on the page (the scale bars'), in page units: a
     // view whose text must be at least its font's size scales text by their ratio.
     static constexpr double kSmallestText = 10;
+    // What a view keeps round the fitted halves, in output units: its own
+    // edges set them apart, so a few pixels rather than the page's margin
+    // (which cost a laptop's short pane the kinetic diagram).
+    static double fittedGap(double textScale) { return 5 * textScale; }
 
 private:
     // A force bar and a drawing-scale bar, in one row or, where the panel is
