@@ -12,6 +12,8 @@
 #include "render/figure_export.h"
 #include "render/render_units.h"
 
+#include <QFont>
+
 namespace clevis::ui {
 
 // Where the kinetic diagram goes: beside the free body (the page's own layout)
@@ -83,6 +85,15 @@ private:
         bool twoRows = false;
     };
 
+    // The text's widths and captions that do not change with the zoom.
+    struct MeasuredText {
+        double body = 0, kinetic = 0;  // the least widths of the panels for their labels and headings
+        QFont scaleFont;
+        double forceValue = 0;  // the force bar's length in newtons
+        QString forceCaption;
+        double forceCaptionWidth = 0;
+    };
+
     double t(double pageUnits) const { return pageUnits * options_.textScale; }
     double g(double pageUnits) const { return pageUnits * options_.zoom; }
     double margin() const;
@@ -91,7 +102,8 @@ private:
     ScaleBars scaleBars(double panelWidth) const;
     QRectF kineticPanel() const;
     QRectF drawingOf(const QRectF& panel) const;
-    void layOut();
+    void measureText();
+    void layOut();  // at options_.zoom and options_.kinetic, from the measured text
     void paintTitle(QPainter& p) const;
     void paintScaleBars(QPainter& p) const;
     void paintEquals(QPainter& p) const;
@@ -106,6 +118,7 @@ private:
     // Worked out once from the diagram and the options.
     std::vector<BodyPointOf> points_;
     double largest_ = 0, pagePerNewton_ = 0, coupleFloor_ = 0;
+    MeasuredText text_;
     QRectF bodyPanel_, kineticPanel_;
     ScaleBars scaleBars_;
 };
