@@ -89,7 +89,7 @@ void arrangePanels(QMainWindow* window)
 
     // A free-body diagram is read with its kinetic diagram beside it, both
     // whole. At their least readable zoom the two need a view of about 46 ×
-    // 22 em side by side (the samples' bodies: 520–550 × 264 px at a 12 px
+    // 22 em side by side (the samples' bodies: 515–545 × 264 px at a 12 px
     // font; longer labels up to 54 em across), or 25 × 46 em one under the
     // other, more height than a 768 px screen has. So across, the diagram gets
     // 47 em (a third of a wide window) and the canvas keeps at least 40 em;
