@@ -191,13 +191,12 @@ public:
     // `arrowRoom`: kept free round the body; `s`: the symbols' scale.
     BodyPanel(const std::vector<BodyPointOf>& points, const Vec2& cg, const std::vector<Vec2>& extra,
               const QRectF& drawing, double arrowRoom, double pagePerNewton, double s)
-        : points_(points), cg_(cg), pagePerNewton_(pagePerNewton), s_(s)
+        : points_(points)
+        , cg_(cg)
+        , pagePerNewton_(pagePerNewton)
+        , s_(s)
+        , frame_(frameFor(points, cg, extra, drawing, arrowRoom))
     {
-        std::vector<Vec2> fitPoints;
-        for (const auto& p : points) fitPoints.push_back(p.at);
-        fitPoints.push_back(cg);
-        fitPoints.insert(fitPoints.end(), extra.begin(), extra.end());
-        frame_ = WorldFrame::fit(fitPoints, drawing, arrowRoom);
         std::vector<QPointF> page;
         std::vector<SlideBlock> blocks;
         for (const auto& p : points) {
@@ -207,6 +206,17 @@ public:
         }
         outline_ = bodyOutlinePath(page, kHalfWidth * s, blocks);
         centroid_ = outline_.boundingRect().center();
+    }
+
+    // Where the body is drawn in `drawing`: all its points and `extra` in view, `arrowRoom` round them.
+    static WorldFrame frameFor(const std::vector<BodyPointOf>& points, const Vec2& cg, const std::vector<Vec2>& extra,
+                               const QRectF& drawing, double arrowRoom)
+    {
+        std::vector<Vec2> fitPoints;
+        for (const auto& p : points) fitPoints.push_back(p.at);
+        fitPoints.push_back(cg);
+        fitPoints.insert(fitPoints.end(), extra.begin(), extra.end());
+        return WorldFrame::fit(fitPoints, drawing, arrowRoom);
     }
 
     const WorldFrame& frame() const { return frame_; }
@@ -328,11 +338,32 @@ FreeBodyPainter::FreeBodyPainter(const CompiledMechanism& m, const CycleResult& 
     points_ = bodyPointsAt(mechanism_, result_.steps[diagram_.step], diagram_.body);
     largest_ = diagram_.inertiaForce().norm();
     for (const auto& item : diagram_.items) largest_ = std::max(largest_, item.force.norm());
-    pagePerNewton_ = largest_ > 0 ? g(kMaxArrow) / largest_ : 0.0;
     double bodySize = 0;
     for (const auto& a : points_) bodySize = std::max(bodySize, (a.at - diagram_.cg).norm());
     coupleFloor_ = kNegligibleCouple * std::max(1.0, largest_ * std::max(bodySize, 0.01));
+    measureText();
     layOut();
+}
+
+// The widths of the text that sets the panels' least widths: they follow the
+// text's scale and not the zoom, so a fit measures them once.
+void FreeBodyPainter::measureText()
+{
+    const double s = options_.textScale;
+    const QFont labels = font(t(kLabelPixels));
+    const QFontMetricsF heading(headingFont(s));
+    text_.body =
+        std::max(widestLabel(bodyMarks(diagram_, options_.units, coupleFloor_, options_.dAlembert, s), labels) +
+                     t(kLabelClearance),
+                 heading.horizontalAdvance(bodyHeading(options_.dAlembert)));
+    const std::vector<Mark> kinetic = kineticMarks(diagram_, options_.units, coupleFloor_, s);
+    text_.kinetic =
+        std::max({widestLabel(kinetic, labels) + t(kLabelClearance), heading.horizontalAdvance(kKineticHeading),
+                  kinetic.empty() ? QFontMetricsF(labels).horizontalAdvance(kNoInertia) : 0.0});
+    text_.scaleFont = font(t(kSmallestText));
+    text_.forceValue = niceBelow(largest_ * 0.6);
+    text_.forceCaption = "force scale " + options_.units.force(text_.forceValue);
+    text_.forceCaptionWidth = QFontMetricsF(text_.scaleFont).horizontalAdvance(text_.forceCaption);
 }
 
 double FreeBodyPainter::margin() const { return t(kMargin); }
@@ -354,33 +385,30 @@ QRectF FreeBodyPainter::drawingOf(const QRectF& panel) const
 // free body, in one row where the panel is wide enough for it.
 FreeBodyPainter::ScaleBars FreeBodyPainter::scaleBars(double panelWidth) const
 {
-    const QFontMetricsF metrics(font(t(kSmallestText)));
-    const auto barWidth = [&](double length, const QString& caption) {
-        return length + t(6) + metrics.horizontalAdvance(caption);
-    };
+    const auto barWidth = [&](double length, double captionWidth) { return length + t(6) + captionWidth; };
     ScaleBars b;
     double next = t(260);  // where the drawing's bar starts, clear of the force bar
     if (pagePerNewton_ > 0) {
-        const double value = niceBelow(largest_ * 0.6);
-        b.forceLength = value * pagePerNewton_;
-        b.forceCaption = "force scale " + options_.units.force(value);
-        next = std::max(next, barWidth(b.forceLength, b.forceCaption) + t(20));
+        b.forceLength = text_.forceValue * pagePerNewton_;
+        b.forceCaption = text_.forceCaption;
+        next = std::max(next, barWidth(b.forceLength, text_.forceCaptionWidth) + t(20));
     }
     const QRectF drawing(0, 0, panelWidth, g(kDrawingHeight));
     const double worldScale =
-        BodyPanel(points_, diagram_.cg, loadPoints(diagram_), drawing, g(kArrowRoom), pagePerNewton_, 1).frame().scale;
+        BodyPanel::frameFor(points_, diagram_.cg, loadPoints(diagram_), drawing, g(kArrowRoom)).scale;
     const double metres = niceBelow(t(90) / worldScale);
     b.drawingLength = metres * worldScale;
     b.drawingCaption = "drawing scale " + options_.units.length(metres);
+    const double drawingCaptionWidth = QFontMetricsF(text_.scaleFont).horizontalAdvance(b.drawingCaption);
     b.forceFrom = {0, -t(14)};
     b.drawingFrom = {next, -t(14)};
-    b.width = next + barWidth(b.drawingLength, b.drawingCaption);
+    b.width = next + barWidth(b.drawingLength, drawingCaptionWidth);
     if (b.width > panelWidth) {
         b.twoRows = true;
         b.forceFrom = {0, -t(14 + kSecondScaleRow)};
         b.drawingFrom = {0, -t(14)};
-        b.width = std::max(b.forceLength > 0 ? barWidth(b.forceLength, b.forceCaption) : 0.0,
-                           barWidth(b.drawingLength, b.drawingCaption));
+        b.width = std::max(b.forceLength > 0 ? barWidth(b.forceLength, text_.forceCaptionWidth) : 0.0,
+                           barWidth(b.drawingLength, drawingCaptionWidth));
     }
     return b;
 }
@@ -389,22 +417,14 @@ FreeBodyPainter::ScaleBars FreeBodyPainter::scaleBars(double panelWidth) const
 // their widest labels at the text's size.
 void FreeBodyPainter::layOut()
 {
-    const double s = options_.textScale;
-    const QFont labels = font(t(kLabelPixels));
-    const QFontMetricsF heading(headingFont(s));
+    pagePerNewton_ = largest_ > 0 ? g(kMaxArrow) / largest_ : 0.0;
     const double top = margin() + t(kTitleHeight);
-    const double bodyWidth =
-        std::max({g(options_.dAlembert ? kContentWidth : kBodyPanelWidth),
-                  widestLabel(bodyMarks(diagram_, options_.units, coupleFloor_, options_.dAlembert, s), labels) +
-                      t(kLabelClearance),
-                  heading.horizontalAdvance(bodyHeading(options_.dAlembert))});
+    const double bodyWidth = std::max(g(options_.dAlembert ? kContentWidth : kBodyPanelWidth), text_.body);
     scaleBars_ = scaleBars(bodyWidth);
     bodyPanel_ = QRectF(margin(), top, bodyWidth, t(kHeadingBand) + g(kDrawingHeight) + scaleBand());
+    kineticPanel_ = QRectF();
     if (options_.dAlembert) return;
-    const std::vector<Mark> kinetic = kineticMarks(diagram_, options_.units, coupleFloor_, s);
-    const double kineticWidth =
-        std::max({widestLabel(kinetic, labels) + t(kLabelClearance), heading.horizontalAdvance(kKineticHeading),
-                  kinetic.empty() ? QFontMetricsF(labels).horizontalAdvance(kNoInertia) : 0.0});
+    const double kineticWidth = text_.kinetic;
     if (options_.kinetic == KineticPlacement::Beside)
         kineticPanel_ = QRectF(bodyPanel_.right() + t(kEqualsGap), top, std::max(g(kKineticWidth), kineticWidth),
                                bodyPanel_.height());
@@ -434,11 +454,16 @@ QSizeF FreeBodyPainter::size() const
 FreeBodyPaintOptions FreeBodyPainter::fitted(const CompiledMechanism& m, const CycleResult& r, const FreeBodyDiagram& d,
                                              FreeBodyPaintOptions options, QSizeF room, double minZoom, double maxZoom)
 {
-    // How far the halves at `zoom`, with the page's margin round them, overfill the room across and down.
+    // How far the halves at `zoom`, with the gap round them, overfill the room
+    // across and down: one painter, its text measured once, laid out again at
+    // each zoom tried.
+    const double gap = fittedGap(options.textScale);
+    FreeBodyPainter f(m, r, d, options);
     const auto overfill = [&](double zoom) {
         options.zoom = zoom;
-        const FreeBodyPainter f(m, r, d, options);
-        const QSizeF halves = f.bodyHalf().united(f.kineticHalf()).size() + 2 * QSizeF(f.margin(), f.margin());
+        f.options_ = options;
+        f.layOut();
+        const QSizeF halves = f.bodyHalf().united(f.kineticHalf()).size() + 2 * QSizeF(gap, gap);
         return QSizeF(halves.width() / room.width(), halves.height() / room.height());
     };
     const auto fits = [](QSizeF over) { return over.width() <= 1 && over.height() <= 1; };

@@ -12,6 +12,8 @@
 #include "render/figure_export.h"
 #include "render/render_units.h"
 
+#include <QFont>
+
 namespace clevis::ui {
 
 // Where the kinetic diagram goes: beside the free body (the page's own layout)
@@ -56,8 +58,8 @@ public:
     QRectF kineticHalf() const;
 
     // The zoom (from `minZoom` to `maxZoom`) and placement that show both
-    // halves whole and largest in `room` (output units, the page's margin
-    // left round them), the text at `options.textScale`: the kinetic diagram
+    // halves whole and largest in `room` (output units, `fittedGap` left
+    // round them), the text at `options.textScale`: the kinetic diagram
     // goes under the free body when that shows the drawing larger. The zoom
     // stays where the labels have room (two fifths of the text's scale); where the
     // halves do not fit there, the placement that fits across (else the one
@@ -67,6 +69,10 @@ public:
     // The smallest text's size on the page (the scale bars'), in page units: a
     // view whose text must be at least its font's size scales text by their ratio.
     static constexpr double kSmallestText = 10;
+    // What a view keeps round the fitted halves, in output units: its own
+    // edges set them apart, so a few pixels rather than the page's margin
+    // (which cost a laptop's short pane the kinetic diagram).
+    static double fittedGap(double textScale) { return 5 * textScale; }
 
 private:
     // A force bar and a drawing-scale bar, in one row or, where the panel is
@@ -79,6 +85,15 @@ private:
         bool twoRows = false;
     };
 
+    // The text's widths and captions that do not change with the zoom.
+    struct MeasuredText {
+        double body = 0, kinetic = 0;  // the least widths of the panels for their labels and headings
+        QFont scaleFont;
+        double forceValue = 0;  // the force bar's length in newtons
+        QString forceCaption;
+        double forceCaptionWidth = 0;
+    };
+
     double t(double pageUnits) const { return pageUnits * options_.textScale; }
     double g(double pageUnits) const { return pageUnits * options_.zoom; }
     double margin() const;
@@ -87,7 +102,8 @@ private:
     ScaleBars scaleBars(double panelWidth) const;
     QRectF kineticPanel() const;
     QRectF drawingOf(const QRectF& panel) const;
-    void layOut();
+    void measureText();
+    void layOut();  // at options_.zoom and options_.kinetic, from the measured text
     void paintTitle(QPainter& p) const;
     void paintScaleBars(QPainter& p) const;
     void paintEquals(QPainter& p) const;
@@ -102,6 +118,7 @@ private:
     // Worked out once from the diagram and the options.
     std::vector<BodyPointOf> points_;
     double largest_ = 0, pagePerNewton_ = 0, coupleFloor_ = 0;
+    MeasuredText text_;
     QRectF bodyPanel_, kineticPanel_;
     ScaleBars scaleBars_;
 };

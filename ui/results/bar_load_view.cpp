@@ -11,14 +11,16 @@
 #include <QLabel>
 #include <QPainter>
 #include <QScrollArea>
+#include <QScrollBar>
 #include <QVBoxLayout>
+#include <QWheelEvent>
 
 #include <algorithm>
 
 namespace clevis::ui {
 namespace {
 
-constexpr double kNarrowest = 300;  // the diagram's least width; a narrower view scrolls
+constexpr double kNarrowest = 300;  // the diagram's least width; only a narrower view scrolls sideways
 
 // Paints the view's diagram at one page unit a pixel.
 class DiagramCanvas final : public QWidget {
@@ -47,21 +49,35 @@ BarLoadView::BarLoadView(MechanismDocument* doc, AnalysisState* analysis, QWidge
     , analysis_(analysis)
     , scroll_(new QScrollArea(this))
     , message_(new QLabel(this))
+    , stresses_(new QLabel)
+    , table_(new QScrollArea)
     , sizing_(new QLabel)
 {
     setObjectName("barLoadView");
     auto* page = new QWidget;
     canvas_ = new DiagramCanvas(figure_, page);
-    sizing_->setParent(page);
-    sizing_->setWordWrap(false);  // a table in columns: the view scrolls sideways rather than break its lines
+    stresses_->setWordWrap(true);
+    stresses_->setTextInteractionFlags(Qt::TextSelectableByMouse);
+    stresses_->setContentsMargins(4, 4, 4, 0);
+    sizing_->setWordWrap(false);  // a table in columns: it scrolls sideways rather than break its lines
     sizing_->setTextInteractionFlags(Qt::TextSelectableByMouse);
     sizing_->setFont(QFontDatabase::systemFont(QFontDatabase::FixedFont));
     sizing_->setContentsMargins(4, 4, 4, 4);
+    // Sideways on its own, so the diagram and the text above stay in view
+    // while its columns are read; down, the page scrolls.
+    table_->setObjectName("sizingTable");
+    table_->setWidget(sizing_);
+    table_->setWidgetResizable(true);
+    table_->setFrameShape(QFrame::NoFrame);
+    table_->setVerticalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
+    table_->viewport()->installEventFilter(this);
     auto* pageLayout = new QVBoxLayout(page);
     pageLayout->setContentsMargins(0, 0, 0, 0);
     pageLayout->addWidget(canvas_);
-    pageLayout->addWidget(sizing_);
+    pageLayout->addWidget(stresses_);
+    pageLayout->addWidget(table_);
     pageLayout->addStretch(1);
+    scroll_->setObjectName("barLoadPage");
     scroll_->setWidget(page);
     scroll_->setWidgetResizable(true);
     scroll_->setFrameShape(QFrame::NoFrame);
@@ -87,7 +103,11 @@ BarLoadView::BarLoadView(MechanismDocument* doc, AnalysisState* analysis, QWidge
 BarLoadView::~BarLoadView() = default;
 
 QString BarLoadView::message() const { return figure_ ? QString() : message_->text(); }
-QString BarLoadView::sizingText() const { return figure_ ? sizing_->text() : QString(); }
+QString BarLoadView::sizingText() const
+{
+    if (!figure_) return {};
+    return stresses_->text().isEmpty() ? sizing_->text() : stresses_->text() + "\n\n" + sizing_->text();
+}
 
 // A result is published only when no edit came after its request, so the
 // document is the mechanism it solved: bars and sizing are found from both.
@@ -136,6 +156,7 @@ void BarLoadView::refresh()
         message_->setText(note);
         message_->show();
         scroll_->hide();
+        stresses_->clear();
         sizing_->clear();
         return;
     }
@@ -146,7 +167,10 @@ void BarLoadView::refresh()
     for (const auto& b : analysis_->sizing().bars)
         if (b.body == bar->body)
             cycleText = clevis::sizingText(analysis_->compiled(), analysis_->result(), {{b}, {}, {}});
-    sizing_->setText(stepStresses(*bar) + (bar->area > 0 ? "\n\n" : "") + QString::fromStdString(cycleText));
+    stresses_->setText(stepStresses(*bar));
+    stresses_->setVisible(!stresses_->text().isEmpty());
+    sizing_->setText(QString::fromStdString(cycleText));
+    fitTable();
     message_->hide();
     scroll_->show();
 }
@@ -162,8 +186,22 @@ void BarLoadView::layOutFigure()
     canvas_->update();
 }
 
+void BarLoadView::fitTable()
+{
+    const bool across = sizing_->sizeHint().width() > table_->viewport()->width();
+    table_->setFixedHeight(sizing_->sizeHint().height() +
+                           (across ? table_->horizontalScrollBar()->sizeHint().height() : 0));
+}
+
 bool BarLoadView::eventFilter(QObject* watched, QEvent* event)
 {
+    if (watched == table_->viewport() && event->type() == QEvent::Resize) fitTable();
+    // The table scrolls only sideways: the wheel turned down over it scrolls the page.
+    if (watched == table_->viewport() && event->type() == QEvent::Wheel) {
+        const QPoint turn = static_cast<QWheelEvent*>(event)->angleDelta();
+        if (std::abs(turn.y()) > std::abs(turn.x()))
+            return QCoreApplication::sendEvent(scroll_->verticalScrollBar(), event);
+    }
     if (watched == scroll_->viewport() && event->type() == QEvent::Resize && figure_ &&
         std::abs(std::max(kNarrowest, double(scroll_->viewport()->width())) - figure_->size().width()) > 1)
         layOutFigure();

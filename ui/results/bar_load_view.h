@@ -1,7 +1,9 @@
 // The internal loads of the selected link at the scrubbed position: the N/V/M
 // diagram along it over its band over the cycle (the exports' painter, laid
-// out at the view's width), and under it the bar's stresses at this position
-// and its sizing over the cycle (utilisation, buckling), or why there is none.
+// out at the view's width, so it never scrolls sideways), and under it the
+// bar's stresses at this position (wrapped to the width) and its sizing over
+// the cycle (utilisation, buckling), a table whose columns scroll sideways on
+// their own where they are wider than the view, or why there is none.
 // The band and the sizing are found once per solved cycle and bar, so
 // scrubbing redraws only the step.
 #pragma once
@@ -43,6 +45,7 @@ private:
     void forgetCycle();  // a new result (or none): the cached band and sizing go
     void refresh();
     void layOutFigure();
+    void fitTable();  // the table's height: its lines, and its scroll bar where it needs one
     QString stepStresses(const BarModel& bar) const;
 
     MechanismDocument* doc_;
@@ -50,6 +53,8 @@ private:
     QScrollArea* scroll_;
     QWidget* canvas_;
     QLabel* message_;
+    QLabel* stresses_;
+    QScrollArea* table_;
     QLabel* sizing_;
     // Found from the solved mechanism when its result arrives.
     std::optional<BarList> bars_;

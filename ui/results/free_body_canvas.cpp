@@ -113,7 +113,7 @@ void FreeBodyCanvas::fit()
     // Centred across and down where the halves fit; where they do not, their
     // start shows (the free body's heading and left edge), the rest a drag away.
     const QRectF halves = figure_->bodyHalf().united(figure_->kineticHalf());
-    const double margin = halves.left();
+    const double margin = FreeBodyPainter::fittedGap(textScale());
     const auto place = [&](double start, double extent, double view) {
         return extent + 2 * margin <= view ? (view - extent) / 2 - start : margin - start;
     };

@@ -90,8 +90,7 @@ int runDesktopApp(int argc, char** argv)
         if (!problem.isEmpty()) err << "clevis: " << problem << "\n";
         return problem.isEmpty() ? 0 : 1;
     }
-    if (window.placeOn(window.screen()->availableGeometry())) window.showMaximized();
-    else window.show();
+    window.showOn(window.screen()->availableGeometry());
     if (!files.isEmpty()) window.files()->open(files.front());  // tells the user in a dialog if it cannot
     offerRecoveryInDialogs(window);  // never reached by --screenshot, so headless runs do not wait on it
     return app.exec();

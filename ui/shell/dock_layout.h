@@ -6,7 +6,8 @@
 // (with the peak table, the bearing load and the drive as tabs) along the bottom under
 // the canvas and the diagram. Widths and heights are shares of the window,
 // within limits, so the same arrangement serves a 1366 × 768 laptop and a
-// 1920 × 1080 screen.
+// 1920 × 1080 screen; on the laptop the diagram is given the room to show the
+// free body and its kinetic diagram whole (see arrangePanels).
 #pragma once
 
 #include <QSize>

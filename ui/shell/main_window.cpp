@@ -94,6 +94,14 @@ bool MainWindow::placeOn(const QRect& available)
     return small;
 }
 
+void MainWindow::showOn(const QRect& available)
+{
+    if (placeOn(available)) showMaximized();
+    else show();
+    activateWindow();
+    canvas_->setFocus();
+}
+
 void MainWindow::resetLayout()
 {
     for (QToolBar* bar : findChildren<QToolBar*>()) {

@@ -37,6 +37,10 @@ public:
     // for that size: all of a small screen (returns true: show it maximised,
     // so its frame fits too), 90 % of a larger one, centred.
     bool placeOn(const QRect& available);
+    // Placed on `available` and shown (maximised on a small screen), active,
+    // with the keyboard on the canvas: the first key typed draws or picks a
+    // tool. Without a window manager nothing else activates a new window.
+    void showOn(const QRect& available);
     // Every panel back in its default place, shown (View > Reset layout).
     void resetLayout();
 
