@@ -191,11 +191,14 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
 void PlotStack::setChoice(PaneChoice choice)
 {
     choice_ = std::move(choice);
+    picked_ = true;
     rebuild();
 }
 
 void PlotStack::jointTicked(QListWidgetItem* item)
 {
+    picked_ = true;
+    choice_.mostLoaded = false;
     const std::string name = item->text().toStdString();
     if (item->checkState() == Qt::Checked) choice_.hiddenJoints.erase(name);
     else choice_.hiddenJoints.insert(name);
@@ -209,6 +212,11 @@ void PlotStack::listJoints(const CompiledMechanism& m)
     std::vector<std::string> names;
     for (const auto& j : m.joints) names.push_back(j.name);
     for (const auto& end : cylinderEnds(m)) names.push_back(end.name);
+    // Another mechanism altogether: the joints picked for the last one mean nothing here.
+    if (!listed_.empty() &&
+        std::none_of(names.begin(), names.end(), [this](const std::string& n) { return listed_.count(n) > 0; }))
+        picked_ = false;
+    listed_ = {names.begin(), names.end()};
     bool same = joints_->count() == int(names.size());
     for (int j = 0; same && j < joints_->count(); ++j) same = joints_->item(j)->text().toStdString() == names[j];
     if (same) return;
@@ -318,6 +326,7 @@ void PlotStack::rebuild()
     const QString oldLabel = axis_.label;
     axis_ = cycleAxis(m, analysis_->result());
     listJoints(m);
+    if (!picked_) choice_ = mostLoadedChoice(m, analysis_->result(), choice_.components);
     showChoice();
     std::vector<PlotPane> panes = plotPanes(m, analysis_->result(), renderUnits(DisplayUnits::instance()), choice_);
     const bool keep = !parts_.empty() && axis_.label == oldLabel && sameCurves(panes, panes_);

@@ -18,6 +18,9 @@
 #include <QColor>
 #include <QWidget>
 
+#include <set>
+#include <string>
+
 class QCheckBox;
 class QCustomPlot;
 class QCPAbstractItem;
@@ -47,7 +50,10 @@ class PlotStack : public QWidget {
 public:
     explicit PlotStack(AnalysisState* analysis, QWidget* parent = nullptr);
 
-    // What is plotted; the joint list and the components box show it.
+    // What is plotted; the joint list and the components box show it. Until
+    // joints are picked (ticked in the list, or set here), each result's
+    // mostLoadedChoice(); once picked, the pick is kept across results, until
+    // a mechanism comes none of whose joints were listed before.
     const PaneChoice& choice() const { return choice_; }
     void setChoice(PaneChoice choice);
     const std::vector<PlotPane>& panes() const { return panes_; }
@@ -109,6 +115,8 @@ private:
 
     AnalysisState* analysis_;
     PaneChoice choice_;
+    bool picked_ = false;           // the joints shown were picked by the user
+    std::set<std::string> listed_;  // the joints listed for the last result
     std::vector<PlotPane> panes_;
     CycleAxis axis_;
     QString fullReadout_;
