@@ -31,6 +31,7 @@ namespace clevis::ui {
 namespace {
 
 constexpr int kPaneHeight = 160;  // px: title and legend, three ticks, the x numbers and title
+constexpr int kEdge = 10;         // px: the plot's margin either side of a pane's header
 // A value axis is kept while the curves fill at least this share of it and
 // keep half their usual margin from its ends: a drag then redraws the curves
 // over still axes, rather than the axes, ticks and labels at every step.
@@ -73,7 +74,10 @@ void wrapLegend(QCPLegend* legend, int width)
     for (int i = 0; i < legend->itemCount(); ++i)  // cells past the last entry of a wrapped legend are empty
         if (const QCPAbstractLegendItem* item = legend->item(i))
             widest = std::max(widest, item->minimumOuterSizeHint().width());
-    legend->setWrap(std::max(1, width / widest));
+    // n entries take n widths, n − 1 spacings and the legend's margins.
+    const int spacing = legend->columnSpacing();
+    const int room = width - legend->margins().left() - legend->margins().right();
+    legend->setWrap(std::max(1, (room + spacing) / (widest + spacing)));
     legend->setFillOrder(QCPLegend::foColumnsFirst, true);  // a new wrap only applies once rearranged
 }
 
@@ -251,6 +255,11 @@ PlotStack::PaneParts PlotStack::addPane(const PlotPane& pane, QCPMarginGroup* ma
     auto* title = new QCPTextElement(plot_, pane.title, QFont(font().family(), font().pointSize(), QFont::Bold));
     title->setTextFlags(Qt::AlignLeft | Qt::AlignVCenter);
     title->setLayer("legend");  // not with the curves, which are drawn again alone
+    // A text element is at most as tall as its text unless given a maximum
+    // of its own (well below Qt's "unbounded", its margins are added): it
+    // held the header's row to one line, and a legend wrapped to several
+    // rows was cut to a strip.
+    title->setMaximumSize(QWIDGETSIZE_MAX, QWIDGETSIZE_MAX / 2);
     parts.header->addElement(0, 0, title);
     auto* legend = new QCPLegend;
     parts.header->addElement(0, 1, legend);
@@ -345,15 +354,19 @@ void PlotStack::rebuild()
     replotWhenSeen(framed ? Redraw::All : Redraw::Curves);
 }
 
-// Legends wrap to the plot's width; the plot is as tall as its panes need.
+// Legends wrap to the room their title leaves (at most three quarters of the
+// plot's width), so that a long title never widens the plot; the plot is as
+// tall as its panes need.
 void PlotStack::fitLegends()
 {
-    int extraRows = 0;
+    int extra = 0;  // px: the legends' rows past their first
     for (const PaneParts& parts : parts_) {
-        wrapLegend(parts.legend, plot_->width() * 3 / 4);
-        extraRows += std::max(0, parts.legend->rowCount() - 1);
+        const int title = parts.header->element(0, 0)->minimumOuterSizeHint().width();
+        wrapLegend(parts.legend, std::min(plot_->width() * 3 / 4, plot_->width() - title - 2 * kEdge));
+        const int rows = std::max(1, parts.legend->rowCount());
+        extra += parts.legend->minimumOuterSizeHint().height() * (rows - 1) / rows;
     }
-    plot_->setMinimumHeight(kPaneHeight * int(panes_.size()) + extraRows * fontMetrics().height() + 20);
+    plot_->setMinimumHeight(kPaneHeight * int(panes_.size()) + extra + 20);
 }
 
 // Sets one pane's curves, their peaks, the ranges and the shading; returns
