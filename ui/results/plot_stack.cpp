@@ -45,6 +45,7 @@ QCPRange wantedRange(double lo, double hi)
     return {lo - (lo < 0 ? pad : 0), hi + pad};
 }
 
+// Whether a value axis can stay as it is for curves spanning [lo, hi].
 bool stillFits(const QCPRange& axis, double lo, double hi)
 {
     const QCPRange wanted = wantedRange(lo, hi);
