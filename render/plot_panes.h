@@ -36,11 +36,22 @@ struct PlotPane {
 };
 
 // What the user chose to see of the joint reactions. The default shows every
-// joint, magnitudes only: what the report prints.
+// joint, magnitudes only.
 struct PaneChoice {
     std::set<std::string> hiddenJoints;  // joint names whose reaction is not plotted
     bool components = false;             // Fx and Fy beside |F|
+    bool mostLoaded = false;             // hiddenJoints are mostLoadedChoice()'s: the title says which are shown
 };
+
+// As many joints as there are distinct curve pens (curvePen()): a pane of
+// more curves cannot be told apart.
+constexpr int kMostLoadedShown = 12;
+
+// The choice to start from, before the user picks joints: every joint of a
+// machine with at most kMostLoadedShown joints (cylinder ends counted), else
+// only the kMostLoadedShown with the highest peak |F| over the reliable steps
+// (as the peaks are reported: curvePeak; the earlier joint first of equals).
+PaneChoice mostLoadedChoice(const CompiledMechanism& m, const CycleResult& r, bool components = false);
 
 // Joint reactions, drive torque and force, driver power, shaking force and
 // moment on the frame, transmission angle; a pane with no curve is left out.

@@ -219,7 +219,8 @@ void inputsSection(PageFlow& f, const ReviewReportInput& in)
 
 void plotsSection(PageFlow& f, const ReviewReportInput& in, const CycleAxis& axis)
 {
-    for (PlotPane& pane : plotPanes(in.mechanism, in.result, in.units))
+    // A large machine's reactions: those of its most loaded joints, as the window starts with.
+    for (PlotPane& pane : plotPanes(in.mechanism, in.result, in.units, mostLoadedChoice(in.mechanism, in.result)))
         f.figure(CycleChart(std::move(pane), axis, in.result), f.width());
 }
 

@@ -3,6 +3,7 @@
 #include "core/results/cycle_summary.h"
 #include "core/results/cylinder_ends.h"
 #include "render/palette.h"
+#include "render/polyline_decimation.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/results/in_sight.h"
 #include "ui/results/segment_graph.h"
@@ -15,6 +16,7 @@
 #include <QHBoxLayout>
 #include <QLabel>
 #include <QListWidget>
+#include <QMetaObject>
 #include <QPlainTextEdit>
 #include <QResizeEvent>
 #include <QScrollArea>
@@ -22,12 +24,49 @@
 #include <QSplitter>
 #include <QVBoxLayout>
 
+#include <algorithm>
 #include <cmath>
 
 namespace clevis::ui {
 namespace {
 
 constexpr int kPaneHeight = 160;  // px: title and legend, three ticks, the x numbers and title
+constexpr int kEdge = 10;         // px: the plot's margin either side of a pane's header
+// A value axis is kept while the curves fill at least this share of it and
+// keep half their usual margin from its ends: a drag then redraws the curves
+// over still axes, rather than the axes, ticks and labels at every step.
+constexpr double kFilledShare = 0.8, kMargin = 0.08;
+
+// The range of a value axis for curves spanning [lo, hi] (lo ≤ 0 ≤ hi: the
+// axis takes in zero): a margin above, and below where they go negative.
+QCPRange wantedRange(double lo, double hi)
+{
+    const double pad = std::max(1e-9, kMargin * (hi - lo));
+    return {lo - (lo < 0 ? pad : 0), hi + pad};
+}
+
+// Whether a value axis can stay as it is for curves spanning [lo, hi].
+bool stillFits(const QCPRange& axis, double lo, double hi)
+{
+    const QCPRange wanted = wantedRange(lo, hi);
+    const double half = (wanted.size() - (hi - lo)) / (lo < 0 ? 4 : 2);  // half of each margin
+    return (axis.lower < 0) == (lo < 0) && axis.lower <= wanted.lower + (lo < 0 ? half : 0) &&
+           axis.upper >= hi + half && wanted.size() >= kFilledShare * axis.size();
+}
+
+// A curve drawn through only the points that change its picture: points
+// within a quarter of a pixel of the line through their neighbours are
+// dropped before it is cut into pieces and stroked (most of a replot).
+class DecimatedGraph : public SegmentGraph {
+public:
+    using SegmentGraph::SegmentGraph;
+
+protected:
+    void drawLinePlot(QCPPainter* painter, const QVector<QPointF>& lines) const override
+    {
+        SegmentGraph::drawLinePlot(painter, decimatedPolyline(lines, invisibleOnDevice(*painter)));
+    }
+};
 
 // Legend entries of equal width, as many across as fit in `width` px.
 void wrapLegend(QCPLegend* legend, int width)
@@ -36,7 +75,10 @@ void wrapLegend(QCPLegend* legend, int width)
     for (int i = 0; i < legend->itemCount(); ++i)  // cells past the last entry of a wrapped legend are empty
         if (const QCPAbstractLegendItem* item = legend->item(i))
             widest = std::max(widest, item->minimumOuterSizeHint().width());
-    legend->setWrap(std::max(1, width / widest));
+    // n entries take n widths, n − 1 spacings and the legend's margins.
+    const int spacing = legend->columnSpacing();
+    const int room = width - legend->margins().left() - legend->margins().right();
+    legend->setWrap(std::max(1, (room + spacing) / (widest + spacing)));
     legend->setFillOrder(QCPLegend::foColumnsFirst, true);  // a new wrap only applies once rearranged
 }
 
@@ -65,8 +107,10 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     , peaks_(new QPlainTextEdit(this))
 {
     setObjectName("plotStack");
+    // Drawn once the events queued with it are done: a result and the cursor it moves are one replot.
     sight_ = new SightWatch(plot_, [this] {
-        plot_->replot(QCustomPlot::rpQueuedReplot);
+        if (!redrawQueued_) QMetaObject::invokeMethod(this, &PlotStack::redraw, Qt::QueuedConnection);
+        redrawQueued_ = true;
         return true;
     });
     plot_->setObjectName("cyclePlots");
@@ -89,6 +133,10 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     // the panes, it was cleared at every replot and laid over the rest at
     // every paint for nothing.
     plot_->layer("overlay")->setMode(QCPLayer::lmLogical);
+    // The curves, peak marks and cursors (the "main" layer) have a buffer of
+    // their own: a new result or step draws them again over the axes,
+    // titles and legends left as they were.
+    plot_->layer("main")->setMode(QCPLayer::lmBuffered);
 
     auto* side = new QWidget(this);
     auto* sideLayout = new QVBoxLayout(side);
@@ -131,10 +179,14 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
     connect(scroll_->verticalScrollBar(), &QScrollBar::valueChanged, this, &PlotStack::scrolled);
     // Panes out of view are left out of the widget's replots only; every
     // layerable is visible again after it, for exports and hit tests.
-    connect(plot_, &QCustomPlot::beforeReplot, this, [this] { replotting_ = true; });
+    connect(plot_, &QCustomPlot::beforeReplot, this, [this] {
+        replotting_ = true;
+        ++replots_;
+    });
     connect(plot_, &QCustomPlot::afterLayout, this, &PlotStack::leaveOutPanesOutOfView);
     connect(plot_, &QCustomPlot::afterReplot, this, [this] {
         replotting_ = false;
+        redraw_ = Redraw::None;
         for (const PaneParts& parts : parts_)
             for (QCPLayerable* l : layerables(parts)) l->setVisible(true);
     });
@@ -144,11 +196,14 @@ PlotStack::PlotStack(AnalysisState* analysis, QWidget* parent)
 void PlotStack::setChoice(PaneChoice choice)
 {
     choice_ = std::move(choice);
+    picked_ = true;
     rebuild();
 }
 
 void PlotStack::jointTicked(QListWidgetItem* item)
 {
+    picked_ = true;
+    choice_.mostLoaded = false;
     const std::string name = item->text().toStdString();
     if (item->checkState() == Qt::Checked) choice_.hiddenJoints.erase(name);
     else choice_.hiddenJoints.insert(name);
@@ -162,6 +217,11 @@ void PlotStack::listJoints(const CompiledMechanism& m)
     std::vector<std::string> names;
     for (const auto& j : m.joints) names.push_back(j.name);
     for (const auto& end : cylinderEnds(m)) names.push_back(end.name);
+    // Another mechanism altogether: the joints picked for the last one mean nothing here.
+    if (!listed_.empty() &&
+        std::none_of(names.begin(), names.end(), [this](const std::string& n) { return listed_.count(n) > 0; }))
+        picked_ = false;
+    listed_ = {names.begin(), names.end()};
     bool same = joints_->count() == int(names.size());
     for (int j = 0; same && j < joints_->count(); ++j) same = joints_->item(j)->text().toStdString() == names[j];
     if (same) return;
@@ -195,6 +255,12 @@ PlotStack::PaneParts PlotStack::addPane(const PlotPane& pane, QCPMarginGroup* ma
     plot_->plotLayout()->setRowStretchFactor(row, 0.001);  // as tall as its text, the axes take the rest
     auto* title = new QCPTextElement(plot_, pane.title, QFont(font().family(), font().pointSize(), QFont::Bold));
     title->setTextFlags(Qt::AlignLeft | Qt::AlignVCenter);
+    title->setLayer("legend");  // not with the curves, which are drawn again alone
+    // A text element is at most as tall as its text unless given a maximum
+    // of its own (well below Qt's "unbounded", its margins are added): it
+    // held the header's row to one line, and a legend wrapped to several
+    // rows was cut to a strip.
+    title->setMaximumSize(QWIDGETSIZE_MAX, QWIDGETSIZE_MAX / 2);
     parts.header->addElement(0, 0, title);
     auto* legend = new QCPLegend;
     parts.header->addElement(0, 1, legend);
@@ -221,7 +287,7 @@ PlotStack::PaneParts PlotStack::addPane(const PlotPane& pane, QCPMarginGroup* ma
     QCPAxis* xa = rect->axis(QCPAxis::atBottom);
     QCPAxis* ya = rect->axis(QCPAxis::atLeft);
     for (const PlotCurve& c : pane.curves) {
-        QCPGraph* g = new SegmentGraph(xa, ya);
+        QCPGraph* g = new DecimatedGraph(xa, ya);
         g->setName(c.series.name);
         g->setPen(curvePen(c.pen));
         g->addToLegend(legend);
@@ -262,7 +328,7 @@ void PlotStack::rebuild()
         joints_->clear();
         plot_->setMinimumHeight(0);  // no room kept for the panes that were
         showReadout(analysis_->errorText());
-        replotWhenSeen();
+        replotWhenSeen(Redraw::All);
         return;
     }
     showReadout({});  // an earlier error, or values read off the old curves
@@ -270,6 +336,7 @@ void PlotStack::rebuild()
     const QString oldLabel = axis_.label;
     axis_ = cycleAxis(m, analysis_->result());
     listJoints(m);
+    if (!picked_) choice_ = mostLoadedChoice(m, analysis_->result(), choice_.components);
     showChoice();
     std::vector<PlotPane> panes = plotPanes(m, analysis_->result(), renderUnits(DisplayUnits::instance()), choice_);
     const bool keep = !parts_.empty() && axis_.label == oldLabel && sameCurves(panes, panes_);
@@ -280,33 +347,45 @@ void PlotStack::rebuild()
         for (const PlotPane& pane : panes_) parts_.push_back(addPane(pane, margins));
     }
     QStringList peakLines;
-    for (std::size_t i = 0; i < panes_.size(); ++i) peakLines << fillPane(panes_[i], parts_[i]);
+    bool framed = !keep;  // the axes, titles, legends or shading change
+    for (std::size_t i = 0; i < panes_.size(); ++i) peakLines << fillPane(panes_[i], parts_[i], !keep, framed);
     if (!keep) fitLegends();
     peaks_->setPlainText(peakLines.join("\n"));
     moveCursor(analysis_->currentStep());
+    replotWhenSeen(framed ? Redraw::All : Redraw::Curves);
 }
 
-// Legends wrap to the plot's width; the plot is as tall as its panes need.
+// Legends wrap to the room their title leaves (at most three quarters of the
+// plot's width), so that a long title never widens the plot; the plot is as
+// tall as its panes need.
 void PlotStack::fitLegends()
 {
-    int extraRows = 0;
+    int extra = 0;  // px: the legends' rows past their first
     for (const PaneParts& parts : parts_) {
-        wrapLegend(parts.legend, plot_->width() * 3 / 4);
-        extraRows += std::max(0, parts.legend->rowCount() - 1);
+        const int title = parts.header->element(0, 0)->minimumOuterSizeHint().width();
+        wrapLegend(parts.legend, std::min(plot_->width() * 3 / 4, plot_->width() - title - 2 * kEdge));
+        const int rows = std::max(1, parts.legend->rowCount());
+        extra += parts.legend->minimumOuterSizeHint().height() * (rows - 1) / rows;
     }
-    plot_->setMinimumHeight(kPaneHeight * int(panes_.size()) + extraRows * fontMetrics().height() + 20);
+    plot_->setMinimumHeight(kPaneHeight * int(panes_.size()) + extra + 20);
 }
 
 // Sets one pane's curves, their peaks, the ranges and the shading; returns
-// the peak lines for the list beside the plots.
-QStringList PlotStack::fillPane(const PlotPane& pane, PaneParts& parts)
+// the peak lines for the list beside the plots. A fresh pane takes the range
+// its curves want; a kept one keeps its range while the curves still fit it.
+// `framed` is set when a range or the shading changed.
+QStringList PlotStack::fillPane(const PlotPane& pane, PaneParts& parts, bool fresh, bool& framed)
 {
     const CycleResult& r = analysis_->result();
     const QVector<double> x(axis_.values.begin(), axis_.values.end());
     const double end = plannedEnd(axis_, r);
     QCPAxis* xa = parts.rect->axis(QCPAxis::atBottom);
     QCPAxis* ya = parts.rect->axis(QCPAxis::atLeft);
-    xa->setRange(std::min({x.front(), x.back(), end}), std::max({x.front(), x.back(), end}));
+    const QCPRange span(std::min({x.front(), x.back(), end}), std::max({x.front(), x.back(), end}));
+    if (fresh || xa->range() != span) {
+        xa->setRange(span);
+        framed = true;
+    }
     const std::vector<bool> unreliable = unreliableSteps(r);
     QStringList peakLines;
     double lo = 0, hi = 0;
@@ -321,39 +400,49 @@ QStringList PlotStack::fillPane(const PlotPane& pane, PaneParts& parts)
             hi = std::max(hi, v);
         }
     }
-    const double pad = std::max(1e-9, 0.08 * (hi - lo));
-    ya->setRange(lo - (lo < 0 ? pad : 0), hi + pad);
-    for (QCPAbstractItem* old : parts.shades) plot_->removeItem(old);
-    parts.shades.clear();
+    if (fresh || !stillFits(ya->range(), lo, hi)) {
+        ya->setRange(wantedRange(lo, hi));
+        framed = true;
+    }
+    std::vector<Shade> shades;
     QColor flagged = palette::problem();
     flagged.setAlphaF(0.15);
     for (const auto& [a, b] : unreliableRuns(unreliable))
-        shade(parts, x[std::max(a - 1, 0)], x[std::min<int>(b + 1, x.size() - 1)], flagged);
+        shades.push_back({x[std::max(a - 1, 0)], x[std::min<int>(b + 1, x.size() - 1)], flagged});
     if (end != x.back()) {
         QColor unreached = palette::groundHatch();
         unreached.setAlphaF(0.2);
-        shade(parts, x.back(), end, unreached);
+        shades.push_back({x.back(), end, unreached});
     }
+    framed |= setShades(parts, std::move(shades));
     return peakLines;
 }
 
-// A band over the pane's full height between two axis values.
-void PlotStack::shade(PaneParts& parts, double from, double to, QColor colour)
+// Bands over the pane's full height between two axis values; false when
+// they are those already shown.
+bool PlotStack::setShades(PaneParts& parts, std::vector<Shade> shades)
 {
+    if (shades == parts.shaded && parts.shades.size() == shades.size()) return false;
+    for (QCPAbstractItem* old : parts.shades) plot_->removeItem(old);
+    parts.shades.clear();
     QCPAxisRect* rect = parts.rect;
-    auto* box = new QCPItemRect(plot_);
-    box->setClipAxisRect(rect);
-    for (QCPItemPosition* corner : {box->topLeft, box->bottomRight}) {
-        corner->setAxes(rect->axis(QCPAxis::atBottom), rect->axis(QCPAxis::atLeft));
-        corner->setTypeY(QCPItemPosition::ptAxisRectRatio);
-        corner->setAxisRect(rect);
+    for (const Shade& s : shades) {
+        auto* box = new QCPItemRect(plot_);
+        box->setClipAxisRect(rect);
+        for (QCPItemPosition* corner : {box->topLeft, box->bottomRight}) {
+            corner->setAxes(rect->axis(QCPAxis::atBottom), rect->axis(QCPAxis::atLeft));
+            corner->setTypeY(QCPItemPosition::ptAxisRectRatio);
+            corner->setAxisRect(rect);
+        }
+        box->topLeft->setCoords(s.from, 0);
+        box->bottomRight->setCoords(s.to, 1);
+        box->setPen(Qt::NoPen);
+        box->setBrush(s.colour);
+        box->setLayer("background");
+        parts.shades.push_back(box);
     }
-    box->topLeft->setCoords(from, 0);
-    box->bottomRight->setCoords(to, 1);
-    box->setPen(Qt::NoPen);
-    box->setBrush(colour);
-    box->setLayer("background");
-    parts.shades.push_back(box);
+    parts.shaded = std::move(shades);
+    return true;
 }
 
 // Everything drawn for a pane: its layout elements (their axes, grids and
@@ -402,12 +491,48 @@ void PlotStack::moveCursor(int step)
         parts.cursor->point1->setCoords(x, 0);
         parts.cursor->point2->setCoords(x, 1);
     }
-    replotWhenSeen();
+    replotWhenSeen(Redraw::Curves);
 }
 
 // Behind another tab the plots are not drawn for every result or step: a
 // large mechanism's hundreds of curves would cost each edit for nothing.
-void PlotStack::replotWhenSeen() { sight_->request(); }
+void PlotStack::replotWhenSeen(Redraw what)
+{
+    redraw_ = std::max(redraw_, what);
+    sight_->request();
+}
+
+void PlotStack::redraw()
+{
+    redrawQueued_ = false;
+    if (redraw_ == Redraw::All) plot_->replot();
+    else if (redraw_ == Redraw::Curves) redrawCurves();
+    redraw_ = Redraw::None;
+}
+
+// The curves, marks and cursors of the panes in view drawn again on their
+// own layer; those out of view are left out, and drawn whole when they come
+// into view, as at a full replot (leaveOutPanesOutOfView).
+void PlotStack::redrawCurves()
+{
+    for (const PaneParts& parts : parts_)
+        if (!parts.drawn && inView(parts)) return plot_->replot();  // its axes were never drawn
+    std::vector<QCPLayerable*> hidden;
+    for (PaneParts& parts : parts_)
+        if (!inView(parts)) {
+            parts.drawn = false;
+            for (QCPLayerable* l : layerables(parts))
+                if (l->visible()) {
+                    l->setVisible(false);
+                    hidden.push_back(l);
+                }
+        }
+    const int replots = replots_;
+    plot_->layer("main")->replot();  // all of it when the buffers are new (after a resize)
+    for (QCPLayerable* l : hidden) l->setVisible(true);
+    // Told as a replot to what follows the plot's drawing, unless the layer's replot was a whole one.
+    if (replots_ == replots) emit plot_->afterReplot();
+}
 
 double PlotStack::cursorX() const
 {
@@ -458,7 +583,7 @@ bool PlotStack::eventFilter(QObject* watched, QEvent* event)
     if (watched == plot_ && event->type() == QEvent::Resize && !parts_.empty() &&
         static_cast<QResizeEvent*>(event)->oldSize().width() != plot_->width()) {
         fitLegends();
-        replotWhenSeen();
+        replotWhenSeen(Redraw::All);
     }
     if (watched == scroll_->viewport() && event->type() == QEvent::Resize) scrolled();  // a taller view shows more
     // The plots take the wheel and do nothing with it (they neither zoom nor
