@@ -30,8 +30,7 @@
 namespace clevis::ui {
 namespace {
 
-constexpr int kPaneHeight = 160;  // px: title and legend, three ticks, the x numbers and title
-constexpr int kEdge = 10;         // px: the plot's margin either side of a pane's header
+constexpr int kEdge = 10;  // px: the plot's margin either side of a pane's header
 // A value axis is kept while the curves fill at least this share of it and
 // keep half their usual margin from its ends: a drag then redraws the curves
 // over still axes, rather than the axes, ticks and labels at every step.
@@ -367,7 +366,7 @@ void PlotStack::fitLegends()
         const int rows = std::max(1, parts.legend->rowCount());
         extra += parts.legend->minimumOuterSizeHint().height() * (rows - 1) / rows;
     }
-    plot_->setMinimumHeight(kPaneHeight * int(panes_.size()) + extra + 20);
+    plot_->setMinimumHeight(PlotStack::kPaneHeight * int(panes_.size()) + extra + 20);
 }
 
 // Sets one pane's curves, their peaks, the ranges and the shading; returns

@@ -50,6 +50,9 @@ class PlotStack : public QWidget {
 public:
     explicit PlotStack(AnalysisState* analysis, QWidget* parent = nullptr);
 
+    // px: one pane, its title and legend, three ticks, the x numbers and title.
+    static constexpr int kPaneHeight = 160;
+
     // What is plotted; the joint list and the components box show it. Until
     // joints are picked (ticked in the list, or set here), each result's
     // mostLoadedChoice(); once picked, the pick is kept across results, until

@@ -1,5 +1,7 @@
 #include "ui/shell/dock_layout.h"
 
+#include "ui/results/plot_stack.h"
+
 #include <QDockWidget>
 #include <QFontInfo>
 #include <QMainWindow>
@@ -11,8 +13,6 @@
 
 namespace clevis::ui {
 namespace {
-
-constexpr int kPlotPaneHeight = 160;  // px: one pane of the plots whole (as PlotStack lays them out)
 
 int share(int total, double fraction, int least, int most) { return std::clamp(int(total * fraction), least, most); }
 
@@ -107,7 +107,7 @@ void arrangePanels(QMainWindow* window)
     window->resizeDocks({parts, properties}, {size.height() * 3 / 10, size.height()}, Qt::Vertical);
     const int bars = window->menuBar()->sizeHint().height() + window->statusBar()->sizeHint().height() +
                      toolBarsHeight(window) + cycle->minimumSizeHint().height() + 4 * em;  // 4 em: tabs, splitters
-    const int onePane = kPlotPaneHeight + 3 * em;  // with its dock's title, the readout line and the tabs
+    const int onePane = PlotStack::kPaneHeight + 3 * em;  // with its dock's title, the readout line and the tabs
     const int plotsHeight =
         std::clamp(std::min(int(size.height() * 0.33), size.height() - bars - 30 * em), onePane, 420);
     window->resizeDocks({cycle, plots}, {cycle->minimumSizeHint().height(), plotsHeight}, Qt::Vertical);
