@@ -143,10 +143,9 @@ bool AnalysisState::goToTime(double t)
 
 void AnalysisState::waitForIdle()
 {
-    while (busy()) {
-        QCoreApplication::processEvents(QEventLoop::AllEvents);
-        QThread::msleep(2);
-    }
+    // Woken by the worker's result as the event loop is (a sleep between
+    // polls, as before, added up to 2 ms to the wait and 2 ms after the result).
+    while (busy()) QCoreApplication::processEvents(QEventLoop::AllEvents | QEventLoop::WaitForMoreEvents);
 }
 
 }  // namespace clevis::ui
