@@ -8,6 +8,7 @@
 #include "core/file/mechanism_file.h"
 #include "tests/qstring_printer.h"
 #include "ui/analysis/analysis_state.h"
+#include "ui/analysis/solve_worker.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/document/mechanism_edits.h"
 #include "ui/files/file_actions.h"
@@ -176,6 +177,34 @@ TEST_F(StaleViews, RenameBreakAndFixShowOnlyTheCurrentMechanism)
     window.document()->undoStack()->undo();
     settle();
     expectSixBarSolved(shown(), renamed);
+}
+
+// The result the views read is the document's as it now is: after edits that
+// come faster than their solves (whose results arrive stale and are let go)
+// and after one solved alone, it is the mechanism solved afresh.
+TEST_F(StaleViews, TheResultIsTheNewestEditsOwn)
+{
+    open(kSixBar);
+    settle();
+    const auto expectResultOfDocument = [this] {
+        const SolveOutcome fresh = solveMechanism(window.document()->mechanism(), [] { return true; });
+        const CycleResult& shown = window.analysis()->result();
+        ASSERT_EQ(shown.steps.size(), fresh.result.steps.size());
+        for (std::size_t i = 0; i < fresh.result.steps.size(); i += 45) {
+            EXPECT_EQ(shown.steps[i].q, fresh.result.steps[i].q) << "step " << i;
+            EXPECT_EQ(shown.steps[i].lambda, fresh.result.steps[i].lambda) << "step " << i;
+        }
+    };
+    const auto moveA = [this](double dx) {
+        ASSERT_EQ(window.document()->apply("Move A", [dx](Mechanism& m) { m.joints[1].at.x() += dx; }), QString());
+    };
+    ASSERT_EQ(window.document()->mechanism().joints[1].name, "A");
+    for (int i = 0; i < 4; ++i) moveA(0.002);  // one after another, unsolved between
+    settle();
+    expectResultOfDocument();
+    moveA(-0.003);
+    settle();
+    expectResultOfDocument();
 }
 
 TEST_F(StaleViews, NewShowsNothingOfTheClosedDocument)
