@@ -38,11 +38,6 @@ constexpr double kCoupleRadius = 21;
 constexpr double kEqualsGap = 40;       // between the panels, with the "=" in it
 constexpr double kSecondScaleRow = 16;  // the scale bars' second row, in a narrow panel
 constexpr double kLabelClearance = 16;  // a panel is at least its widest label and this wide
-// A view draws to scale no smaller than this share of its text's scale: the
-// page's drawing is laid out for its text at one to one, and below about two
-// fifths of that the labels crowd the body and each other (found by looking
-// at the samples' bodies).
-constexpr double kReadableZoom = 0.4;
 
 QFont font(double pixels, bool bold = false)
 {
@@ -467,7 +462,7 @@ FreeBodyPaintOptions FreeBodyPainter::fitted(const CompiledMechanism& m, const C
         return QSizeF(halves.width() / room.width(), halves.height() / room.height());
     };
     const auto fits = [](QSizeF over) { return over.width() <= 1 && over.height() <= 1; };
-    const double readable = std::clamp(kReadableZoom * options.textScale, minZoom, maxZoom);
+    const double readable = std::clamp(FreeBodyPainter::kReadableZoom * options.textScale, minZoom, maxZoom);
     FreeBodyPaintOptions best = options;
     best.zoom = readable;
     double bestZoom = 0;

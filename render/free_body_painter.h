@@ -66,6 +66,11 @@ public:
     // nearest to fitting) at that zoom.
     static FreeBodyPaintOptions fitted(const CompiledMechanism& m, const CycleResult& r, const FreeBodyDiagram& d,
                                        FreeBodyPaintOptions options, QSizeF room, double minZoom, double maxZoom);
+    // A view draws to scale no smaller than this share of its text's scale: the
+    // page's drawing is laid out for its text at one to one, and below about two
+    // fifths of that the labels crowd the body and each other (found by looking
+    // at the samples' bodies).
+    static constexpr double kReadableZoom = 0.4;
     // The smallest text's size on the page (the scale bars'), in page units: a
     // view whose text must be at least its font's size scales text by their ratio.
     static constexpr double kSmallestText = 10;

@@ -3,11 +3,13 @@
 // view shows the free body and its kinetic diagram both whole at a readable
 // zoom, while the canvas keeps a usable size and the plots one whole pane;
 // on the larger screen nothing is smaller than the layout gave before.
+#include "render/free_body_painter.h"
 #include "ui/analysis/analysis_state.h"
 #include "ui/canvas/canvas_view.h"
 #include "ui/document/mechanism_document.h"
 #include "ui/files/file_actions.h"
 #include "ui/results/free_body_canvas.h"
+#include "ui/results/plot_stack.h"
 #include "ui/shell/main_window.h"
 
 #include <QDockWidget>
@@ -30,10 +32,6 @@ struct Case {
 
 const Case kCases[] = {
     {"dwell_six_bar", "coupler_plate", 120}, {"punch_press", "crankshaft", 0}, {"tote_arm", "forearm", 90}};
-
-// The painter's least readable zoom: two fifths of the text's scale (free_body_painter.cpp).
-constexpr double kReadableZoom = 0.4;
-constexpr int kPlotPane = 160;  // one pane of the plots, as PlotStack lays them out
 
 std::string text(const QRectF& r)
 {
@@ -79,7 +77,7 @@ TEST_P(SmallScreen, TheFreeBodyAndItsKineticDiagramShowWholeAndReadable)
         const QRectF halves = f.bodyHalf().united(f.kineticHalf()).translated(view->origin());
         EXPECT_TRUE(QRectF(view->rect()).contains(halves))
             << what << ": halves " << text(halves) << " in a view of " << view->width() << "×" << view->height();
-        EXPECT_GE(view->zoom(), kReadableZoom * view->textScale() - 1e-9) << what;
+        EXPECT_GE(view->zoom(), FreeBodyPainter::kReadableZoom * view->textScale() - 1e-9) << what;
     }
 }
 
@@ -90,7 +88,7 @@ TEST_P(SmallScreen, TheCanvasAndThePlotsKeepTheirRoom)
     EXPECT_GE(canvas.width(), 480);
     EXPECT_GE(canvas.height(), 300);
     ASSERT_NE(plotsView(), nullptr);
-    EXPECT_GE(plotsView()->height(), kPlotPane);
+    EXPECT_GE(plotsView()->height(), PlotStack::kPaneHeight);
     if (GetParam().height() < 1000) return;
     // As large as the layout made them before the laptop's rule (measured offscreen), or larger.
     EXPECT_GE(canvas.width(), 784);
